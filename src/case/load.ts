@@ -1,0 +1,66 @@
+import { caseV1, type CaseV1 } from './v1/schema.js';
+import { fromZod, type FieldIssue } from './issues.js';
+import { MIGRATIONS } from './migrate.js';
+import { unknownFields } from './unknown-fields.js';
+
+/** The case type the rest of the program works with: always the latest version. */
+export type Case = CaseV1;
+export const LATEST_VERSION = 1;
+export const FORMAT = 'skidcase-case';
+
+export type LoadResult =
+  | { ok: true; case: Case; migratedFrom?: number; unknownFields: string[] }
+  | { ok: false; kind: 'json' | 'format' | 'newer' | 'invalid'; issues: FieldIssue[] };
+
+/**
+ * Reads a case from parsed JSON: checks the format, migrates older versions to the latest in
+ * memory, validates, and lists fields the schema does not know (kept, but worth a warning).
+ */
+export function loadCase(input: unknown): LoadResult {
+  if (typeof input !== 'object' || input === null || Array.isArray(input))
+    return { ok: false, kind: 'format', issues: [{ path: '(file)', message: 'a case file is a JSON object' }] };
+  const obj = input as Record<string, unknown>;
+  if (obj.format !== FORMAT)
+    return {
+      ok: false,
+      kind: 'format',
+      issues: [{ path: 'format', message: `format must be "${FORMAT}" (is this a skidcase case file?)` }],
+    };
+  const version = obj.version;
+  if (typeof version !== 'number' || !Number.isInteger(version) || version < 1)
+    return { ok: false, kind: 'invalid', issues: [{ path: 'version', message: 'version must be a whole number from 1' }] };
+  if (version > LATEST_VERSION)
+    return {
+      ok: false,
+      kind: 'newer',
+      issues: [
+        {
+          path: 'version',
+          message: `version ${version} is newer than this skidcase understands (up to ${LATEST_VERSION}); update skidcase`,
+        },
+      ],
+    };
+  let current: unknown = input;
+  for (let v = version; v < LATEST_VERSION; v++) {
+    const step = MIGRATIONS[v];
+    if (!step) return { ok: false, kind: 'invalid', issues: [{ path: 'version', message: `no migration from version ${v}` }] };
+    current = step(current as Record<string, unknown>);
+  }
+  const parsed = caseV1.safeParse(current);
+  if (!parsed.success) return { ok: false, kind: 'invalid', issues: fromZod(parsed.error) };
+  const result: LoadResult = { ok: true, case: parsed.data, unknownFields: unknownFields(parsed.data) };
+  if (version < LATEST_VERSION) result.migratedFrom = version;
+  return result;
+}
+
+/** Parses text (a file's contents) then loads it; a JSON syntax error is a `json` failure. */
+export function loadCaseText(text: string): LoadResult {
+  let json: unknown;
+  try {
+    json = JSON.parse(text);
+  } catch (e) {
+    const msg = e instanceof Error ? e.message : String(e);
+    return { ok: false, kind: 'json', issues: [{ path: '(file)', message: `not valid JSON (${msg})` }] };
+  }
+  return loadCase(json);
+}

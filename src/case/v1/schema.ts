@@ -1,0 +1,218 @@
+import { z } from 'zod';
+import { quantity, RULES } from '../quantity.js';
+
+/** Case file version 1: the contract in docs/case-file.md. Unknown fields are kept (loose objects). */
+
+const text = (what: string) => z.string({ error: `${what} must be text` });
+const q = quantity;
+
+export const dragV1 = z.discriminatedUnion(
+  'source',
+  [
+    z.looseObject({
+      source: z.literal('entered'),
+      value: z.number({ error: 'drag factor must be a number' }),
+      low: z.number({ error: 'drag factor (low) must be a number' }).optional(),
+      high: z.number({ error: 'drag factor (high) must be a number' }).optional(),
+      note: text('note').optional(),
+    }),
+    z.looseObject({
+      source: z.literal('table'),
+      surface: text('surface'),
+      value: z.number({ error: 'drag factor must be a number' }),
+      low: z.number({ error: 'drag factor (low) must be a number' }).optional(),
+      high: z.number({ error: 'drag factor (high) must be a number' }).optional(),
+      band: z.enum(['under-30mph', 'over-30mph']).optional(),
+      note: text('note').optional(),
+    }),
+    z.looseObject({
+      source: z.literal('test-skids'),
+      tests: z
+        .array(z.looseObject({ speed: q(RULES.testSpeed), distance: q(RULES.length) }), {
+          error: 'tests must be a list of { "speed": n, "distance": n }',
+        })
+        .min(1, 'at least one test skid is needed'),
+      note: text('note').optional(),
+    }),
+    z.looseObject({
+      source: z.literal('sled'),
+      weight: q(RULES.sledWeight),
+      pulls: z.array(q(RULES.sledPull), { error: 'pulls must be a list of numbers' }).min(1, 'at least one pull is needed'),
+      note: text('note').optional(),
+    }),
+    z.looseObject({
+      source: z.literal('decelerometer'),
+      readings: z
+        .array(q(RULES.decel), { error: 'readings must be a list of numbers' })
+        .min(1, 'at least one reading is needed'),
+      note: text('note').optional(),
+    }),
+  ],
+  { error: 'drag.source must be one of entered, table, test-skids, sled, decelerometer' },
+).superRefine((d, ctx) => {
+  if (d.source !== 'entered' && d.source !== 'table') return;
+  for (const [k, n] of [['value', d.value], ['low', d.low], ['high', d.high]] as const) {
+    if (n === undefined) continue;
+    if (!(n > 0)) ctx.addIssue({ code: 'custom', path: [k], message: 'drag factor must be greater than 0' });
+    else if (n > 2) ctx.addIssue({ code: 'custom', path: [k], message: 'drag factor must be at most 2' });
+  }
+  if (d.low !== undefined && d.low > d.value)
+    ctx.addIssue({ code: 'custom', path: ['low'], message: 'drag factor: low must not be above value' });
+  if (d.high !== undefined && d.high < d.value)
+    ctx.addIssue({ code: 'custom', path: ['high'], message: 'drag factor: high must not be below value' });
+});
+
+export const brakesV1 = z.discriminatedUnion(
+  'mode',
+  [
+    z.looseObject({ mode: z.literal('all') }),
+    z.looseObject({ mode: z.literal('estimate'), efficiency: q(RULES.efficiency), basis: text('basis').optional() }),
+    z.looseObject({
+      mode: z.literal('wheels'),
+      frontLeft: q(RULES.wheel),
+      frontRight: q(RULES.wheel),
+      rearLeft: q(RULES.wheel),
+      rearRight: q(RULES.wheel),
+    }),
+  ],
+  { error: 'brakes.mode must be one of all, estimate, wheels' },
+);
+
+export const vehicleV1 = z.looseObject({
+  label: text('label').optional(),
+  frontAxleShare: q(RULES.share).optional(),
+  trackWidth: q(RULES.trackWidth).optional(),
+  brakes: brakesV1.optional(),
+});
+
+export const segmentV1 = z.looseObject({
+  label: text('label').optional(),
+  length: q(RULES.length).optional(),
+  drag: dragV1,
+  grade: q(RULES.grade).optional(),
+});
+
+export const endV1 = z.discriminatedUnion(
+  'mode',
+  [
+    z.looseObject({ mode: z.literal('stop') }),
+    z.looseObject({ mode: z.literal('speed'), speed: q(RULES.speed), basis: text('basis').optional() }),
+  ],
+  { error: 'end.mode must be stop or speed' },
+);
+
+const analysisId = z
+  .string({ error: 'id must be text' })
+  .regex(/^[A-Za-z0-9._-]{1,64}$/, 'id must be 1 to 64 letters, digits, dots, dashes or underscores');
+
+export const skidV1 = z.looseObject({
+  id: analysisId,
+  kind: z.literal('skid'),
+  label: text('label').optional(),
+  marks: z.array(q(RULES.length), { error: 'marks must be a list of lengths' }).optional(),
+  distanceRule: z.enum(['average', 'longest'], { error: 'distanceRule must be average or longest' }).optional(),
+  segments: z.array(segmentV1, { error: 'segments must be a list' }).min(1, 'at least one segment is needed'),
+  end: endV1.optional(),
+});
+
+export const yawV1 = z.looseObject({
+  id: analysisId,
+  kind: z.literal('yaw'),
+  label: text('label').optional(),
+  chord: q(RULES.length),
+  middleOrdinate: q({ ...RULES.length, what: 'middle ordinate' }),
+  drag: dragV1,
+  superelevation: q(RULES.superelevation).optional(),
+  pathAdjustment: z.enum(['none', 'half-track'], { error: 'pathAdjustment must be none or half-track' }).optional(),
+});
+
+export const analysisV1 = z.discriminatedUnion('kind', [skidV1, yawV1], {
+  error: 'kind must be skid or yaw',
+});
+
+export const caseV1 = z
+  .looseObject({
+    format: z.literal('skidcase-case', { error: 'format must be "skidcase-case"' }),
+    version: z.literal(1),
+    id: z
+      .string({ error: 'id must be text' })
+      .regex(/^[a-z0-9-]{1,64}$/, 'id must be 1 to 64 lower-case letters, digits or dashes'),
+    created: text('created').optional(),
+    updated: text('updated').optional(),
+    units: z.enum(['imperial', 'metric'], { error: 'units must be imperial or metric' }),
+    details: z
+      .looseObject({
+        reference: text('reference').optional(),
+        occurred: text('occurred').optional(),
+        location: text('location').optional(),
+        investigator: text('investigator').optional(),
+        notes: text('notes').optional(),
+      })
+      .optional(),
+    postedLimit: q(RULES.postedLimit).optional(),
+    vehicle: vehicleV1,
+    analyses: z.array(analysisV1, { error: 'analyses must be a list' }),
+    interview: z.unknown().optional(),
+  })
+  .superRefine((c, ctx) => {
+    // Cross-field rules: each names the field that is wrong.
+    const seen = new Set<string>();
+    c.analyses.forEach((a, i) => {
+      if (seen.has(a.id)) ctx.addIssue({ code: 'custom', path: ['analyses', i, 'id'], message: `id "${a.id}" is used twice` });
+      seen.add(a.id);
+      if (a.kind === 'skid') {
+        if (!c.vehicle.brakes)
+          ctx.addIssue({ code: 'custom', path: ['vehicle', 'brakes'], message: 'brakes are required for a skid analysis' });
+        if (a.segments.length === 1 && a.segments[0]!.length === undefined && (!a.marks || a.marks.length === 0))
+          ctx.addIssue({
+            code: 'custom',
+            path: ['analyses', i, 'marks'],
+            message: 'give the marks, or a length on the segment',
+          });
+        if (a.segments.length > 1)
+          a.segments.forEach((s, j) => {
+            if (s.length === undefined)
+              ctx.addIssue({
+                code: 'custom',
+                path: ['analyses', i, 'segments', j, 'length'],
+                message: 'length is required when there are several segments',
+              });
+          });
+      } else {
+        if (a.pathAdjustment === 'half-track' && c.vehicle.trackWidth === undefined)
+          ctx.addIssue({
+            code: 'custom',
+            path: ['vehicle', 'trackWidth'],
+            message: `track width is required for the half-track adjustment of analyses[${i}]`,
+          });
+        // Checked against the chord's low end, so that every corner of the ranges is a valid arc.
+        const C = typeof a.chord === 'number' ? a.chord : (a.chord.low ?? a.chord.value);
+        const M = a.middleOrdinate;
+        const mv = typeof M === 'number' ? { value: M } : M;
+        for (const k of ['value', 'low', 'high'] as const) {
+          const m = (mv as { value: number; low?: number; high?: number })[k];
+          if (m !== undefined && m >= C / 2)
+            ctx.addIssue({
+              code: 'custom',
+              path: ['analyses', i, 'middleOrdinate', ...(typeof M === 'number' ? [] : [k])],
+              message: 'middle ordinate must be less than half the chord',
+            });
+        }
+      }
+    });
+    if (c.vehicle.brakes?.mode === 'wheels' && c.vehicle.frontAxleShare === undefined)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['vehicle', 'frontAxleShare'],
+        message: 'front axle share is required when brakes are given per wheel',
+      });
+  });
+
+export type CaseV1 = z.infer<typeof caseV1>;
+export type DragV1 = z.infer<typeof dragV1>;
+export type BrakesV1 = z.infer<typeof brakesV1>;
+export type VehicleV1 = z.infer<typeof vehicleV1>;
+export type SegmentV1 = z.infer<typeof segmentV1>;
+export type SkidV1 = z.infer<typeof skidV1>;
+export type YawV1 = z.infer<typeof yawV1>;
+export type AnalysisV1 = z.infer<typeof analysisV1>;

@@ -1,0 +1,115 @@
+/**
+ * Shared shapes of the calculation engine. The engine is pure: no I/O, no UI imports. Every
+ * figure carries the steps that made it; the interview, the review screen, the report and
+ * `solve --json` read those steps and never re-derive a number.
+ */
+
+export type UnitSystem = 'imperial' | 'metric';
+
+/** Unit labels for a case's unit system. */
+export interface Units {
+  length: 'ft' | 'm';
+  speed: 'mph' | 'km/h';
+}
+
+/** A figure with its spread: `low <= value <= high`. */
+export interface Range {
+  value: number;
+  low: number;
+  high: number;
+}
+
+/** One input of a step, as it entered the formula. */
+export interface StepInput {
+  value: number;
+  low?: number;
+  high?: number;
+  unit: string;
+  /** Where the number came from ("entered", "mean of 3 test skids", "table: dry asphalt ..."). */
+  source?: string;
+}
+
+/**
+ * One step in a formula chain. `substituted` is the formula with the numbers in it, e.g.
+ * `S = sqrt(30 × 80.0 ft × 0.72 × 1.00) = 41.6 mph`.
+ */
+export interface Step {
+  name: string;
+  formula: string;
+  substituted: string;
+  inputs: Record<string, StepInput>;
+  result: number;
+  low: number;
+  high: number;
+  unit: string;
+  why: string;
+}
+
+/** Typed failure: the engine never returns NaN or Infinity for the caller to find on screen. */
+export type Outcome<T> = { ok: true; value: T } | { ok: false; reason: string; path?: string };
+
+export const ok = <T>(value: T): Outcome<T> => ({ ok: true, value });
+export const fail = (reason: string, path?: string): Outcome<never> =>
+  path === undefined ? { ok: false, reason } : { ok: false, reason, path };
+
+/**
+ * A primary input of an analysis's model, for sensitivity and sampling. `key` is stable within
+ * the analysis ("d", "f[0]", "G[1]", "n", "Send", "C", "M", "e", "T").
+ */
+export interface ModelInput {
+  key: string;
+  label: string;
+  unit: string;
+  value: number;
+  low: number;
+  high: number;
+}
+
+/**
+ * The analysis as a function of its primary inputs. `evaluate` returns the start speed for the
+ * given inputs (missing keys take their `value`), or `undefined` where the figure cannot be
+ * computed for that combination (e.g. a downhill segment that cannot slow the vehicle).
+ */
+export interface AnalysisModel {
+  inputs: ModelInput[];
+  evaluate(x: Readonly<Record<string, number>>): number | undefined;
+}
+
+/** Speed at one point of a slide, counted from where the marks begin. */
+export interface Boundary {
+  label: string;
+  /** Distance from the start of the marks to this point, in the case's length unit. */
+  at: number;
+  speed: Range;
+}
+
+export interface AnalysisSolution {
+  id: string;
+  kind: 'skid' | 'yaw';
+  label?: string;
+  speed: Range;
+  /** The low end rounded down to a whole speed unit: the "at least" figure. */
+  minimum: number;
+  steps: Step[];
+  assumptions: string[];
+  warnings: string[];
+  /** Skid: speed at the start, at each segment boundary and at the end. */
+  boundaries?: Boundary[];
+  /** Skid: total slide distance; yaw: radius used (path radius). */
+  distance?: Range;
+  radius?: Range;
+  model: AnalysisModel;
+}
+
+export type AnalysisOutcome =
+  | { ok: true; solution: AnalysisSolution }
+  | { ok: false; id: string; kind: 'skid' | 'yaw'; reason: string; path?: string };
+
+export interface CaseSolution {
+  id: string;
+  units: Units;
+  analyses: AnalysisOutcome[];
+  postedLimit?: { value: number; exceededAtMinimum: boolean };
+  /** Warnings about the file itself (unknown fields, ...). */
+  warnings: string[];
+}

@@ -1,0 +1,12 @@
+import { defineConfig } from 'vitest/config';
+
+export default defineConfig({
+  test: {
+    include: ['test/**/*.test.{ts,tsx}'],
+    testTimeout: 30_000,
+    hookTimeout: 60_000,
+    // pseudo-terminal and crash tests spawn processes; two cores only
+    pool: 'forks',
+    maxWorkers: 2,
+  },
+});
