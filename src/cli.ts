@@ -1,7 +1,92 @@
-const args = process.argv.slice(2);
-if (args[0] === 'solve') {
-  console.log('solve');
-} else {
-  const { runSmoke } = await import('./ui/smoke.js');
-  await runSmoke();
+/**
+ * skidcase command line. `solve` and `report` load neither Ink nor React (they are dynamic imports
+ * only on the interactive paths), so a scripted solve starts about as fast as node itself.
+ */
+import { Command, Option } from 'commander';
+
+declare const __SKIDCASE_VERSION__: string;
+const VERSION = typeof __SKIDCASE_VERSION__ === 'string' ? __SKIDCASE_VERSION__ : '0.0.0-dev';
+
+const io = {
+  out: (s: string) => process.stdout.write(s.endsWith('\n') ? s : `${s}\n`),
+  err: (s: string) => process.stderr.write(s.endsWith('\n') ? s : `${s}\n`),
+};
+
+const NO_TTY = [
+  'skidcase: the interview needs an interactive terminal, and this one is not (stdin or stdout is not a TTY).',
+  'Without a terminal, work with case files directly:',
+  '  skidcase solve FILE [--json]      the formula chain (or JSON) for a case file',
+  '  skidcase report FILE [--out PATH] the case report',
+  'The case file format is in docs/case-file.md.',
+].join('\n');
+
+async function sessions(flag: string | undefined) {
+  const [{ resolveSessionsDir }, { loadPrefs }] = await Promise.all([
+    import('./store/index.js'),
+    import('./prefs/index.js'),
+  ]);
+  const { prefs, warnings } = loadPrefs();
+  for (const w of warnings) io.err(`skidcase: preferences: ${w}`);
+  return resolveSessionsDir({ flag, env: process.env, prefs, cwd: process.cwd() });
+}
+
+type Start = { kind: 'home' } | { kind: 'resume'; id?: string } | { kind: 'new' } | { kind: 'open'; path: string };
+
+async function interactive(flag: string | undefined, start: Start): Promise<number> {
+  if (!process.stdin.isTTY || !process.stdout.isTTY) {
+    io.err(NO_TTY);
+    return 1;
+  }
+  const where = await sessions(flag);
+  const { runInteractive } = await import('./ui/run.js');
+  return runInteractive({ sessionsDir: where.dir, sessionsFrom: where.from, start });
+}
+
+function program(): Command {
+  const p = new Command('skidcase')
+    .description('Guided speed-from-tire-marks reconstruction: skid and yaw marks to a minimum speed with its range.')
+    .version(VERSION, '-V, --version')
+    .option('--sessions <dir>', 'folder that holds the case files (default ./sessions, or SKIDCASE_SESSIONS)')
+    .showHelpAfterError()
+    .action(async () => setExit(await interactive(p.opts().sessions, { kind: 'home' })));
+  p.command('new')
+    .description('start a new case')
+    .action(async () => setExit(await interactive(p.opts().sessions, { kind: 'new' })));
+  p.command('resume [id]')
+    .description('carry on with a case (without ID: the most recently saved unfinished one)')
+    .action(async (id?: string) => setExit(await interactive(p.opts().sessions, id ? { kind: 'resume', id } : { kind: 'resume' })));
+  p.command('open <file>')
+    .description('open a case file (for example a hand-written one) in the tool')
+    .action(async (file: string) => setExit(await interactive(p.opts().sessions, { kind: 'open', path: file })));
+  p.command('solve <file>')
+    .description('print the formula chain for a case file (exit 0 solved, 2 invalid file, 3 not computable)')
+    .option('--json', 'print the result as JSON')
+    .action(async (file: string, o: { json?: boolean }) => {
+      const { solveCommand } = await import('./commands/solve.js');
+      setExit(await solveCommand(file, { json: Boolean(o.json) }, io));
+    });
+  p.command('report <case>')
+    .description('write the case report for a case file or a case id in the sessions folder')
+    .addOption(new Option('--format <format>', 'report format').choices(['md', 'txt', 'html', 'json']).default('md'))
+    .option('--out <path>', 'write to this file (never overwrites without --force) instead of standard output')
+    .option('--force', 'overwrite --out if it exists')
+    .action(async (target: string, o: { format: 'md' | 'txt' | 'html' | 'json'; out?: string; force?: boolean }) => {
+      const where = await sessions(p.opts().sessions);
+      const { reportCommand } = await import('./commands/report.js');
+      const opts = { format: o.format, force: Boolean(o.force), sessionsDir: where.dir, ...(o.out ? { out: o.out } : {}) };
+      setExit(await reportCommand(target, opts, io));
+    });
+  return p;
+}
+
+function setExit(code: number) {
+  process.exitCode = code;
+}
+
+try {
+  await program().parseAsync(process.argv);
+} catch (e) {
+  // Only a programming error lands here; expected failures are exit codes with messages.
+  io.err(`skidcase: internal error: ${e instanceof Error ? e.message : String(e)}`);
+  process.exitCode = 70;
 }

@@ -83,6 +83,18 @@ export interface Boundary {
   speed: Range;
 }
 
+/** Effect of a small reading error in a yaw mark's middle ordinate (percent changes). */
+export interface OrdinateSensitivity {
+  /** The reading error considered, in the case's length unit, and in words ("1 in", "1 cm"). */
+  delta: number;
+  label: string;
+  /** Percent change when M is read `delta` too large (plus) and, if M allows, too small (minus). */
+  radiusPercent: { plus: number; minus?: number };
+  speedPercent: { plus: number; minus?: number };
+  /** One sentence for the review screen and the report. */
+  text: string;
+}
+
 export interface AnalysisSolution {
   id: string;
   kind: 'skid' | 'yaw';
@@ -98,6 +110,8 @@ export interface AnalysisSolution {
   /** Skid: total slide distance; yaw: radius used (path radius). */
   distance?: Range;
   radius?: Range;
+  /** Yaw: what a 1 in / 1 cm reading error in the middle ordinate does to R and S. */
+  sensitivity?: OrdinateSensitivity;
   model: AnalysisModel;
 }
 

@@ -1,0 +1,99 @@
+// Timing through a real pseudo-terminal: what a person at a terminal waits for. The screen is
+// kept by a headless xterm so that "painted" means the text is on the screen, not just written.
+import pty from '@lydell/node-pty';
+import xterm from '@xterm/headless';
+
+const { Terminal } = xterm;
+
+/** Environment for a measured child: no CI variables (Ink would hold back its frames). */
+export function benchEnv(extra = {}) {
+  const env = {};
+  for (const [k, v] of Object.entries(process.env)) {
+    if (v === undefined || k === 'CI' || k === 'CONTINUOUS_INTEGRATION' || k.startsWith('CI_')) continue;
+    if (k === 'FORCE_COLOR' || k.startsWith('SKIDCASE_')) continue;
+    env[k] = v;
+  }
+  env.TERM = 'xterm-256color';
+  return { ...env, ...extra };
+}
+
+/** A program in a pty, with its screen and the time of each output chunk. */
+export function spawnTimed(argv, { cols = 120, rows = 40, cwd = process.cwd(), env = benchEnv() } = {}) {
+  const term = new Terminal({ cols, rows, allowProposedApi: true, scrollback: 100 });
+  const t0 = performance.now();
+  const p = pty.spawn(process.execPath, argv, { name: 'xterm-256color', cols, rows, cwd, env });
+  const state = { t0, lastData: undefined, chunks: 0, exited: false, term, pty: p };
+  term.onData((d) => p.write(d));
+  p.onData((d) => {
+    state.lastData = performance.now();
+    state.chunks++;
+    term.write(d);
+  });
+  state.exit = new Promise((resolve) =>
+    p.onExit((e) => {
+      state.exited = true;
+      resolve(e);
+    }),
+  );
+  state.screen = () => {
+    const buf = term.buffer.active;
+    const lines = [];
+    for (let i = 0; i < term.rows; i++) lines.push(buf.getLine(buf.baseY + i)?.translateToString(true) ?? '');
+    return lines.join('\n').trimEnd();
+  };
+  state.kill = () => {
+    if (!state.exited) {
+      try {
+        process.kill(p.pid, 'SIGKILL');
+      } catch {
+        /* gone */
+      }
+    }
+    return state.exit.then(() => term.dispose());
+  };
+  return state;
+}
+
+const tick = (ms) => new Promise((r) => setTimeout(r, ms));
+
+/**
+ * Milliseconds from spawn to the last byte of the first settled screen: output that is followed
+ * by `quietMs` of silence (or by the program's exit). The quiet wait itself is not counted.
+ */
+export async function timeToSettledScreen(argv, opts = {}) {
+  const quietMs = opts.quietMs ?? 400;
+  const s = spawnTimed(argv, opts);
+  const deadline = performance.now() + (opts.timeoutMs ?? 15_000);
+  for (;;) {
+    await tick(5);
+    const now = performance.now();
+    const settled = s.lastData !== undefined && (s.exited || now - s.lastData >= quietMs);
+    if (settled && s.screen().trim() !== '') break;
+    if (now > deadline) {
+      await s.kill();
+      throw new Error(`no settled screen within ${opts.timeoutMs ?? 15_000} ms for node ${argv.join(' ')}`);
+    }
+  }
+  const ms = s.lastData - s.t0;
+  const screen = s.screen();
+  await s.kill();
+  return { ms, screen };
+}
+
+/**
+ * Key press to repainted frame: sends `key`, then times the burst of output it causes (to the
+ * last chunk before `quietMs` of silence). Keys are spaced by the quiet wait, as a person's are,
+ * so each press gets its own frame rather than being merged by the renderer's throttle.
+ */
+export async function keyToFrame(s, key, { quietMs = 60, timeoutMs = 5_000 } = {}) {
+  const before = s.chunks;
+  const t0 = performance.now();
+  s.pty.write(key);
+  const deadline = t0 + timeoutMs;
+  for (;;) {
+    await tick(1);
+    const now = performance.now();
+    if (s.chunks > before && now - s.lastData >= quietMs) return s.lastData - t0;
+    if (now > deadline) return undefined;
+  }
+}

@@ -1,0 +1,143 @@
+import { readFile, stat } from 'node:fs/promises';
+import path from 'node:path';
+import { describeIssue } from '../case/issues.js';
+import { loadCaseText, type Case } from '../case/load.js';
+import { solveCase } from '../engine/solve-case.js';
+import type { CaseSolution } from '../engine/types.js';
+import { buildReport } from '../report/build.js';
+import { figuresOf, type Figure } from '../report/doc.js';
+import { renderReport, type ReportFormat } from '../report/render.js';
+import { toolVersion } from '../report/version.js';
+import { writeFiles, type OutFile } from '../report/write-files.js';
+import { caseFilePath, checkId } from '../store/case-path.js';
+
+/** Exit codes of `skidcase report`: as `solve`, plus 1 when an output file is in the way. */
+export const REPORT_EXIT = { done: 0, refused: 1, invalid: 2, uncomputable: 3 } as const;
+
+export interface ReportOptions {
+  format: ReportFormat;
+  /** Write here instead of stdout; pictures go beside it as `<out minus extension>-<name>.svg`. */
+  out?: string;
+  /** Replace existing files. */
+  force: boolean;
+  /** Where a case id is looked up. */
+  sessionsDir: string;
+  /** Perception-reaction time for the time-distance section, seconds (the user's preference). */
+  reactionTime?: number;
+}
+
+export interface ReportIo {
+  out(s: string): void;
+  err(s: string): void;
+}
+
+async function isFile(p: string): Promise<boolean> {
+  return stat(p).then(
+    (s) => s.isFile(),
+    () => false,
+  );
+}
+
+/** A path to a case file, or a case id in the sessions folder; a message when it is neither. */
+async function resolveTarget(
+  target: string,
+  sessionsDir: string,
+): Promise<{ file: string } | { message: string }> {
+  if (await isFile(target)) return { file: target };
+  if (checkId(target) === undefined) {
+    const p = caseFilePath(sessionsDir, target);
+    if (p.ok && (await isFile(p.path))) return { file: p.path };
+    return {
+      message: `${target}: no such file, and no case "${target}" in ${path.resolve(sessionsDir)}`,
+    };
+  }
+  return { message: `${target}: no such file` };
+}
+
+type Loaded =
+  { ok: true; case: Case; solution: CaseSolution; file: string } | { ok: false; code: number };
+
+/** Reads, validates and solves, with the messages `solve` gives for the same file. */
+async function loadAndSolve(target: string, sessionsDir: string, io: ReportIo): Promise<Loaded> {
+  const where = await resolveTarget(target, sessionsDir);
+  if ('message' in where) {
+    io.err(`skidcase: ${where.message}\n`);
+    return { ok: false, code: REPORT_EXIT.invalid };
+  }
+  let text: string;
+  try {
+    text = await readFile(where.file, 'utf8');
+  } catch (e) {
+    io.err(
+      `skidcase: ${where.file}: cannot be read (${e instanceof Error ? e.message : String(e)})\n`,
+    );
+    return { ok: false, code: REPORT_EXIT.invalid };
+  }
+  const loaded = loadCaseText(text);
+  if (!loaded.ok) {
+    io.err(`skidcase: ${where.file} is not a valid case file\n`);
+    for (const issue of loaded.issues) io.err(`${describeIssue(issue)}\n`);
+    return { ok: false, code: REPORT_EXIT.invalid };
+  }
+  const solution = solveCase(loaded.case);
+  const failures = solution.analyses.flatMap((r, i) =>
+    r.ok ? [] : [`analyses[${i}] (${r.id}): cannot be computed: ${r.reason}`],
+  );
+  if (failures.length) {
+    for (const f of failures) io.err(`skidcase: ${f}\n`);
+    io.err('skidcase: no report written\n');
+    return { ok: false, code: REPORT_EXIT.uncomputable };
+  }
+  return { ok: true, case: loaded.case, solution, file: where.file };
+}
+
+/** `report.md` -> `report-<name>.svg`, beside it. */
+export function figurePath(out: string, f: Figure): string {
+  const p = path.parse(out);
+  return path.join(p.dir, `${p.name}-${f.name}.svg`);
+}
+
+/**
+ * `skidcase report FILE|ID [--format md|txt|json|html] [--out PATH] [--force]`. Recomputes every
+ * figure from the case file and prints the report, or writes it (and its SVG pictures beside it)
+ * atomically. Never replaces an existing file without `force`: exit 1 naming the file, nothing
+ * written. Exit 2 for a missing or invalid case file, 3 when a figure cannot be computed.
+ */
+export async function reportCommand(
+  target: string,
+  opts: ReportOptions,
+  io: ReportIo,
+): Promise<number> {
+  const loaded = await loadAndSolve(target, opts.sessionsDir, io);
+  if (!loaded.ok) return loaded.code;
+  const doc = buildReport(loaded.case, loaded.solution, {
+    toolVersion: toolVersion(),
+    generatedAt: new Date().toISOString(),
+    caseFile: target,
+    ...(opts.reactionTime !== undefined ? { extras: { reactionTime: opts.reactionTime } } : {}),
+  });
+  if (opts.out === undefined) {
+    io.out(renderReport(doc, opts.format));
+    return REPORT_EXIT.done;
+  }
+  const out = opts.out;
+  // HTML carries its pictures inline and JSON in the document; the other forms get files.
+  const pictures =
+    opts.format === 'md' || opts.format === 'txt' ? figuresOf(doc).filter((f) => f.svg) : [];
+  const files: OutFile[] = pictures.map((f) => ({ path: figurePath(out, f), content: f.svg }));
+  const name = (f: Figure) => (f.svg ? path.basename(figurePath(out, f)) : undefined);
+  files.push({ path: out, content: renderReport(doc, opts.format, name) });
+  const r = await writeFiles(files, opts.force);
+  if (!r.ok && r.kind === 'exists') {
+    for (const p of r.paths)
+      io.err(`skidcase: ${p} already exists; not replaced (use --force to replace it)\n`);
+    io.err('skidcase: no report written\n');
+    return REPORT_EXIT.refused;
+  }
+  if (!r.ok) {
+    io.err(`skidcase: ${r.path}: cannot be written (${r.message})\n`);
+    return REPORT_EXIT.refused;
+  }
+  for (const p of r.written) io.out(`wrote ${p}\n`);
+  return REPORT_EXIT.done;
+}

@@ -1,0 +1,62 @@
+import { readFile } from 'node:fs/promises';
+import { describeIssue } from '../case/issues.js';
+import { loadCaseText } from '../case/load.js';
+import { solveCase } from '../engine/solve-case.js';
+import { formatChainText } from '../format/chain-text.js';
+import { solutionToJson } from '../format/solution-json.js';
+
+/** Exit codes of `skidcase solve`. */
+export const EXIT = { solved: 0, invalid: 2, uncomputable: 3 } as const;
+
+export interface SolveIo {
+  out: (s: string) => void;
+  err: (s: string) => void;
+}
+
+function readError(file: string, e: unknown): string {
+  const code = (e as { code?: string }).code;
+  if (code === 'ENOENT') return `${file}: no such file`;
+  if (code === 'EISDIR') return `${file}: is a folder, not a case file`;
+  if (code === 'EACCES') return `${file}: permission denied`;
+  return `${file}: cannot be read (${e instanceof Error ? e.message : String(e)})`;
+}
+
+/**
+ * `skidcase solve FILE [--json]`: reads a case file (any name), validates it and prints the
+ * chain of steps (or the JSON of docs/case-file.md). Returns the exit code: 0 solved; 2 the file
+ * is missing or not a valid case (each issue as `path: message` on stderr); 3 valid but some
+ * figure cannot be computed (the reason, naming the analysis, on stderr). Writes no files.
+ */
+export async function solveCommand(
+  file: string,
+  opts: { json: boolean },
+  io: SolveIo,
+): Promise<number> {
+  let text: string;
+  try {
+    text = await readFile(file, 'utf8');
+  } catch (e) {
+    io.err(`skidcase: ${readError(file, e)}\n`);
+    return EXIT.invalid;
+  }
+  const loaded = loadCaseText(text);
+  if (!loaded.ok) {
+    io.err(`skidcase: ${file} is not a valid case file\n`);
+    for (const issue of loaded.issues) io.err(`${describeIssue(issue)}\n`);
+    return EXIT.invalid;
+  }
+  const solution = solveCase(loaded.case);
+  const failures = solution.analyses.flatMap((r, i) =>
+    r.ok ? [] : [`analyses[${i}] (${r.id}): cannot be computed: ${r.reason}`],
+  );
+  if (opts.json) {
+    if (failures.length === 0) io.out(`${JSON.stringify(solutionToJson(solution), null, 2)}\n`);
+  } else {
+    io.out(formatChainText(solution, loaded.case));
+  }
+  if (failures.length > 0) {
+    for (const f of failures) io.err(`skidcase: ${f}\n`);
+    return EXIT.uncomputable;
+  }
+  return EXIT.solved;
+}

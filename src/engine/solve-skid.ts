@@ -1,0 +1,182 @@
+import { spread } from '../case/quantity.js';
+import type { CaseV1, SkidV1 } from '../case/v1/schema.js';
+import { formatNumber } from '../format/numbers.js';
+import { unitsOf } from './constants.js';
+import { slideDistanceFromMarks } from './distance.js';
+import { dragFactor } from './drag.js';
+import { brakingEfficiency } from './efficiency.js';
+import { slideSpeed, slideStartSpeed, type SlideEnd, type SlideSegment } from './slide.js';
+import { input, makeStep } from './step.js';
+import type { AnalysisModel, AnalysisOutcome, ModelInput, Range, Step } from './types.js';
+
+/** Marks and segment lengths further apart than this (relative) draw a warning. */
+export const MARKS_MISMATCH = 0.05;
+
+/** "at least" figure: the low end rounded down, safe against 40.999999 from rounding error. */
+export const minimumOf = (low: number) => Math.floor(low + 1e-9);
+
+const sumRanges = (rs: Range[]): Range =>
+  rs.reduce((a, r) => ({ value: a.value + r.value, low: a.low + r.low, high: a.high + r.high }), {
+    value: 0,
+    low: 0,
+    high: 0,
+  });
+
+const modelInput = (key: string, label: string, unit: string, r: Range): ModelInput => ({
+  key,
+  label,
+  unit,
+  value: r.value,
+  low: r.low,
+  high: r.high,
+});
+
+/** Solves one skid analysis of a case (index i) into its speed, steps, assumptions and model. */
+export function solveSkid(c: CaseV1, i: number, a: SkidV1): AnalysisOutcome {
+  const system = c.units;
+  const u = unitsOf(system);
+  const p = `analyses[${i}]`;
+  const failed = (reason: string, path?: string): AnalysisOutcome =>
+    path === undefined
+      ? { ok: false, id: a.id, kind: 'skid', reason }
+      : { ok: false, id: a.id, kind: 'skid', reason, path };
+  const steps: Step[] = [];
+  const assumptions: string[] = [];
+  const warnings: string[] = [];
+
+  const eff = brakingEfficiency(c.vehicle);
+  if (!eff.ok) return failed(eff.reason, eff.path);
+  const n = eff.value.n;
+  warnings.push(...eff.value.warnings);
+
+  const marks = (a.marks ?? []).map(spread);
+  const rule = a.distanceRule ?? 'average';
+  const fromMarks = marks.length > 0 ? slideDistanceFromMarks(marks, rule, u) : undefined;
+  const singleFromMarks = a.segments.length === 1 && a.segments[0]!.length === undefined;
+  let lengths: Range[];
+  if (singleFromMarks) {
+    steps.push(fromMarks!.step);
+    lengths = [fromMarks!.distance];
+  } else {
+    lengths = a.segments.map((s) => spread(s.length!));
+    const total = sumRanges(lengths);
+    if (a.segments.length > 1)
+      steps.push(
+        makeStep({
+          name: 'Slide distance',
+          formula: 'd = d_1 + d_2 + …',
+          substituted: `d = ${lengths.map((l) => formatNumber(l.value, 'length')).join(' + ')} = ${formatNumber(total.value, 'length')} ${u.length}`,
+          inputs: Object.fromEntries(lengths.map((l, j) => [`d_${j + 1}`, input(l, u.length)])),
+          result: total,
+          unit: u.length,
+          why: 'the segments slid over, in order of travel, end to end',
+        }),
+      );
+    if (
+      fromMarks &&
+      Math.abs(total.value - fromMarks.distance.value) > MARKS_MISMATCH * fromMarks.distance.value
+    )
+      warnings.push(
+        `The segment lengths add up to ${formatNumber(total.value, 'length')} ${u.length} but the marks give ${formatNumber(fromMarks.distance.value, 'length')} ${u.length} (more than 5% apart); the segment lengths were used.`,
+      );
+  }
+
+  const segments: SlideSegment[] = [];
+  for (const [j, s] of a.segments.entries()) {
+    const d = dragFactor(s.drag, system);
+    if (!d.ok) return failed(d.reason, `${p}.segments[${j}].drag`);
+    const label = s.label ?? (s.drag.source === 'table' ? s.drag.surface : undefined);
+    const step = d.value.step;
+    steps.push(
+      a.segments.length > 1
+        ? { ...step, name: `${step.name}, segment ${j + 1}${label ? ` (${label})` : ''}` }
+        : step,
+    );
+    for (const note of d.value.notes) if (!assumptions.includes(note)) assumptions.push(note);
+    const seg: SlideSegment = { d: lengths[j]!, f: d.value.f, gradePercent: spread(s.grade ?? 0) };
+    if (label !== undefined) seg.label = label;
+    segments.push(seg);
+  }
+  steps.push(eff.value.step);
+
+  const endV = a.end ?? { mode: 'stop' as const };
+  const end: SlideEnd =
+    endV.mode === 'speed'
+      ? { mode: 'speed', speed: spread(endV.speed), ...(endV.basis ? { basis: endV.basis } : {}) }
+      : { mode: 'stop' };
+  const slide = slideSpeed(segments, n, end, system);
+  if (!slide.ok) return failed(slide.reason, slide.path ? `${p}.${slide.path}` : p);
+  steps.push(...slide.value.steps);
+
+  if (end.mode === 'stop')
+    assumptions.push(
+      'The vehicle came to rest at the end of the marks. If the marks end at an impact, the figure is a minimum: energy taken by the impact is not counted.',
+    );
+  else
+    assumptions.push(
+      `The speed at the end of the marks (${formatNumber(end.speed.value, 'speed')} ${u.speed}) comes from ${end.basis ?? 'an analysis done elsewhere'}.`,
+    );
+  assumptions.push(
+    'Speed lost before the marks began (before the wheels locked) is not counted: the figure is a minimum for the speed where the marks begin.',
+  );
+  if (a.segments.some((s) => s.grade !== undefined))
+    assumptions.push(
+      'Grade enters as f × n + G/100 (trade approximation of f n cos θ + sin θ, under 0.5% apart below a 10% grade).',
+    );
+
+  const model = skidModel(a, lengths, segments, n, end, system);
+  const speed = slide.value.speed;
+  return {
+    ok: true,
+    solution: {
+      id: a.id,
+      kind: 'skid',
+      ...(a.label !== undefined ? { label: a.label } : {}),
+      speed,
+      minimum: minimumOf(speed.low),
+      steps,
+      assumptions,
+      warnings,
+      boundaries: slide.value.boundaries,
+      distance: sumRanges(lengths),
+      model,
+    },
+  };
+}
+
+function skidModel(
+  a: SkidV1,
+  lengths: Range[],
+  segments: SlideSegment[],
+  n: Range,
+  end: SlideEnd,
+  system: CaseV1['units'],
+): AnalysisModel {
+  const single = segments.length === 1;
+  const dKey = (j: number) => (single ? 'd' : `d[${j}]`);
+  const inputs: ModelInput[] = [];
+  const u = unitsOf(system);
+  segments.forEach((s, j) => {
+    const tag = single ? '' : ` (segment ${j + 1})`;
+    inputs.push(modelInput(dKey(j), `slide distance${tag}`, u.length, lengths[j]!));
+    inputs.push(modelInput(`f[${j}]`, `drag factor${tag}`, '', s.f));
+    if (a.segments[j]!.grade !== undefined)
+      inputs.push(modelInput(`G[${j}]`, `grade${tag}`, '%', s.gradePercent));
+  });
+  inputs.push(modelInput('n', 'braking efficiency', '', n));
+  if (end.mode === 'speed')
+    inputs.push(modelInput('Send', 'speed at the end of the marks', u.speed, end.speed));
+  const base = Object.fromEntries(inputs.map((m) => [m.key, m.value]));
+  return {
+    inputs,
+    evaluate(x) {
+      const get = (k: string) => x[k] ?? base[k] ?? 0;
+      return slideStartSpeed(
+        segments.map((_, j) => ({ d: get(dKey(j)), f: get(`f[${j}]`), G: get(`G[${j}]`) })),
+        get('n'),
+        end.mode === 'speed' ? get('Send') : 0,
+        system,
+      );
+    },
+  };
+}

@@ -1,0 +1,99 @@
+import type { Case } from '../case/load.js';
+import type {
+  AnalysisOutcome,
+  AnalysisSolution,
+  CaseSolution,
+  Step,
+  Units,
+} from '../engine/types.js';
+import { CAUTIONS } from './cautions.js';
+import { formatRange, withUnit, type NumberKind } from './numbers.js';
+
+/** The kind of number a step's result is, from its unit. */
+export function kindOfUnit(unit: string): NumberKind {
+  if (unit === 'mph' || unit === 'km/h') return 'speed';
+  if (unit === 'ft' || unit === 'm') return 'length';
+  if (unit === 's') return 'seconds';
+  if (unit === '%') return 'percent';
+  return 'drag';
+}
+
+/** One step as lines: name, formula, the numbers substituted, the result with its range, why. */
+export function formatStepLines(step: Step, index: number): string[] {
+  const r = formatRange(
+    { value: step.result, low: step.low, high: step.high },
+    kindOfUnit(step.unit),
+    step.unit,
+  );
+  return [
+    `${index}. ${step.name}`,
+    `   ${step.formula}`,
+    `   ${step.substituted}`,
+    `   result: ${r}`,
+    `   why: ${step.why}`,
+  ];
+}
+
+const KIND_NAME = { skid: 'skid marks', yaw: 'yaw marks' } as const;
+
+/** "at least 40 mph" with the range beside it. */
+export function formatAtLeast(s: AnalysisSolution, units: Units): string {
+  return `at least ${s.minimum} ${units.speed}: ${formatRange(s.speed, 'speed', units.speed)}`;
+}
+
+function list(title: string, items: readonly string[]): string[] {
+  if (items.length === 0) return [];
+  return [`${title}:`, ...items.map((t) => `  - ${t}`)];
+}
+
+function analysisLines(r: AnalysisOutcome, i: number, units: Units, c: Case): string[] {
+  const label = c.analyses[i]?.label;
+  const id = r.ok ? r.solution.id : r.id;
+  const kind = r.ok ? r.solution.kind : r.kind;
+  const head = `Analysis ${i + 1}: ${id} (${KIND_NAME[kind]})${label ? `, ${label}` : ''}`;
+  if (!r.ok) return [head, `  cannot be computed: ${r.reason}${r.path ? ` [${r.path}]` : ''}`];
+  const s = r.solution;
+  const out = [head];
+  s.steps.forEach((st, j) => out.push(...formatStepLines(st, j + 1).map((l) => `  ${l}`)));
+  if (s.boundaries && s.boundaries.length > 2) {
+    out.push('  Speed along the slide:');
+    for (const b of s.boundaries)
+      out.push(
+        `    ${withUnit(b.at, 'length', units.length)} ${b.label}: ${formatRange(b.speed, 'speed', units.speed)}`,
+      );
+  }
+  out.push(`  Result: ${formatAtLeast(s, units)}`);
+  out.push(...list('  Assumptions', s.assumptions).map((l, k) => (k === 0 ? l : `  ${l}`)));
+  out.push(...list('  Warnings', s.warnings).map((l, k) => (k === 0 ? l : `  ${l}`)));
+  return out;
+}
+
+/** The posted limit comparison in words; states numbers only, never fault. */
+export function formatPostedLimit(solution: CaseSolution): string | undefined {
+  const p = solution.postedLimit;
+  if (!p) return undefined;
+  const u = solution.units.speed;
+  const above = solution.analyses.filter((r) => r.ok && r.solution.speed.low > p.value);
+  const limit = withUnit(p.value, 'speed', u);
+  if (above.length === 0) return `Posted limit ${limit}: no analysis’s low end is above it.`;
+  const names = above.map((r) =>
+    r.ok ? `${r.solution.id} (${withUnit(r.solution.speed.low, 'speed', u)})` : r.id,
+  );
+  return `Posted limit ${limit}: the low end of ${names.join(', ')} is above it.`;
+}
+
+/**
+ * The human-readable chain `solve` prints: per analysis every step (name, formula, numbers,
+ * result with range, why), the "at least" figure, assumptions and warnings; then the posted limit
+ * comparison, the file's warnings and the cautions.
+ */
+export function formatChainText(solution: CaseSolution, c: Case): string {
+  const u = solution.units;
+  const out: string[] = [`Case ${solution.id} (${c.units}: ${u.length}, ${u.speed})`, ''];
+  solution.analyses.forEach((r, i) => out.push(...analysisLines(r, i, u, c), ''));
+  const limit = formatPostedLimit(solution);
+  if (limit) out.push(limit, '');
+  if (solution.warnings.length) out.push(...list('File warnings', solution.warnings), '');
+  out.push(...list('Cautions', CAUTIONS));
+  return out.join('\n') + '\n';
+}

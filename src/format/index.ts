@@ -1,0 +1,10 @@
+/** Number, range and chain formatting shared by `solve`, the report and the screens. */
+export { formatNumber, formatRange, withUnit, NOT_A_NUMBER, type NumberKind } from './numbers.js';
+export {
+  formatChainText,
+  formatStepLines,
+  formatAtLeast,
+  formatPostedLimit,
+  kindOfUnit,
+} from './chain-text.js';
+export { CAUTIONS } from './cautions.js';

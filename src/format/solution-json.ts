@@ -1,0 +1,36 @@
+import type { AnalysisSolution, CaseSolution } from '../engine/types.js';
+
+/** One analysis as `solve --json` prints it: the contract's fields first, then extras. */
+export function analysisToJson(s: AnalysisSolution): Record<string, unknown> {
+  const out: Record<string, unknown> = {
+    id: s.id,
+    kind: s.kind,
+    speed: { value: s.speed.value, low: s.speed.low, high: s.speed.high },
+    minimum: s.minimum,
+    steps: s.steps,
+    assumptions: s.assumptions,
+    warnings: s.warnings,
+  };
+  if (s.label !== undefined) out.label = s.label;
+  if (s.distance) out.distance = s.distance;
+  if (s.radius) out.radius = s.radius;
+  if (s.boundaries) out.boundaries = s.boundaries;
+  if (s.sensitivity) out.sensitivity = s.sensitivity;
+  return out;
+}
+
+/**
+ * The shape `skidcase solve FILE --json` prints (docs/case-file.md): id, units, analyses, and the
+ * posted limit when the case has one, plus the file's warnings. Numbers are unrounded except
+ * `minimum`. Only for a solution whose analyses all solved; the caller reports failures instead.
+ */
+export function solutionToJson(solution: CaseSolution): Record<string, unknown> {
+  const out: Record<string, unknown> = {
+    id: solution.id,
+    units: solution.units,
+    analyses: solution.analyses.flatMap((r) => (r.ok ? [analysisToJson(r.solution)] : [])),
+  };
+  if (solution.postedLimit) out.postedLimit = solution.postedLimit;
+  out.warnings = solution.warnings;
+  return out;
+}

@@ -1,0 +1,95 @@
+/**
+ * Quick entry of the marks of one slide: every length on one line, or `4 x 80.5` for four marks
+ * of one length.
+ */
+import { RULES, type Quantity } from '../case/quantity.js';
+import type { UnitSystem } from '../engine/types.js';
+import { checkItem } from './check.js';
+import { Cursor, ReadError } from './cursor.js';
+import { readItem } from './item.js';
+import { isOp, lex, type Token } from './lexer.js';
+import { badTokenMessage } from './parse-quantity.js';
+import { readList } from './parse-list.js';
+import type { QuantitySpec } from './types.js';
+
+export interface MarksContext {
+  units: UnitSystem;
+  /** Ranges and tolerances on a mark (`80 ± 0.5`); default true. */
+  allowRange?: boolean;
+  /** Most marks accepted; default 16. */
+  maxMarks?: number;
+}
+
+export type MarksResult =
+  | { ok: true; marks: Quantity[]; converted?: string }
+  | { ok: false; message: string };
+
+const isTimes = (t: Token | undefined) =>
+  isOp(t, 'times') || (t?.t === 'word' && t.text.toLowerCase() === 'x');
+const isWhole = (t: Token | undefined) => t?.t === 'num' && Number.isInteger(t.value) && !t.text.includes('.');
+
+/**
+ * Reads the marks' lengths, in the case's length unit.
+ *
+ * - `94 92 95 93`, `94, 92, 95`, `94 ft 2 in, 92`, `24.4 m; 24.1 m`: one length per mark.
+ * - `4 x 80.5` (also `4x80.5`, `4 × 80.5`, `4 * 80.5`): four marks of 80.5 each. The count comes
+ *   first; `80.5 x 4` gets a message that says so.
+ *
+ * @example parseMarksLine('4 x 80.5', { units: 'imperial' }) // { ok: true, marks: [80.5, 80.5, 80.5, 80.5] }
+ */
+export function parseMarksLine(text: string, ctx: MarksContext): MarksResult {
+  const trimmed = text.trim();
+  const max = ctx.maxMarks ?? 16;
+  if (trimmed === '')
+    return { ok: false, message: 'marks: type each mark’s length, e.g. 94 92 95 93, or 4 x 80.5 for four equal marks' };
+  const tokens = lex(trimmed);
+  const bad = badTokenMessage(tokens, 'marks');
+  if (bad) return { ok: false, message: bad };
+  const spec: QuantitySpec & { item: string } = {
+    field: 'length',
+    item: 'mark',
+    kind: 'length',
+    units: ctx.units,
+    rule: RULES.length,
+    allowRange: ctx.allowRange ?? true,
+  };
+  const x = tokens.findIndex(isTimes);
+  if (x >= 0) return equalMarks(tokens, trimmed, x, spec, max);
+  const r = readList(new Cursor(tokens, trimmed), spec);
+  if (r instanceof ReadError) return { ok: false, message: r.message };
+  if (r.values.length > max) return { ok: false, message: `give at most ${max} marks (${r.values.length} typed)` };
+  return r.notes.length ? { ok: true, marks: r.values, converted: r.notes.join('; ') } : { ok: true, marks: r.values };
+}
+
+function equalMarks(
+  tokens: Token[],
+  source: string,
+  x: number,
+  spec: QuantitySpec & { item: string },
+  max: number,
+): MarksResult {
+  const count = tokens[0];
+  const after = tokens[x + 1];
+  // `80.5 x 4`: a whole number last, after the x, reads as the count typed second.
+  const swapHint = () =>
+    x === tokens.length - 2 && isWhole(after) && (after as { value: number }).value <= max
+      ? `marks: the count comes first; write ${after!.text} x ${source.slice(0, tokens[x]!.at).trim()}`
+      : undefined;
+  if (x !== 1 || !isWhole(count))
+    return { ok: false, message: swapHint() ?? 'marks: write the number of marks, x, then the length, e.g. 4 x 80.5' };
+  const n = (count as { value: number }).value;
+  if (n < 1 || n > max)
+    return { ok: false, message: swapHint() ?? `marks: the number of marks before x must be from 1 to ${max}` };
+  const cur = new Cursor(tokens, source);
+  cur.pos = 2;
+  const ctx = { field: 'length', kind: spec.kind, units: spec.units };
+  if (cur.done()) return { ok: false, message: `marks: give the length after ${n} x, e.g. ${n} x 80.5` };
+  const raw = readItem(cur, ctx, { allowRange: spec.allowRange });
+  if (raw instanceof ReadError) return { ok: false, message: `marks: ${raw.message}` };
+  if (!cur.done()) return { ok: false, message: `marks: after ${n} x give one length; cannot read '${cur.rest()}'` };
+  const checked = checkItem(raw, spec, ctx);
+  if (checked instanceof ReadError) return { ok: false, message: `marks: ${checked.message}` };
+  const v = checked.value;
+  const marks = Array.from({ length: n }, () => (typeof v === 'number' ? v : { ...v }));
+  return checked.converted ? { ok: true, marks, converted: checked.converted } : { ok: true, marks };
+}

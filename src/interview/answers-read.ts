@@ -1,0 +1,70 @@
+/**
+ * Reading branch answers (choices and counts) that decide which questions apply. Branching looks
+ * only at these, whose values never depend on the case's units.
+ */
+import type { UnitSystem } from '../engine/types.js';
+import type { Answers } from './types.js';
+
+export function choiceOf(answers: Answers, id: string): string | undefined {
+  const v = answers[id]?.value;
+  return typeof v === 'string' ? v : undefined;
+}
+
+export function countOf(answers: Answers, id: string): number | undefined {
+  const v = answers[id]?.value;
+  return typeof v === 'number' && Number.isInteger(v) ? v : undefined;
+}
+
+export function unitsOf(answers: Answers): UnitSystem {
+  return choiceOf(answers, 'units') === 'metric' ? 'metric' : 'imperial';
+}
+
+/** Most analyses a case may hold through the interview. */
+export const MAX_ANALYSES = 9;
+/** Most segments in one slide. */
+export const MAX_SEGMENTS = 20;
+
+/** Analyses in play: the first, and one more for each "add another" answered yes in a row. */
+export function analysisCount(answers: Answers): number {
+  let i = 0;
+  while (i < MAX_ANALYSES - 1 && choiceOf(answers, `a${i}.more`) === 'yes') i++;
+  return i + 1;
+}
+
+/** What the marks look like. */
+export type MarkLook = 'dark' | 'abs' | 'skip' | 'gap' | 'yaw';
+
+export function markLook(answers: Answers, i: number): MarkLook | undefined {
+  const v = choiceOf(answers, `a${i}.look`);
+  return v === 'dark' || v === 'abs' || v === 'skip' || v === 'gap' || v === 'yaw' ? v : undefined;
+}
+
+export const isSlideLook = (l: MarkLook | undefined): boolean => l !== undefined && l !== 'yaw';
+
+/** How the slide's surfaces are entered: `one` surface, `several` one at a time, or `quick` line. */
+export function surfaceMode(answers: Answers, i: number): 'one' | 'several' | 'quick' | undefined {
+  const v = choiceOf(answers, `a${i}.surfaces`);
+  return v === 'one' || v === 'several' || v === 'quick' ? v : undefined;
+}
+
+/** Segments in play for slide `i` (0 while the count is not yet known). */
+export function segmentCount(answers: Answers, i: number): number {
+  const mode = surfaceMode(answers, i);
+  if (mode === undefined) return 0;
+  if (mode === 'one' && markLook(answers, i) !== 'gap') return 1;
+  if (mode === 'quick') {
+    const v = answers[`a${i}.quick`]?.value;
+    return Array.isArray(v) ? Math.min(v.length, MAX_SEGMENTS) : 0;
+  }
+  return Math.min(countOf(answers, `a${i}.segcount`) ?? 0, MAX_SEGMENTS);
+}
+
+/** Highest index + 1 seen in answer ids matching `re` (its first group is the index). */
+export function maxIndexIn(answers: Answers, re: RegExp): number {
+  let max = 0;
+  for (const id of Object.keys(answers)) {
+    const m = re.exec(id);
+    if (m) max = Math.max(max, Number(m[1]) + 1);
+  }
+  return max;
+}

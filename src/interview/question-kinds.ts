@@ -1,0 +1,124 @@
+/**
+ * Builders for each kind of question, so that the question lists read as data. `validate` is
+ * always `parse` without the value, so the two can never disagree.
+ */
+import type { Answers, AnswerContext, Choice, Help, ParseResult, Question } from './types.js';
+import { readQuantity, type QuantitySpec } from './read-quantity.js';
+import { readMarks, readValues } from './read-list.js';
+import { caseUnitOf, parseCount, type QuantityKind } from '../input/index.js';
+import type { UnitSystem } from '../engine/types.js';
+
+/** What every question has; the builders add kind, parse and validate. */
+export interface QuestionBase {
+  id: string;
+  section: string;
+  title: string;
+  prompt: string;
+  help: Help;
+  appliesWhen(answers: Answers): boolean;
+  defaultText?(answers: Answers): string | undefined;
+  explainChoice?(answers: Answers): string | undefined;
+  example?: string;
+  optional?: boolean;
+}
+
+function finish(base: QuestionBase, kind: Question['kind'], parse: Question['parse'], extra: Partial<Question> = {}): Question {
+  return {
+    ...base,
+    ...extra,
+    kind,
+    parse,
+    validate: (text, ctx) => {
+      const r = parse(text, ctx);
+      return r.ok ? undefined : r.message;
+    },
+  };
+}
+
+/** The choice's value for a typed text: its key, its value or its label (any case). */
+export function matchChoice(choices: readonly Choice[], text: string): Choice | undefined {
+  const t = text.trim().toLowerCase();
+  return choices.find((c) => c.key.toLowerCase() === t || c.value.toLowerCase() === t || c.label.toLowerCase() === t);
+}
+
+export function choiceQuestion(base: QuestionBase, choices: Choice[], kind: 'choice' | 'confirm' = 'choice'): Question {
+  const parse = (text: string): ParseResult => {
+    const c = matchChoice(choices, text);
+    if (c) return { ok: true, value: c.value };
+    const keys = choices.map((x) => `${x.key} (${x.label})`).join(', ');
+    return { ok: false, message: `"${text.trim()}" is not one of the choices: press ${keys}` };
+  };
+  return finish(base, kind, parse, { choices });
+}
+
+export const YES_NO: Choice[] = [
+  { value: 'yes', key: 'y', label: 'yes' },
+  { value: 'no', key: 'n', label: 'no' },
+];
+
+export function confirmQuestion(base: QuestionBase): Question {
+  return choiceQuestion(base, YES_NO, 'confirm');
+}
+
+export function textQuestion(base: QuestionBase): Question {
+  const parse = (text: string): ParseResult => {
+    const t = text.trim();
+    if (t === '' && !base.optional) return { ok: false, message: 'an answer is needed here' };
+    if (t.length > 2000) return { ok: false, message: 'keep this under 2000 characters' };
+    return { ok: true, value: t };
+  };
+  return finish(base, 'text', parse);
+}
+
+/** An empty answer to an optional question: stored as an empty text, value undefined. */
+const emptyOptional = (base: QuestionBase, text: string): ParseResult | undefined =>
+  base.optional && text.trim() === '' ? { ok: true, value: undefined } : undefined;
+
+/**
+ * A number question. `check` adds rules that depend on other answers (e.g. the middle ordinate
+ * must be less than half the chord).
+ */
+export function quantityQuestion(
+  base: QuestionBase,
+  spec: QuantitySpec,
+  check?: (value: unknown, ctx: AnswerContext) => string | undefined,
+): Question {
+  const parse = (text: string, ctx: AnswerContext): ParseResult => {
+    const empty = emptyOptional(base, text);
+    if (empty) return empty;
+    const r = readQuantity(text, spec, ctx.units);
+    if (!r.ok) return r;
+    const extra = check?.(r.value, ctx);
+    if (extra) return { ok: false, message: extra };
+    return r.notice ? { ok: true, value: r.value, notice: r.notice } : { ok: true, value: r.value };
+  };
+  return finish(base, 'quantity', parse, { unitKind: spec.kind });
+}
+
+/** Mark lengths on one line; `count` (the number of marks answered) lets one length stand for all. */
+export function marksQuestion(base: QuestionBase, count: (answers: Answers) => number | undefined): Question {
+  return finish(base, 'list', (text, ctx) => readMarks(text, ctx.units, count(ctx.answers)), { unitKind: 'length' });
+}
+
+/** Several values of one kind on one line (sled pulls, decelerometer readings). */
+export function listQuestion(base: QuestionBase, spec: QuantitySpec, item: string): Question {
+  return finish(base, 'list', (text, ctx) => readValues(text, spec, ctx.units, item), { unitKind: spec.kind });
+}
+
+/** A whole number from `min` to `max` (counts of marks, segments). */
+export function countQuestion(base: QuestionBase, what: string, min: number, max: number): Question {
+  const parse = (text: string): ParseResult => emptyOptional(base, text) ?? parseCount(text, { field: `number of ${what}`, min, max });
+  return finish(base, 'quantity', parse, { unitKind: 'count' });
+}
+
+/** Any other kind with its own parser (quick entry, test skids). */
+export function customQuestion(base: QuestionBase, kind: Question['kind'], parse: Question['parse']): Question {
+  return finish(base, kind, parse);
+}
+
+/** The unit a question's answer is read in, for the prompt's hint: `ft`, `km/h`, `%`, `decimal`. */
+export function unitHintOf(kind: QuantityKind, units: UnitSystem): string | undefined {
+  if (kind === 'factor') return 'decimal';
+  if (kind === 'count') return undefined;
+  return caseUnitOf(kind, units);
+}

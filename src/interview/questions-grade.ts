@@ -1,0 +1,84 @@
+/**
+ * Slopes asked as a direction and a positive percent, so that the sign can never be wrong; the
+ * case stores them signed (grade + uphill in the direction of travel; bank + toward the centre).
+ */
+import { RULES } from '../case/quantity.js';
+import type { Answers, Question } from './types.js';
+import { choiceQuestion, quantityQuestion } from './question-kinds.js';
+import { choiceOf } from './answers-read.js';
+
+const PERCENT = { what: 'percent', gt: 0, lt: 100 };
+
+export function gradeQuestions(prefix: string, section: string, what: string, applies: (a: Answers) => boolean): Question[] {
+  const dir = `${prefix}.grade.dir`;
+  return [
+    choiceQuestion(
+      {
+        id: dir,
+        section,
+        title: `Grade, ${what}`,
+        prompt: `Along ${what}, in the direction the vehicle travelled, the road goes:`,
+        help: {
+          why: 'Sliding uphill, gravity helps slow the vehicle; downhill it works against the brakes. The grade is added to the braking friction: f·n + G.',
+          how: 'Measure the slope along the marks with a level or an inclinometer, in percent (rise over run × 100).',
+        },
+        appliesWhen: applies,
+        defaultText: () => 'level',
+      },
+      [
+        { value: 'level', key: 'l', label: 'level' },
+        { value: 'uphill', key: 'u', label: 'uphill' },
+        { value: 'downhill', key: 'd', label: 'downhill' },
+      ],
+    ),
+    quantityQuestion(
+      {
+        id: `${prefix}.grade.pct`,
+        section,
+        title: `Grade percent, ${what}`,
+        prompt: `How steep, in percent? (a positive number; the direction was given above)`,
+        help: { why: 'Stored signed in the case: + uphill, - downhill.', how: 'e.g. 3, or 2.5-3.5 when the slope varies.' },
+        appliesWhen: (a) => applies(a) && (choiceOf(a, dir) === 'uphill' || choiceOf(a, dir) === 'downhill'),
+        example: '3',
+      },
+      { kind: 'percent', rule: { ...PERCENT, what: 'grade' }, range: true, noMinus: 'choose uphill or downhill above instead of typing a sign' },
+    ),
+  ];
+}
+
+export function bankQuestions(prefix: string, section: string, applies: (a: Answers) => boolean): Question[] {
+  const dir = `${prefix}.bank.dir`;
+  return [
+    choiceQuestion(
+      {
+        id: dir,
+        section,
+        title: 'Bank',
+        prompt: 'Across the road where the marks curve, the surface tilts:',
+        help: {
+          why: 'A road banked toward the centre of the curve (superelevation) lets a vehicle take it faster; banked away, slower. S = sqrt(15 R (f + e) / (1 - f e)).',
+          how: 'Measure the cross slope at the chord\'s midpoint, at right angles to the road, in percent.',
+        },
+        appliesWhen: applies,
+        defaultText: () => 'none',
+      },
+      [
+        { value: 'none', key: 'n', label: 'flat (no bank)' },
+        { value: 'toward', key: 't', label: 'toward the centre of the curve' },
+        { value: 'away', key: 'a', label: 'away from the centre of the curve' },
+      ],
+    ),
+    quantityQuestion(
+      {
+        id: `${prefix}.bank.pct`,
+        section,
+        title: 'Bank percent',
+        prompt: 'How much, in percent? (a positive number; the direction was given above)',
+        help: { why: 'Stored signed in the case as superelevation: + toward the centre, - away.', how: 'e.g. 2, or 1.5-2.5.' },
+        appliesWhen: (a) => applies(a) && (choiceOf(a, dir) === 'toward' || choiceOf(a, dir) === 'away'),
+        example: '2',
+      },
+      { kind: 'percent', rule: { ...RULES.superelevation, ...PERCENT, what: 'superelevation' }, range: true, noMinus: 'choose toward or away from the centre above instead of typing a sign' },
+    ),
+  ];
+}

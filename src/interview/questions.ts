@@ -1,0 +1,120 @@
+/**
+ * The whole list of questions as a pure function of the answers so far: the case, the vehicle,
+ * then each analysis with its branch (slide or yaw) and its segments expanded.
+ */
+import type { Answers, Question } from './types.js';
+import { choiceQuestion, confirmQuestion, textQuestion, unitHintOf } from './question-kinds.js';
+import { analysisCount, choiceOf, isSlideLook, markLook, MAX_ANALYSES, maxIndexIn, segmentCount, surfaceMode, unitsOf, type MarkLook } from './answers-read.js';
+import { caseQuestions } from './questions-case.js';
+import { vehicleQuestions } from './questions-vehicle.js';
+import { slideQuestions } from './questions-slide.js';
+import { yawQuestions } from './questions-yaw.js';
+
+/** Heading of analysis `i`'s section, naming the chain picked. */
+export function analysisSection(a: Answers, i: number): string {
+  const look = markLook(a, i);
+  const mode = surfaceMode(a, i);
+  const chain =
+    look === undefined ? '' : look === 'yaw' ? ' - critical speed' : look === 'gap' || mode === 'several' || mode === 'quick' ? ' - slide in parts' : ' - slide';
+  return `Analysis ${i + 1}${chain}`;
+}
+
+/** Why the chain was picked, for each look of the marks, in the case's units. */
+export function chainReason(look: MarkLook, metric: boolean): string {
+  const slide = metric ? 'S = sqrt(254 d f n)' : 'S = sqrt(30 d f n)';
+  return {
+    dark: `Straight dark marks are left by locked wheels sliding: the slide chain applies, ${slide}.`,
+    abs: `Faint, evenly dashed marks are typical of anti-lock brakes working hard: the slide chain applies with care, ${slide}, and the result is an estimate to be reported as such.`,
+    skip: `Marks with short regular gaps come from a locked tire bouncing: the slide chain applies, and the whole length, gaps included, counts as sliding (common practice).`,
+    gap: `Marks broken by long gaps mean the brakes were released and applied again: slide in parts. Only the marked parts count, each as its own segment; the gaps were not braking and are left out (common practice).`,
+    yaw: `Curved sideways marks with diagonal striations are left by a vehicle sliding sideways with its tires still rotating: the critical speed chain applies, ${metric ? 'S = sqrt(127 f R)' : 'S = sqrt(15 f R)'}.`,
+  }[look];
+}
+
+function analysisQuestions(i: number, now: Answers, segments: number): Question[] {
+  const p = `a${i}`;
+  const inPlay = (a: Answers) => i < analysisCount(a);
+  const slide = (a: Answers) => inPlay(a) && isSlideLook(markLook(a, i));
+  const yaw = (a: Answers) => inPlay(a) && markLook(a, i) === 'yaw';
+  const section = analysisSection(now, i);
+  // The track width is asked once, in the first yaw analysis that uses the centre-of-mass path.
+  const askTrack = (a: Answers) => {
+    for (let k = 0; k < analysisCount(a); k++)
+      if (markLook(a, k) === 'yaw' && choiceOf(a, `a${k}.path`) === 'half-track') return k === i;
+    return false;
+  };
+  return [
+    choiceQuestion(
+      {
+        id: `${p}.look`,
+        section,
+        title: 'Marks',
+        prompt: i === 0 ? 'What do the marks look like?' : 'What do the marks of this analysis look like?',
+        help: {
+          why: 'The look of the marks tells how they were made, and so which formula chain applies.',
+          how: 'Look along the whole length: locked-wheel marks are straight and darken toward the end; yaw marks curve and show striations across the mark.',
+        },
+        appliesWhen: inPlay,
+        explainChoice: (a) => {
+          const look = markLook(a, i);
+          return look ? chainReason(look, unitsOf(a) === 'metric') : undefined;
+        },
+      },
+      [
+        { value: 'dark', key: 'd', label: 'straight dark marks' },
+        { value: 'abs', key: 'a', label: 'faint, evenly dashed marks (anti-lock brakes)' },
+        { value: 'skip', key: 's', label: 'marks with short regular gaps (skip skid)' },
+        { value: 'gap', key: 'g', label: 'marks broken by long gaps (gap skid)' },
+        { value: 'yaw', key: 'y', label: 'curved sideways marks with diagonal striations (yaw)' },
+      ],
+    ),
+    textQuestion({
+      id: `${p}.label`,
+      section,
+      title: 'Label',
+      prompt: 'A short label for these marks (e.g. northbound, before the junction; Enter to skip)',
+      help: { why: 'Tells the analyses apart in the chain and the report.' },
+      appliesWhen: inPlay,
+      optional: true,
+    }),
+    ...slideQuestions(i, section, slide, segments, now),
+    ...yawQuestions(i, section, yaw, askTrack),
+    confirmQuestion({
+      id: `${p}.more`,
+      section,
+      title: 'Another analysis?',
+      prompt: 'Add another analysis (another set of marks, or the same marks another way)?',
+      help: { why: 'A case may hold several analyses, e.g. a slide before an impact and yaw marks after it.' },
+      appliesWhen: (a) => inPlay(a) && i < MAX_ANALYSES - 1,
+      defaultText: () => 'no',
+    }),
+  ];
+}
+
+/**
+ * Every question that could be asked given these answers, including branches that do not apply
+ * (so that answers kept from them can be named); `appliesWhen` tells which apply.
+ */
+export function allQuestions(answers: Answers): Question[] {
+  const analyses = Math.max(analysisCount(answers), maxIndexIn(answers, /^a(\d+)\./));
+  const out: Question[] = [...caseQuestions(), ...vehicleQuestions()];
+  for (let i = 0; i < analyses; i++) {
+    const segs = Math.max(segmentCount(answers, i), maxIndexIn(answers, new RegExp(`^a${i}\\.seg(\\d+)\\.`)));
+    out.push(...analysisQuestions(i, answers, segs));
+  }
+  const units = unitsOf(answers);
+  return out.map((q) => {
+    const hint = q.unitKind && unitHintOf(q.unitKind, units);
+    return hint ? { ...q, unitHint: hint } : q;
+  });
+}
+
+/** The questions that apply now, in the order asked. */
+export function questionsFor(answers: Answers): Question[] {
+  const seen = new Set<string>();
+  return allQuestions(answers).filter((q) => {
+    if (seen.has(q.id) || !q.appliesWhen(answers)) return false;
+    seen.add(q.id);
+    return true;
+  });
+}

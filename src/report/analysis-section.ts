@@ -1,0 +1,98 @@
+import type { AnalysisV1 } from '../case/v1/schema.js';
+import type { AnalysisOutcome, AnalysisSolution, Step, Units } from '../engine/types.js';
+import { formatNumber, formatRange } from '../format/numbers.js';
+import { para, list, section, table, type Block, type Section, type StepBlock } from './doc.js';
+import { dragSourceLines } from './drag-source.js';
+import { atLeastText, stepResultText } from './figures-text.js';
+
+const KIND_TITLE = { skid: 'slide (skid marks)', yaw: 'critical speed (yaw marks)' } as const;
+
+/** The analysis's heading: number, id, label and which chain it uses. */
+export function analysisTitle(i: number, a: { id: string; kind: 'skid' | 'yaw'; label?: string }) {
+  return `Analysis ${i + 1}: ${a.id}${a.label ? `, ${a.label}` : ''} — ${KIND_TITLE[a.kind]}`;
+}
+
+/** Steps, one block each, numbered in the order the chain runs. */
+export function stepBlocks(steps: readonly Step[]): StepBlock[] {
+  return steps.map((st, k) => ({
+    kind: 'step',
+    number: k + 1,
+    name: st.name,
+    formula: st.formula,
+    substituted: st.substituted,
+    result: stepResultText(st),
+    why: st.why,
+  }));
+}
+
+/** Where each drag factor of the analysis came from. */
+function dragLines(a: AnalysisV1): string[] {
+  if (a.kind === 'yaw') return dragSourceLines(a.drag, 'Lateral drag factor');
+  return a.segments.flatMap((s, j) =>
+    dragSourceLines(
+      s.drag,
+      a.segments.length > 1 ? `Segment ${j + 1}${s.label ? ` (${s.label})` : ''}` : 'Drag factor',
+    ),
+  );
+}
+
+/** Speed at the start, at each segment boundary and at the end of a slide, from the engine. */
+function boundaryTable(s: AnalysisSolution, units: Units): Block[] {
+  if (!s.boundaries || s.boundaries.length === 0) return [];
+  return [
+    table(
+      'Speed along the slide',
+      ['Point', `From start of marks (${units.length})`, `Speed (${units.speed})`, 'Range'],
+      s.boundaries.map((b) => [
+        b.label,
+        formatNumber(b.at, 'length'),
+        formatNumber(b.speed.value, 'speed'),
+        `${formatNumber(b.speed.low, 'speed')} to ${formatNumber(b.speed.high, 'speed')}`,
+      ]),
+      ['left', 'right', 'right', 'right'],
+    ),
+  ];
+}
+
+/**
+ * One analysis: the "at least" statement, the chain step by step, the speed along the slide, the
+ * drag factor's sources, assumptions and warnings, then any further sections (`more`). A failed
+ * analysis says why it could not be computed, naming the field when the engine does.
+ */
+export function analysisSection(
+  i: number,
+  a: AnalysisV1,
+  o: AnalysisOutcome,
+  units: Units,
+  more: Section[] = [],
+): Section {
+  const id = `analysis-${i + 1}`;
+  if (!o.ok)
+    return section(id, analysisTitle(i, a), [
+      para(`Not computed: ${o.reason}${o.path ? ` (field ${o.path})` : ''}.`, 'strong'),
+      list(dragLines(a)),
+    ]);
+  const s = o.solution;
+  const blocks: Block[] = [
+    para(atLeastText(s.minimum, s.speed, units.speed), 'strong'),
+    para(
+      'The range comes from setting every input at the matching end of its own range; the "at least" figure is the low end rounded down to a whole unit.',
+      'note',
+    ),
+  ];
+  if (s.distance)
+    blocks.push(para(`Slide distance used: ${formatRange(s.distance, 'length', units.length)}.`));
+  if (s.radius) blocks.push(para(`Radius used: ${formatRange(s.radius, 'length', units.length)}.`));
+  return section(id, analysisTitle(i, a), blocks, [
+    section(`${id}-chain`, 'The chain, step by step', stepBlocks(s.steps)),
+    ...(s.boundaries?.length
+      ? [section(`${id}-along`, 'Speed along the slide', boundaryTable(s, units))]
+      : []),
+    section(`${id}-drag`, 'Where the drag factor comes from', [list(dragLines(a))]),
+    section(`${id}-assumptions`, 'Assumptions', [
+      s.assumptions.length ? list(s.assumptions) : para('None recorded beyond the method itself.'),
+    ]),
+    section(`${id}-warnings`, 'Warnings', [s.warnings.length ? list(s.warnings) : para('None.')]),
+    ...more,
+  ]);
+}

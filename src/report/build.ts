@@ -1,0 +1,153 @@
+import type { Case } from '../case/load.js';
+import type { CaseSolution } from '../engine/types.js';
+import { CAUTIONS } from '../format/cautions.js';
+import { analysisSection } from './analysis-section.js';
+import {
+  REPORT_FORMAT,
+  REPORT_VERSION,
+  list,
+  para,
+  section,
+  table,
+  type Block,
+  type ReportDoc,
+  type Section,
+} from './doc.js';
+import { extrasSections, type ReportExtrasOptions } from './extras-section.js';
+import { speedText } from './figures-text.js';
+import { formatNumber } from '../format/numbers.js';
+import { measurementTables } from './measurements.js';
+
+export interface ReportMeta {
+  /** skidcase's version, printed in the report. */
+  toolVersion: string;
+  /** When the report was made, ISO 8601 (the caller's clock: the builder stays pure). */
+  generatedAt: string;
+  /** The case file the figures are recomputed from, as the user named it. */
+  caseFile?: string;
+  /** Settings of the further sections (reaction time, sampling); defaults when left out. */
+  extras?: ReportExtrasOptions;
+}
+
+function detailsSection(c: Case, meta: ReportMeta): Section {
+  const d = c.details ?? {};
+  const rows: string[][] = [
+    ['Case id', c.id],
+    ['Reference', d.reference ?? ''],
+    ['Occurred', d.occurred ?? ''],
+    ['Location', d.location ?? ''],
+    ['Investigator', d.investigator ?? ''],
+    ['Vehicle', c.vehicle.label ?? ''],
+    ['Units', c.units === 'imperial' ? 'imperial (feet, mph)' : 'metric (metres, km/h)'],
+    ['Case file', meta.caseFile ?? `${c.id}.json`],
+    ['Case created', c.created ?? ''],
+    ['Case last changed', c.updated ?? ''],
+  ];
+  const blocks: Block[] = [
+    table(
+      'Case details',
+      ['Field', 'Entry'],
+      rows.filter((r) => r[1] !== ''),
+    ),
+  ];
+  if (d.notes) blocks.push(table('Notes', ['Notes'], [[d.notes]]));
+  return section('details', 'Case details', blocks);
+}
+
+function summarySection(c: Case, sol: CaseSolution): Section {
+  const rows = sol.analyses.map((o, i) => {
+    const label = `${i + 1}. ${o.ok ? o.solution.id : o.id}`;
+    if (!o.ok) return [label, o.kind, 'not computed', '', ''];
+    const s = o.solution;
+    return [
+      label,
+      s.kind,
+      `at least ${s.minimum} ${sol.units.speed}`,
+      speedText(s.speed.value, sol.units.speed),
+      `${formatNumber(s.speed.low, 'speed')} to ${speedText(s.speed.high, sol.units.speed)}`,
+    ];
+  });
+  const blocks: Block[] = [
+    table('Results', ['Analysis', 'Kind', 'Minimum', 'Computed', 'Range'], rows, [
+      'left',
+      'left',
+      'left',
+      'right',
+      'right',
+    ]),
+  ];
+  if (c.analyses.length === 0) blocks.push(para('The case holds no analysis yet.'));
+  return section('results', 'Results', blocks);
+}
+
+/** The posted limit set against each analysis's lowest figure: numbers compared, nothing more. */
+function limitSection(sol: CaseSolution): Section | undefined {
+  const lim = sol.postedLimit;
+  if (!lim) return undefined;
+  const u = sol.units.speed;
+  const lines = sol.analyses.map((o, i) => {
+    if (!o.ok) return `${i + 1}. ${o.id}: not computed, so not compared.`;
+    const low = o.solution.speed.low;
+    return `${i + 1}. ${o.solution.id}: the low end of the range, ${speedText(low, u)}, is ${low > lim.value ? 'above' : 'not above'} the posted limit of ${lim.value} ${u}.`;
+  });
+  return section('posted-limit', 'Comparison with the posted limit', [
+    para(
+      `Posted limit: ${lim.value} ${u}. Exceeded at the minimum: ${lim.exceededAtMinimum ? 'yes' : 'no'} (${lim.exceededAtMinimum ? 'the low end of at least one analysis is above the limit' : 'no analysis has its low end above the limit'}).`,
+      'strong',
+    ),
+    list(lines),
+    para(
+      'This is a comparison of numbers. It does not say why the vehicle travelled at that speed, and it does not state fault.',
+      'note',
+    ),
+  ]);
+}
+
+/**
+ * The case report as a document: details, results, measurements as entered, each analysis step by
+ * step (with sensitivity, sampling, time and distance and pictures where they apply), the posted
+ * limit comparison, file warnings, the cautions and where the figures come from. Pure: every
+ * figure is read from `solution` (the engine's steps and ranges); nothing is computed here.
+ */
+export function buildReport(c: Case, solution: CaseSolution, meta: ReportMeta): ReportDoc {
+  const units = solution.units;
+  const sections: Section[] = [detailsSection(c, meta), summarySection(c, solution)];
+  sections.push(section('measurements', 'Measurements as entered', measurementTables(c, units)));
+  c.analyses.forEach((a, i) => {
+    const o = solution.analyses[i];
+    if (o)
+      sections.push(
+        analysisSection(
+          i,
+          a,
+          o,
+          units,
+          o.ok ? extrasSections(c, o.solution, i, units, meta.extras) : [],
+        ),
+      );
+  });
+  const lim = limitSection(solution);
+  if (lim) sections.push(lim);
+  if (solution.warnings.length)
+    sections.push(
+      section('file-warnings', 'Warnings about the case file', [list(solution.warnings)]),
+    );
+  sections.push(section('cautions', 'Cautions', [list([...CAUTIONS])]));
+  sections.push(
+    section('about', 'About this report', [
+      para(
+        `Every figure in this report is recomputed by skidcase ${meta.toolVersion} from the case file ${meta.caseFile ?? `${c.id}.json`}; none is typed in by hand. Recomputing the same file gives the same figures.`,
+      ),
+      para(`Generated ${meta.generatedAt}.`),
+    ]),
+  );
+  return {
+    format: REPORT_FORMAT,
+    version: REPORT_VERSION,
+    title: `Speed from tire marks: ${c.details?.reference || c.id}`,
+    caseId: c.id,
+    toolVersion: meta.toolVersion,
+    generatedAt: meta.generatedAt,
+    sections,
+  };
+}

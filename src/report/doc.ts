@@ -1,0 +1,124 @@
+/**
+ * The report as a small document model: plain data (no functions, no `undefined`), so that it
+ * serialises to JSON and back unchanged and every renderer (Markdown, text, HTML, JSON) reads the
+ * same content. Numbers are already formatted into text by the builder: a renderer never formats,
+ * rounds or computes a figure.
+ */
+
+/** Marker and version of the JSON form, so a reader can tell a report from a case file. */
+export const REPORT_FORMAT = 'skidcase-report';
+export const REPORT_VERSION = 1;
+
+export interface Paragraph {
+  kind: 'paragraph';
+  text: string;
+  /** `strong` for the "at least" statement and other lines a reader must not miss. */
+  tone: 'plain' | 'strong' | 'note';
+}
+
+export interface BulletList {
+  kind: 'list';
+  items: string[];
+}
+
+export interface Table {
+  kind: 'table';
+  caption: string;
+  columns: string[];
+  /** Alignment per column; numbers read best right-aligned. */
+  align: ('left' | 'right')[];
+  rows: string[][];
+}
+
+/** One step of a formula chain, every field already text. */
+export interface StepBlock {
+  kind: 'step';
+  number: number;
+  name: string;
+  formula: string;
+  substituted: string;
+  result: string;
+  why: string;
+}
+
+/**
+ * A picture: an SVG (written beside the report as `<base>-<name>.svg`, inlined in HTML) and,
+ * where one exists, the same picture as plain text lines for the text and Markdown forms.
+ */
+export interface Figure {
+  kind: 'figure';
+  /** File-name part, [a-z0-9-]: `speed`, `yaw-arc`, `skid-1-sensitivity`. */
+  name: string;
+  caption: string;
+  /** The SVG text; empty when the picture exists only as text lines. */
+  svg: string;
+  textLines: string[];
+}
+
+export type Block = Paragraph | BulletList | Table | StepBlock | Figure;
+
+export interface Section {
+  /** Stable anchor, [a-z0-9-]. */
+  id: string;
+  title: string;
+  blocks: Block[];
+  sections: Section[];
+}
+
+export interface ReportDoc {
+  format: typeof REPORT_FORMAT;
+  version: typeof REPORT_VERSION;
+  title: string;
+  caseId: string;
+  toolVersion: string;
+  generatedAt: string;
+  sections: Section[];
+}
+
+/** Builders that keep every block complete (no missing fields), so JSON round-trips exactly. */
+export const para = (text: string, tone: Paragraph['tone'] = 'plain'): Paragraph => ({
+  kind: 'paragraph',
+  text,
+  tone,
+});
+
+export const list = (items: string[]): BulletList => ({ kind: 'list', items });
+
+export function table(
+  caption: string,
+  columns: string[],
+  rows: string[][],
+  align?: ('left' | 'right')[],
+): Table {
+  return { kind: 'table', caption, columns, align: align ?? columns.map(() => 'left'), rows };
+}
+
+export function section(
+  id: string,
+  title: string,
+  blocks: Block[],
+  sections: Section[] = [],
+): Section {
+  return { id, title, blocks, sections };
+}
+
+/** A safe file-name part from any label: lower case, [a-z0-9-] only. */
+export function fileSafe(s: string): string {
+  return (
+    s
+      .toLowerCase()
+      .replace(/[^a-z0-9-]+/g, '-')
+      .replace(/^-+|-+$/g, '') || 'figure'
+  );
+}
+
+/** Every figure in the document, in reading order. */
+export function figuresOf(doc: ReportDoc): Figure[] {
+  const out: Figure[] = [];
+  const walk = (s: Section) => {
+    for (const b of s.blocks) if (b.kind === 'figure') out.push(b);
+    s.sections.forEach(walk);
+  };
+  doc.sections.forEach(walk);
+  return out;
+}

@@ -1,0 +1,22 @@
+import type { Range, Step } from '../engine/types.js';
+import { kindOfUnit } from '../format/chain-text.js';
+import { formatNumber, formatRange, withUnit } from '../format/numbers.js';
+
+/** A step's result with its range, as the chain shows it: `43.3 mph (40.2 to 46.1)`. */
+export function stepResultText(s: Step): string {
+  return formatRange({ value: s.result, low: s.low, high: s.high }, kindOfUnit(s.unit), s.unit);
+}
+
+/** A speed with its unit, 1 dp: `43.3 mph`. */
+export function speedText(n: number, unit: string): string {
+  return withUnit(n, 'speed', unit);
+}
+
+/**
+ * The sentence a reader quotes, and the tests read back: the "at least" figure and the range.
+ * @example atLeastText(40, { value: 43.3, low: 40.2, high: 46.1 }, 'mph')
+ * // 'At least 40 mph at the start of the marks (computed 43.3 mph, range 40.2 to 46.1 mph).'
+ */
+export function atLeastText(minimum: number, speed: Range, unit: string): string {
+  return `At least ${minimum} ${unit} at the start of the marks (computed ${speedText(speed.value, unit)}, range ${formatNumber(speed.low, 'speed')} to ${speedText(speed.high, unit)}).`;
+}

@@ -1,0 +1,155 @@
+import type { Quantity } from '../case/quantity.js';
+import type { Case } from '../case/load.js';
+import type { DragV1, SkidV1, VehicleV1, YawV1 } from '../case/v1/schema.js';
+import { table, type Table } from './doc.js';
+
+/** One row of the measurements table: a number (or a choice) exactly as the case file holds it. */
+type Row = [item: string, entered: string, range: string, unit: string, note: string];
+
+const NO_RANGE = 'none';
+
+/** A quantity as entered: the plain number as written, its low/high if any, and its note. */
+function q(item: string, v: Quantity, unit: string): Row {
+  if (typeof v === 'number') return [item, String(v), NO_RANGE, unit, ''];
+  const range =
+    v.low === undefined && v.high === undefined
+      ? NO_RANGE
+      : `${v.low ?? v.value} to ${v.high ?? v.value}`;
+  return [item, String(v.value), range, unit, v.note ?? ''];
+}
+
+const choice = (item: string, text: string, note = ''): Row => [item, text, '', '', note];
+
+/** Adds the drag factor's own note to the first of its rows. */
+function withNote(rows: Row[], note: string): Row[] {
+  if (!note || rows.length === 0) return rows;
+  const [first, ...rest] = rows as [Row, ...Row[]];
+  return [
+    [first[0], first[1], first[2], first[3], [first[4], note].filter(Boolean).join('; ')],
+    ...rest,
+  ];
+}
+
+function dragRows(prefix: string, d: DragV1, speed: string, length: string): Row[] {
+  switch (d.source) {
+    case 'entered':
+    case 'table': {
+      const range =
+        d.low === undefined && d.high === undefined
+          ? NO_RANGE
+          : `${d.low ?? d.value} to ${d.high ?? d.value}`;
+      const where =
+        d.source === 'table'
+          ? [`table surface "${d.surface}"${d.band ? `, band ${d.band}` : ''}`]
+          : [];
+      const note = [...where, d.note ?? ''].filter(Boolean).join('; ');
+      return [[`${prefix}drag factor (${d.source})`, String(d.value), range, '', note]];
+    }
+    case 'test-skids':
+      return withNote(
+        d.tests.flatMap((t, i) => [
+          q(`${prefix}test skid ${i + 1} speed`, t.speed, speed),
+          q(`${prefix}test skid ${i + 1} distance`, t.distance, length),
+        ]),
+        d.note ?? '',
+      );
+    case 'sled':
+      return withNote(
+        [
+          q(`${prefix}sled weight`, d.weight, ''),
+          ...d.pulls.map((p, i) => q(`${prefix}sled pull ${i + 1}`, p, '')),
+        ],
+        d.note ?? '',
+      );
+    case 'decelerometer':
+      return withNote(
+        d.readings.map((r, i) => q(`${prefix}decelerometer reading ${i + 1}`, r, 'g')),
+        d.note ?? '',
+      );
+  }
+}
+
+function vehicleRows(v: VehicleV1, length: string): Row[] {
+  const rows: Row[] = [];
+  if (v.frontAxleShare !== undefined) rows.push(q('Front axle share', v.frontAxleShare, ''));
+  if (v.trackWidth !== undefined) rows.push(q('Track width', v.trackWidth, length));
+  const b = v.brakes;
+  if (b?.mode === 'all') rows.push(choice('Brakes', 'all working'));
+  if (b?.mode === 'estimate') {
+    rows.push(q('Braking efficiency', b.efficiency, ''));
+    if (b.basis) rows.push(choice('Efficiency basis', b.basis));
+  }
+  if (b?.mode === 'wheels') {
+    const names = {
+      frontLeft: 'front left',
+      frontRight: 'front right',
+      rearLeft: 'rear left',
+      rearRight: 'rear right',
+    } as const;
+    for (const k of Object.keys(names) as (keyof typeof names)[])
+      rows.push(q(`Brake, ${names[k]} (0-1)`, b[k], ''));
+  }
+  return rows;
+}
+
+function yawRows(a: YawV1, speed: string, length: string): Row[] {
+  return [
+    q('Chord', a.chord, length),
+    q('Middle ordinate', a.middleOrdinate, length),
+    ...(a.superelevation !== undefined ? [q('Superelevation', a.superelevation, '%')] : []),
+    ...dragRows('', a.drag, speed, length),
+    choice('Path adjustment', a.pathAdjustment === 'half-track' ? 'half-track' : 'none'),
+  ];
+}
+
+function skidRows(a: SkidV1, speed: string, length: string): Row[] {
+  const rows: Row[] = (a.marks ?? []).map((m, i) => q(`Mark ${i + 1}`, m, length));
+  if (a.marks && a.marks.length > 1)
+    rows.push(choice('Distance rule', a.distanceRule ?? 'average'));
+  a.segments.forEach((s, j) => {
+    const sp = a.segments.length > 1 ? `Segment ${j + 1} ` : '';
+    if (s.length !== undefined) rows.push(q(`${sp}length`.trim(), s.length, length));
+    rows.push(...dragRows(sp, s.drag, speed, length));
+    if (s.grade !== undefined) rows.push(q(`${sp}grade (+ up)`, s.grade, '%'));
+  });
+  if (a.end?.mode === 'speed') {
+    rows.push(q('Speed at end of marks', a.end.speed, speed));
+    if (a.end.basis) rows.push(choice('End speed basis', a.end.basis));
+  } else rows.push(choice('End of marks', 'came to rest'));
+  return rows;
+}
+
+const capital = (r: Row): Row => [
+  r[0].charAt(0).toUpperCase() + r[0].slice(1),
+  r[1],
+  r[2],
+  r[3],
+  r[4],
+];
+
+const COLUMNS = ['Item', 'As entered', 'Range', 'Unit', 'Note'];
+const ALIGN: ('left' | 'right')[] = ['left', 'right', 'right', 'left', 'left'];
+
+/**
+ * The measurements tables: every number the case holds, as entered (not rounded, not
+ * converted), with its unit, its range when one was given, and its note. One table for the case
+ * and vehicle, then one per analysis (segments are numbered in order of travel, with their label).
+ */
+export function measurementTables(c: Case, units: { length: string; speed: string }): Table[] {
+  const top: Row[] = [];
+  if (c.postedLimit !== undefined) top.push(q('Posted limit', c.postedLimit, units.speed));
+  top.push(...vehicleRows(c.vehicle, units.length));
+  const tables = top.length ? [table('Case and vehicle', COLUMNS, top, ALIGN)] : [];
+  c.analyses.forEach((a, i) => {
+    const rows =
+      a.kind === 'yaw'
+        ? yawRows(a, units.speed, units.length)
+        : skidRows(a, units.speed, units.length);
+    const segs =
+      a.kind === 'skid' && a.segments.length > 1
+        ? `; segments: ${a.segments.map((s, j) => `${j + 1} ${s.label ?? '(no label)'}`).join(', ')}`
+        : '';
+    tables.push(table(`Analysis ${i + 1}, ${a.id}${segs}`, COLUMNS, rows.map(capital), ALIGN));
+  });
+  return tables;
+}

@@ -1,0 +1,31 @@
+import type { Figure, ReportDoc } from './doc.js';
+import { renderHtml } from './render-html.js';
+import { renderJson } from './render-json.js';
+import { renderMarkdown } from './render-markdown.js';
+import { renderText } from './render-text.js';
+
+export type ReportFormat = 'md' | 'txt' | 'json' | 'html';
+export const REPORT_FORMATS: readonly ReportFormat[] = ['md', 'txt', 'json', 'html'];
+
+/**
+ * The report in one of its forms. `figureFile` names each picture's file beside the report (a
+ * relative name), for the forms that link or mention it; HTML inlines the pictures and JSON
+ * carries them in the document.
+ */
+export function renderReport(
+  doc: ReportDoc,
+  format: ReportFormat,
+  figureFile?: (f: Figure) => string | undefined,
+): string {
+  const opts = figureFile ? { figureFile } : {};
+  switch (format) {
+    case 'md':
+      return renderMarkdown(doc, figureFile ? { figureHref: figureFile } : {});
+    case 'txt':
+      return renderText(doc, opts);
+    case 'json':
+      return renderJson(doc);
+    case 'html':
+      return renderHtml(doc);
+  }
+}

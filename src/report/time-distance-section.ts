@@ -1,0 +1,101 @@
+import type { Case } from '../case/load.js';
+import type { AnalysisSolution, Range, Units } from '../engine/types.js';
+import { timeDistanceFromCase } from '../extras/case-fields.js';
+import { limitComparison, type LimitComparison } from '../extras/limit-comparison.js';
+import type { Verdict } from '../extras/limit-steps.js';
+import { formatNumber, formatRange } from '../format/numbers.js';
+import { stepBlocks } from './analysis-section.js';
+import { list, para, section, table, type Section } from './doc.js';
+
+/** Perception-reaction time when neither the case nor the user's preference sets one (DOMAIN.md). */
+export const DEFAULT_REACTION_TIME = 1.5;
+
+const rangeText = (r: Range, kind: 'length' | 'seconds' | 'speed', unit: string) =>
+  formatRange(r, kind, unit);
+
+function verdictText(v: Verdict, limit: string, u: Units): string {
+  const m = (r: Range) => rangeText(r, 'length', u.length);
+  if (v.stops === 'yes')
+    return `A vehicle at the posted limit of ${limit}, perceiving at the same point, would have come to rest before ${v.what} (${formatNumber(v.at, 'length')} ${u.length} from the start of the marks), ${m(v.margin)} short of it.`;
+  if (v.stops === 'no')
+    return `A vehicle at the posted limit of ${limit}, perceiving at the same point, would not have come to rest before ${v.what} (${formatNumber(v.at, 'length')} ${u.length} from the start of the marks); its speed there: ${rangeText(v.speedThere, 'speed', u.speed)}.`;
+  return `Whether a vehicle at the posted limit of ${limit}, perceiving at the same point, would have come to rest before ${v.what} (${formatNumber(v.at, 'length')} ${u.length} from the start of the marks) depends on where the inputs lie within their ranges: margin ${m(v.margin)}, speed there ${rangeText(v.speedThere, 'speed', u.speed)}.`;
+}
+
+function figuresTable(t: LimitComparison, u: Units) {
+  const L = (r: Range) => rangeText(r, 'length', u.length);
+  const one = (n: number) => ({ value: n, low: n, high: n });
+  return table(
+    'Time and distance',
+    ['Figure', 'Value (range)'],
+    [
+      ['This vehicle: distance during perception-reaction', L(t.reactionDistance)],
+      ['This vehicle: duration of the slide', rangeText(t.slideDuration, 'seconds', 's')],
+      ['At the limit: distance during perception-reaction', L(one(t.atLimit.reactionDistance))],
+      [
+        'At the limit: braking starts (from start of marks; minus = before)',
+        L(t.atLimit.brakingStartsAt),
+      ],
+      ['At the limit: braking distance', L(t.atLimit.brakingDistance)],
+      ['At the limit: stopping distance from perception', L(t.atLimit.stoppingDistance)],
+      ['At the limit: comes to rest (from start of marks)', L(t.atLimit.restAt)],
+    ],
+    ['left', 'right'],
+  );
+}
+
+/** Where t comes from: the case's own field, the user's preference, or the default. */
+function reactionSetting(c: Case, id: string, pref: number | undefined) {
+  const field = timeDistanceFromCase(c, id);
+  const f = field.ok ? field.value : undefined;
+  if (f?.reactionTime !== undefined)
+    return { t: f.reactionTime, origin: 'set in the case file', conflictAt: f.conflictAt, field };
+  if (pref !== undefined)
+    return { t: pref, origin: "the investigator's preference", conflictAt: f?.conflictAt, field };
+  return { t: DEFAULT_REACTION_TIME, origin: 'default', conflictAt: f?.conflictAt, field };
+}
+
+/**
+ * Time and distance at the posted limit for a slide: this vehicle's reaction distance and slide
+ * duration, and what a vehicle at the limit perceiving at the same point would have needed to
+ * stop; every figure from the extras' steps. Only for a skid analysis in a case with a limit.
+ */
+export function timeDistanceSection(
+  c: Case,
+  s: AnalysisSolution,
+  id: string,
+  u: Units,
+  pref?: number,
+): Section | undefined {
+  if (s.kind !== 'skid' || c.postedLimit === undefined) return undefined;
+  const set = reactionSetting(c, s.id, pref);
+  const title = 'Time and distance at the posted limit';
+  if (!set.field.ok)
+    return section(`${id}-time`, title, [
+      para(
+        `Not computed: ${set.field.reason}${set.field.path ? ` (field ${set.field.path})` : ''}.`,
+      ),
+    ]);
+  const r = limitComparison(c, s, {
+    reactionTime: set.t,
+    reactionOrigin: set.origin,
+    ...(set.conflictAt !== undefined ? { conflictAt: set.conflictAt } : {}),
+  });
+  if (!r.ok) return section(`${id}-time`, title, [para(`Not computed: ${r.reason}.`)]);
+  const t = r.value;
+  const limit = `${t.postedLimit} ${u.speed}`;
+  return section(`${id}-time`, title, [
+    para(
+      `Perception-reaction time ${formatNumber(t.reactionTime, 'seconds')} s (${t.reactionSource}).`,
+    ),
+    para(verdictText(t.endOfMarks, limit, u), 'strong'),
+    ...(t.conflict ? [para(verdictText(t.conflict, limit, u), 'strong')] : []),
+    figuresTable(t, u),
+    ...stepBlocks(t.steps),
+    ...(t.assumptions.length ? [list(t.assumptions)] : []),
+    para(
+      'A comparison of distances at a chosen speed and reaction time. It does not say what the driver did or could have done, and it does not state fault.',
+      'note',
+    ),
+  ]);
+}

@@ -1,0 +1,85 @@
+import { constants } from 'node:fs';
+import { access, link, rename, unlink } from 'node:fs/promises';
+import path from 'node:path';
+import writeFileAtomic from 'write-file-atomic';
+
+/** One file to write: where, and its whole content. */
+export interface OutFile {
+  path: string;
+  content: string;
+}
+
+export type WriteResult =
+  | { ok: true; written: string[] }
+  | { ok: false; kind: 'exists'; paths: string[] }
+  | { ok: false; kind: 'io'; path: string; message: string };
+
+async function exists(p: string): Promise<boolean> {
+  try {
+    await access(p, constants.F_OK);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+/**
+ * Puts a complete file at `target` only if nothing is there: the content goes to a temporary
+ * file first (written and fsynced by write-file-atomic), then a hard link claims the name, which
+ * fails when the name is taken, even when another process takes it in the meantime. Where hard
+ * links are not supported, falls back to a rename after a last check.
+ */
+async function writeNew(target: string, content: string): Promise<'written' | 'exists'> {
+  const tmp = path.join(
+    path.dirname(target),
+    `.${path.basename(target)}.${process.pid}.${Date.now()}.part`,
+  );
+  await writeFileAtomic(tmp, content, { encoding: 'utf8', fsync: true });
+  try {
+    await link(tmp, target);
+    return 'written';
+  } catch (e) {
+    const code = (e as { code?: string }).code;
+    if (code === 'EEXIST') return 'exists';
+    if (code !== 'EPERM' && code !== 'ENOTSUP' && code !== 'EXDEV' && code !== 'ENOSYS') throw e;
+    if (await exists(target)) return 'exists';
+    await rename(tmp, target);
+    return 'written';
+  } finally {
+    await unlink(tmp).catch(() => undefined);
+  }
+}
+
+/**
+ * Writes every file atomically (a reader never sees half a file). Without `force`, nothing is
+ * written when any target already exists, and an existing file is never replaced; with `force`,
+ * existing files are replaced atomically. Pictures come first in `files` order and the report
+ * last, so the report never links to a picture not yet on disk.
+ */
+export async function writeFiles(files: OutFile[], force: boolean): Promise<WriteResult> {
+  if (!force) {
+    const taken: string[] = [];
+    for (const f of files) if (await exists(f.path)) taken.push(f.path);
+    if (taken.length) return { ok: false, kind: 'exists', paths: taken };
+  }
+  const written: string[] = [];
+  for (const f of files) {
+    try {
+      if (force) await writeFileAtomic(f.path, f.content, { encoding: 'utf8', fsync: true });
+      else if ((await writeNew(f.path, f.content)) === 'exists') {
+        // Another process took the name after the check: take back what this call wrote.
+        await Promise.all(written.map((p) => unlink(p).catch(() => undefined)));
+        return { ok: false, kind: 'exists', paths: [f.path] };
+      }
+      written.push(f.path);
+    } catch (e) {
+      return {
+        ok: false,
+        kind: 'io',
+        path: f.path,
+        message: e instanceof Error ? e.message : String(e),
+      };
+    }
+  }
+  return { ok: true, written };
+}

@@ -1,0 +1,13 @@
+/**
+ * The sessions store: where cases live, and how they are saved (atomically, with a backup),
+ * opened (migrated, validated, locked), listed and restored. No UI here.
+ */
+export { resolveSessionsDir, SESSIONS_ENV, type SessionsDirOptions, type SessionsDirSource } from './sessions-dir.js';
+export { caseFilePath, checkId, slugifyId, uniqueId, CASE_ID, type PathResult } from './case-path.js';
+export { saveCase, type SaveResult } from './save.js';
+export { openCase, checkBackup, type OpenResult, type OpenOptions, type OpenFailureKind } from './open.js';
+export { listCases, type CaseEntry } from './list.js';
+export { restoreBackup, type RestoreResult } from './restore.js';
+export { releaseAllLocks, releaseAllLocksSync, releaseLock } from './lock.js';
+export { backupPath, lockPath } from './side-files.js';
+export { LOCK_STALE_MS } from './lock-info.js';

@@ -1,0 +1,69 @@
+import fs from 'node:fs/promises';
+import path from 'node:path';
+import { describeIssue } from '../case/issues.js';
+import { loadCaseText, type Case } from '../case/load.js';
+import { isSideFile } from './side-files.js';
+
+/** One file of the sessions folder, as the case list shows it. */
+export interface CaseEntry {
+  /** The case's id; for a file that is not a valid case, its name without `.json`. */
+  id: string;
+  path: string;
+  /** The case's `updated` time, or the file's modification time when it has none (ISO). */
+  updated: string;
+  /** The case, when the file is valid (older versions come migrated). */
+  case?: Case;
+  /** Why the file cannot be opened, naming the field: `analyses[0].marks[2]: length must be ...`. */
+  problem?: string;
+  /** A valid case whose id differs from its file name (saving it writes `<id>.json`). */
+  warning?: string;
+}
+
+/**
+ * Every case file in the sessions folder (`*.json`; backups, kept originals and broken copies
+ * excluded), newest `updated` first. Never fails on one file: a broken, unreadable or foreign
+ * JSON file is an entry with a `problem`. A folder that does not exist yet holds no cases.
+ *
+ * @example
+ * for (const e of await listCases(dir)) console.log(e.id, e.problem ?? e.case?.details?.reference);
+ */
+export async function listCases(dir: string): Promise<CaseEntry[]> {
+  let names: string[];
+  try {
+    names = await fs.readdir(dir);
+  } catch (e) {
+    if ((e as NodeJS.ErrnoException).code === 'ENOENT') return [];
+    throw e;
+  }
+  const files = names.filter((n) => n.endsWith('.json') && !isSideFile(n)).map((n) => path.join(path.resolve(dir), n));
+  const entries = await Promise.all(files.map(readEntry));
+  return entries.sort((a, b) => b.updated.localeCompare(a.updated) || a.id.localeCompare(b.id));
+}
+
+async function readEntry(file: string): Promise<CaseEntry> {
+  const id = path.basename(file, '.json');
+  let mtime = new Date(0).toISOString();
+  try {
+    const st = await fs.stat(file);
+    mtime = st.mtime.toISOString();
+    if (!st.isFile()) return { id, path: file, updated: mtime, problem: 'not a file' };
+    const loaded = loadCaseText(await fs.readFile(file, 'utf8'));
+    if (!loaded.ok) {
+      const first = loaded.issues[0];
+      return { id, path: file, updated: mtime, problem: first ? describeIssue(first) : loaded.kind };
+    }
+    const c = loaded.case;
+    const entry: CaseEntry = { id: c.id, path: file, updated: normalise(c.updated) ?? mtime, case: c };
+    if (c.id !== id) entry.warning = `the case inside has id "${c.id}", the file is named ${id}.json`;
+    return entry;
+  } catch (e) {
+    return { id, path: file, updated: mtime, problem: `cannot be read (${(e as NodeJS.ErrnoException).code ?? String(e)})` };
+  }
+}
+
+/** A hand-written `updated` may be any text; only a real date sorts, as ISO UTC. */
+function normalise(t: string | undefined): string | undefined {
+  if (t === undefined) return undefined;
+  const d = new Date(t);
+  return Number.isNaN(d.getTime()) ? undefined : d.toISOString();
+}

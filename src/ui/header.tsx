@@ -1,0 +1,40 @@
+import React from 'react';
+import { Box, Text } from 'ink';
+import type { Progress } from '../interview/types.js';
+import { TONE } from './theme.js';
+
+export interface HeaderProps {
+  caseId: string;
+  reference?: string | undefined;
+  section: string;
+  progress: Progress;
+  mode: string;
+  savedAt?: Date | undefined;
+  saveError?: string | undefined;
+  readOnly: boolean;
+}
+
+/** "saved 21:52:03": local wall-clock time, seconds shown so a fresh save is visible. */
+export function savedText(at: Date): string {
+  const p = (n: number) => String(n).padStart(2, '0');
+  return `saved ${p(at.getHours())}:${p(at.getMinutes())}:${p(at.getSeconds())}`;
+}
+
+/** Top line of a case screen: which case, where in it, how far, and the save status. */
+export function Header(p: HeaderProps) {
+  const status = p.readOnly ? 'not saved (read-only)' : p.saveError ? p.saveError : p.savedAt ? savedText(p.savedAt) : 'not saved yet';
+  return (
+    <Box flexDirection="column">
+      <Box justifyContent="space-between" flexWrap="wrap" columnGap={2}>
+        <Text bold color={TONE.heading} wrap="truncate">
+          {p.caseId}
+          {p.reference ? ` · ${p.reference}` : ''}
+        </Text>
+        <Text color={p.saveError ? TONE.error : TONE.muted}>{status}</Text>
+      </Box>
+      <Text wrap="truncate">
+        {p.section} · {p.progress.answered} of {p.progress.applicable} answered · {p.mode} mode
+      </Text>
+    </Box>
+  );
+}

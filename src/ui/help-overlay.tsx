@@ -1,0 +1,52 @@
+import React from 'react';
+import { Box, Text } from 'ink';
+import { KEY_TABLE, bindingKeys, type KeyContext } from './keys.js';
+import type { ShownLine } from './review-lines.js';
+import { wrap } from '../report/wrap.js';
+import { ScrollView } from './scroll-view.js';
+import { TONE } from './theme.js';
+
+const PLACES: Record<KeyContext, string> = {
+  home: 'case list',
+  question: 'questions',
+  choice: 'choices',
+  review: 'review',
+  jump: 'go-to list',
+  help: 'this list',
+  path: 'file name',
+};
+
+/**
+ * The help as lines: every binding of the key table with its keys, what it does and where it
+ * works, then the quick-entry syntax. Built from the table, so it can never disagree with it.
+ */
+export function helpLines(width: number, quickEntry: readonly string[]): ShownLine[] {
+  const out: ShownLine[] = [{ text: 'Keys', bold: true, tone: 'heading' }];
+  const keyW = Math.max(...KEY_TABLE.map((b) => bindingKeys(b).length)) + 2;
+  for (const b of KEY_TABLE) {
+    const where = [...new Set(b.when.filter((w) => w !== 'help').map((w) => PLACES[w]))].join(', ');
+    const body = wrap(`${b.description} (${where})`, Math.max(20, width - keyW));
+    body.forEach((l, i) => out.push({ text: (i === 0 ? bindingKeys(b).padEnd(keyW) : ' '.repeat(keyW)) + l }));
+  }
+  out.push({ text: '' }, { text: 'Quick entry', bold: true, tone: 'heading' });
+  // These lines are laid out by hand (aligned columns): keep their spacing, wrap only when too wide.
+  for (const q of quickEntry) {
+    if (q.length <= width) out.push({ text: q });
+    else {
+      const indent = /^\s*/.exec(q)![0];
+      for (const l of wrap(q, width - indent.length - 2)) out.push({ text: indent + l });
+    }
+  }
+  out.push({ text: '' }, { text: 'Esc or Ctrl+K closes this list.', tone: 'muted' });
+  return out;
+}
+
+/** The help overlay: a bordered, scrollable list of every key. */
+export function HelpOverlay(props: { width: number; height: number; top: number; quickEntry: readonly string[] }) {
+  const lines = helpLines(props.width - 4, props.quickEntry);
+  return (
+    <Box flexDirection="column" borderStyle="round" borderColor={TONE.heading} paddingX={1} width={props.width}>
+      <ScrollView lines={lines} top={props.top} height={props.height - 2} />
+    </Box>
+  );
+}

@@ -1,0 +1,64 @@
+/**
+ * The screens' interview port bound to src/interview and src/engine. Every figure comes from
+ * the engine through the interview's functions; nothing is computed here.
+ */
+import { loadCase, type Case } from '../case/load.js';
+import { solveCase, type CaseSolution } from '../engine/index.js';
+import { formatRange } from '../format/numbers.js';
+import { reduce } from '../interview/reducer.js';
+import { currentQuestion, firstOpenQuestion, progress, questionStates, summaryOfDone } from '../interview/derived.js';
+import { buildCase } from '../interview/build-case.js';
+import { solveDraft } from '../interview/draft.js';
+import { stateFromCase } from '../interview/from-case.js';
+import type { InterviewState } from '../interview/types.js';
+import type { DraftView } from './draft-panel.js';
+import type { InterviewPort } from './interview-port.js';
+import { atLeast, kindForUnit } from './review-lines.js';
+
+/** Solves a case exactly as `solve` would read it from its file: through the loader first. */
+export function solveAsFile(c: Case): CaseSolution {
+  const loaded = loadCase(JSON.parse(JSON.stringify(c)));
+  if (!loaded.ok) return { id: c.id, units: c.units === 'metric' ? { length: 'm', speed: 'km/h' } : { length: 'ft', speed: 'mph' }, analyses: [], warnings: loaded.issues.map((i) => `${i.path}: ${i.message}`) };
+  return solveCase(loaded.case);
+}
+
+/** The side panel's view of the running solution. */
+export function draftView(sol: CaseSolution): DraftView {
+  const steps: DraftView['steps'] = [];
+  const results: string[] = [];
+  const problems: string[] = [];
+  sol.analyses.forEach((a, i) => {
+    if (!a.ok) return void problems.push(`Analysis ${i + 1}: ${a.reason}`);
+    for (const s of a.solution.steps)
+      steps.push({ name: s.name, result: formatRange({ value: s.result, low: s.low, high: s.high }, kindForUnit(s.unit), s.unit) });
+    results.push(`${sol.analyses.length > 1 ? `Analysis ${i + 1}: ` : ''}${formatRange(a.solution.speed, 'speed', sol.units.speed)}, ${atLeast(a.solution, sol.units.speed)}`);
+  });
+  const view: DraftView = { steps };
+  if (results.length) view.result = results.join('; ');
+  if (problems.length) view.note = problems.join('; ');
+  else if (!results.length) view.note = 'No figure yet: the chain fills in once an analysis is complete.';
+  return view;
+}
+
+export const liveInterview: InterviewPort = {
+  reduce,
+  current: currentQuestion,
+  progress,
+  states: questionStates,
+  defaultText(state: InterviewState) {
+    const q = currentQuestion(state);
+    return q?.defaultText?.(state.answers);
+  },
+  build(state, base) {
+    const meta = { id: base.id, ...(base.created ? { created: base.created } : {}) };
+    return { ok: true, case: buildCase(state, meta) };
+  },
+  fromCase(c, mode) {
+    // Resume lands on the first open question, whatever the file's cursor says.
+    const st = stateFromCase(c);
+    return { ...st, cursor: firstOpenQuestion(st), mode, explain: mode === 'guided' };
+  },
+  summary: summaryOfDone,
+  draft: (state, base) => draftView(solveDraft(state, base.id)),
+  solve: solveAsFile,
+};

@@ -1,0 +1,151 @@
+/**
+ * Every key binding of the screens, as data. The help overlay and the footer hints render this
+ * table, and the one input hook dispatches from it, so what the screen says a key does is what
+ * it does.
+ */
+import type { Key } from 'ink';
+
+/** Where a binding is live. `question` is the interview screen; `choice` adds to it for choices. */
+export type KeyContext = 'home' | 'question' | 'choice' | 'review' | 'jump' | 'help' | 'path';
+
+/** What a key asks for; the app maps each command to an action. */
+export type Command =
+  | 'help'
+  | 'save-leave'
+  | 'quit'
+  | 'submit'
+  | 'back'
+  | 'forward'
+  | 'jump'
+  | 'undo'
+  | 'review'
+  | 'explain'
+  | 'mode'
+  | 'up'
+  | 'down'
+  | 'page-up'
+  | 'page-down'
+  | 'close'
+  | 'new-case'
+  | 'open-path'
+  | 'demo'
+  | 'restore'
+  | 'report'
+  | 'to-question'
+  | 'pick';
+
+/**
+ * One key: a named key (`return`, `escape`, `up`, `down`, `pageup`, `pagedown`, `tab`), a
+ * printable character, or `digit` (any of 1-9). `ctrl` binds the chord; without it the key
+ * fires only when no modifier is held.
+ */
+export interface KeySpec {
+  name: string;
+  ctrl?: boolean;
+}
+
+export interface KeyBinding {
+  command: Command;
+  keys: KeySpec[];
+  /** Short label for the footer. */
+  label: string;
+  /** Sentence for the help overlay. */
+  description: string;
+  when: KeyContext[];
+  /** Shown in the footer of these contexts (the rest are listed in the help only). */
+  footer?: KeyContext[];
+}
+
+const ctrl = (name: string): KeySpec => ({ name, ctrl: true });
+const plain = (name: string): KeySpec => ({ name });
+
+const EVERYWHERE: KeyContext[] = ['home', 'question', 'choice', 'review', 'jump', 'path'];
+const CASE: KeyContext[] = ['question', 'choice', 'review'];
+
+export const KEY_TABLE: readonly KeyBinding[] = [
+  { command: 'help', keys: [ctrl('k')], label: 'keys', description: 'Show or hide this list of keys', when: [...EVERYWHERE, 'help'], footer: EVERYWHERE },
+  { command: 'save-leave', keys: [ctrl('q'), ctrl('c')], label: 'save+leave', description: 'Save the case and leave skidcase (Ctrl+C does the same)', when: [...EVERYWHERE, 'help'], footer: CASE },
+  { command: 'quit', keys: [plain('q')], label: 'quit', description: 'Leave skidcase', when: ['home'], footer: ['home'] },
+  { command: 'submit', keys: [plain('return')], label: 'accept', description: 'Accept the answer as typed; with nothing typed, accept the offered default', when: ['question', 'choice', 'jump', 'home', 'path'], footer: ['question', 'choice'] },
+  { command: 'pick', keys: [plain('choice')], label: 'pick', description: 'Pick a choice by its letter (shown in brackets beside it)', when: ['choice'], footer: ['choice'] },
+  { command: 'back', keys: [ctrl('b')], label: 'previous', description: 'Go to the previous question (later answers are kept)', when: ['question', 'choice'], footer: ['question', 'choice'] },
+  { command: 'forward', keys: [ctrl('f')], label: 'next', description: 'Go to the next question without changing this answer', when: ['question', 'choice'] },
+  { command: 'jump', keys: [ctrl('g')], label: 'go to', description: 'Go to any question: type part of its name, then Enter', when: CASE, footer: CASE },
+  { command: 'undo', keys: [ctrl('z')], label: 'undo', description: 'Undo the last answer', when: ['question', 'choice'], footer: ['question', 'choice'] },
+  { command: 'review', keys: [ctrl('r')], label: 'review', description: 'Open the review of the case from any question', when: ['question', 'choice'], footer: ['question', 'choice'] },
+  { command: 'explain', keys: [ctrl('e')], label: 'why/how', description: 'Show or hide why the question is asked and how to measure it', when: ['question', 'choice'], footer: ['question', 'choice'] },
+  { command: 'mode', keys: [ctrl('t')], label: 'guided/brisk', description: 'Switch between guided mode (explanations open) and brisk mode (remembered)', when: ['question', 'choice', 'review'] },
+  { command: 'up', keys: [plain('up')], label: 'up', description: 'Move up in a list, or scroll up', when: ['home', 'choice', 'jump', 'review', 'help'] },
+  { command: 'down', keys: [plain('down')], label: 'down', description: 'Move down in a list, or scroll down', when: ['home', 'choice', 'jump', 'review', 'help'] },
+  { command: 'page-up', keys: [plain('pageup')], label: 'page up', description: 'Scroll up one page', when: ['review', 'help'] },
+  { command: 'page-down', keys: [plain('pagedown'), plain(' ')], label: 'page down', description: 'Scroll down one page (Space does the same)', when: ['review', 'help'], footer: ['review'] },
+  { command: 'close', keys: [plain('escape')], label: 'close', description: 'Close the list or overlay; from the review, return to the questions', when: ['jump', 'help', 'review', 'path'], footer: ['jump', 'help', 'review', 'path'] },
+  { command: 'new-case', keys: [plain('n')], label: 'new case', description: 'Start a new case', when: ['home'], footer: ['home'] },
+  { command: 'open-path', keys: [plain('o')], label: 'open file', description: 'Open a case file by its path', when: ['home'], footer: ['home'] },
+  { command: 'demo', keys: [plain('d')], label: 'demo', description: 'Open a copy of the demo case', when: ['home'], footer: ['home'] },
+  { command: 'restore', keys: [plain('b')], label: 'use backup', description: 'For a damaged case file, restore its backup copy', when: ['home'] },
+  { command: 'report', keys: [plain('w')], label: 'write report', description: 'Write the case report beside the case file', when: ['review'], footer: ['review'] },
+  { command: 'to-question', keys: [plain('g')], label: 'go to', description: 'Go to any question from the review', when: ['review'] },
+];
+
+/** How a key is written for people: `Ctrl+G`, `Enter`, `Esc`, `q`. */
+export function keyLabel(k: KeySpec): string {
+  const names: Record<string, string> = {
+    return: 'Enter',
+    escape: 'Esc',
+    up: '↑',
+    down: '↓',
+    pageup: 'PgUp',
+    pagedown: 'PgDn',
+    tab: 'Tab',
+    ' ': 'Space',
+    choice: 'letter',
+  };
+  const base = names[k.name] ?? k.name;
+  return k.ctrl ? `Ctrl+${base.toUpperCase()}` : base;
+}
+
+/** All keys of a binding, for the help: `Ctrl+Q / Ctrl+C`. */
+export function bindingKeys(b: KeyBinding): string {
+  return b.keys.map(keyLabel).join(' / ');
+}
+
+const NAMED: Record<string, (k: Key) => boolean> = {
+  return: (k) => k.return,
+  escape: (k) => k.escape,
+  up: (k) => k.upArrow,
+  down: (k) => k.downArrow,
+  pageup: (k) => k.pageUp,
+  pagedown: (k) => k.pageDown,
+  tab: (k) => k.tab,
+};
+
+/** Whether an Ink key event is this key. `choice` and letters never match a modified key. */
+export function matches(spec: KeySpec, input: string, key: Key): boolean {
+  const named = NAMED[spec.name];
+  if (named) return named(key) && !key.ctrl && !(key.meta && !key.escape);
+  if (spec.ctrl) return key.ctrl && input === spec.name;
+  if (key.ctrl || key.meta) return false;
+  return input === spec.name;
+}
+
+/** The binding a key fires in a context, if any (`choice` bindings are matched by the caller). */
+export function findBinding(ctx: KeyContext, input: string, key: Key): KeyBinding | undefined {
+  const contexts: KeyContext[] = ctx === 'choice' ? ['choice', 'question'] : [ctx];
+  return KEY_TABLE.find(
+    (b) =>
+      b.when.some((w) => contexts.includes(w)) &&
+      b.keys.some((k) => k.name !== 'choice' && matches(k, input, key)),
+  );
+}
+
+/** The bindings to hint in a context's footer, in table order. */
+export function footerBindings(ctx: KeyContext): KeyBinding[] {
+  return KEY_TABLE.filter((b) => b.footer?.includes(ctx));
+}
+
+/** The keys of a command as written for people, e.g. `keysFor('explain')` is `Ctrl+E`. */
+export function keysFor(command: Command): string {
+  const b = KEY_TABLE.find((x) => x.command === command);
+  return b ? bindingKeys(b) : '';
+}

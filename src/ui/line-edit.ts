@@ -1,0 +1,43 @@
+/**
+ * A one-line text field as a pure value: what is typed and where the cursor is. The app's one
+ * input hook feeds it the keys that are not bindings, so global keys fall through to the table.
+ */
+import type { Key } from 'ink';
+
+export interface Line {
+  value: string;
+  /** Cursor position, 0..value.length (in UTF-16 units; answers are plain text). */
+  cursor: number;
+}
+
+export const EMPTY_LINE: Line = { value: '', cursor: 0 };
+
+/** A line holding `text` with the cursor at its end. */
+export function lineOf(text: string): Line {
+  return { value: text, cursor: text.length };
+}
+
+/**
+ * Applies one key to a line: printable text is inserted at the cursor (a paste arrives as one
+ * chunk), Backspace/Delete remove, arrows and Home/End move. Anything else leaves it unchanged.
+ * @example editLine(lineOf('8'), '0', key) // { value: '80', cursor: 2 }
+ */
+export function editLine(line: Line, input: string, key: Key): Line {
+  const { value, cursor } = line;
+  if (key.leftArrow) return { value, cursor: Math.max(0, cursor - 1) };
+  if (key.rightArrow) return { value, cursor: Math.min(value.length, cursor + 1) };
+  if (key.home || (key.ctrl && input === 'a')) return { value, cursor: 0 };
+  if (key.end) return { value, cursor: value.length };
+  if (key.ctrl && input === 'u') return EMPTY_LINE;
+  // Terminals send 0x7f for Backspace, which Ink reports as `delete`; both erase to the left.
+  if (key.backspace || key.delete) {
+    if (cursor === 0) return line;
+    return { value: value.slice(0, cursor - 1) + value.slice(cursor), cursor: cursor - 1 };
+  }
+  if (key.ctrl || key.meta || key.return || key.escape || key.tab) return line;
+  if (key.upArrow || key.downArrow || key.pageUp || key.pageDown) return line;
+  // Strip control characters a paste may carry (a newline would end the answer early).
+  const text = input.replace(/[\u0000-\u001f\u007f]/g, '');
+  if (!text) return line;
+  return { value: value.slice(0, cursor) + text + value.slice(cursor), cursor: cursor + text.length };
+}

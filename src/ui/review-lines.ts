@@ -1,0 +1,102 @@
+/**
+ * The review as plain lines, built from the engine's solution: each step with its formula, the
+ * numbers substituted and its result; the range and the "at least" figure; the posted limit;
+ * assumptions, warnings, sensitivity bars and the cautions. Pure, so the screen only scrolls it
+ * and the tests read the same lines the user reads.
+ */
+import type { AnalysisSolution, CaseSolution, Step } from '../engine/types.js';
+import { CAUTIONS } from '../format/cautions.js';
+import { formatNumber, formatRange, type NumberKind } from '../format/numbers.js';
+import { sensitivity } from '../extras/sensitivity.js';
+import { sensitivityBars } from '../extras/sensitivity-bars.js';
+import { wrap } from '../report/wrap.js';
+import type { TONE } from './theme.js';
+
+/** One screen line and the meaning it is drawn with. */
+export interface ShownLine {
+  text: string;
+  tone?: keyof typeof TONE;
+  bold?: boolean;
+}
+
+/** Number style for a step's unit: speeds 1 dp, lengths by size, unitless factors 2 dp. */
+export function kindForUnit(unit: string): NumberKind {
+  if (unit === 'mph' || unit === 'km/h') return 'speed';
+  if (unit === 'ft' || unit === 'm') return 'length';
+  if (unit === '%') return 'percent';
+  if (unit === 's') return 'seconds';
+  // Unitless figures in a chain are drag factors and braking efficiencies: both 2 dp.
+  return 'drag';
+}
+
+/** "at least 41 mph": the low end rounded down, as the engine gives it in `minimum`. */
+export function atLeast(s: AnalysisSolution, speedUnit: string): string {
+  return `at least ${formatNumber(s.minimum, 'integer')} ${speedUnit}`;
+}
+
+function push(out: ShownLine[], text: string, width: number, indent: string, style: Omit<ShownLine, 'text'> = {}) {
+  const lines = wrap(text, Math.max(10, width - indent.length - 2));
+  lines.forEach((l, i) => out.push({ text: (i === 0 ? indent : indent + '  ') + l, ...style }));
+}
+
+function stepLines(out: ShownLine[], step: Step, n: number, width: number) {
+  push(out, `${n}. ${step.name}`, width, '  ', { bold: true });
+  push(out, `formula  ${step.formula}`, width, '     ');
+  push(out, `numbers  ${step.substituted}`, width, '     ');
+  const r = { value: step.result, low: step.low, high: step.high };
+  push(out, `result   ${formatRange(r, kindForUnit(step.unit), step.unit)}`, width, '     ', { tone: 'result' });
+  if (step.why) push(out, `why      ${step.why}`, width, '     ', { tone: 'muted' });
+}
+
+function analysisLines(out: ShownLine[], s: AnalysisSolution, sol: CaseSolution, width: number) {
+  const unit = sol.units.speed;
+  s.steps.forEach((step, i) => stepLines(out, step, i + 1, width));
+  out.push({ text: '' });
+  push(out, `Speed when the marks began: ${formatRange(s.speed, 'speed', unit)}`, width, '  ', { tone: 'result', bold: true });
+  push(out, `Result: ${atLeast(s, unit)} (the low end, rounded down).`, width, '  ', { tone: 'result', bold: true });
+  if (sol.postedLimit) {
+    const limit = `${formatNumber(sol.postedLimit.value, 'integer')} ${unit}`;
+    const above = s.speed.low > sol.postedLimit.value;
+    push(out, `Posted limit ${limit}: the low end is ${above ? 'above' : 'not above'} the limit.`, width, '  ', { tone: above ? 'warning' : undefined });
+  }
+  if (s.assumptions.length) {
+    out.push({ text: '  Assumptions', bold: true });
+    for (const a of s.assumptions) push(out, `- ${a}`, width, '   ');
+  }
+  if (s.warnings.length) {
+    out.push({ text: '  Warnings', bold: true, tone: 'warning' });
+    for (const w of s.warnings) push(out, `! ${w}`, width, '   ', { tone: 'warning' });
+  }
+  const rows = sensitivity(s);
+  if (rows.length) {
+    out.push({ text: '  What moves the result', bold: true });
+    for (const l of sensitivityBars(rows, width - 2, { speedUnit: unit })) out.push({ text: '  ' + l });
+  }
+}
+
+/**
+ * Lines of the review for a solved case, at most `width` columns each.
+ * @example reviewLines(solveCase(c), 80)[0] // { text: 'Analysis 1 · slide · skid-1', ... }
+ */
+export function reviewLines(sol: CaseSolution, width: number): ShownLine[] {
+  const out: ShownLine[] = [];
+  sol.analyses.forEach((a, i) => {
+    const head = a.ok ? a.solution : a;
+    const kind = head.kind === 'skid' ? 'slide' : 'critical speed (yaw)';
+    const label = a.ok && a.solution.label ? ` · ${a.solution.label}` : '';
+    push(out, `Analysis ${i + 1} · ${kind} · ${head.id}${label}`, width, '', { tone: 'heading', bold: true });
+    if (a.ok) analysisLines(out, a.solution, sol, width);
+    else push(out, `Cannot be computed${a.path ? ` (${a.path})` : ''}: ${a.reason}`, width, '  ', { tone: 'error' });
+    out.push({ text: '' });
+  });
+  if (sol.analyses.length === 0) out.push({ text: 'No analysis yet: answer the questions about the marks.', tone: 'warning' });
+  if (sol.postedLimit?.exceededAtMinimum)
+    push(out, 'At its low end, at least one analysis is above the posted limit.', width, '', { tone: 'warning' });
+  if (sol.warnings.length) {
+    out.push({ text: 'About the file', bold: true, tone: 'warning' });
+    for (const w of sol.warnings) push(out, `! ${w}`, width, '  ', { tone: 'warning' });
+  }
+  out.push({ text: 'Cautions', bold: true, tone: 'warning' });
+  for (const c of CAUTIONS) push(out, `* ${c}`, width, '  ');
+  return out;
+}

@@ -1,0 +1,118 @@
+/**
+ * The screens' services bound to the real store (src/store) and preferences (src/prefs).
+ * Tests use this same binding on a temporary sessions folder.
+ */
+import fs from 'node:fs/promises';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import type { Case } from '../case/load.js';
+import { loadCaseText } from '../case/load.js';
+import { checkBackup, listCases, openCase, restoreBackup, saveCase, uniqueId, type OpenResult } from '../store/index.js';
+import { loadPrefs, savePref, type PrefsOptions } from '../prefs/index.js';
+import type { InterviewMode } from '../interview/types.js';
+import type { InterviewPort } from './interview-port.js';
+import type { CaseRow, Opened, OpenCase, Services } from './services.js';
+import { atLeast } from './review-lines.js';
+
+export interface LiveOptions {
+  sessionsDir: string;
+  sessionsFrom: string;
+  port: InterviewPort;
+  /** The demo case to copy from; by default the `sessions/` folder shipped beside the program. */
+  demoFile?: string;
+  prefs?: PrefsOptions;
+  /** Writes a report; the lead's report module, passed in by run.tsx. */
+  writeReport?: Services['writeReport'];
+  now?: () => Date;
+}
+
+/** The demo case shipped with skidcase: `sessions/demo*.json` beside dist/ or src/. */
+export async function findDemoFile(): Promise<string | undefined> {
+  const here = path.dirname(fileURLToPath(import.meta.url));
+  for (const dir of [path.resolve(here, '..', 'sessions'), path.resolve(here, '..', '..', 'sessions')]) {
+    const names = await fs.readdir(dir).catch(() => [] as string[]);
+    const demo = names.filter((n) => /^demo[a-z0-9-]*\.json$/.test(n)).sort()[0];
+    if (demo) return path.join(dir, demo);
+  }
+  return undefined;
+}
+
+function opened(r: OpenResult): Opened {
+  if (!r.ok) return { ok: false, message: r.message, issues: r.issues };
+  const open: OpenCase = { case: r.case, file: r.path, release: r.release };
+  if (r.readOnly) open.readOnly = r.readOnlyReason ?? 'this case is open in another skidcase.';
+  if (r.migratedFrom !== undefined) open.migratedFrom = r.migratedFrom;
+  return { ok: true, open };
+}
+
+/** A home row for a valid case: progress, where it stopped, and the result when complete. */
+export function summarise(port: InterviewPort, c: Case, file: string, updated: string): CaseRow {
+  const row: CaseRow = { id: c.id, file, updated };
+  if (c.details?.reference) row.reference = c.details.reference;
+  const state = port.fromCase(c, 'brisk');
+  row.progress = port.progress(state);
+  const q = port.current(state);
+  if (q) row.stoppedAt = q.title;
+  else {
+    const sol = port.solve(c);
+    const done = sol.analyses.flatMap((a) => (a.ok ? [atLeast(a.solution, sol.units.speed)] : []));
+    if (done.length) row.result = done.join('; ');
+  }
+  return row;
+}
+
+export function liveServices(o: LiveOptions): Services {
+  const dir = o.sessionsDir;
+  const now = o.now ?? (() => new Date());
+  const prefs = loadPrefs(o.prefs ?? {}).prefs;
+  const fresh = (id: string): Case =>
+    ({ format: 'skidcase-case', version: 1, id, units: prefs.units, vehicle: {}, analyses: [] }) as Case;
+  const createAndOpen = async (c: Case): Promise<Opened> => {
+    const saved = await saveCase(dir, c);
+    if (!saved.ok) return { ok: false, message: saved.message };
+    return opened(await openCase(dir, { id: c.id }));
+  };
+  return {
+    sessionsDir: dir,
+    sessionsFrom: o.sessionsFrom,
+    initialMode: prefs.mode,
+    now,
+    async listCases() {
+      const entries = await listCases(dir);
+      return Promise.all(
+        entries.map(async (e): Promise<CaseRow> => {
+          if (e.case) return summarise(o.port, e.case, e.path, e.updated);
+          const bak = await checkBackup(e.path);
+          return { id: e.id, file: e.path, updated: e.updated, problem: { message: e.problem ?? 'cannot be read', hasBackup: !!bak?.loadable } };
+        }),
+      );
+    },
+    async openCase(ref) {
+      return opened('id' in ref ? await openCase(dir, { id: ref.id }) : await openCase(ref.path));
+    },
+    async newCase() {
+      const d = now();
+      const stamp = d.toISOString().slice(0, 16).replace(/[-:]/g, '').replace('T', '-');
+      return createAndOpen(fresh(uniqueId(dir, `case-${stamp}`)));
+    },
+    async openDemo() {
+      const file = o.demoFile ?? (await findDemoFile());
+      if (!file) return { ok: false, message: 'The demo case is not installed (sessions/demo.json next to skidcase).' };
+      const loaded = loadCaseText(await fs.readFile(file, 'utf8').catch(() => ''));
+      if (!loaded.ok) return { ok: false, message: `The demo case ${file} cannot be read`, issues: loaded.issues };
+      return createAndOpen({ ...loaded.case, id: uniqueId(dir, 'demo-copy') });
+    },
+    async saveCase(open, c) {
+      const r = await saveCase(path.dirname(open.file), c);
+      return r.ok ? { ok: true, at: now() } : { ok: false, message: r.message };
+    },
+    async restoreBackup(id) {
+      const r = await restoreBackup(dir, id);
+      return r.ok ? { ok: true } : { ok: false, message: r.message };
+    },
+    writeReport: o.writeReport ?? (async () => ({ ok: false, message: 'writing reports is not available in this build' })),
+    saveMode(mode: InterviewMode) {
+      savePref('mode', mode, o.prefs ?? {});
+    },
+  };
+}

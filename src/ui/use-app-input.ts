@@ -1,0 +1,180 @@
+/**
+ * The one keyboard handler of the app. It finds the binding for a key in the key table (for the
+ * context on screen) and runs its command; keys that are not bindings go to the line being typed.
+ * No other component calls useInput, so two handlers can never both act on a key.
+ */
+import { useInput, type Key } from 'ink';
+import { findBinding, type Command, type KeyContext } from './keys.js';
+import { editLine } from './line-edit.js';
+import { filterQuestions } from './jump-filter.js';
+import { isChoice } from './question-view.js';
+import { submitAction } from './session.js';
+import type { AppModel } from './use-app-model.js';
+import type { InterviewPort } from './interview-port.js';
+import type { Services } from './services.js';
+
+/** Which part of the key table is live, from what is on screen. */
+export function contextOf(app: AppModel, port: InterviewPort): KeyContext {
+  const { model } = app;
+  if (model.overlay?.kind === 'help') return 'help';
+  if (model.overlay?.kind === 'jump') return 'jump';
+  const s = model.session;
+  if (!s) return model.home.path ? 'path' : 'home';
+  const q = port.current(s.state);
+  if (!q) return 'review';
+  return isChoice(q) ? 'choice' : 'question';
+}
+
+export interface InputDeps {
+  app: AppModel;
+  port: InterviewPort;
+  services: Services;
+  /** Rows the review and help can show at once, for paging. */
+  page: number;
+  onReport(): void;
+}
+
+export function useAppInput(deps: InputDeps) {
+  const { app } = deps;
+  useInput(
+    (input, key) => {
+      const ctx = contextOf(app, deps.port);
+      const binding = findBinding(ctx, input, key);
+      if (binding) return run(binding.command, ctx, deps);
+      typed(ctx, input, key, deps);
+    },
+    { isActive: !app.model.leaving },
+  );
+}
+
+/** A key that is not a binding: a choice letter, or text for the field on screen. */
+function typed(ctx: KeyContext, input: string, key: Key, d: InputDeps) {
+  const { app, port } = d;
+  const m = app.model;
+  if (ctx === 'choice' && m.session && !key.ctrl && !key.meta) {
+    const q = port.current(m.session.state)!;
+    const c = q.choices!.find((c) => c.key.toLowerCase() === input.toLowerCase());
+    if (c) app.act({ type: 'choose', value: c.value });
+    return;
+  }
+  if (ctx === 'question' && m.session) {
+    const line = editLine(m.session.line, input, key);
+    if (line !== m.session.line) app.update((x) => (x.session ? { ...x, session: { ...x.session, line } } : x));
+    return;
+  }
+  if (ctx === 'jump' && m.overlay?.kind === 'jump') {
+    const filter = editLine(m.overlay.filter, input, key);
+    if (filter !== m.overlay.filter) app.update((x) => ({ ...x, overlay: { kind: 'jump', filter, selected: 0 } }));
+    return;
+  }
+  if (ctx === 'path' && m.home.path) {
+    const path = editLine(m.home.path, input, key);
+    if (path !== m.home.path) app.setHome({ path });
+  }
+}
+
+function move(d: InputDeps, ctx: KeyContext, by: number) {
+  const { app } = d;
+  const m = app.model;
+  if (ctx === 'help' && m.overlay?.kind === 'help') {
+    const top = Math.max(0, m.overlay.top + by);
+    app.update((x) => ({ ...x, overlay: { kind: 'help', top } }));
+  } else if (ctx === 'jump' && m.overlay?.kind === 'jump' && m.session) {
+    const n = filterQuestions(d.port.states(m.session.state), m.overlay.filter.value).length;
+    const selected = Math.max(0, Math.min(n - 1, m.overlay.selected + by));
+    app.update((x) => (x.overlay?.kind === 'jump' ? { ...x, overlay: { ...x.overlay, selected } } : x));
+  } else if (ctx === 'review' && m.session) {
+    const reviewTop = Math.max(0, m.session.reviewTop + by);
+    app.update((x) => (x.session ? { ...x, session: { ...x.session, reviewTop } } : x));
+  } else if (ctx === 'choice' && m.session) {
+    const n = d.port.current(m.session.state)?.choices?.length ?? 1;
+    const highlight = (m.session.highlight + by + n) % n;
+    app.update((x) => (x.session ? { ...x, session: { ...x.session, highlight } } : x));
+  } else if (ctx === 'home') {
+    const n = m.home.rows?.length ?? 0;
+    app.setHome({ selected: Math.max(0, Math.min(n - 1, m.home.selected + by)) });
+  }
+}
+
+function run(command: Command, ctx: KeyContext, d: InputDeps) {
+  const { app, port, services } = d;
+  const m = app.model;
+  switch (command) {
+    case 'help':
+      return app.update((x) => ({ ...x, overlay: x.overlay?.kind === 'help' ? undefined : { kind: 'help', top: 0 } }));
+    case 'save-leave':
+    case 'quit':
+      return void app.leave();
+    case 'close':
+      if (m.overlay) return app.update((x) => ({ ...x, overlay: undefined }));
+      if (ctx === 'path') return app.setHome({ path: undefined });
+      if (ctx === 'review') return app.act({ type: 'back' });
+      return;
+    case 'up':
+      return move(d, ctx, -1);
+    case 'down':
+      return move(d, ctx, 1);
+    case 'page-up':
+      return move(d, ctx, -d.page);
+    case 'page-down':
+      return move(d, ctx, d.page);
+    case 'submit':
+      return submit(ctx, d);
+    case 'back':
+      return app.act({ type: 'back' });
+    case 'forward':
+      return app.act({ type: 'forward' });
+    case 'undo':
+      return app.act({ type: 'undo' });
+    case 'review':
+      return app.act({ type: 'open-review' });
+    case 'explain':
+      return app.act({ type: 'toggle-explain' });
+    case 'mode':
+      return app.setMode(m.mode === 'guided' ? 'brisk' : 'guided');
+    case 'jump':
+    case 'to-question':
+      return app.update((x) => ({ ...x, overlay: { kind: 'jump', filter: app.emptyLine, selected: 0 } }));
+    case 'new-case':
+      return void services.newCase().then(app.enter);
+    case 'demo':
+      return void services.openDemo().then(app.enter);
+    case 'open-path':
+      return app.setHome({ path: app.emptyLine, error: undefined });
+    case 'restore': {
+      const row = m.home.rows?.[m.home.selected];
+      if (!row?.problem) return app.setHome({ error: 'Only a damaged case file has a backup to restore.' });
+      return void services.restoreBackup(row.id).then((r) => {
+        app.setHome(r.ok ? { message: `Restored ${row.id} from its backup copy.`, error: undefined } : { error: r.message });
+        void app.refresh();
+      });
+    }
+    case 'report':
+      return d.onReport();
+    case 'pick':
+      return;
+  }
+}
+
+function submit(ctx: KeyContext, d: InputDeps) {
+  const { app, port, services } = d;
+  const m = app.model;
+  if (ctx === 'question' || ctx === 'choice') {
+    if (m.session) app.act(submitAction(port, m.session));
+  } else if (ctx === 'jump' && m.overlay?.kind === 'jump' && m.session) {
+    const hit = filterQuestions(port.states(m.session.state), m.overlay.filter.value)[m.overlay.selected];
+    if (!hit) return;
+    app.update((x) => ({ ...x, overlay: undefined }));
+    app.act({ type: 'jump', id: hit.id });
+  } else if (ctx === 'home') {
+    const row = m.home.rows?.[m.home.selected];
+    if (!row) return;
+    if (row.problem)
+      return app.setHome({ error: `${row.id} cannot be opened: ${row.problem.message}` });
+    void services.openCase({ id: row.id }).then(app.enter);
+  } else if (ctx === 'path' && m.home.path) {
+    const path = m.home.path.value.trim();
+    if (!path) return app.setHome({ error: 'Type the path of a case file, or Esc.' });
+    void services.openCase({ path }).then(app.enter);
+  }
+}

@@ -1,0 +1,56 @@
+/**
+ * Environment and folders for programs the end-to-end tests start, so that a test never reads or
+ * writes the developer's own preferences or sessions, and behaves the same on a laptop and in CI.
+ */
+import { mkdtempSync, mkdirSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+
+/**
+ * The parent's environment with what would change the program's behaviour removed: Ink renders
+ * only the final frame when it sees CI variables, and vitest's FORCE_COLOR would defeat NO_COLOR
+ * tests. `extra` values of `undefined` remove a variable.
+ */
+export function childEnv(extra: Record<string, string | undefined> = {}): Record<string, string> {
+  const env: Record<string, string> = {};
+  for (const [k, v] of Object.entries(process.env)) {
+    if (v === undefined) continue;
+    if (k === 'CI' || k === 'CONTINUOUS_INTEGRATION' || k.startsWith('CI_')) continue;
+    if (k === 'FORCE_COLOR' || k === 'NO_COLOR' || k === 'COLORTERM') continue;
+    if (k.startsWith('VITEST') || k === 'NODE_OPTIONS' || k === 'TMUX' || k === 'TMUX_PANE') continue;
+    if (k.startsWith('SKIDCASE_')) continue;
+    env[k] = v;
+  }
+  env.TERM = 'xterm-256color';
+  env.LANG = env.LANG && /utf-?8/i.test(env.LANG) ? env.LANG : 'C.UTF-8';
+  for (const [k, v] of Object.entries(extra)) {
+    if (v === undefined) delete env[k];
+    else env[k] = v;
+  }
+  return env;
+}
+
+/** A throw-away working folder with its own sessions and preferences folders. */
+export interface Workspace {
+  root: string;
+  sessions: string;
+  config: string;
+  /** SKIDCASE_CONFIG_DIR and SKIDCASE_SESSIONS pointing into this workspace. */
+  env: Record<string, string>;
+  cleanup(): void;
+}
+
+export function makeWorkspace(prefix = 'skidcase-e2e-'): Workspace {
+  const root = mkdtempSync(join(tmpdir(), prefix));
+  const sessions = join(root, 'sessions');
+  const config = join(root, 'config');
+  mkdirSync(sessions);
+  mkdirSync(config);
+  return {
+    root,
+    sessions,
+    config,
+    env: { SKIDCASE_CONFIG_DIR: config, SKIDCASE_SESSIONS: sessions },
+    cleanup: () => rmSync(root, { recursive: true, force: true }),
+  };
+}

@@ -1,0 +1,94 @@
+/**
+ * Types a whole interview into the real program, the way a person does: read the question on
+ * screen, type the answer (or press the choice's letter), Enter, wait for the next question.
+ *
+ * A script maps question ids to answers. Which question comes next is not guessed: a mirror of
+ * the interview's pure reducer is fed the same answers, so the test knows which question the
+ * screen must show, and fails, naming it, if the screen shows anything else.
+ */
+import { initialState, reduce } from '../../src/interview/reducer.js';
+import { currentQuestion } from '../../src/interview/derived.js';
+import type { InterviewMode, InterviewState, Question } from '../../src/interview/types.js';
+import type { Term } from './harness.js';
+
+/**
+ * Answers by question id. For a choice, the choice's value (`wheels`) or its letter (`w`); for
+ * text, what to type; `''` presses Enter alone (accept the default, or skip an optional question).
+ */
+export type Script = Record<string, string>;
+
+export const squash = (s: string) => s.replace(/\s+/g, ' ').trim();
+
+/** A piece of the prompt short enough to stay on one screen line at 60 columns. */
+export const promptMark = (q: Question) => squash(q.prompt).slice(0, 26);
+
+const isChoice = (q: Question) => (q.kind === 'choice' || q.kind === 'confirm') && (q.choices?.length ?? 0) > 0;
+
+function choiceFor(q: Question, answer: string) {
+  const c = q.choices!.find((c) => c.value === answer) ?? q.choices!.find((c) => c.key === answer);
+  if (!c) throw new Error(`script: "${answer}" is not a choice of ${q.id} (${q.choices!.map((c) => c.value).join(', ')})`);
+  return c;
+}
+
+/** One answer fed to the mirror, as the screen would turn it into an action. */
+function mirrorStep(state: InterviewState, q: Question, answer: string): InterviewState {
+  if (isChoice(q)) return reduce(state, { type: 'choose', value: choiceFor(q, answer).value });
+  if (answer === '') return reduce(state, { type: 'accept-default' });
+  return reduce(state, { type: 'answer', text: answer });
+}
+
+export interface DriveOptions {
+  /** Stop before this question (its id), leaving it on screen unanswered. */
+  stopAt?: string;
+  /** Stop after this many answers. */
+  maxAnswers?: number;
+  timeoutMs?: number;
+}
+
+/**
+ * Runs the script through the reducer alone (no terminal), to the review or to `opts.stopAt`.
+ * Throws naming the first question the script has no answer for, or an answer it rejects.
+ */
+export function dryRun(script: Script, opts: DriveOptions = {}, from: InterviewState = initialState()): InterviewState {
+  let state = from;
+  for (let n = 0; n < 500; n++) {
+    const q = currentQuestion(state);
+    if (!q || q.id === opts.stopAt || n === opts.maxAnswers) return state;
+    const answer = script[q.id];
+    if (answer === undefined) throw new Error(`script has no answer for ${q.id}: "${q.prompt}"`);
+    state = mirrorStep(state, q, answer);
+    if (state.error) throw new Error(`script answer "${answer}" for ${q.id} was rejected: ${state.error.message}`);
+  }
+  throw new Error('script: more than 500 answers without reaching the review (a loop?)');
+}
+
+/**
+ * Types the script into the terminal, from whatever question is on screen (the mirror `from`
+ * must match it: a fresh interview, or a resumed one). Returns the mirror's final state.
+ */
+export async function typeInterview(t: Term, script: Script, opts: DriveOptions = {}, from?: InterviewState, mode: InterviewMode = 'guided'): Promise<InterviewState> {
+  let state = from ?? initialState(mode);
+  const wait = { timeoutMs: opts.timeoutMs ?? 10_000 };
+  for (let n = 0; ; n++) {
+    const q = currentQuestion(state);
+    if (!q || q.id === opts.stopAt || n === opts.maxAnswers) return state;
+    const answer = script[q.id];
+    if (answer === undefined) throw new Error(`script has no answer for ${q.id}: "${q.prompt}"`);
+    const mark = promptMark(q);
+    let screen = await t.waitFor((s) => squash(s).includes(mark), { what: `question ${q.id} ("${mark}")`, ...wait });
+    if (isChoice(q)) await t.type(choiceFor(q, answer).key);
+    else {
+      if (answer !== '') {
+        await t.type(answer);
+        // Enter only once the whole answer shows, as a person watching the screen would.
+        const tail = squash(answer).slice(-12);
+        await t.waitFor((s) => s !== screen && squash(s).includes(tail), { what: `the typed answer "${answer}" for ${q.id}`, ...wait });
+        screen = await t.waitForQuiet(40, wait);
+      }
+      await t.press('enter');
+    }
+    state = mirrorStep(state, q, answer);
+    if (state.error) throw new Error(`script answer "${answer}" for ${q.id} was rejected: ${state.error.message}`);
+    await t.waitForChange(screen, { what: `the screen to move on from ${q.id}`, ...wait });
+  }
+}

@@ -1,0 +1,118 @@
+// Terminal edge cases (issue 7): no TTY, NO_COLOR, 60 columns, a resize in the middle of a
+// question. The built binary, in a real pseudo-terminal where there is one.
+import { afterAll, afterEach, describe, expect, it } from 'vitest';
+import { spawn } from 'node:child_process';
+import { BINARY, disposeAll, ptySupport, startTerm, type Term } from './harness.js';
+import { childEnv, makeWorkspace } from './env.js';
+import { colourCodes } from './ansi.js';
+import { squash, typeInterview, type Script } from './interview-driver.js';
+
+/** The case questions answered with Enter (all optional) and imperial units. */
+const CASE_START: Script = {
+  'details.reference': '',
+  'details.occurred': '',
+  'details.location': '',
+  'details.investigator': '',
+  'details.notes': '',
+  units: 'imperial',
+};
+
+const ws = makeWorkspace();
+afterAll(() => ws.cleanup());
+
+/** Runs the binary with pipes (no terminal at all) and collects what it printed. */
+function runPiped(args: string[], stdin: 'pipe' | 'ignore') {
+  return new Promise<{ code: number | null; out: string; err: string }>((resolve) => {
+    const p = spawn(process.execPath, [BINARY, ...args], { cwd: ws.root, env: childEnv(ws.env), stdio: [stdin, 'pipe', 'pipe'] });
+    let out = '';
+    let err = '';
+    p.stdout.on('data', (d) => (out += d));
+    p.stderr.on('data', (d) => (err += d));
+    if (stdin === 'pipe') p.stdin!.end('80\n');
+    const timer = setTimeout(() => p.kill('SIGKILL'), 15_000);
+    p.on('close', (code) => {
+      clearTimeout(timer);
+      resolve({ code, out, err });
+    });
+  });
+}
+
+describe('without a terminal', () => {
+  it.each([
+    [[], 'pipe'],
+    [[], 'ignore'],
+    [['resume'], 'pipe'],
+  ] as const)('skidcase %j with stdin %s says to use solve and exits non-zero', async (args, stdin) => {
+    const r = await runPiped([...args], stdin);
+    expect(r.code).not.toBe(0);
+    expect(r.code).not.toBeNull(); // ended by itself, not by the 15 s guard
+    expect(r.out + r.err).toMatch(/skidcase solve FILE/);
+    expect(r.out + r.err).not.toMatch(/\n\s+at\s/); // no stack trace
+  });
+});
+
+const pty = await ptySupport();
+if (!pty.ok) console.warn(`terminal edge tests skipped: ${pty.reason}`);
+
+/** Opens the home screen and starts a new case, landing on the first question. */
+async function newCase(t: Term) {
+  await t.waitFor(ws.sessions.slice(-20), { what: 'the home screen naming the sessions folder' });
+  await t.type('n');
+  return t.waitFor(/Case or report reference/, { what: 'the first question' });
+}
+
+describe.skipIf(!pty.ok)(`in a terminal${pty.ok ? '' : ` (skipped: ${pty.reason})`}`, () => {
+  afterEach(disposeAll);
+
+  it('with NO_COLOR set, writes no colour codes on the home screen, a question or an error; without it, does', async () => {
+    const plain = await startTerm({ cwd: ws.root, env: { ...ws.env, NO_COLOR: '1' } });
+    await newCase(plain);
+    // A rejected answer is where colour would be used most (the error message).
+    await typeInterview(plain, CASE_START, { stopAt: 'limit' });
+    await plain.type('abc');
+    await plain.waitFor('abc');
+    await plain.press('enter');
+    await plain.waitFor(/not a number/i, { what: 'the message for "abc" as a posted limit' });
+    expect(colourCodes(plain.raw)).toEqual([]);
+
+    const coloured = await startTerm({ cwd: ws.root, env: ws.env });
+    await newCase(coloured);
+    expect(colourCodes(coloured.raw).length).toBeGreaterThan(0);
+  });
+
+  it('at 60 columns, lays out within the width (no line the terminal had to wrap) and takes answers', async () => {
+    const t = await startTerm({ cwd: ws.root, env: ws.env, cols: 60, rows: 24 });
+    await t.waitFor(ws.sessions.slice(-20));
+    expect(t.wrappedRows()).toEqual([]);
+    await t.type('n');
+    await t.waitFor(/Case or report reference/);
+    expect(t.wrappedRows()).toEqual([]);
+    await t.type('NARROW-1');
+    await t.waitFor('NARROW-1');
+    await t.press('enter');
+    const next = await t.waitFor(/When did the crash happen/);
+    expect(t.wrappedRows()).toEqual([]);
+    expect(next.split('\n').every((l) => l.length <= 60)).toBe(true);
+  });
+
+  it('resized from 100 to 60 columns in the middle of an answer, keeps the typed text, redraws once, and takes the answer', async () => {
+    const t = await startTerm({ cwd: ws.root, env: ws.env, cols: 100, rows: 30 });
+    await newCase(t);
+    await t.type('RESIZE-');
+    await t.waitFor('RESIZE-');
+    t.resize(60, 24);
+    const narrow = await t.waitForQuiet(200);
+    expect(t.wrappedRows()).toEqual([]);
+    // The prompt is drawn once: no copy of the wider frame left behind.
+    expect(squash(narrow).split('Case or report reference').length - 1).toBe(1);
+    expect(narrow).toContain('RESIZE-');
+    await t.type('42');
+    await t.waitFor('RESIZE-42');
+    await t.press('enter');
+    await t.waitFor(/When did the crash happen/);
+    t.resize(120, 30);
+    await t.waitForQuiet(200);
+    expect(t.wrappedRows()).toEqual([]);
+    expect(squash(t.screen()).split('When did the crash happen').length - 1).toBe(1);
+  });
+});

@@ -1,0 +1,40 @@
+import { describe, expect, it } from 'vitest';
+import type { Key } from 'ink';
+import { EMPTY_LINE, editLine, lineOf } from '../../src/ui/line-edit.js';
+
+const none = { upArrow: false, downArrow: false, leftArrow: false, rightArrow: false, pageDown: false, pageUp: false, home: false, end: false, return: false, escape: false, ctrl: false, shift: false, tab: false, backspace: false, delete: false, meta: false, super: false, hyper: false, capsLock: false, numLock: false } as Key;
+const k = (x: Partial<Key>) => ({ ...none, ...x });
+
+describe('editLine', () => {
+  it('types at the cursor and moves it', () => {
+    let l = EMPTY_LINE;
+    for (const ch of '8.5') l = editLine(l, ch, none);
+    expect(l).toEqual({ value: '8.5', cursor: 3 });
+    l = editLine(l, '', k({ leftArrow: true }));
+    l = editLine(l, '0', none);
+    expect(l.value).toBe('8.05');
+  });
+
+  it('erases left of the cursor with Backspace (sent as delete by terminals)', () => {
+    expect(editLine(lineOf('80'), '', k({ delete: true })).value).toBe('8');
+    expect(editLine(lineOf('80'), '', k({ backspace: true })).value).toBe('8');
+    expect(editLine({ value: '80', cursor: 0 }, '', k({ delete: true })).value).toBe('80');
+  });
+
+  it('takes a paste whole but drops control characters from it', () => {
+    expect(editLine(EMPTY_LINE, '94 92\n95', none).value).toBe('94 9295');
+  });
+
+  it('ignores Enter, Esc and Ctrl chords (they are bindings)', () => {
+    const l = lineOf('12');
+    expect(editLine(l, '', k({ return: true }))).toBe(l);
+    expect(editLine(l, 'g', k({ ctrl: true }))).toBe(l);
+    expect(editLine(l, '', k({ escape: true, meta: true }))).toBe(l);
+  });
+
+  it('Ctrl+U clears the line, Home and End move to the ends', () => {
+    expect(editLine(lineOf('abc'), 'u', k({ ctrl: true }))).toEqual(EMPTY_LINE);
+    expect(editLine(lineOf('abc'), '', k({ home: true })).cursor).toBe(0);
+    expect(editLine({ value: 'abc', cursor: 1 }, '', k({ end: true })).cursor).toBe(3);
+  });
+});
