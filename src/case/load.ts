@@ -18,17 +18,27 @@ export type LoadResult =
  */
 export function loadCase(input: unknown): LoadResult {
   if (typeof input !== 'object' || input === null || Array.isArray(input))
-    return { ok: false, kind: 'format', issues: [{ path: '(file)', message: 'a case file is a JSON object' }] };
+    return {
+      ok: false,
+      kind: 'format',
+      issues: [{ path: '(file)', message: 'a case file is a JSON object' }],
+    };
   const obj = input as Record<string, unknown>;
   if (obj.format !== FORMAT)
     return {
       ok: false,
       kind: 'format',
-      issues: [{ path: 'format', message: `format must be "${FORMAT}" (is this a skidcase case file?)` }],
+      issues: [
+        { path: 'format', message: `format must be "${FORMAT}" (is this a skidcase case file?)` },
+      ],
     };
   const version = obj.version;
   if (typeof version !== 'number' || !Number.isInteger(version) || version < 1)
-    return { ok: false, kind: 'invalid', issues: [{ path: 'version', message: 'version must be a whole number from 1' }] };
+    return {
+      ok: false,
+      kind: 'invalid',
+      issues: [{ path: 'version', message: 'version must be a whole number from 1' }],
+    };
   if (version > LATEST_VERSION)
     return {
       ok: false,
@@ -43,12 +53,21 @@ export function loadCase(input: unknown): LoadResult {
   let current: unknown = input;
   for (let v = version; v < LATEST_VERSION; v++) {
     const step = MIGRATIONS[v];
-    if (!step) return { ok: false, kind: 'invalid', issues: [{ path: 'version', message: `no migration from version ${v}` }] };
+    if (!step)
+      return {
+        ok: false,
+        kind: 'invalid',
+        issues: [{ path: 'version', message: `no migration from version ${v}` }],
+      };
     current = step(current as Record<string, unknown>);
   }
   const parsed = caseV1.safeParse(current);
   if (!parsed.success) return { ok: false, kind: 'invalid', issues: fromZod(parsed.error) };
-  const result: LoadResult = { ok: true, case: parsed.data, unknownFields: unknownFields(parsed.data) };
+  const result: LoadResult = {
+    ok: true,
+    case: parsed.data,
+    unknownFields: unknownFields(parsed.data),
+  };
   if (version < LATEST_VERSION) result.migratedFrom = version;
   return result;
 }
@@ -60,7 +79,11 @@ export function loadCaseText(text: string): LoadResult {
     json = JSON.parse(text);
   } catch (e) {
     const msg = e instanceof Error ? e.message : String(e);
-    return { ok: false, kind: 'json', issues: [{ path: '(file)', message: `not valid JSON (${msg})` }] };
+    return {
+      ok: false,
+      kind: 'json',
+      issues: [{ path: '(file)', message: `not valid JSON (${msg})` }],
+    };
   }
   return loadCase(json);
 }

@@ -23,7 +23,8 @@ export interface QuantityRule {
 /** Message for a number outside a rule, or undefined when it fits. */
 export function ruleViolation(rule: QuantityRule, n: number): string | undefined {
   if (!Number.isFinite(n)) return `${rule.what} must be a finite number`;
-  if (rule.gt !== undefined && !(n > rule.gt)) return `${rule.what} must be greater than ${rule.gt}`;
+  if (rule.gt !== undefined && !(n > rule.gt))
+    return `${rule.what} must be greater than ${rule.gt}`;
   if (rule.min !== undefined && n < rule.min) return `${rule.what} must be at least ${rule.min}`;
   if (rule.max !== undefined && n > rule.max) return `${rule.what} must be at most ${rule.max}`;
   if (rule.lt !== undefined && !(n < rule.lt)) return `${rule.what} must be less than ${rule.lt}`;
@@ -36,42 +37,56 @@ export function ruleViolation(rule: QuantityRule, n: number): string | undefined
  * instead of "no union member matched".
  */
 export function quantity(rule: QuantityRule) {
-  return z.custom<Quantity>(() => true).superRefine((input, ctx) => {
-    const check = (n: unknown, label: string, path: (string | number)[]) => {
-      if (typeof n !== 'number') {
-        ctx.addIssue({ code: 'custom', path, message: n === undefined ? `${label} is required` : `${label} must be a number` });
-        return false;
+  return z
+    .custom<Quantity>(() => true)
+    .superRefine((input, ctx) => {
+      const check = (n: unknown, label: string, path: (string | number)[]) => {
+        if (typeof n !== 'number') {
+          ctx.addIssue({
+            code: 'custom',
+            path,
+            message: n === undefined ? `${label} is required` : `${label} must be a number`,
+          });
+          return false;
+        }
+        const msg = ruleViolation({ ...rule, what: label }, n);
+        if (msg) ctx.addIssue({ code: 'custom', path, message: msg });
+        return !msg;
+      };
+      if (input === undefined) {
+        ctx.addIssue({ code: 'custom', message: `${rule.what} is required` });
+        return;
       }
-      const msg = ruleViolation({ ...rule, what: label }, n);
-      if (msg) ctx.addIssue({ code: 'custom', path, message: msg });
-      return !msg;
-    };
-    if (input === undefined) {
-      ctx.addIssue({ code: 'custom', message: `${rule.what} is required` });
-      return;
-    }
-    if (typeof input === 'number') {
-      check(input, rule.what, []);
-      return;
-    }
-    if (typeof input !== 'object' || input === null || Array.isArray(input)) {
-      ctx.addIssue({
-        code: 'custom',
-        message: `${rule.what} must be a number or { "value": n, "low": n, "high": n }`,
-      });
-      return;
-    }
-    const q = input as Record<string, unknown>;
-    const okV = check(q.value, rule.what, ['value']);
-    const okL = q.low === undefined || check(q.low, `${rule.what} (low)`, ['low']);
-    const okH = q.high === undefined || check(q.high, `${rule.what} (high)`, ['high']);
-    if (q.note !== undefined && typeof q.note !== 'string')
-      ctx.addIssue({ code: 'custom', path: ['note'], message: 'note must be text' });
-    if (okV && okL && q.low !== undefined && (q.low as number) > (q.value as number))
-      ctx.addIssue({ code: 'custom', path: ['low'], message: `${rule.what}: low must not be above value` });
-    if (okV && okH && q.high !== undefined && (q.high as number) < (q.value as number))
-      ctx.addIssue({ code: 'custom', path: ['high'], message: `${rule.what}: high must not be below value` });
-  });
+      if (typeof input === 'number') {
+        check(input, rule.what, []);
+        return;
+      }
+      if (typeof input !== 'object' || input === null || Array.isArray(input)) {
+        ctx.addIssue({
+          code: 'custom',
+          message: `${rule.what} must be a number or { "value": n, "low": n, "high": n }`,
+        });
+        return;
+      }
+      const q = input as Record<string, unknown>;
+      const okV = check(q.value, rule.what, ['value']);
+      const okL = q.low === undefined || check(q.low, `${rule.what} (low)`, ['low']);
+      const okH = q.high === undefined || check(q.high, `${rule.what} (high)`, ['high']);
+      if (q.note !== undefined && typeof q.note !== 'string')
+        ctx.addIssue({ code: 'custom', path: ['note'], message: 'note must be text' });
+      if (okV && okL && q.low !== undefined && (q.low as number) > (q.value as number))
+        ctx.addIssue({
+          code: 'custom',
+          path: ['low'],
+          message: `${rule.what}: low must not be above value`,
+        });
+      if (okV && okH && q.high !== undefined && (q.high as number) < (q.value as number))
+        ctx.addIssue({
+          code: 'custom',
+          path: ['high'],
+          message: `${rule.what}: high must not be below value`,
+        });
+    });
 }
 
 /** A quantity read into its three ends (low = value = high when no spread was given). */

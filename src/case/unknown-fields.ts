@@ -5,10 +5,26 @@ import type { CaseV1 } from './v1/schema.js';
  * their paths so that a misspelt field (`middleOrdinat`) shows instead of silently not counting.
  */
 const KNOWN = {
-  top: ['format', 'version', 'id', 'created', 'updated', 'units', 'details', 'postedLimit', 'vehicle', 'analyses', 'interview'],
+  top: [
+    'format',
+    'version',
+    'id',
+    'created',
+    'updated',
+    'units',
+    'details',
+    'postedLimit',
+    'vehicle',
+    'analyses',
+    'interview',
+  ],
   details: ['reference', 'occurred', 'location', 'investigator', 'notes'],
   vehicle: ['label', 'frontAxleShare', 'trackWidth', 'brakes'],
-  brakes: { all: ['mode'], estimate: ['mode', 'efficiency', 'basis'], wheels: ['mode', 'frontLeft', 'frontRight', 'rearLeft', 'rearRight'] },
+  brakes: {
+    all: ['mode'],
+    estimate: ['mode', 'efficiency', 'basis'],
+    wheels: ['mode', 'frontLeft', 'frontRight', 'rearLeft', 'rearRight'],
+  },
   drag: {
     entered: ['source', 'value', 'low', 'high', 'note'],
     table: ['source', 'surface', 'value', 'low', 'high', 'band', 'note'],
@@ -18,7 +34,16 @@ const KNOWN = {
   },
   test: ['speed', 'distance'],
   skid: ['id', 'kind', 'label', 'marks', 'distanceRule', 'segments', 'end'],
-  yaw: ['id', 'kind', 'label', 'chord', 'middleOrdinate', 'drag', 'superelevation', 'pathAdjustment'],
+  yaw: [
+    'id',
+    'kind',
+    'label',
+    'chord',
+    'middleOrdinate',
+    'drag',
+    'superelevation',
+    'pathAdjustment',
+  ],
   segment: ['label', 'length', 'drag', 'grade'],
   end: { stop: ['mode'], speed: ['mode', 'speed', 'basis'] },
   quantity: ['value', 'low', 'high', 'note'],
@@ -44,7 +69,8 @@ function drag(d: Obj, path: string, out: string[]) {
     });
   if (d.weight !== undefined) qty(d.weight, `${path}.weight`, out);
   for (const list of ['pulls', 'readings'] as const)
-    if (Array.isArray(d[list])) (d[list] as unknown[]).forEach((p, i) => qty(p, `${path}.${list}[${i}]`, out));
+    if (Array.isArray(d[list]))
+      (d[list] as unknown[]).forEach((p, i) => qty(p, `${path}.${list}[${i}]`, out));
 }
 
 /** Paths of every field the v1 contract does not name, in file order. */
@@ -60,7 +86,8 @@ export function unknownFields(c: CaseV1): string[] {
   const b = c.vehicle.brakes as Obj | undefined;
   if (b) {
     extra(b, KNOWN.brakes[b.mode as keyof typeof KNOWN.brakes], 'vehicle.brakes', out);
-    for (const k of ['efficiency', 'frontLeft', 'frontRight', 'rearLeft', 'rearRight']) qty(b[k], `vehicle.brakes.${k}`, out);
+    for (const k of ['efficiency', 'frontLeft', 'frontRight', 'rearLeft', 'rearRight'])
+      qty(b[k], `vehicle.brakes.${k}`, out);
   }
   c.analyses.forEach((a, i) => {
     const p = `analyses[${i}]`;

@@ -4,69 +4,117 @@ import { quantity, RULES } from '../quantity.js';
 /** Case file version 1: the contract in docs/case-file.md. Unknown fields are kept (loose objects). */
 
 const text = (what: string) => z.string({ error: `${what} must be text` });
+/** Message for a missing field vs. a field of the wrong type. */
+const need = (what: string, expected: string) => ({
+  error: (iss: { input?: unknown }) =>
+    iss.input === undefined ? `${what} is required` : `${what} must be ${expected}`,
+});
 const q = quantity;
 
-export const dragV1 = z.discriminatedUnion(
-  'source',
-  [
-    z.looseObject({
-      source: z.literal('entered'),
-      value: z.number({ error: 'drag factor must be a number' }),
-      low: z.number({ error: 'drag factor (low) must be a number' }).optional(),
-      high: z.number({ error: 'drag factor (high) must be a number' }).optional(),
-      note: text('note').optional(),
-    }),
-    z.looseObject({
-      source: z.literal('table'),
-      surface: text('surface'),
-      value: z.number({ error: 'drag factor must be a number' }),
-      low: z.number({ error: 'drag factor (low) must be a number' }).optional(),
-      high: z.number({ error: 'drag factor (high) must be a number' }).optional(),
-      band: z.enum(['under-30mph', 'over-30mph']).optional(),
-      note: text('note').optional(),
-    }),
-    z.looseObject({
-      source: z.literal('test-skids'),
-      tests: z
-        .array(z.looseObject({ speed: q(RULES.testSpeed), distance: q(RULES.length) }), {
-          error: 'tests must be a list of { "speed": n, "distance": n }',
-        })
-        .min(1, 'at least one test skid is needed'),
-      note: text('note').optional(),
-    }),
-    z.looseObject({
-      source: z.literal('sled'),
-      weight: q(RULES.sledWeight),
-      pulls: z.array(q(RULES.sledPull), { error: 'pulls must be a list of numbers' }).min(1, 'at least one pull is needed'),
-      note: text('note').optional(),
-    }),
-    z.looseObject({
-      source: z.literal('decelerometer'),
-      readings: z
-        .array(q(RULES.decel), { error: 'readings must be a list of numbers' })
-        .min(1, 'at least one reading is needed'),
-      note: text('note').optional(),
-    }),
-  ],
-  { error: 'drag.source must be one of entered, table, test-skids, sled, decelerometer' },
-).superRefine((d, ctx) => {
-  if (d.source !== 'entered' && d.source !== 'table') return;
-  for (const [k, n] of [['value', d.value], ['low', d.low], ['high', d.high]] as const) {
-    if (n === undefined) continue;
-    if (!(n > 0)) ctx.addIssue({ code: 'custom', path: [k], message: 'drag factor must be greater than 0' });
-    else if (n > 2) ctx.addIssue({ code: 'custom', path: [k], message: 'drag factor must be at most 2' });
-  }
-  if (d.low !== undefined && d.low > d.value)
-    ctx.addIssue({ code: 'custom', path: ['low'], message: 'drag factor: low must not be above value' });
-  if (d.high !== undefined && d.high < d.value)
-    ctx.addIssue({ code: 'custom', path: ['high'], message: 'drag factor: high must not be below value' });
-});
+/** value/low/high of a quantity that may not have passed its own checks; undefined if unusable. */
+function endsOf(q: unknown): { value: number; low: number; high?: number } | undefined {
+  if (typeof q === 'number') return Number.isFinite(q) ? { value: q, low: q } : undefined;
+  if (typeof q !== 'object' || q === null) return undefined;
+  const o = q as Record<string, unknown>;
+  if (typeof o.value !== 'number') return undefined;
+  const low = typeof o.low === 'number' ? o.low : o.value;
+  return typeof o.high === 'number'
+    ? { value: o.value, low, high: o.high }
+    : { value: o.value, low };
+}
+
+export const dragV1 = z
+  .discriminatedUnion(
+    'source',
+    [
+      z.looseObject({
+        source: z.literal('entered'),
+        value: z.number({ error: 'drag factor must be a number' }),
+        low: z.number({ error: 'drag factor (low) must be a number' }).optional(),
+        high: z.number({ error: 'drag factor (high) must be a number' }).optional(),
+        note: text('note').optional(),
+      }),
+      z.looseObject({
+        source: z.literal('table'),
+        surface: text('surface'),
+        value: z.number({ error: 'drag factor must be a number' }),
+        low: z.number({ error: 'drag factor (low) must be a number' }).optional(),
+        high: z.number({ error: 'drag factor (high) must be a number' }).optional(),
+        band: z.enum(['under-30mph', 'over-30mph']).optional(),
+        note: text('note').optional(),
+      }),
+      z.looseObject({
+        source: z.literal('test-skids'),
+        tests: z
+          .array(
+            z.looseObject(
+              {
+                speed: q(RULES.testSpeed),
+                distance: q({ ...RULES.length, what: 'test distance' }),
+              },
+              need('test skid', 'an object { "speed": n, "distance": n }'),
+            ),
+            {
+              error: 'tests must be a list of { "speed": n, "distance": n }',
+            },
+          )
+          .min(1, 'at least one test skid is needed'),
+        note: text('note').optional(),
+      }),
+      z.looseObject({
+        source: z.literal('sled'),
+        weight: q(RULES.sledWeight),
+        pulls: z
+          .array(q(RULES.sledPull), { error: 'pulls must be a list of numbers' })
+          .min(1, 'at least one pull is needed'),
+        note: text('note').optional(),
+      }),
+      z.looseObject({
+        source: z.literal('decelerometer'),
+        readings: z
+          .array(q(RULES.decel), { error: 'readings must be a list of numbers' })
+          .min(1, 'at least one reading is needed'),
+        note: text('note').optional(),
+      }),
+    ],
+    { error: 'drag.source must be one of entered, table, test-skids, sled, decelerometer' },
+  )
+  .superRefine((d, ctx) => {
+    if (d.source !== 'entered' && d.source !== 'table') return;
+    for (const [k, n] of [
+      ['value', d.value],
+      ['low', d.low],
+      ['high', d.high],
+    ] as const) {
+      if (n === undefined) continue;
+      if (!(n > 0))
+        ctx.addIssue({ code: 'custom', path: [k], message: 'drag factor must be greater than 0' });
+      else if (n > 2)
+        ctx.addIssue({ code: 'custom', path: [k], message: 'drag factor must be at most 2' });
+    }
+    if (d.low !== undefined && d.low > d.value)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['low'],
+        message: 'drag factor: low must not be above value',
+      });
+    if (d.high !== undefined && d.high < d.value)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['high'],
+        message: 'drag factor: high must not be below value',
+      });
+  });
 
 export const brakesV1 = z.discriminatedUnion(
   'mode',
   [
     z.looseObject({ mode: z.literal('all') }),
-    z.looseObject({ mode: z.literal('estimate'), efficiency: q(RULES.efficiency), basis: text('basis').optional() }),
+    z.looseObject({
+      mode: z.literal('estimate'),
+      efficiency: q(RULES.efficiency),
+      basis: text('basis').optional(),
+    }),
     z.looseObject({
       mode: z.literal('wheels'),
       frontLeft: q(RULES.wheel),
@@ -78,40 +126,57 @@ export const brakesV1 = z.discriminatedUnion(
   { error: 'brakes.mode must be one of all, estimate, wheels' },
 );
 
-export const vehicleV1 = z.looseObject({
-  label: text('label').optional(),
-  frontAxleShare: q(RULES.share).optional(),
-  trackWidth: q(RULES.trackWidth).optional(),
-  brakes: brakesV1.optional(),
-});
+export const vehicleV1 = z.looseObject(
+  {
+    label: text('label').optional(),
+    frontAxleShare: q(RULES.share).optional(),
+    trackWidth: q(RULES.trackWidth).optional(),
+    brakes: brakesV1.optional(),
+  },
+  need('vehicle', 'an object'),
+);
 
-export const segmentV1 = z.looseObject({
-  label: text('label').optional(),
-  length: q(RULES.length).optional(),
-  drag: dragV1,
-  grade: q(RULES.grade).optional(),
-});
+export const segmentV1 = z.looseObject(
+  {
+    label: text('label').optional(),
+    length: q(RULES.length).optional(),
+    drag: dragV1,
+    grade: q(RULES.grade).optional(),
+  },
+  need('segment', 'an object with a drag factor'),
+);
 
 export const endV1 = z.discriminatedUnion(
   'mode',
   [
     z.looseObject({ mode: z.literal('stop') }),
-    z.looseObject({ mode: z.literal('speed'), speed: q(RULES.speed), basis: text('basis').optional() }),
+    z.looseObject({
+      mode: z.literal('speed'),
+      speed: q(RULES.speed),
+      basis: text('basis').optional(),
+    }),
   ],
   { error: 'end.mode must be stop or speed' },
 );
 
 const analysisId = z
   .string({ error: 'id must be text' })
-  .regex(/^[A-Za-z0-9._-]{1,64}$/, 'id must be 1 to 64 letters, digits, dots, dashes or underscores');
+  .regex(
+    /^[A-Za-z0-9._-]{1,64}$/,
+    'id must be 1 to 64 letters, digits, dots, dashes or underscores',
+  );
 
 export const skidV1 = z.looseObject({
   id: analysisId,
   kind: z.literal('skid'),
   label: text('label').optional(),
   marks: z.array(q(RULES.length), { error: 'marks must be a list of lengths' }).optional(),
-  distanceRule: z.enum(['average', 'longest'], { error: 'distanceRule must be average or longest' }).optional(),
-  segments: z.array(segmentV1, { error: 'segments must be a list' }).min(1, 'at least one segment is needed'),
+  distanceRule: z
+    .enum(['average', 'longest'], { error: 'distanceRule must be average or longest' })
+    .optional(),
+  segments: z
+    .array(segmentV1, { error: 'segments must be a list' })
+    .min(1, 'at least one segment is needed'),
   end: endV1.optional(),
 });
 
@@ -123,7 +188,9 @@ export const yawV1 = z.looseObject({
   middleOrdinate: q({ ...RULES.length, what: 'middle ordinate' }),
   drag: dragV1,
   superelevation: q(RULES.superelevation).optional(),
-  pathAdjustment: z.enum(['none', 'half-track'], { error: 'pathAdjustment must be none or half-track' }).optional(),
+  pathAdjustment: z
+    .enum(['none', 'half-track'], { error: 'pathAdjustment must be none or half-track' })
+    .optional(),
 });
 
 export const analysisV1 = z.discriminatedUnion('kind', [skidV1, yawV1], {
@@ -139,31 +206,47 @@ export const caseV1 = z
       .regex(/^[a-z0-9-]{1,64}$/, 'id must be 1 to 64 lower-case letters, digits or dashes'),
     created: text('created').optional(),
     updated: text('updated').optional(),
-    units: z.enum(['imperial', 'metric'], { error: 'units must be imperial or metric' }),
+    units: z.enum(['imperial', 'metric'], need('units', 'imperial or metric')),
     details: z
-      .looseObject({
-        reference: text('reference').optional(),
-        occurred: text('occurred').optional(),
-        location: text('location').optional(),
-        investigator: text('investigator').optional(),
-        notes: text('notes').optional(),
-      })
+      .looseObject(
+        {
+          reference: text('reference').optional(),
+          occurred: text('occurred').optional(),
+          location: text('location').optional(),
+          investigator: text('investigator').optional(),
+          notes: text('notes').optional(),
+        },
+        need('details', 'an object'),
+      )
       .optional(),
     postedLimit: q(RULES.postedLimit).optional(),
     vehicle: vehicleV1,
-    analyses: z.array(analysisV1, { error: 'analyses must be a list' }),
+    analyses: z.array(analysisV1, need('analyses', 'a list')),
     interview: z.unknown().optional(),
   })
   .superRefine((c, ctx) => {
     // Cross-field rules: each names the field that is wrong.
     const seen = new Set<string>();
     c.analyses.forEach((a, i) => {
-      if (seen.has(a.id)) ctx.addIssue({ code: 'custom', path: ['analyses', i, 'id'], message: `id "${a.id}" is used twice` });
+      if (seen.has(a.id))
+        ctx.addIssue({
+          code: 'custom',
+          path: ['analyses', i, 'id'],
+          message: `id "${a.id}" is used twice`,
+        });
       seen.add(a.id);
       if (a.kind === 'skid') {
         if (!c.vehicle.brakes)
-          ctx.addIssue({ code: 'custom', path: ['vehicle', 'brakes'], message: 'brakes are required for a skid analysis' });
-        if (a.segments.length === 1 && a.segments[0]!.length === undefined && (!a.marks || a.marks.length === 0))
+          ctx.addIssue({
+            code: 'custom',
+            path: ['vehicle', 'brakes'],
+            message: 'brakes are required for a skid analysis',
+          });
+        if (
+          a.segments.length === 1 &&
+          a.segments[0]!.length === undefined &&
+          (!a.marks || a.marks.length === 0)
+        )
           ctx.addIssue({
             code: 'custom',
             path: ['analyses', i, 'marks'],
@@ -186,17 +269,25 @@ export const caseV1 = z
             message: `track width is required for the half-track adjustment of analyses[${i}]`,
           });
         // Checked against the chord's low end, so that every corner of the ranges is a valid arc.
-        const C = typeof a.chord === 'number' ? a.chord : (a.chord.low ?? a.chord.value);
-        const M = a.middleOrdinate;
-        const mv = typeof M === 'number' ? { value: M } : M;
-        for (const k of ['value', 'low', 'high'] as const) {
-          const m = (mv as { value: number; low?: number; high?: number })[k];
-          if (m !== undefined && m >= C / 2)
-            ctx.addIssue({
-              code: 'custom',
-              path: ['analyses', i, 'middleOrdinate', ...(typeof M === 'number' ? [] : [k])],
-              message: 'middle ordinate must be less than half the chord',
-            });
+        // The fields may themselves be invalid here (their own issues are already reported), so
+        // they are read defensively.
+        const C = endsOf(a.chord);
+        const M = endsOf(a.middleOrdinate);
+        if (C && M) {
+          for (const k of ['value', 'low', 'high'] as const) {
+            const m = M[k];
+            if (m !== undefined && m >= C.low / 2)
+              ctx.addIssue({
+                code: 'custom',
+                path: [
+                  'analyses',
+                  i,
+                  'middleOrdinate',
+                  ...(typeof a.middleOrdinate === 'number' ? [] : [k]),
+                ],
+                message: 'middle ordinate must be less than half the chord',
+              });
+          }
         }
       }
     });
