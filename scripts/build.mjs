@@ -18,7 +18,17 @@ await build({
   legalComments: 'none',
   chunkNames: 'chunks/[name]-[hash]',
   banner: {
-    js: "#!/usr/bin/env node\nimport { createRequire as __cr } from 'node:module'; const require = __cr(import.meta.url);",
+    // CommonJS dependencies bundled into ESM still reach for require, __filename and __dirname
+    // (write-file-atomic names its temp files from __filename).
+    js: [
+      '#!/usr/bin/env node',
+      "import { createRequire as __cr } from 'node:module';",
+      "import { fileURLToPath as __fu } from 'node:url';",
+      "import { dirname as __dn } from 'node:path';",
+      'const require = __cr(import.meta.url);',
+      'const __filename = __fu(import.meta.url);',
+      'const __dirname = __dn(__filename);',
+    ].join('\n'),
   },
   define: { 'process.env.NODE_ENV': '"production"', __SKIDCASE_VERSION__: JSON.stringify(pkg.version) },
   external: ['react-devtools-core'],

@@ -3,9 +3,11 @@
  * context on screen) and runs its command; keys that are not bindings go to the line being typed.
  * No other component calls useInput, so two handlers can never both act on a key.
  */
+import { useRef } from 'react';
 import { useInput, type Key } from 'ink';
 import { findBinding, type Command, type KeyContext } from './keys.js';
 import { editLine } from './line-edit.js';
+import { splitKeys } from './split-keys.js';
 import { filterQuestions } from './jump-filter.js';
 import { isChoice } from './question-view.js';
 import { submitAction } from './session.js';
@@ -15,7 +17,7 @@ import type { Services } from './services.js';
 
 /** Which part of the key table is live, from what is on screen. */
 export function contextOf(app: AppModel, port: InterviewPort): KeyContext {
-  const { model } = app;
+  const model = app.current();
   if (model.overlay?.kind === 'help') return 'help';
   if (model.overlay?.kind === 'jump') return 'jump';
   const s = model.session;
@@ -31,26 +33,36 @@ export interface InputDeps {
   services: Services;
   /** Rows the review and help can show at once, for paging. */
   page: number;
+  /** The largest first line the review and the help can scroll to. */
+  maxTop: { review: number; help: number };
   onReport(): void;
 }
 
 export function useAppInput(deps: InputDeps) {
-  const { app } = deps;
+  // The handler reads the latest render's values: a key can arrive before Ink has swapped in
+  // the handler of the render that just happened.
+  const latest = useRef(deps);
+  latest.current = deps;
   useInput(
-    (input, key) => {
-      const ctx = contextOf(app, deps.port);
-      const binding = findBinding(ctx, input, key);
-      if (binding) return run(binding.command, ctx, deps);
-      typed(ctx, input, key, deps);
+    (chunk, chunkKey) => {
+      // One read can hold several keys (typing ahead, a paste); each is handled in turn against
+      // the state the previous one left (the model's ref is updated synchronously).
+      for (const [input, key] of splitKeys(chunk, chunkKey)) {
+        const d = latest.current;
+        const ctx = contextOf(d.app, d.port);
+        const binding = findBinding(ctx, input, key);
+        if (binding) run(binding.command, ctx, d);
+        else typed(ctx, input, key, d);
+      }
     },
-    { isActive: !app.model.leaving },
+    { isActive: !deps.app.current().leaving },
   );
 }
 
 /** A key that is not a binding: a choice letter, or text for the field on screen. */
 function typed(ctx: KeyContext, input: string, key: Key, d: InputDeps) {
   const { app, port } = d;
-  const m = app.model;
+  const m = app.current();
   if (ctx === 'choice' && m.session && !key.ctrl && !key.meta) {
     const q = port.current(m.session.state)!;
     const c = q.choices!.find((c) => c.key.toLowerCase() === input.toLowerCase());
@@ -59,12 +71,14 @@ function typed(ctx: KeyContext, input: string, key: Key, d: InputDeps) {
   }
   if (ctx === 'question' && m.session) {
     const line = editLine(m.session.line, input, key);
-    if (line !== m.session.line) app.update((x) => (x.session ? { ...x, session: { ...x.session, line } } : x));
+    if (line !== m.session.line)
+      app.update((x) => (x.session ? { ...x, session: { ...x.session, line } } : x));
     return;
   }
   if (ctx === 'jump' && m.overlay?.kind === 'jump') {
     const filter = editLine(m.overlay.filter, input, key);
-    if (filter !== m.overlay.filter) app.update((x) => ({ ...x, overlay: { kind: 'jump', filter, selected: 0 } }));
+    if (filter !== m.overlay.filter)
+      app.update((x) => ({ ...x, overlay: { kind: 'jump', filter, selected: 0 } }));
     return;
   }
   if (ctx === 'path' && m.home.path) {
@@ -75,16 +89,18 @@ function typed(ctx: KeyContext, input: string, key: Key, d: InputDeps) {
 
 function move(d: InputDeps, ctx: KeyContext, by: number) {
   const { app } = d;
-  const m = app.model;
+  const m = app.current();
   if (ctx === 'help' && m.overlay?.kind === 'help') {
-    const top = Math.max(0, m.overlay.top + by);
+    const top = Math.max(0, Math.min(d.maxTop.help, m.overlay.top + by));
     app.update((x) => ({ ...x, overlay: { kind: 'help', top } }));
   } else if (ctx === 'jump' && m.overlay?.kind === 'jump' && m.session) {
     const n = filterQuestions(d.port.states(m.session.state), m.overlay.filter.value).length;
     const selected = Math.max(0, Math.min(n - 1, m.overlay.selected + by));
-    app.update((x) => (x.overlay?.kind === 'jump' ? { ...x, overlay: { ...x.overlay, selected } } : x));
+    app.update((x) =>
+      x.overlay?.kind === 'jump' ? { ...x, overlay: { ...x.overlay, selected } } : x,
+    );
   } else if (ctx === 'review' && m.session) {
-    const reviewTop = Math.max(0, m.session.reviewTop + by);
+    const reviewTop = Math.max(0, Math.min(d.maxTop.review, m.session.reviewTop + by));
     app.update((x) => (x.session ? { ...x, session: { ...x.session, reviewTop } } : x));
   } else if (ctx === 'choice' && m.session) {
     const n = d.port.current(m.session.state)?.choices?.length ?? 1;
@@ -98,10 +114,13 @@ function move(d: InputDeps, ctx: KeyContext, by: number) {
 
 function run(command: Command, ctx: KeyContext, d: InputDeps) {
   const { app, port, services } = d;
-  const m = app.model;
+  const m = app.current();
   switch (command) {
     case 'help':
-      return app.update((x) => ({ ...x, overlay: x.overlay?.kind === 'help' ? undefined : { kind: 'help', top: 0 } }));
+      return app.update((x) => ({
+        ...x,
+        overlay: x.overlay?.kind === 'help' ? undefined : { kind: 'help', top: 0 },
+      }));
     case 'save-leave':
     case 'quit':
       return void app.leave();
@@ -134,7 +153,10 @@ function run(command: Command, ctx: KeyContext, d: InputDeps) {
       return app.setMode(m.mode === 'guided' ? 'brisk' : 'guided');
     case 'jump':
     case 'to-question':
-      return app.update((x) => ({ ...x, overlay: { kind: 'jump', filter: app.emptyLine, selected: 0 } }));
+      return app.update((x) => ({
+        ...x,
+        overlay: { kind: 'jump', filter: app.emptyLine, selected: 0 },
+      }));
     case 'new-case':
       return void services.newCase().then(app.enter);
     case 'demo':
@@ -143,9 +165,14 @@ function run(command: Command, ctx: KeyContext, d: InputDeps) {
       return app.setHome({ path: app.emptyLine, error: undefined });
     case 'restore': {
       const row = m.home.rows?.[m.home.selected];
-      if (!row?.problem) return app.setHome({ error: 'Only a damaged case file has a backup to restore.' });
+      if (!row?.problem)
+        return app.setHome({ error: 'Only a damaged case file has a backup to restore.' });
       return void services.restoreBackup(row.id).then((r) => {
-        app.setHome(r.ok ? { message: `Restored ${row.id} from its backup copy.`, error: undefined } : { error: r.message });
+        app.setHome(
+          r.ok
+            ? { message: `Restored ${row.id} from its backup copy.`, error: undefined }
+            : { error: r.message },
+        );
         void app.refresh();
       });
     }
@@ -158,11 +185,13 @@ function run(command: Command, ctx: KeyContext, d: InputDeps) {
 
 function submit(ctx: KeyContext, d: InputDeps) {
   const { app, port, services } = d;
-  const m = app.model;
+  const m = app.current();
   if (ctx === 'question' || ctx === 'choice') {
     if (m.session) app.act(submitAction(port, m.session));
   } else if (ctx === 'jump' && m.overlay?.kind === 'jump' && m.session) {
-    const hit = filterQuestions(port.states(m.session.state), m.overlay.filter.value)[m.overlay.selected];
+    const hit = filterQuestions(port.states(m.session.state), m.overlay.filter.value)[
+      m.overlay.selected
+    ];
     if (!hit) return;
     app.update((x) => ({ ...x, overlay: undefined }));
     app.act({ type: 'jump', id: hit.id });
