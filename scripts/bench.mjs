@@ -14,7 +14,8 @@ import { autosave, sampling } from './bench/inprocess-figures.mjs';
 import { keypress } from './bench/keypress.mjs';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
-const binary = join(root, 'dist/skidcase.js');
+// SKIDCASE_BENCH_BINARY measures another build of the same CLI (a debugging aid).
+const binary = process.env.SKIDCASE_BENCH_BINARY ?? join(root, 'dist/skidcase.js');
 if (!existsSync(binary)) {
   console.error('dist/skidcase.js is missing: run `npm run bench` (it builds first) or `npm run build`.');
   process.exit(1);
@@ -32,7 +33,16 @@ const ctx = {
 mkdirSync(ctx.sessions);
 mkdirSync(ctx.config);
 
-const steps = [startScreen, solveJson, keypress, autosave, sampling];
+// BENCH_ONLY=keypress,autosave runs only those steps (when working on one figure).
+const only = process.env.BENCH_ONLY?.split(',');
+const steps = [startScreen, solveJson, keypress, autosave, sampling].filter((s) => !only || only.includes(s.name));
+const FIGURE_NAMES = {
+  startScreen: 'start screen painted (pty)',
+  solveJson: 'solve --json, 3 segments',
+  keypress: 'key press to frame, 20 segments (p95)',
+  autosave: 'autosave',
+  sampling: 'uncertainty run, 100,000 samples',
+};
 const results = [];
 try {
   for (const step of steps) {
@@ -41,7 +51,7 @@ try {
     try {
       r = await step(ctx);
     } catch (e) {
-      r = { figure: step.name, available: false, note: `failed: ${e instanceof Error ? e.message : String(e)}` };
+      r = { figure: FIGURE_NAMES[step.name] ?? step.name, available: false, note: `failed: ${e instanceof Error ? e.message : String(e)}` };
     }
     for (const one of [r].flat()) {
       results.push(one);

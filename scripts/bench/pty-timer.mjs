@@ -25,8 +25,15 @@ export function spawnTimed(argv, { cols = 120, rows = 40, cwd = process.cwd(), e
   const state = { t0, lastData: undefined, chunks: 0, exited: false, term, pty: p };
   term.onData((d) => p.write(d));
   p.onData((d) => {
-    state.lastData = performance.now();
+    const now = performance.now();
+    state.lastData = now;
     state.chunks++;
+    // End of a synchronized-output frame (DEC mode 2026, which Ink uses where supported).
+    if (d.includes('\u001B[?2026l')) {
+      state.lastFrameEnd = now;
+      (state.frameEnds ??= []).push(now);
+      if (state.frameEnds.length > 64) state.frameEnds.shift();
+    }
     term.write(d);
   });
   state.exit = new Promise((resolve) =>
@@ -81,19 +88,31 @@ export async function timeToSettledScreen(argv, opts = {}) {
 }
 
 /**
- * Key press to repainted frame: sends `key`, then times the burst of output it causes (to the
- * last chunk before `quietMs` of silence). Keys are spaced by the quiet wait, as a person's are,
- * so each press gets its own frame rather than being merged by the renderer's throttle.
+ * Key press to repainted frame: sends `key`, then times the first complete frame it causes (the
+ * end of a synchronized-output frame, or else the first output), and the end of the whole burst
+ * of output (to the last chunk before `quietMs` of silence: a renderer's trailing frame counts
+ * there). Keys are spaced by the quiet wait, as a person's are, so each gets its own frame.
  */
 export async function keyToFrame(s, key, { quietMs = 60, timeoutMs = 5_000 } = {}) {
   const before = s.chunks;
+  const frameBefore = s.lastFrameEnd;
+  let firstChunk;
   const t0 = performance.now();
   s.pty.write(key);
   const deadline = t0 + timeoutMs;
   for (;;) {
     await tick(1);
     const now = performance.now();
-    if (s.chunks > before && now - s.lastData >= quietMs) return s.lastData - t0;
+    if (firstChunk === undefined && s.chunks > before) firstChunk = s.lastData;
+    if (s.chunks > before && now - s.lastData >= quietMs) {
+      const frame = s.lastFrameEnd !== frameBefore && s.lastFrameEnd !== undefined ? firstFrameEnd(s, t0) : firstChunk;
+      return { frame: frame - t0, burst: s.lastData - t0 };
+    }
     if (now > deadline) return undefined;
   }
+}
+
+/** The first frame end recorded after t0 (frame ends are kept in order). */
+function firstFrameEnd(s, t0) {
+  return s.frameEnds?.find((t) => t >= t0) ?? s.lastFrameEnd;
 }

@@ -5,15 +5,15 @@ import { loadCaseText, type Case } from '../case/load.js';
 import { solveCase } from '../engine/solve-case.js';
 import type { CaseSolution } from '../engine/types.js';
 import { buildReport } from '../report/build.js';
-import { figuresOf, type Figure } from '../report/doc.js';
-import { renderReport, type ReportFormat } from '../report/render.js';
+import { REPORT_FORMATS, renderReport, type ReportFormat } from '../report/render.js';
 import { toolVersion } from '../report/version.js';
-import { writeFiles, type OutFile } from '../report/write-files.js';
+import { writeReport } from '../report/write-report.js';
 import { caseFilePath, checkId } from '../store/case-path.js';
 
-/** Exit codes of `skidcase report`: as `solve`, plus 1 when an output file is in the way. */
+/** Exit codes of `skidcase report`: as `solve`, plus 1 when an output file is in the way (or a bad option). */
 export const REPORT_EXIT = { done: 0, refused: 1, invalid: 2, uncomputable: 3 } as const;
 
+/** Options of `skidcase report`, as the CLI parsed them. */
 export interface ReportOptions {
   format: ReportFormat;
   /** Write here instead of stdout; pictures go beside it as `<out minus extension>-<name>.svg`. */
@@ -26,6 +26,7 @@ export interface ReportOptions {
   reactionTime?: number;
 }
 
+/** Where the command prints: standard output and standard error. */
 export interface ReportIo {
   out(s: string): void;
   err(s: string): void;
@@ -91,43 +92,36 @@ async function loadAndSolve(target: string, sessionsDir: string, io: ReportIo): 
   return { ok: true, case: loaded.case, solution, file: where.file };
 }
 
-/** `report.md` -> `report-<name>.svg`, beside it. */
-export function figurePath(out: string, f: Figure): string {
-  const p = path.parse(out);
-  return path.join(p.dir, `${p.name}-${f.name}.svg`);
-}
-
 /**
  * `skidcase report FILE|ID [--format md|txt|json|html] [--out PATH] [--force]`. Recomputes every
  * figure from the case file and prints the report, or writes it (and its SVG pictures beside it)
  * atomically. Never replaces an existing file without `force`: exit 1 naming the file, nothing
  * written. Exit 2 for a missing or invalid case file, 3 when a figure cannot be computed.
+ * @example
+ * await reportCommand('harbor-road-0412', { format: 'html', out: 'harbor.html', force: false, sessionsDir: 'sessions' }, io) // 0
  */
 export async function reportCommand(
   target: string,
   opts: ReportOptions,
   io: ReportIo,
 ): Promise<number> {
+  if (!REPORT_FORMATS.includes(opts.format)) {
+    io.err(`skidcase: --format must be one of ${REPORT_FORMATS.join(', ')}\n`);
+    return REPORT_EXIT.refused;
+  }
   const loaded = await loadAndSolve(target, opts.sessionsDir, io);
   if (!loaded.ok) return loaded.code;
   const doc = buildReport(loaded.case, loaded.solution, {
     toolVersion: toolVersion(),
     generatedAt: new Date().toISOString(),
-    caseFile: target,
+    caseFile: loaded.file,
     ...(opts.reactionTime !== undefined ? { extras: { reactionTime: opts.reactionTime } } : {}),
   });
   if (opts.out === undefined) {
     io.out(renderReport(doc, opts.format));
     return REPORT_EXIT.done;
   }
-  const out = opts.out;
-  // HTML carries its pictures inline and JSON in the document; the other forms get files.
-  const pictures =
-    opts.format === 'md' || opts.format === 'txt' ? figuresOf(doc).filter((f) => f.svg) : [];
-  const files: OutFile[] = pictures.map((f) => ({ path: figurePath(out, f), content: f.svg }));
-  const name = (f: Figure) => (f.svg ? path.basename(figurePath(out, f)) : undefined);
-  files.push({ path: out, content: renderReport(doc, opts.format, name) });
-  const r = await writeFiles(files, opts.force);
+  const r = await writeReport(doc, opts.format, opts.out, opts.force);
   if (!r.ok && r.kind === 'exists') {
     for (const p of r.paths)
       io.err(`skidcase: ${p} already exists; not replaced (use --force to replace it)\n`);

@@ -39,7 +39,8 @@ export async function solveCommand(
     io.err(`skidcase: ${readError(file, e)}\n`);
     return EXIT.invalid;
   }
-  const loaded = loadCaseText(text);
+  // A byte-order mark from a Windows editor is not part of the JSON.
+  const loaded = loadCaseText(text.replace(/^\uFEFF/, ''));
   if (!loaded.ok) {
     io.err(`skidcase: ${file} is not a valid case file\n`);
     for (const issue of loaded.issues) io.err(`${describeIssue(issue)}\n`);

@@ -157,7 +157,10 @@ export const DRAG_TABLE: readonly DragTableRow[] = [
 export const DRAG_TABLE_NOTE =
   'A guide, not a measurement. The table’s provenance is thin (its compiler could not say who tested) and newer tests put dry asphalt near 0.72-0.78. Measure on scene where possible; pick the value and the range yourself. Concrete in good condition gives the highest drag factor; the more slick the surface, the lower (common practice).';
 
-/** The row with this key, or undefined (a free-text surface label is allowed in a case). */
+/**
+ * The row with this key, or undefined (a free-text surface label is allowed in a case).
+ * @example dragTableRow('gravel-loose')?.any // { low: 0.4, high: 0.7 }
+ */
 export function dragTableRow(key: string): DragTableRow | undefined {
   return DRAG_TABLE.find((r) => r.key === key);
 }

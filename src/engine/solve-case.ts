@@ -10,6 +10,9 @@ import type { AnalysisOutcome, CaseSolution } from './types.js';
  * Solves analysis i of a case: its start speed with range, the "at least" minimum (low end
  * rounded down), every step, assumptions, warnings and the model for sensitivity. A figure that
  * cannot be computed is `{ ok: false, reason, path }`, never a NaN.
+ * @example
+ * const r = solveAnalysis(c, 0);
+ * if (r.ok) console.log(r.solution.minimum); else console.error(r.reason);
  */
 export function solveAnalysis(c: Case, i: number): AnalysisOutcome {
   const a = c.analyses[i];
@@ -28,6 +31,9 @@ export function solveAnalysis(c: Case, i: number): AnalysisOutcome {
  * Solves every analysis of a validated case and compares with the posted limit:
  * `exceededAtMinimum` is true when some analysis's low end is above the limit. The file's unknown
  * fields become warnings naming their paths.
+ * @example
+ * const loaded = loadCaseText(text);
+ * if (loaded.ok) solveCase(loaded.case).analyses.forEach((r) => r.ok && r.solution.speed);
  */
 export function solveCase(c: Case): CaseSolution {
   const analyses = c.analyses.map((_, i) => solveAnalysis(c, i));

@@ -60,18 +60,22 @@ export function solveSkid(c: CaseV1, i: number, a: SkidV1): AnalysisOutcome {
   } else {
     lengths = a.segments.map((s) => spread(s.length!));
     const total = sumRanges(lengths);
-    if (a.segments.length > 1)
-      steps.push(
-        makeStep({
-          name: 'Slide distance',
-          formula: 'd = d_1 + d_2 + …',
-          substituted: `d = ${lengths.map((l) => formatNumber(l.value, 'length')).join(' + ')} = ${formatNumber(total.value, 'length')} ${u.length}`,
-          inputs: Object.fromEntries(lengths.map((l, j) => [`d_${j + 1}`, input(l, u.length)])),
-          result: total,
-          unit: u.length,
-          why: 'the segments slid over, in order of travel, end to end',
-        }),
-      );
+    const several = a.segments.length > 1;
+    steps.push(
+      makeStep({
+        name: 'Slide distance',
+        formula: several ? 'd = d_1 + d_2 + …' : 'd = the segment’s measured length',
+        substituted: several
+          ? `d = ${lengths.map((l) => formatNumber(l.value, 'length')).join(' + ')} = ${formatNumber(total.value, 'length')} ${u.length}`
+          : `d = ${formatNumber(total.value, 'length')} ${u.length}`,
+        inputs: Object.fromEntries(lengths.map((l, j) => [`d_${j + 1}`, input(l, u.length)])),
+        result: total,
+        unit: u.length,
+        why: several
+          ? 'the segments slid over, in order of travel, end to end'
+          : 'the length measured for the one surface slid over',
+      }),
+    );
     if (
       fromMarks &&
       Math.abs(total.value - fromMarks.distance.value) > MARKS_MISMATCH * fromMarks.distance.value

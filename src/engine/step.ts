@@ -34,13 +34,3 @@ export function makeStep(p: {
     why: p.why,
   };
 }
-
-/** Applies f to the value, low and high ends (f must be rising in its argument). */
-export function mapRange(r: Range, f: (x: number) => number): Range {
-  return { value: f(r.value), low: f(r.low), high: f(r.high) };
-}
-
-/** True when every end is a finite number. */
-export function finiteRange(r: Range): boolean {
-  return Number.isFinite(r.value) && Number.isFinite(r.low) && Number.isFinite(r.high);
-}

@@ -93,7 +93,11 @@ export function pathRadius(
   });
 }
 
-/** Critical speed for single numbers: sqrt(K R (f + e)/(1 − f e)); undefined outside its domain. */
+/**
+ * Critical speed for single numbers: sqrt(K R (f + e)/(1 − f e)), e a decimal; undefined outside
+ * its domain (R ≤ 0, f + e ≤ 0, 1 − f e ≤ 0).
+ * @example criticalSpeedOf(100, 0.6, 0, 'imperial') // 30
+ */
 export function criticalSpeedOf(
   R: number,
   f: number,
@@ -167,7 +171,9 @@ export function criticalSpeed(
 /**
  * What a reading error of 1 inch (imperial) or 1 cm (metric) in the middle ordinate does to the
  * radius and the critical speed (dR/R is about −dM/M; S moves about half as much). Undefined when
- * the shifted ordinate leaves the valid arc.
+ * the shifted ordinate leaves the valid arc. `e` is a decimal; `halfTrack` is T/2 when the path
+ * adjustment is used.
+ * @example ordinateSensitivity(30, 1 / 3, 0.7, 0, 'imperial')?.radiusPercent.plus // about −20
  */
 export function ordinateSensitivity(
   C: number,

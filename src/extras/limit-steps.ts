@@ -50,8 +50,7 @@ export function walkSteps(
   system: UnitSystem,
   C: number,
 ): Outcome<{ steps: Step[] }> {
-  const u: Units =
-    system === 'imperial' ? { length: 'ft', speed: 'mph' } : { length: 'm', speed: 'km/h' };
+  const u = unitsOf(system);
   const steps: Step[] = [];
   for (const leg of s.walk.legs) {
     const j = leg.stretch.segment;

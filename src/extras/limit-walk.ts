@@ -40,15 +40,10 @@ export interface Walk {
 }
 
 /**
- * Braking from speed V at `brakeAt` over the stretches: on each, v_out² = v_in² - C L (f n + G/100)
+ * Braking from speed V over the stretches (the first starts where braking starts): on each, v_out² = v_in² - C L (f n + G/100)
  * until v² reaches 0 at x = from + v_in² / (C (f n + G/100)). C is the slide constant (30 or 254).
  */
-export function walkToRest(
-  V: number,
-  brakeAt: number,
-  stretches: readonly Stretch[],
-  C: number,
-): Walk {
+export function walkToRest(V: number, stretches: readonly Stretch[], C: number): Walk {
   let v2 = V * V;
   const legs: Walk['legs'] = [];
   for (const s of stretches) {

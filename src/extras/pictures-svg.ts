@@ -3,7 +3,8 @@ import type { SensitivityRow } from './sensitivity.js';
 import { profileOf, speedAlong } from './slide-profile.js';
 import { arcOffset } from './yaw-sketch.js';
 import { line, px, svgDocument, text } from './svg.js';
-import { num, signed } from './text-fit.js';
+import { changeText } from './sensitivity-bars.js';
+import { num } from './text-fit.js';
 
 export interface SvgOptions {
   width?: number;
@@ -168,15 +169,7 @@ export function sensitivitySvg(rows: readonly SensitivityRow[], opts: SvgOptions
       `<rect x="${px(axis - dn)}" y="${px(y + 8)}" width="${px(dn)}" height="18" fill="#888"/>`,
     );
     body.push(`<rect x="${px(axis)}" y="${px(y + 8)}" width="${px(up)}" height="18" fill="#333"/>`);
-    const none = r.atLow === undefined && r.atHigh === undefined;
-    body.push(
-      text(
-        W - 10,
-        y + 20,
-        `${signed(none ? undefined : r.down, 1)} / ${signed(none ? undefined : r.up, 1)}${su}`,
-        'end',
-      ),
-    );
+    body.push(text(W - 10, y + 20, changeText(r) + su, 'end'));
   });
   return svgDocument(W, H, title, body);
 }

@@ -32,6 +32,12 @@ function bar(
   return padEnd(body + (half ? g.rightHalf : ''), width);
 }
 
+/** "-4.1 / +3.8": the drop and the rise, or "— / —" when neither end could be computed. */
+export function changeText(r: SensitivityRow): string {
+  const none = r.atLow === undefined && r.atHigh === undefined;
+  return `${signed(none ? undefined : r.down, 1)} / ${signed(none ? undefined : r.up, 1)}`;
+}
+
 /**
  * The sensitivity rows as a horizontal bar chart in plain text: one line per input with its key,
  * its label, a bar left of the axis for how far the speed drops and right of it for how far it
@@ -41,8 +47,8 @@ function bar(
  *
  * @example
  * sensitivityBars(sensitivity(solution), 60, { speedUnit: 'mph' })
- * // [ 'speed change, each input to its low and high end  ◀ lower │ higher ▶',
- * //   'M  middle ordinate      ████▐│███▌   -4.1 / +3.8 mph', ... ]
+ * // [ 'Change in speed, each input at its ends (◀ lower │ higher ▶)',
+ * //   'M     middle ordinate     ████████▐│███████▌  -4.1 / +3.8 mph', ... ]
  */
 export function sensitivityBars(
   rows: SensitivityRow[],
@@ -54,10 +60,7 @@ export function sensitivityBars(
   const unit = opts.speedUnit ? ` ${opts.speedUnit}` : '';
   if (rows.length === 0) return [clip('No input has a range: the speed has no spread to show.', w)];
 
-  const figures = rows.map(
-    (r) =>
-      `${signed(r.atLow === undefined && r.atHigh === undefined ? undefined : r.down, 1)} / ${signed(r.atLow === undefined && r.atHigh === undefined ? undefined : r.up, 1)}${unit}`,
-  );
+  const figures = rows.map((r) => changeText(r) + unit);
   const figW = Math.max(...figures.map(textWidth));
   const keyW = Math.min(8, Math.max(...rows.map((r) => textWidth(r.key))));
   // Room left for the label and the bars, after key, figures and the gaps between columns.

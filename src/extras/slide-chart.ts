@@ -2,6 +2,14 @@ import type { AnalysisSolution } from '../engine/types.js';
 import { profileOf, speedAlong } from './slide-profile.js';
 import { blankGrid, clip, gridLines, num, put, textWidth } from './text-fit.js';
 
+/** True when `n` cells of row `r` from column `c` hold nothing but spaces or dotted lines. */
+function isFree(grid: string[][], c: number, r: number, n: number, sep: string): boolean {
+  const row = grid[r];
+  if (!row || c < 0 || c + n > row.length) return false;
+  for (let k = c; k < c + n; k++) if (row[k] !== ' ' && row[k] !== sep) return false;
+  return true;
+}
+
 export interface SlideChartOptions {
   /** The surface of each segment, in order (segmentLabels(case, id) gives the case's names). */
   segmentLabels?: readonly string[];
@@ -65,12 +73,19 @@ export function speedAlongSlideChart(
     const s = speedAlong(b, (c / (plotW - 1)) * total);
     put(grid, yW + 1 + c, rowOf(s), g.dot);
   }
-  // Speeds at the boundaries, just right of each dotted line (the last one left of it).
+  // Speeds at the boundaries, beside each dotted line, on the first nearby row where they cover
+  // neither the curve nor another label (skipped when there is none).
   b.forEach((x, j) => {
     const text = num(x.speed.value, 1);
     const c = colOf(x.at);
-    const r = Math.max(0, Math.min(plotH - 1, rowOf(x.speed.value) - 1));
-    put(grid, j === b.length - 1 ? c - textWidth(text) : c + 1, r, text);
+    const col = j === b.length - 1 ? c - textWidth(text) : c + 1;
+    const r0 = rowOf(x.speed.value);
+    for (const dr of [-1, -2, 1, 2, -3, 3]) {
+      const r = r0 + dr;
+      if (r < 0 || r >= plotH || !isFree(grid, col, r, textWidth(text), g.sep)) continue;
+      put(grid, col, r, text);
+      break;
+    }
   });
   // Distances under the ticks, then surfaces under their stretches; later labels skip overlaps.
   let free = 0;

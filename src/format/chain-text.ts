@@ -86,6 +86,7 @@ export function formatPostedLimit(solution: CaseSolution): string | undefined {
  * The human-readable chain `solve` prints: per analysis every step (name, formula, numbers,
  * result with range, why), the "at least" figure, assumptions and warnings; then the posted limit
  * comparison, the file's warnings and the cautions.
+ * @example process.stdout.write(formatChainText(solveCase(c), c));
  */
 export function formatChainText(solution: CaseSolution, c: Case): string {
   const u = solution.units;

@@ -39,12 +39,18 @@ export function checkItem(raw: RawItem, spec: QuantitySpec, ctx: ReadContext): R
   const { field } = ctx;
   if (raw.form === 'range' && r.low! > r.high!) {
     const sep = raw.lo.negative || raw.hi.negative ? ' to ' : '-';
-    return new ReadError(`${field}: the low end comes first; write ${raw.hi.text}${sep}${raw.lo.text}`);
+    return new ReadError(
+      `${field}: the low end comes first; write ${raw.hi.text}${sep}${raw.lo.text}`,
+    );
   }
   if (raw.form === 'paren' && r.low! > r.high!)
-    return new ReadError(`${field}: the low end comes first in the brackets; write (${raw.hi.text}-${raw.lo.text})`);
+    return new ReadError(
+      `${field}: the low end comes first in the brackets; write (${raw.hi.text}-${raw.lo.text})`,
+    );
   if (raw.form === 'paren' && (r.value < r.low! || r.value > r.high!))
-    return new ReadError(`${field}: ${raw.v.text} is outside its range ${raw.lo.text}-${raw.hi.text}`);
+    return new ReadError(
+      `${field}: ${raw.v.text} is outside its range ${raw.lo.text}-${raw.hi.text}`,
+    );
 
   // A typed "-0" is level, not a signed zero.
   if (r.value === 0) r.value = 0;
@@ -52,11 +58,15 @@ export function checkItem(raw: RawItem, spec: QuantitySpec, ctx: ReadContext): R
     r.low === undefined || (r.low === r.value && r.high === r.value)
       ? r.value
       : { value: r.value, low: r.low, high: r.high! };
-  const converted = r.converted ? `${raw.text} = ${showQuantity(value, unit, raw.form === 'range')}` : undefined;
+  const converted = r.converted
+    ? `${raw.text} = ${showQuantity(value, unit, raw.form === 'range')}`
+    : undefined;
   const after = converted ? ` (${converted})` : '';
 
   if (spec.signed === false && [r.value, r.low, r.high].some((n) => n !== undefined && n < 0))
-    return new ReadError(`${field}: no minus sign here; ${spec.negativeHint ?? DEFAULT_NEGATIVE_HINT}`);
+    return new ReadError(
+      `${field}: no minus sign here; ${spec.negativeHint ?? DEFAULT_NEGATIVE_HINT}`,
+    );
   const ends: [number | undefined, string][] = [
     [r.value, field],
     [r.low, `${field} (low)`],
@@ -67,7 +77,11 @@ export function checkItem(raw: RawItem, spec: QuantitySpec, ctx: ReadContext): R
     const msg = ruleViolation({ ...spec.rule, what }, n);
     if (!msg) continue;
     const decimalHint =
-      spec.kind === 'factor' && raw.form === 'single' && spec.rule.max !== undefined && n > spec.rule.max && n <= 100
+      spec.kind === 'factor' &&
+      raw.form === 'single' &&
+      spec.rule.max !== undefined &&
+      n > spec.rule.max &&
+      n <= 100
         ? `; write it as a decimal, e.g. ${showNumber(n / 100)} for ${showNumber(n)}%`
         : '';
     return new ReadError(`${msg}${after}${decimalHint}`);

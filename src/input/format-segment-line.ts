@@ -60,7 +60,12 @@ export function formatSegmentLine(
     if (drag === undefined) return undefined;
     const label = s.label?.trim();
     if (label !== undefined && /[[\]\n]/.test(label)) return undefined;
-    const words = [s.length === undefined ? '' : quantityText(s.length), drag, gradeText(s.grade), label ? `[${label}]` : ''];
+    const words = [
+      s.length === undefined ? '' : quantityText(s.length),
+      drag,
+      gradeText(s.grade),
+      label ? `[${label}]` : '',
+    ];
     parts.push(words.filter((w) => w !== '').join(' '));
   }
   return parts.join(', ');

@@ -13,13 +13,16 @@ export const QUICK_ENTRY_HELP: readonly string[] = [
   '            LENGTH @DRAG GRADE [label]',
   '            48 @0.74 +2%, 31 @0.55 [gravel], 22 @0.40 -3%',
   '  LENGTH    in the case unit, or with a suffix: 15 m, 48 ft 6 in',
-  '  @DRAG     a decimal: @0.74; with its range: @0.70-0.78 or @0.74 (0.70-0.80)',
-  '            from the reference table: @gravel-loose, @asphalt-dry-travelled/over30',
-  '            a table row with your own pick: @gravel-loose=0.5 or @gravel-loose=0.45-0.6',
-  '  GRADE     signed percent, + uphill in the direction of travel: +2%, -3%; none = level',
+  '  @DRAG     a decimal: @0.74; with a range: @0.70-0.78 or @0.74 (0.70-0.80)',
+  '            a table row: @gravel-loose, @asphalt-dry-travelled/over30',
+  '            your pick in a row: @gravel-loose=0.5, @gravel-loose=0.45-0.6',
+  '            (/under30 or /over30: the speed band, for rows that give two)',
+  '  GRADE     signed percent, + uphill in the direction of travel: +2%, -3%',
+  '            no grade means level; a range: -3% ± 0.5 or -3% (-4 to -2)',
   '  [label]   a surface name shown in the report (optional)',
-  '  A single segment may leave out its length: @0.74 -1% (the length comes from the marks).',
-  'Ranges on any number: 0.65-0.80, 0.65 to 0.80, 0.72 (0.65-0.80), 80 +/- 1, 80 ± 1.',
+  '  A slide of one segment may leave out its length (taken from the marks):',
+  '            @0.74 -1%',
+  'Ranges: 0.65-0.80, 0.65 to 0.80, 0.72 (0.65-0.80), 80 +/- 1, 80 ± 1.',
   'Decimals take a dot: 0.72, not 0,72.',
 ];
 
@@ -35,17 +38,23 @@ const KIND_LABEL: Record<QuantityKind, string> = {
 };
 
 const NOTES: Partial<Record<QuantityKind, string>> = {
-  length: "; 12 ft 6 in and 12' 6\" also work",
+  length: '; also 12 ft 3 1/8 in',
   percent: '; degrees of slope become percent (100 × tan)',
-  factor: ' for decelerometer readings; otherwise a plain decimal such as 0.72 (not 72%)',
   time: '; no suffix means seconds',
-  weight: '; newtons are read as kilograms-force (÷ 9.80665)',
+  weight: ' (N read as kg-force, ÷ 9.80665)',
+};
+
+/** Lines written out where the suffix list alone would mislead. */
+const WHOLE_LINE: Partial<Record<QuantityKind, string>> = {
+  factor: 'Drag factors: a plain decimal such as 0.72, not 72%; a reading may end in g',
 };
 
 /** Accepted suffixes for each kind, one line per kind. */
 export const UNIT_SUFFIX_HELP: readonly string[] = (
   ['length', 'speed', 'percent', 'factor', 'time', 'weight'] as const
-).map((k) => `${KIND_LABEL[k]}: ${unitsFor(k).length ? suffixList(k) : 'no unit'}${NOTES[k] ?? ''}`);
+).map(
+  (k) => `${KIND_LABEL[k]}: ${unitsFor(k).length ? suffixList(k) : 'no unit'}${NOTES[k] ?? ''}`,
+);
 
 /** The accepted suffixes of one kind, for a prompt's hint: `ft (or '), in (or "), yd, m, ...`. */
 export function unitSuffixes(kind: QuantityKind): string {

@@ -56,7 +56,9 @@ export function readItem(cur: Cursor, ctx: ReadContext, opts: ItemOptions): Read
     const tol = readMeasure(cur, ctx);
     if (tol instanceof ReadError) return tol;
     if (tol.explicitSign)
-      return new ReadError(`${ctx.field}: the tolerance after ± is a size without a sign, e.g. ${v.text} ± 1`);
+      return new ReadError(
+        `${ctx.field}: the tolerance after ± is a size without a sign, e.g. ${v.text} ± 1`,
+      );
     return { form: 'tol', v, tol, text: cur.text(start) };
   }
   if (isOp(t, 'lparen')) {
@@ -66,11 +68,14 @@ export function readItem(cur: Cursor, ctx: ReadContext, opts: ItemOptions): Read
     if (lo instanceof ReadError) return lo;
     if (cur.done()) return new ReadError(`${ctx.field}: the ( after ${v.text} has no closing )`);
     if (!isRangeSep(cur))
-      return new ReadError(`${ctx.field}: in brackets give the range as low-high, e.g. ${v.text} (${lo.text}-…)`);
+      return new ReadError(
+        `${ctx.field}: in brackets give the range as low-high, e.g. ${v.text} (${lo.text}-…)`,
+      );
     cur.take();
     const hi = readMeasure(cur, ctx);
     if (hi instanceof ReadError) return hi;
-    if (!isOp(cur.peek(), 'rparen')) return new ReadError(`${ctx.field}: the ( after ${v.text} has no closing )`);
+    if (!isOp(cur.peek(), 'rparen'))
+      return new ReadError(`${ctx.field}: the ( after ${v.text} has no closing )`);
     cur.take();
     return { form: 'paren', v, lo, hi, text: cur.text(start) };
   }
@@ -92,8 +97,15 @@ export interface Resolved {
   converted: boolean;
 }
 
-const measures = (r: RawItem): Measure[] =>
-  r.form === 'single' ? [r.v] : r.form === 'tol' ? [r.v, r.tol] : r.form === 'paren' ? [r.v, r.lo, r.hi] : [r.lo, r.hi];
+/** The measures of an item, in the order typed. */
+export const measures = (r: RawItem): Measure[] =>
+  r.form === 'single'
+    ? [r.v]
+    : r.form === 'tol'
+      ? [r.v, r.tol]
+      : r.form === 'paren'
+        ? [r.v, r.lo, r.hi]
+        : [r.lo, r.hi];
 
 /**
  * Brings every part into the case's unit. A bare number takes the unit typed elsewhere in the
@@ -105,12 +117,19 @@ export function resolveItem(raw: RawItem, ctx: ReadContext, caseUnit: string): R
   const simple = ms.every((m) => m.parts.length === 1) && new Set(typed.map((u) => u.id)).size <= 1;
   const bare = ms.find((m) => !m.parts[0]!.unit);
   if (bare && typed.length > 0 && !simple)
-    return new ReadError(`${ctx.field}: give a unit for '${bare.text}' too, e.g. ${bare.text} ${typed[typed.length - 1]!.id}`);
+    return new ReadError(
+      `${ctx.field}: give a unit for '${bare.text}' too, e.g. ${bare.text} ${typed[typed.length - 1]!.id}`,
+    );
   const shared: UnitDef | undefined = typed[0];
   const converted =
-    caseUnit !== '' && ms.some((m) => m.parts.some((p) => (p.unit ?? shared) !== undefined && (p.unit ?? shared)!.id !== caseUnit));
+    caseUnit !== '' &&
+    ms.some((m) =>
+      m.parts.some((p) => (p.unit ?? shared) !== undefined && (p.unit ?? shared)!.id !== caseUnit),
+    );
   const val = (m: Measure) => caseValue(m, ctx, shared);
-  const fix = (n: number) => (converted || raw.form !== 'single' ? tidy(n) : n);
+  // Typed numbers stay exactly as typed; converted and computed ones (a midpoint, the ends of a
+  // tolerance) lose the noise of binary arithmetic.
+  const fix = (n: number) => (converted ? tidy(n) : n);
   switch (raw.form) {
     case 'single':
       return { value: fix(val(raw.v)), converted };
@@ -119,7 +138,12 @@ export function resolveItem(raw: RawItem, ctx: ReadContext, caseUnit: string): R
     case 'range': {
       const low = val(raw.lo);
       const high = val(raw.hi);
-      return { value: fix((low + high) / 2), low: fix(low), high: fix(high), converted };
+      return {
+        value: low === high ? fix(low) : tidy((low + high) / 2),
+        low: fix(low),
+        high: fix(high),
+        converted,
+      };
     }
     case 'tol': {
       const vu = raw.v.parts[0]!.unit ?? shared;
@@ -130,13 +154,16 @@ export function resolveItem(raw: RawItem, ctx: ReadContext, caseUnit: string): R
         // degrees of slope (not a plain multiple of percent).
         const n = nativeValue(raw.v);
         const t = nativeValue(raw.tol);
-        const end = (x: number) => caseValue({ ...raw.v, negative: x < 0, parts: [{ n: Math.abs(x), unit: vu }] }, ctx, vu);
-        return { value: fix(value), low: fix(end(n - t)), high: fix(end(n + t)), converted };
+        const end = (x: number) =>
+          caseValue({ ...raw.v, negative: x < 0, parts: [{ n: Math.abs(x), unit: vu }] }, ctx, vu);
+        return { value: fix(value), low: tidy(end(n - t)), high: tidy(end(n + t)), converted };
       }
       if (tu?.toBase || vu?.toBase)
-        return new ReadError(`${ctx.field}: give the tolerance in the same unit as the value, e.g. ${raw.v.text} ± 0.5`);
+        return new ReadError(
+          `${ctx.field}: give the tolerance in the same unit as the value, e.g. ${raw.v.text} ± 0.5`,
+        );
       const delta = caseValue(raw.tol, ctx, shared);
-      return { value: fix(value), low: fix(value - delta), high: fix(value + delta), converted };
+      return { value: fix(value), low: tidy(value - delta), high: tidy(value + delta), converted };
     }
   }
 }

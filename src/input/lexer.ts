@@ -5,19 +5,10 @@
  */
 
 export type Op =
-  | 'minus'
-  | 'plus'
-  | 'pm'
-  | 'to'
-  | 'lparen'
-  | 'rparen'
-  | 'comma'
-  | 'semi'
-  | 'at'
-  | 'times'
-  | 'eq';
+  'minus' | 'plus' | 'pm' | 'to' | 'lparen' | 'rparen' | 'comma' | 'semi' | 'at' | 'times' | 'eq';
 
 export type Token =
+  /** A decimal (`80.5`, `.5`, `1e3`) or a fraction (`1/8`, `3 1/8`). */
   | { t: 'num'; text: string; value: number; at: number; end: number }
   /** Digits with a comma inside (`0,72`, `1,234.5`): read as an error with a hint. */
   | { t: 'commaNum'; text: string; at: number; end: number }
@@ -29,6 +20,8 @@ export type Token =
   | { t: 'key'; text: string; at: number; end: number }
   | { t: 'bad'; text: string; at: number; end: number; why: string };
 
+/** `3 1/8` and `1/8`: inches and middle ordinates are often read in eighths. */
+const FRACTION = /^(?:(\d+)\s+)?(\d+)\/(\d+)(?![\d./])/;
 const NUM = /^(?:\d+\.\d+|\d+\.(?![.\d])|\d+|\.\d+)(?:[eE][+-]?\d+)?/;
 const COMMA_NUM = /^\d+(?:,\d+)+(?:\.\d+)?/;
 const WORD = /^(?:[a-zµ°]+(?:\/[a-z]+)?|''|[%'"’”′″°])/i;
@@ -80,12 +73,20 @@ export function lex(text: string): Token[] {
 function next(text: string, rest: string, at: number, prev: Token | undefined): Token {
   if (rest[0] === '[') {
     const close = rest.indexOf(']');
-    if (close < 0) return { t: 'bad', text: rest, at, end: text.length, why: 'the [ has no closing ]' };
+    if (close < 0)
+      return { t: 'bad', text: rest, at, end: text.length, why: 'the [ has no closing ]' };
     return { t: 'label', text: rest.slice(1, close), at, end: at + close + 1 };
   }
   if (prev?.t === 'op' && prev.op === 'at') {
     const k = KEY.exec(rest);
     if (k) return { t: 'key', text: k[0], at, end: at + k[0].length };
+  }
+  const f = FRACTION.exec(rest);
+  if (f) {
+    const [text, whole, top, bottom] = f;
+    const end = at + text.length;
+    if (Number(bottom) === 0) return { t: 'bad', text, at, end, why: `'${text}' divides by zero` };
+    return { t: 'num', text, value: Number(whole ?? 0) + Number(top) / Number(bottom), at, end };
   }
   const c = COMMA_NUM.exec(rest);
   if (c) return { t: 'commaNum', text: c[0], at, end: at + c[0].length };
@@ -101,7 +102,8 @@ function next(text: string, rest: string, at: number, prev: Token | undefined): 
 }
 
 /** True for the word `to` (a range separator). */
-export const isToWord = (t: Token | undefined): boolean => t?.t === 'word' && t.text.toLowerCase() === 'to';
+export const isToWord = (t: Token | undefined): boolean =>
+  t?.t === 'word' && t.text.toLowerCase() === 'to';
 
 /** True for an operator token of one of these kinds. */
 export function isOp(t: Token | undefined, ...ops: Op[]): boolean {

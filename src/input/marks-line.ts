@@ -21,12 +21,12 @@ export interface MarksContext {
 }
 
 export type MarksResult =
-  | { ok: true; marks: Quantity[]; converted?: string }
-  | { ok: false; message: string };
+  { ok: true; marks: Quantity[]; converted?: string } | { ok: false; message: string };
 
 const isTimes = (t: Token | undefined) =>
   isOp(t, 'times') || (t?.t === 'word' && t.text.toLowerCase() === 'x');
-const isWhole = (t: Token | undefined) => t?.t === 'num' && Number.isInteger(t.value) && !t.text.includes('.');
+const isWhole = (t: Token | undefined) =>
+  t?.t === 'num' && Number.isInteger(t.value) && !t.text.includes('.');
 
 /**
  * Reads the marks' lengths, in the case's length unit.
@@ -41,7 +41,10 @@ export function parseMarksLine(text: string, ctx: MarksContext): MarksResult {
   const trimmed = text.trim();
   const max = ctx.maxMarks ?? 16;
   if (trimmed === '')
-    return { ok: false, message: 'marks: type each mark’s length, e.g. 94 92 95 93, or 4 x 80.5 for four equal marks' };
+    return {
+      ok: false,
+      message: 'marks: type each mark’s length, e.g. 94 92 95 93, or 4 x 80.5 for four equal marks',
+    };
   const tokens = lex(trimmed);
   const bad = badTokenMessage(tokens, 'marks');
   if (bad) return { ok: false, message: bad };
@@ -57,8 +60,11 @@ export function parseMarksLine(text: string, ctx: MarksContext): MarksResult {
   if (x >= 0) return equalMarks(tokens, trimmed, x, spec, max);
   const r = readList(new Cursor(tokens, trimmed), spec);
   if (r instanceof ReadError) return { ok: false, message: r.message };
-  if (r.values.length > max) return { ok: false, message: `give at most ${max} marks (${r.values.length} typed)` };
-  return r.notes.length ? { ok: true, marks: r.values, converted: r.notes.join('; ') } : { ok: true, marks: r.values };
+  if (r.values.length > max)
+    return { ok: false, message: `give at most ${max} marks (${r.values.length} typed)` };
+  return r.notes.length
+    ? { ok: true, marks: r.values, converted: r.notes.join('; ') }
+    : { ok: true, marks: r.values };
 }
 
 function equalMarks(
@@ -76,20 +82,33 @@ function equalMarks(
       ? `marks: the count comes first; write ${after!.text} x ${source.slice(0, tokens[x]!.at).trim()}`
       : undefined;
   if (x !== 1 || !isWhole(count))
-    return { ok: false, message: swapHint() ?? 'marks: write the number of marks, x, then the length, e.g. 4 x 80.5' };
+    return {
+      ok: false,
+      message: swapHint() ?? 'marks: write the number of marks, x, then the length, e.g. 4 x 80.5',
+    };
   const n = (count as { value: number }).value;
   if (n < 1 || n > max)
-    return { ok: false, message: swapHint() ?? `marks: the number of marks before x must be from 1 to ${max}` };
+    return {
+      ok: false,
+      message: swapHint() ?? `marks: the number of marks before x must be from 1 to ${max}`,
+    };
   const cur = new Cursor(tokens, source);
   cur.pos = 2;
   const ctx = { field: 'length', kind: spec.kind, units: spec.units };
-  if (cur.done()) return { ok: false, message: `marks: give the length after ${n} x, e.g. ${n} x 80.5` };
+  if (cur.done())
+    return { ok: false, message: `marks: give the length after ${n} x, e.g. ${n} x 80.5` };
   const raw = readItem(cur, ctx, { allowRange: spec.allowRange });
   if (raw instanceof ReadError) return { ok: false, message: `marks: ${raw.message}` };
-  if (!cur.done()) return { ok: false, message: `marks: after ${n} x give one length; cannot read '${cur.rest()}'` };
+  if (!cur.done())
+    return {
+      ok: false,
+      message: `marks: after ${n} x give one length; cannot read '${cur.rest()}'`,
+    };
   const checked = checkItem(raw, spec, ctx);
   if (checked instanceof ReadError) return { ok: false, message: `marks: ${checked.message}` };
   const v = checked.value;
   const marks = Array.from({ length: n }, () => (typeof v === 'number' ? v : { ...v }));
-  return checked.converted ? { ok: true, marks, converted: checked.converted } : { ok: true, marks };
+  return checked.converted
+    ? { ok: true, marks, converted: checked.converted }
+    : { ok: true, marks };
 }

@@ -94,13 +94,17 @@ function readNumber(cur: Cursor, ctx: ReadContext, start: number): Read<number> 
   }
   if (t.t === 'commaNum') return new ReadError(commaMessage(t.text, ctx));
   if (t.t === 'word' && /^(nan|inf|infinity)$/i.test(t.text))
-    return new ReadError(`${field} must be a finite number, not '${t.text}'; type a number such as ${example}`);
+    return new ReadError(
+      `${field} must be a finite number, not '${t.text}'; type a number such as ${example}`,
+    );
   if (t.t !== 'num') {
     const what = t.t === 'bad' ? t.why : `'${t.text}' is not a number`;
     return new ReadError(`${field}: ${what}; type a number such as ${example}`);
   }
   if (!Number.isFinite(t.value))
-    return new ReadError(`${field}: '${t.text}' is too large to be a number; type a number such as ${example}`);
+    return new ReadError(
+      `${field}: '${t.text}' is too large to be a number; type a number such as ${example}`,
+    );
   cur.take();
   return t.value;
 }
@@ -110,8 +114,10 @@ function commaMessage(text: string, ctx: ReadContext): string {
   const dot = text.replace(/,/g, '.');
   const joined = text.replace(/,/g, '');
   const { field } = ctx;
-  if (ctx.inList)
-    return `${field}: '${text}' has a comma between digits; to list several values put a space after each comma (${text.replace(/,/g, ', ')}), for a decimal write ${dot}`;
+  if (ctx.inList && !text.includes('.')) {
+    const decimal = /^\d+,\d+$/.test(text) ? `, for a decimal write ${dot}` : '';
+    return `${field}: '${text}' has a comma between digits; to list several values put a space after each comma (${text.replace(/,/g, ', ')})${decimal}`;
+  }
   if (/^\d{1,3}(,\d{3})+\.\d+$/.test(text))
     return `${field}: '${text}' uses a comma to group thousands; write ${joined}`;
   if (/^\d{1,3}(,\d{3})+$/.test(text))
@@ -125,7 +131,9 @@ function unitOrError(w: Token, n: number, ctx: ReadContext): Read<UnitDef> {
   if (unit) return unit;
   const { field, kind } = ctx;
   if (kind === 'factor' && w.text === '%')
-    return new ReadError(`${field}: write a decimal, not a percentage (${showNumber(n / 100)} for ${showNumber(n)}%)`);
+    return new ReadError(
+      `${field}: write a decimal, not a percentage (${showNumber(n / 100)} for ${showNumber(n)}%)`,
+    );
   if (kind === 'count') return new ReadError(`${field} is a whole number without a unit`);
   const takes =
     kind === 'factor'
@@ -133,7 +141,12 @@ function unitOrError(w: Token, n: number, ctx: ReadContext): Read<UnitDef> {
       : `${KIND_NAME[kind]} takes ${suffixList(kind)}`;
   const other = findAnyUnit(w.text);
   if (other) {
-    const otherKind = other.kind === 'weight' ? 'weight or force' : other.kind === 'factor' ? 'deceleration' : other.kind;
+    const otherKind =
+      other.kind === 'weight'
+        ? 'weight or force'
+        : other.kind === 'factor'
+          ? 'deceleration'
+          : other.kind;
     return new ReadError(`${field}: '${w.text}' is a unit of ${otherKind}; ${takes}`);
   }
   return new ReadError(`${field}: unknown unit '${w.text}'; ${takes}`);

@@ -26,8 +26,14 @@ export function readList(cur: Cursor, spec: QuantitySpec & { item: string }): Re
   const notes: string[] = [];
   while (!cur.done()) {
     const label = `${spec.item} ${values.length + 1}`;
-    if (isSep(cur.peek())) return new ReadError(`${label} is empty: there are two separators in a row`);
-    const ctx: ReadContext = { field: spec.field, kind: spec.kind, units: spec.units, inList: true };
+    if (isSep(cur.peek()))
+      return new ReadError(`${label} is empty: there are two separators in a row`);
+    const ctx: ReadContext = {
+      field: spec.field,
+      kind: spec.kind,
+      units: spec.units,
+      inList: true,
+    };
     const raw = readItem(cur, ctx, { allowRange: spec.allowRange });
     if (raw instanceof ReadError) return new ReadError(`${label}: ${raw.message}`);
     const checked = checkItem(raw, spec, ctx);
@@ -39,7 +45,8 @@ export function readList(cur: Cursor, spec: QuantitySpec & { item: string }): Re
       cur.take();
       continue;
     }
-    if (t === undefined || t.t === 'num' || t.t === 'commaNum' || isOp(t, 'minus', 'plus')) continue;
+    if (t === undefined || t.t === 'num' || t.t === 'commaNum' || isOp(t, 'minus', 'plus'))
+      continue;
     const why = t.t === 'bad' ? t.why : `cannot read '${cur.rest()}' after '${raw.text}'`;
     return new ReadError(`${label}: ${spec.field}: ${why}`);
   }
@@ -61,7 +68,9 @@ export function parseList(text: string, spec: ListSpec): ListResult {
   if (r instanceof ReadError) return { ok: false, message: r.message };
   const limits = countLimits(r.values.length, spec);
   if (limits) return { ok: false, message: limits };
-  return r.notes.length ? { ok: true, values: r.values, converted: r.notes.join('; ') } : { ok: true, values: r.values };
+  return r.notes.length
+    ? { ok: true, values: r.values, converted: r.notes.join('; ') }
+    : { ok: true, values: r.values };
 }
 
 function countLimits(n: number, spec: ListSpec): string | undefined {
@@ -81,9 +90,13 @@ export function parseCount(text: string, spec: CountSpec): CountResult {
   const t = text.trim();
   const min = spec.min ?? 1;
   const between = spec.max === undefined ? `${min} or more` : `from ${min} to ${spec.max}`;
-  if (t === '') return { ok: false, message: `${spec.field} is empty; type a whole number ${between}` };
+  if (t === '')
+    return { ok: false, message: `${spec.field} is empty; type a whole number ${between}` };
   if (!/^[+-]?\d+(\.\d+)?$/.test(t))
-    return { ok: false, message: `${spec.field}: '${t}' is not a whole number; type a whole number ${between}` };
+    return {
+      ok: false,
+      message: `${spec.field}: '${t}' is not a whole number; type a whole number ${between}`,
+    };
   const n = Number(t);
   if (!Number.isInteger(n))
     return { ok: false, message: `${spec.field} must be a whole number, not ${t}` };

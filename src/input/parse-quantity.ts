@@ -19,7 +19,14 @@ export function leftoverMessage(cur: Cursor, field: string, raw: RawItem): strin
   const t = cur.peek()!;
   const rest = cur.rest();
   if (t.t === 'bad') return `${field}: ${t.why}`;
-  const last = raw.form === 'single' ? raw.v : raw.form === 'tol' ? raw.tol : raw.form === 'range' ? raw.hi : undefined;
+  const last =
+    raw.form === 'single'
+      ? raw.v
+      : raw.form === 'tol'
+        ? raw.tol
+        : raw.form === 'range'
+          ? raw.hi
+          : undefined;
   const smaller = last?.parts[last.parts.length - 1]!.unit?.then?.[0];
   if (t.t === 'num' && smaller)
     return `${field}: say the unit of '${t.text}' after '${raw.text}', e.g. ${raw.text} ${t.text} ${smaller}`;

@@ -3,13 +3,21 @@
  * `@asphalt-dry-travelled/over30`, `@gravel-loose=0.5`, `@gravel-loose=0.45-0.6`.
  */
 import type { DragV1 } from '../case/v1/schema.js';
-import { DRAG_TABLE, dragTableBand, type DragBand, type DragTableRow } from '../engine/drag-table.js';
+import {
+  DRAG_TABLE,
+  dragTableBand,
+  type DragBand,
+  type DragTableRow,
+} from '../engine/drag-table.js';
 import { tidy } from './show.js';
 
 export type SpeedBand = 'under-30mph' | 'over-30mph';
 
 /** Suffixes of a table key naming the speed band: `/under30`, `/over30`. */
-export const BAND_SUFFIX: Record<SpeedBand, string> = { 'under-30mph': 'under30', 'over-30mph': 'over30' };
+export const BAND_SUFFIX: Record<SpeedBand, string> = {
+  'under-30mph': 'under30',
+  'over-30mph': 'over30',
+};
 
 const bandOfSuffix = (s: string): SpeedBand | undefined =>
   s === 'under30' ? 'under-30mph' : s === 'over30' ? 'over-30mph' : undefined;
@@ -50,7 +58,10 @@ export function lookupTableKey(
 }
 
 /** The drag of a table choice; `value` defaults to the middle of the range. */
-export function tableDrag(choice: TableChoice, pick?: { value: number; low?: number; high?: number }): DragV1 {
+export function tableDrag(
+  choice: TableChoice,
+  pick?: { value: number; low?: number; high?: number },
+): DragV1 {
   const low = pick?.low ?? choice.range.low;
   const high = pick?.high ?? choice.range.high;
   const value = pick?.value ?? tidy((choice.range.low + choice.range.high) / 2);

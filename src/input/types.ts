@@ -46,8 +46,7 @@ export interface ListSpec extends QuantitySpec {
 }
 
 export type ListResult =
-  | { ok: true; values: Quantity[]; converted?: string }
-  | { ok: false; message: string };
+  { ok: true; values: Quantity[]; converted?: string } | { ok: false; message: string };
 
 /** A whole number of things ("number of marks"). */
 export interface CountSpec {

@@ -8,14 +8,7 @@ import type { UnitSystem } from '../engine/types.js';
 
 /** What a typed number is; decides which suffixes are read and how they convert. */
 export type QuantityKind =
-  | 'length'
-  | 'speed'
-  | 'percent'
-  | 'factor'
-  | 'time'
-  | 'count'
-  | 'weight'
-  | 'force';
+  'length' | 'speed' | 'percent' | 'factor' | 'time' | 'count' | 'weight' | 'force';
 
 /** One unit: the words that name it and how a number in it becomes a number in the kind's base. */
 export interface UnitDef {
@@ -49,7 +42,9 @@ export const UNITS: readonly UnitDef[] = [
   u('in', 'length', ['inch', 'inches', '"', '”', '″', "''"], 0.0254),
   u('yd', 'length', ['yds', 'yard', 'yards'], 0.9144, { then: ['ft', 'in'] }),
   u('m', 'length', ['metre', 'metres', 'meter', 'meters'], 1, { then: ['cm', 'mm'] }),
-  u('cm', 'length', ['centimetre', 'centimetres', 'centimeter', 'centimeters'], 0.01, { then: ['mm'] }),
+  u('cm', 'length', ['centimetre', 'centimetres', 'centimeter', 'centimeters'], 0.01, {
+    then: ['mm'],
+  }),
   u('mm', 'length', ['millimetre', 'millimetres', 'millimeter', 'millimeters'], 0.001),
   u('km', 'length', ['kilometre', 'kilometres', 'kilometer', 'kilometers'], 1000),
   u('mph', 'speed', ['mi/h'], 1609.344 / 3600),
@@ -122,7 +117,12 @@ export function caseUnitDef(kind: QuantityKind, units: UnitSystem): UnitDef | un
  * A number in `unit` expressed in the case unit of the kind. Exact when the unit is the case unit.
  * @example toCaseUnit(24.4, findUnit('length', 'm')!, 'length', 'imperial') // 80.0524934...
  */
-export function toCaseUnit(n: number, unit: UnitDef, kind: QuantityKind, units: UnitSystem): number {
+export function toCaseUnit(
+  n: number,
+  unit: UnitDef,
+  kind: QuantityKind,
+  units: UnitSystem,
+): number {
   const target = caseUnitDef(kind, units);
   if (target === undefined || target.id === unit.id) return n;
   const base = unit.toBase ? unit.toBase(n) : n * unit.factor;

@@ -22,7 +22,19 @@ export interface AnswerReader {
   complete(pick: (id: string) => boolean): boolean;
 }
 
+const READERS = new WeakMap<Answers, AnswerReader>();
+
+/** The reader of these answers; kept per answers object, which is never mutated. */
 export function readAnswers(answers: Answers): AnswerReader {
+  let r = READERS.get(answers);
+  if (!r) {
+    r = makeReader(answers);
+    READERS.set(answers, r);
+  }
+  return r;
+}
+
+function makeReader(answers: Answers): AnswerReader {
   const questions = questionsFor(answers);
   const ctx = contextOf(answers);
   const byId = new Map(questions.map((q) => [q.id, q]));

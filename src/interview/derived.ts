@@ -19,7 +19,10 @@ export function currentQuestion(state: InterviewState): Question | undefined {
 /** Answered (and valid) questions out of those that apply now. */
 export function progress(state: InterviewState): Progress {
   const r = readAnswers(state.answers);
-  return { answered: r.questions.filter((q) => r.status(q.id) === 'answered').length, applicable: r.questions.length };
+  return {
+    answered: r.questions.filter((q) => r.status(q.id) === 'answered').length,
+    applicable: r.questions.length,
+  };
 }
 
 /**
@@ -40,7 +43,8 @@ export function questionStates(state: InterviewState): QuestionState[] {
     seen.add(q.id);
   }
   for (const id of Object.keys(state.answers))
-    if (!seen.has(id) && !isMetaAnswer(id)) out.push({ id, title: id, section: 'Not used', status: 'unused' });
+    if (!seen.has(id) && !isMetaAnswer(id))
+      out.push({ id, title: id, section: 'Not used', status: 'unused' });
   return out;
 }
 
@@ -57,17 +61,36 @@ export function summaryOfDone(state: InterviewState): string[] {
   const r = readAnswers(a);
   const lines: string[] = [];
   const ref = a['details.reference']?.text;
-  lines.push(`Case${ref ? ` ${ref}` : ''}: ${a.units?.value === 'metric' ? 'metres and km/h' : 'feet and mph'}${a.limit?.text ? `, posted limit ${a.limit.text}` : ''}`);
+  lines.push(
+    `Case${ref ? ` ${ref}` : ''}: ${a.units?.value === 'metric' ? 'metres and km/h' : 'feet and mph'}${a.limit?.text ? `, posted limit ${a.limit.text}` : ''}`,
+  );
   const brakes = a['vehicle.brakes']?.value;
-  const brakeWords = brakes === 'all' ? 'all brakes working' : brakes === 'estimate' ? 'braking efficiency estimated' : brakes === 'wheels' ? 'brakes wheel by wheel' : 'brakes not yet given';
-  lines.push(`Vehicle${a['vehicle.label']?.text ? ` ${a['vehicle.label'].text}` : ''}: ${brakeWords}`);
+  const brakeWords =
+    brakes === 'all'
+      ? 'all brakes working'
+      : brakes === 'estimate'
+        ? 'braking efficiency estimated'
+        : brakes === 'wheels'
+          ? 'brakes wheel by wheel'
+          : 'brakes not yet given';
+  lines.push(
+    `Vehicle${a['vehicle.label']?.text ? ` ${a['vehicle.label'].text}` : ''}: ${brakeWords}`,
+  );
   for (let i = 0; i < analysisCount(a); i++) {
     const look = markLook(a, i);
     const mine = r.questions.filter((q) => q.id.startsWith(`a${i}.`) && q.id !== `a${i}.more`);
     const left = mine.filter((q) => r.status(q.id) !== 'answered').length;
-    let what = look === undefined ? 'marks not yet described' : look === 'yaw' ? 'yaw marks' : `${plural(Math.max(segmentCount(a, i), 0), 'segment')}`;
-    if (look !== undefined && look !== 'yaw' && surfaceMode(a, i) === undefined) what = 'slide, surfaces not yet given';
-    lines.push(`${analysisSection(a, i)}: ${what}; ${left === 0 ? 'complete' : `${plural(left, 'question')} left`}`);
+    let what =
+      look === undefined
+        ? 'marks not yet described'
+        : look === 'yaw'
+          ? 'yaw marks'
+          : `${plural(Math.max(segmentCount(a, i), 0), 'segment')}`;
+    if (look !== undefined && look !== 'yaw' && surfaceMode(a, i) === undefined)
+      what = 'slide, surfaces not yet given';
+    lines.push(
+      `${analysisSection(a, i)}: ${what}; ${left === 0 ? 'complete' : `${plural(left, 'question')} left`}`,
+    );
   }
   const p = progress(state);
   lines.push(`${p.answered} of ${p.applicable} questions answered`);

@@ -11,7 +11,8 @@ export const OTHER_SURFACE = 'other';
 // Single keys for the rows in table order; 'o' stays free for "another surface".
 const KEYS = '123456789abcdefghijklmnpqrstuvwxyz';
 
-const fmt = (r: DragBand) => (r.low === r.high ? r.low.toFixed(2) : `${r.low.toFixed(2)}-${r.high.toFixed(2)}`);
+const fmt = (r: DragBand) =>
+  r.low === r.high ? r.low.toFixed(2) : `${r.low.toFixed(2)}-${r.high.toFixed(2)}`;
 
 /** One line with the row's ranges: "under 30 mph 0.80-1.20, over 30 mph 0.65-1.00". */
 export function rangesLine(row: DragTableRow): string {
@@ -23,11 +24,20 @@ export function rangesLine(row: DragTableRow): string {
 }
 
 const known = (row: DragTableRow) =>
-  row.known === 'from-memory' ? ' (from memory: verify before use)' : row.known === 'single-value-second-hand' ? ' (seen second-hand)' : '';
+  row.known === 'from-memory'
+    ? ' (from memory: verify before use)'
+    : row.known === 'single-value-second-hand'
+      ? ' (seen second-hand)'
+      : '';
 
 /** The table rows as choices, then "another surface". */
 export const SURFACE_CHOICES: Choice[] = [
-  ...DRAG_TABLE.map((r, i) => ({ value: r.key, key: KEYS[i]!, label: r.surface, hint: `${rangesLine(r)}; ${r.source}${known(r)}` })),
+  ...DRAG_TABLE.map((r, i) => ({
+    value: r.key,
+    key: KEYS[i]!,
+    label: r.known === 'single-value-second-hand' ? `${r.surface} (single value)` : r.surface,
+    hint: `${rangesLine(r)}; ${r.source}${known(r)}`,
+  })),
   { value: OTHER_SURFACE, key: 'o', label: 'another surface (type its name next)' },
 ];
 

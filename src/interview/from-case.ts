@@ -12,6 +12,7 @@ import { contextOf } from './answer-values.js';
 import { quantityText } from './read-quantity.js';
 import { firstOpenIn, REVIEW } from './navigate.js';
 import { signed } from './signed.js';
+import { buildCase } from './build-case.js';
 import { surfaceRow, OTHER_SURFACE } from './drag-table.js';
 import { WHEELS } from './questions-vehicle.js';
 
@@ -39,10 +40,21 @@ function normalize(answers: Answers): Answers {
   return out;
 }
 
-function dragAnswers(put: (id: string, text: string, value?: unknown) => void, p: string, d: DragV1): void {
+function dragAnswers(
+  put: (id: string, text: string, value?: unknown) => void,
+  p: string,
+  d: DragV1,
+): void {
   put(`${p}.drag.source`, d.source);
   if (d.source === 'entered' || d.source === 'table') {
-    put(`${p}.drag.value`, quantityText({ value: d.value, ...(d.low !== undefined ? { low: d.low } : {}), ...(d.high !== undefined ? { high: d.high } : {}) }));
+    put(
+      `${p}.drag.value`,
+      quantityText({
+        value: d.value,
+        ...(d.low !== undefined ? { low: d.low } : {}),
+        ...(d.high !== undefined ? { high: d.high } : {}),
+      }),
+    );
     if (d.source === 'table') {
       if (surfaceRow(d.surface)) put(`${p}.drag.surface`, d.surface);
       else {
@@ -51,7 +63,10 @@ function dragAnswers(put: (id: string, text: string, value?: unknown) => void, p
       }
     }
   } else if (d.source === 'test-skids') {
-    put(`${p}.drag.tests`, d.tests.map((t) => `${quantityText(t.speed)}/${quantityText(t.distance)}`).join(', '));
+    put(
+      `${p}.drag.tests`,
+      d.tests.map((t) => `${quantityText(t.speed)}/${quantityText(t.distance)}`).join(', '),
+    );
   } else if (d.source === 'sled') {
     put(`${p}.drag.weight`, quantityText(d.weight));
     put(`${p}.drag.pulls`, list(d.pulls));
@@ -59,9 +74,18 @@ function dragAnswers(put: (id: string, text: string, value?: unknown) => void, p
 }
 
 /** A signed slope as direction + positive percent. */
-function slopeAnswers(put: (id: string, text: string) => void, id: string, q: Quantity | undefined, words: [string, string, string]): void {
+function slopeAnswers(
+  put: (id: string, text: string) => void,
+  id: string,
+  q: Quantity | undefined,
+  words: [string, string, string],
+): void {
   const [none, up, down] = words;
-  if (q === undefined || (val(q) === 0 && low(q) === 0 && (typeof q === 'number' || (q.high ?? 0) === 0))) return put(`${id}.dir`, none);
+  if (
+    q === undefined ||
+    (val(q) === 0 && low(q) === 0 && (typeof q === 'number' || (q.high ?? 0) === 0))
+  )
+    return put(`${id}.dir`, none);
   const negative = val(q) < 0;
   put(`${id}.dir`, negative ? down : up);
   put(`${id}.pct`, quantityText(signed(q, negative)));
@@ -73,7 +97,8 @@ export function answersFromCase(c: Case): Answers {
   const put = (id: string, text: string, value: unknown = text) => {
     A[id] = { text, value };
   };
-  for (const k of ['reference', 'occurred', 'location', 'investigator', 'notes'] as const) put(`details.${k}`, c.details?.[k] ?? '');
+  for (const k of ['reference', 'occurred', 'location', 'investigator', 'notes'] as const)
+    put(`details.${k}`, c.details?.[k] ?? '');
   put('units', c.units);
   put('limit', c.postedLimit === undefined ? '' : quantityText(c.postedLimit));
   const v = c.vehicle;
@@ -135,14 +160,53 @@ export function answersFromCase(c: Case): Answers {
   return normalize(A);
 }
 
-/** The state to resume a case with; a case without analyses starts at its first open question. */
+/** JSON with object keys sorted, so two cases compare by content and not by key order. */
+function canonical(x: unknown): string {
+  return JSON.stringify(x, (_k, v: unknown) =>
+    v && typeof v === 'object' && !Array.isArray(v)
+      ? Object.fromEntries(
+          Object.entries(v as Record<string, unknown>).sort(([a], [b]) => (a < b ? -1 : 1)),
+        )
+      : v,
+  );
+}
+
+/** What the case says, apart from the interview and the timestamps. */
+const figuresOf = (c: Case) =>
+  canonical({ ...c, interview: undefined, created: undefined, updated: undefined });
+
+export const EDITED_NOTICE =
+  'The file was changed outside the interview since it was saved: the answers are read again from its fields.';
+
+/**
+ * The state to resume a case with. The saved interview is used when it still makes exactly the
+ * case in the file; if the file was edited by hand since, its fields win (the file is what
+ * `solve` reads) and the answers are derived from them, with a notice.
+ */
 export function stateFromCase(c: Case): InterviewState {
   const saved = savedSchema.safeParse(c.interview);
   if (saved.success) {
-    const { answers, cursor, mode } = saved.data as { answers: Answers; cursor: string; mode: 'guided' | 'brisk' };
-    return { answers, cursor, undo: [], mode, explain: mode === 'guided' };
+    const { answers, cursor, mode } = saved.data as {
+      answers: Answers;
+      cursor: string;
+      mode: 'guided' | 'brisk';
+    };
+    const st: InterviewState = { answers, cursor, undo: [], mode, explain: mode === 'guided' };
+    const meta = { id: c.id, units: c.units, ...(c.created ? { created: c.created } : {}) };
+    if (figuresOf(buildCase(st, meta)) === figuresOf(c)) return st;
+    return { ...fromFields(c), mode, explain: mode === 'guided', notice: EDITED_NOTICE };
   }
+  return fromFields(c);
+}
+
+function fromFields(c: Case): InterviewState {
   const answers = answersFromCase(c);
   const cursor = firstOpenIn(answers);
-  return { answers, cursor: cursor === REVIEW ? REVIEW : cursor, undo: [], mode: 'guided', explain: true };
+  return {
+    answers,
+    cursor: cursor === REVIEW ? REVIEW : cursor,
+    undo: [],
+    mode: 'guided',
+    explain: true,
+  };
 }

@@ -5,9 +5,16 @@
 export * from './types.js';
 export { initialState, reduce, UNDO_LIMIT } from './reducer.js';
 export { questionsFor, allQuestions, analysisSection, chainReason } from './questions.js';
-export { currentQuestion, progress, questionStates, firstOpenQuestion, summaryOfDone, isMetaAnswer } from './derived.js';
+export {
+  currentQuestion,
+  progress,
+  questionStates,
+  firstOpenQuestion,
+  summaryOfDone,
+  isMetaAnswer,
+} from './derived.js';
 export { buildCase, analysisId } from './build-case.js';
-export { stateFromCase, answersFromCase } from './from-case.js';
+export { stateFromCase, answersFromCase, EDITED_NOTICE } from './from-case.js';
 export { solveDraft } from './draft.js';
 export { contextOf } from './answer-values.js';
 export { matchChoice } from './question-kinds.js';

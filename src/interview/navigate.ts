@@ -35,7 +35,10 @@ export function nextOf(questions: Question[], cursor: Cursor): Cursor {
 }
 
 /** The cursor if it is the review or a question that applies, else the first open question. */
-export function validCursor(state: Pick<InterviewState, 'answers' | 'cursor'>, questions: Question[]): Cursor {
+export function validCursor(
+  state: Pick<InterviewState, 'answers' | 'cursor'>,
+  questions: Question[],
+): Cursor {
   if (state.cursor === REVIEW || questions.some((q) => q.id === state.cursor)) return state.cursor;
   return firstOpenIn(state.answers);
 }

@@ -22,7 +22,12 @@ export interface QuestionBase {
   optional?: boolean;
 }
 
-function finish(base: QuestionBase, kind: Question['kind'], parse: Question['parse'], extra: Partial<Question> = {}): Question {
+function finish(
+  base: QuestionBase,
+  kind: Question['kind'],
+  parse: Question['parse'],
+  extra: Partial<Question> = {},
+): Question {
   return {
     ...base,
     ...extra,
@@ -38,10 +43,17 @@ function finish(base: QuestionBase, kind: Question['kind'], parse: Question['par
 /** The choice's value for a typed text: its key, its value or its label (any case). */
 export function matchChoice(choices: readonly Choice[], text: string): Choice | undefined {
   const t = text.trim().toLowerCase();
-  return choices.find((c) => c.key.toLowerCase() === t || c.value.toLowerCase() === t || c.label.toLowerCase() === t);
+  return choices.find(
+    (c) => c.key.toLowerCase() === t || c.value.toLowerCase() === t || c.label.toLowerCase() === t,
+  );
 }
 
-export function choiceQuestion(base: QuestionBase, choices: Choice[], kind: 'choice' | 'confirm' = 'choice'): Question {
+/** A choice among `choices`; the answer is a key, a value or a label, stored as the value. */
+export function choiceQuestion(
+  base: QuestionBase,
+  choices: Choice[],
+  kind: 'choice' | 'confirm' = 'choice',
+): Question {
   const parse = (text: string): ParseResult => {
     const c = matchChoice(choices, text);
     if (c) return { ok: true, value: c.value };
@@ -51,15 +63,18 @@ export function choiceQuestion(base: QuestionBase, choices: Choice[], kind: 'cho
   return finish(base, kind, parse, { choices });
 }
 
+/** The two answers of a confirm question. */
 export const YES_NO: Choice[] = [
   { value: 'yes', key: 'y', label: 'yes' },
   { value: 'no', key: 'n', label: 'no' },
 ];
 
+/** A yes/no question (`yes` or `no`). */
 export function confirmQuestion(base: QuestionBase): Question {
   return choiceQuestion(base, YES_NO, 'confirm');
 }
 
+/** Free text, trimmed; required unless `optional`. */
 export function textQuestion(base: QuestionBase): Question {
   const parse = (text: string): ParseResult => {
     const t = text.trim();
@@ -96,23 +111,40 @@ export function quantityQuestion(
 }
 
 /** Mark lengths on one line; `count` (the number of marks answered) lets one length stand for all. */
-export function marksQuestion(base: QuestionBase, count: (answers: Answers) => number | undefined): Question {
-  return finish(base, 'list', (text, ctx) => readMarks(text, ctx.units, count(ctx.answers)), { unitKind: 'length' });
+export function marksQuestion(
+  base: QuestionBase,
+  count: (answers: Answers) => number | undefined,
+): Question {
+  return finish(base, 'list', (text, ctx) => readMarks(text, ctx.units, count(ctx.answers)), {
+    unitKind: 'length',
+  });
 }
 
 /** Several values of one kind on one line (sled pulls, decelerometer readings). */
 export function listQuestion(base: QuestionBase, spec: QuantitySpec, item: string): Question {
-  return finish(base, 'list', (text, ctx) => readValues(text, spec, ctx.units, item), { unitKind: spec.kind });
+  return finish(base, 'list', (text, ctx) => readValues(text, spec, ctx.units, item), {
+    unitKind: spec.kind,
+  });
 }
 
 /** A whole number from `min` to `max` (counts of marks, segments). */
-export function countQuestion(base: QuestionBase, what: string, min: number, max: number): Question {
-  const parse = (text: string): ParseResult => emptyOptional(base, text) ?? parseCount(text, { field: `number of ${what}`, min, max });
+export function countQuestion(
+  base: QuestionBase,
+  what: string,
+  min: number,
+  max: number,
+): Question {
+  const parse = (text: string): ParseResult =>
+    emptyOptional(base, text) ?? parseCount(text, { field: `number of ${what}`, min, max });
   return finish(base, 'quantity', parse, { unitKind: 'count' });
 }
 
 /** Any other kind with its own parser (quick entry, test skids). */
-export function customQuestion(base: QuestionBase, kind: Question['kind'], parse: Question['parse']): Question {
+export function customQuestion(
+  base: QuestionBase,
+  kind: Question['kind'],
+  parse: Question['parse'],
+): Question {
   return finish(base, kind, parse);
 }
 

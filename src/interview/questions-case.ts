@@ -3,6 +3,7 @@ import { RULES } from '../case/quantity.js';
 import type { Question } from './types.js';
 import { choiceQuestion, quantityQuestion, textQuestion } from './question-kinds.js';
 import { unitsOf } from './answers-read.js';
+import { showNumber } from '../input/index.js';
 
 const always = () => true;
 const S = 'Case';
@@ -21,11 +22,36 @@ const detail = (key: string, title: string, prompt: string, why: string): Questi
 /** The case questions, in the order asked. */
 export function caseQuestions(): Question[] {
   return [
-    detail('reference', 'Reference', 'Case or report reference (Enter to leave blank)', 'Ties this calculation to the agency file it belongs to.'),
-    detail('occurred', 'Date and time', 'When did the crash happen? (Enter to leave blank)', 'Recorded for the report; the surface and light conditions depend on it.'),
-    detail('location', 'Location', 'Where did it happen? (road, direction, nearest landmark)', 'Recorded for the report, so that others can find the marks.'),
-    detail('investigator', 'Investigator', 'Who measured the marks?', 'A figure offered later must name who took the measurements.'),
-    detail('notes', 'Notes', 'Anything else worth recording (weather, surface, light)?', 'Conditions on scene bear on the drag factor; note them while you remember.'),
+    detail(
+      'reference',
+      'Reference',
+      'Case or report reference (Enter to leave blank)',
+      'Ties this calculation to the agency file it belongs to.',
+    ),
+    detail(
+      'occurred',
+      'Date and time',
+      'When did the crash happen? (Enter to leave blank)',
+      'Recorded for the report; the surface and light conditions depend on it.',
+    ),
+    detail(
+      'location',
+      'Location',
+      'Where did it happen? (road, direction, nearest landmark)',
+      'Recorded for the report, so that others can find the marks.',
+    ),
+    detail(
+      'investigator',
+      'Investigator',
+      'Who measured the marks?',
+      'A figure offered later must name who took the measurements.',
+    ),
+    detail(
+      'notes',
+      'Notes',
+      'Anything else worth recording (weather, surface, light)?',
+      'Conditions on scene bear on the drag factor; note them while you remember.',
+    ),
     choiceQuestion(
       {
         id: 'units',
@@ -55,7 +81,11 @@ export function caseQuestions(): Question[] {
         appliesWhen: always,
         optional: true,
         example: '45',
-        explainChoice: (a) => (a.limit?.text ? `Speeds will be compared with ${a.limit.text} ${unitsOf(a) === 'metric' ? 'km/h' : 'mph'}.` : undefined),
+        explainChoice: (a) => {
+          const v = a.limit?.value;
+          const unit = unitsOf(a) === 'metric' ? 'km/h' : 'mph';
+          return typeof v === 'number' ? `Speeds will be compared with ${showNumber(v)} ${unit}.` : undefined;
+        },
       },
       { kind: 'speed', rule: RULES.postedLimit, range: false },
     ),

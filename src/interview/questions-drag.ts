@@ -1,10 +1,22 @@
 /** Questions for one drag factor: where it comes from, then the figures for that source. */
 import { RULES } from '../case/quantity.js';
 import type { Answers, Choice, Question } from './types.js';
-import { choiceQuestion, customQuestion, listQuestion, quantityQuestion, textQuestion } from './question-kinds.js';
+import {
+  choiceQuestion,
+  customQuestion,
+  listQuestion,
+  quantityQuestion,
+  textQuestion,
+} from './question-kinds.js';
 import { choiceOf } from './answers-read.js';
 import { readTestSkids } from './read-list.js';
-import { defaultDragText, OTHER_SURFACE, rangesLine, SURFACE_CHOICES, surfaceRow } from './drag-table.js';
+import {
+  defaultDragText,
+  OTHER_SURFACE,
+  rangesLine,
+  SURFACE_CHOICES,
+  surfaceRow,
+} from './drag-table.js';
 
 export const DRAG_SOURCES: Choice[] = [
   { value: 'test-skids', key: 'k', label: 'test skids at the scene' },
@@ -18,15 +30,32 @@ export const DRAG_SOURCES: Choice[] = [
  * The drag questions under `prefix` (`a0.seg1` or `a2`), applying when `applies` does.
  * `what` names the surface in prompts ("segment 2", "the yaw marks").
  */
-export function dragQuestions(prefix: string, section: string, what: string, applies: (a: Answers) => boolean): Question[] {
+export function dragQuestions(
+  prefix: string,
+  section: string,
+  what: string,
+  applies: (a: Answers) => boolean,
+): Question[] {
   const p = `${prefix}.drag`;
   const source = (a: Answers) => choiceOf(a, `${p}.source`);
-  const when = (...s: string[]) => (a: Answers) => applies(a) && s.includes(source(a) ?? '');
-  const base = (id: string, title: string, prompt: string) => ({ id: `${p}.${id}`, section, title: `${title}, ${what}`, prompt });
+  const when =
+    (...s: string[]) =>
+    (a: Answers) =>
+      applies(a) && s.includes(source(a) ?? '');
+  const base = (id: string, title: string, prompt: string) => ({
+    id: `${p}.${id}`,
+    section,
+    title: `${title}, ${what}`,
+    prompt,
+  });
   return [
     choiceQuestion(
       {
-        ...base('source', 'Drag factor source', `Where does the drag factor for ${what} come from?`),
+        ...base(
+          'source',
+          'Drag factor source',
+          `Where does the drag factor for ${what} come from?`,
+        ),
         help: {
           why: 'The drag factor f is the deceleration as a fraction of g. It moves the speed more than any other input, so its source is recorded and shown.',
           how: 'Best first: test skids with a similar vehicle, a drag sled, a decelerometer; the reference table last, when nothing was measured.',
@@ -57,7 +86,11 @@ export function dragQuestions(prefix: string, section: string, what: string, app
     }),
     quantityQuestion(
       {
-        ...base('value', 'Drag factor', `Drag factor for ${what}, with its range (e.g. 0.72 (0.65-0.80) or 0.65-0.80)`),
+        ...base(
+          'value',
+          'Drag factor',
+          `Drag factor for ${what}, with its range (e.g. 0.72 (0.65-0.80) or 0.65-0.80)`,
+        ),
         help: {
           why: 'The low and high ends of the range give the low and high ends of the speed.',
           how: 'From the table, choose the band for the speed in question and narrow the range only with a reason you can state.',
@@ -69,7 +102,9 @@ export function dragQuestions(prefix: string, section: string, what: string, app
         },
         explainChoice: (a) => {
           const row = surfaceRow(choiceOf(a, `${p}.surface`));
-          return source(a) === 'table' && row ? `Table: ${row.surface}: ${rangesLine(row)} (${row.source}).` : undefined;
+          return source(a) === 'table' && row
+            ? `Table: ${row.surface}: ${rangesLine(row)} (${row.source}).`
+            : undefined;
         },
         example: '0.65-0.80',
       },
@@ -77,7 +112,11 @@ export function dragQuestions(prefix: string, section: string, what: string, app
     ),
     customQuestion(
       {
-        ...base('tests', 'Test skids', `Test skids for ${what}: speed/distance for each, separated by commas`),
+        ...base(
+          'tests',
+          'Test skids',
+          `Test skids for ${what}: speed/distance for each, separated by commas (units may be typed, e.g. 50 km/h / 14 m)`,
+        ),
         help: {
           why: 'Each test gives f = S² / (30 d) (mph, ft) or S² / (254 d) (km/h, m); several tests show the spread.',
           how: 'Skid a similar vehicle at a known speed on the same surface and measure the skid. A test at low speed tends to give a slightly higher f than at crash speed (common practice).',
@@ -86,12 +125,20 @@ export function dragQuestions(prefix: string, section: string, what: string, app
         example: '30/42, 35/57.5',
       },
       'list',
-      (text, ctx) => readTestSkids(text, ctx.units, { speed: RULES.testSpeed, distance: RULES.length }),
+      (text, ctx) =>
+        readTestSkids(text, ctx.units, { speed: RULES.testSpeed, distance: RULES.length }),
     ),
     quantityQuestion(
       {
-        ...base('weight', 'Sled weight', 'Weight of the drag sled (any unit, the same as the pulls)'),
-        help: { why: 'f = pull / weight, so only the ratio matters.', how: 'Weigh the sled with its tire section.' },
+        ...base(
+          'weight',
+          'Sled weight',
+          'Weight of the drag sled (a plain number, or typed with lb, kg or N)',
+        ),
+        help: {
+          why: 'f = pull / weight, so only the ratio matters.',
+          how: 'Weigh the sled with its tire section.',
+        },
         appliesWhen: when('sled'),
         example: '75',
       },
@@ -100,7 +147,10 @@ export function dragQuestions(prefix: string, section: string, what: string, app
     listQuestion(
       {
         ...base('pulls', 'Sled pulls', 'Pull readings, in the same unit as the weight'),
-        help: { why: 'Each pull gives one drag factor; their spread is the range.', how: 'Pull steadily, parallel to the surface, and read the scale while the sled slides.' },
+        help: {
+          why: 'Each pull gives one drag factor; their spread is the range.',
+          how: 'Pull steadily, parallel to the surface, and read the scale while the sled slides.',
+        },
         appliesWhen: when('sled'),
         example: '52 54 51',
       },
@@ -110,7 +160,10 @@ export function dragQuestions(prefix: string, section: string, what: string, app
     listQuestion(
       {
         ...base('readings', 'Decelerometer', 'Decelerometer readings, in g'),
-        help: { why: 'A reading in g is the drag factor itself; several readings show the spread.', how: 'Take them from skid tests with the meter fixed level in the test vehicle.' },
+        help: {
+          why: 'A reading in g is the drag factor itself; several readings show the spread.',
+          how: 'Take them from skid tests with the meter fixed level in the test vehicle.',
+        },
         appliesWhen: when('decelerometer'),
         example: '0.71 0.69 0.73',
       },
@@ -119,4 +172,3 @@ export function dragQuestions(prefix: string, section: string, what: string, app
     ),
   ];
 }
-

@@ -9,7 +9,12 @@ import { choiceOf } from './answers-read.js';
 
 const PERCENT = { what: 'percent', gt: 0, lt: 100 };
 
-export function gradeQuestions(prefix: string, section: string, what: string, applies: (a: Answers) => boolean): Question[] {
+export function gradeQuestions(
+  prefix: string,
+  section: string,
+  what: string,
+  applies: (a: Answers) => boolean,
+): Question[] {
   const dir = `${prefix}.grade.dir`;
   return [
     choiceQuestion(
@@ -37,16 +42,29 @@ export function gradeQuestions(prefix: string, section: string, what: string, ap
         section,
         title: `Grade percent, ${what}`,
         prompt: `How steep, in percent? (a positive number; the direction was given above)`,
-        help: { why: 'Stored signed in the case: + uphill, - downhill.', how: 'e.g. 3, or 2.5-3.5 when the slope varies.' },
-        appliesWhen: (a) => applies(a) && (choiceOf(a, dir) === 'uphill' || choiceOf(a, dir) === 'downhill'),
+        help: {
+          why: 'Stored signed in the case: + uphill, - downhill.',
+          how: 'e.g. 3, or 2.5-3.5 when the slope varies.',
+        },
+        appliesWhen: (a) =>
+          applies(a) && (choiceOf(a, dir) === 'uphill' || choiceOf(a, dir) === 'downhill'),
         example: '3',
       },
-      { kind: 'percent', rule: { ...PERCENT, what: 'grade' }, range: true, noMinus: 'choose uphill or downhill above instead of typing a sign' },
+      {
+        kind: 'percent',
+        rule: { ...PERCENT, what: 'grade' },
+        range: true,
+        noMinus: 'choose uphill or downhill above instead of typing a sign',
+      },
     ),
   ];
 }
 
-export function bankQuestions(prefix: string, section: string, applies: (a: Answers) => boolean): Question[] {
+export function bankQuestions(
+  prefix: string,
+  section: string,
+  applies: (a: Answers) => boolean,
+): Question[] {
   const dir = `${prefix}.bank.dir`;
   return [
     choiceQuestion(
@@ -57,7 +75,7 @@ export function bankQuestions(prefix: string, section: string, applies: (a: Answ
         prompt: 'Across the road where the marks curve, the surface tilts:',
         help: {
           why: 'A road banked toward the centre of the curve (superelevation) lets a vehicle take it faster; banked away, slower. S = sqrt(15 R (f + e) / (1 - f e)).',
-          how: 'Measure the cross slope at the chord\'s midpoint, at right angles to the road, in percent.',
+          how: "Measure the cross slope at the chord's midpoint, at right angles to the road, in percent.",
         },
         appliesWhen: applies,
         defaultText: () => 'none',
@@ -74,11 +92,20 @@ export function bankQuestions(prefix: string, section: string, applies: (a: Answ
         section,
         title: 'Bank percent',
         prompt: 'How much, in percent? (a positive number; the direction was given above)',
-        help: { why: 'Stored signed in the case as superelevation: + toward the centre, - away.', how: 'e.g. 2, or 1.5-2.5.' },
-        appliesWhen: (a) => applies(a) && (choiceOf(a, dir) === 'toward' || choiceOf(a, dir) === 'away'),
+        help: {
+          why: 'Stored signed in the case as superelevation: + toward the centre, - away.',
+          how: 'e.g. 2, or 1.5-2.5.',
+        },
+        appliesWhen: (a) =>
+          applies(a) && (choiceOf(a, dir) === 'toward' || choiceOf(a, dir) === 'away'),
         example: '2',
       },
-      { kind: 'percent', rule: { ...RULES.superelevation, ...PERCENT, what: 'superelevation' }, range: true, noMinus: 'choose toward or away from the centre above instead of typing a sign' },
+      {
+        kind: 'percent',
+        rule: { ...RULES.superelevation, ...PERCENT, what: 'superelevation' },
+        range: true,
+        noMinus: 'choose toward or away from the centre above instead of typing a sign',
+      },
     ),
   ];
 }

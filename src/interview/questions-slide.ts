@@ -1,11 +1,28 @@
 /** Questions of a slide (skid) analysis: marks, surfaces, segments, and how the slide ended. */
 import { RULES } from '../case/quantity.js';
 import type { Answers, Question } from './types.js';
-import { choiceQuestion, countQuestion, customQuestion, marksQuestion, quantityQuestion, textQuestion } from './question-kinds.js';
-import { choiceOf, countOf, markLook, MAX_SEGMENTS, segmentCount, surfaceMode } from './answers-read.js';
+import {
+  choiceQuestion,
+  countQuestion,
+  customQuestion,
+  marksQuestion,
+  quantityQuestion,
+  textQuestion,
+} from './question-kinds.js';
+import {
+  choiceOf,
+  countOf,
+  markLook,
+  MAX_SEGMENTS,
+  segmentCount,
+  surfaceMode,
+} from './answers-read.js';
 import { dragQuestions } from './questions-drag.js';
 import { gradeQuestions } from './questions-grade.js';
 import { quickFills } from './quick-fills.js';
+import { endQuestions } from './questions-end.js';
+// A cycle (build-case reads the questions), safe because it is only called at run time.
+import { segmentsLine } from './build-case.js';
 
 const LENGTH = { kind: 'length' as const, rule: RULES.length, range: true };
 
@@ -28,7 +45,8 @@ export function slideQuestions(
         id: `${p}.surfaces`,
         section,
         title: 'Surfaces',
-        prompt: 'Did the vehicle slide over one surface, or over several (or over marked parts with gaps)?',
+        prompt:
+          'Did the vehicle slide over one surface, or over several (or over marked parts with gaps)?',
         help: {
           why: 'Each surface (asphalt, then gravel, then grass) has its own drag factor and grade, so each is a separate segment. Skid parts broken by long gaps are also entered one segment per marked part.',
           how: 'One line enters every segment at once: length @drag grade%, e.g. 48 @0.74 +2%, 31 @0.55, 22 @0.40 -3%.',
@@ -38,8 +56,16 @@ export function slideQuestions(
       },
       [
         ...(gap(now) ? [] : [{ value: 'one', key: 'o', label: 'one surface' }]),
-        { value: 'several', key: 's', label: gap(now) ? 'the marked parts, one at a time' : 'several segments, one at a time' },
-        { value: 'quick', key: 'q', label: gap(now) ? 'the marked parts on one line' : 'several segments on one line' },
+        {
+          value: 'several',
+          key: 's',
+          label: gap(now) ? 'the marked parts, one at a time' : 'several segments, one at a time',
+        },
+        {
+          value: 'quick',
+          key: 'q',
+          label: gap(now) ? 'the marked parts on one line' : 'several segments on one line',
+        },
       ],
     ),
     countQuestion(
@@ -47,7 +73,9 @@ export function slideQuestions(
         id: `${p}.count`,
         section,
         title: 'Number of marks',
-        prompt: 'How many tire marks did you measure?' ,
+        prompt: inParts(now)
+          ? 'How many tire marks did you measure? (Enter to skip: the segments give the distance)'
+          : 'How many tire marks did you measure?',
         help: {
           why: 'Each tire leaves its own mark; the slide distance comes from all of them. With several segments the marks only cross-check the segment lengths (Enter to skip).',
           how: 'Count the separate marks; a car braking on all four wheels can leave up to four.',
@@ -64,7 +92,8 @@ export function slideQuestions(
         id: `${p}.marks`,
         section,
         title: 'Mark lengths',
-        prompt: 'Length of each mark, on one line (e.g. 94 92 95 93, or 4 x 80.5 when all are equal)',
+        prompt:
+          'Length of each mark, on one line (e.g. 94 92 95 93, or 4 x 80.5 when all are equal)',
         help: {
           why: 'The slide distance is taken from these lengths.',
           how: 'Measure each mark from where it starts to where that tire came to rest (or left the surface, or the point of impact). For marks with short regular gaps (a bouncing tire), measure the whole length, gaps included (common practice). Add a tolerance to all with +/- (e.g. 94 92 95 93 +/- 1).',
@@ -85,6 +114,10 @@ export function slideQuestions(
         },
         appliesWhen: (a) => marksAsked(a) && (count(a) ?? 0) > 1,
         defaultText: () => 'average',
+        explainChoice: (a) =>
+          choiceOf(a, `${p}.rule`) === 'longest'
+            ? 'The longest mark will be used; the report records that the average is the common practice.'
+            : 'The average of the marks will be used (common practice).',
       },
       [
         { value: 'average', key: 'a', label: 'the average (common practice)' },
@@ -112,12 +145,14 @@ export function slideQuestions(
         id: `${p}.quick`,
         section,
         title: 'Segments on one line',
-        prompt: 'Each segment as length @drag grade%, separated by commas (grade: + uphill, - downhill, none if level)',
+        prompt:
+          'Each segment as length @drag grade%, separated by commas (grade: + uphill, - downhill, none if level)',
         help: {
           why: 'Enters every segment at once; each one can be checked or changed afterwards, question by question.',
           how: 'e.g. 48 @0.74 +2%, 31 @0.55, 22 @0.40-0.50 -3%. A drag factor range is written low-high.',
         },
         appliesWhen: (a) => applies(a) && surfaceMode(a, i) === 'quick',
+        defaultText: (a) => segmentsLine(a, i),
         example: '48 @0.74 +2%, 31 @0.55, 22 @0.40 -3%',
       },
       'segments',
@@ -136,7 +171,10 @@ export function slideQuestions(
           section,
           title: `Length, segment ${j + 1}`,
           prompt: `Length of segment ${j + 1}`,
-          help: { why: 'The slide distance is the sum of the segments.', how: 'Measure along the marks, from where this surface starts to where it ends.' },
+          help: {
+            why: 'The slide distance is the sum of the segments.',
+            how: 'Measure along the marks, from where this surface starts to where it ends.',
+          },
           appliesWhen: several,
           example: '48',
         },
@@ -157,49 +195,4 @@ export function slideQuestions(
   }
   out.push(...endQuestions(p, section, applies));
   return out;
-}
-
-function endQuestions(p: string, section: string, applies: (a: Answers) => boolean): Question[] {
-  const end = (a: Answers) => choiceOf(a, `${p}.end`);
-  return [
-    choiceQuestion(
-      {
-        id: `${p}.end`,
-        section,
-        title: 'End of the slide',
-        prompt: 'How did the slide end?',
-        help: {
-          why: 'If the vehicle was still moving at the end of the marks, its speed there adds to the start speed. Without an estimate, the slide-to-stop figure is a minimum: energy taken by the impact is not counted.',
-        },
-        appliesWhen: applies,
-        defaultText: () => 'rest',
-      },
-      [
-        { value: 'rest', key: 'r', label: 'came to rest at the end of the marks' },
-        { value: 'speed', key: 's', label: 'struck something; the speed at impact is estimated' },
-        { value: 'struck', key: 'n', label: 'struck something; no estimate (the figure is a minimum)' },
-      ],
-    ),
-    quantityQuestion(
-      {
-        id: `${p}.end.speed`,
-        section,
-        title: 'Speed at the end',
-        prompt: 'Estimated speed at the end of the marks (a range is allowed)',
-        help: { why: 'S_start² = S_end² + 30 d (f n + G).', how: 'From a momentum or crush analysis done separately.' },
-        appliesWhen: (a) => applies(a) && end(a) === 'speed',
-        example: '20-25',
-      },
-      { kind: 'speed', rule: RULES.speed, range: true },
-    ),
-    textQuestion({
-      id: `${p}.end.basis`,
-      section,
-      title: 'Basis of end speed',
-      prompt: 'Where does that estimate come from?',
-      help: { why: 'The report prints it beside the end speed; an estimate without its source is hard to defend.' },
-      appliesWhen: (a) => applies(a) && end(a) === 'speed',
-      optional: true,
-    }),
-  ];
 }

@@ -46,7 +46,7 @@ function wheelQuestions(w: (typeof WHEELS)[number]): Question[] {
         prompt: `How much of a full brake does the ${w.label} wheel give? (0 to 1, a range is allowed)`,
         help: {
           why: 'A partly working brake is counted as that fraction of a full one.',
-          how: 'From brake testing or the inspector\'s estimate, e.g. 0.5 or 0.4-0.6.',
+          how: "From brake testing or the inspector's estimate, e.g. 0.5 or 0.4-0.6.",
         },
         appliesWhen: (a) => brakesAre('wheels')(a) && choiceOf(a, id) === 'partly',
         example: '0.5',
@@ -83,7 +83,8 @@ export function vehicleQuestions(): Question[] {
           ({
             all: 'Braking efficiency n = 1.00: every wheel braking fully.',
             estimate: 'You will give n directly, with the basis for it.',
-            wheels: 'n will be worked out from each wheel and the share of weight on the front axle.',
+            wheels:
+              'n will be worked out from each wheel and the share of weight on the front axle.',
           })[choiceOf(a, 'vehicle.brakes') ?? ''],
       },
       [
@@ -98,7 +99,10 @@ export function vehicleQuestions(): Question[] {
         section: S,
         title: 'Braking efficiency',
         prompt: 'Braking efficiency n, as a decimal (1.00 = all wheels fully; a range is allowed)',
-        help: { why: 'n multiplies the drag factor in the slide formula.', how: 'e.g. 0.8, or 0.7-0.9 when unsure.' },
+        help: {
+          why: 'n multiplies the drag factor in the slide formula.',
+          how: 'e.g. 0.8, or 0.7-0.9 when unsure.',
+        },
         appliesWhen: brakesAre('estimate'),
         example: '0.8',
       },
@@ -109,7 +113,9 @@ export function vehicleQuestions(): Question[] {
       section: S,
       title: 'Basis of estimate',
       prompt: 'What is the estimate based on?',
-      help: { why: 'An estimate without its basis cannot be defended; the report prints it beside n.' },
+      help: {
+        why: 'An estimate without its basis cannot be defended; the report prints it beside n.',
+      },
       appliesWhen: brakesAre('estimate'),
       optional: true,
     }),
@@ -118,7 +124,7 @@ export function vehicleQuestions(): Question[] {
         id: 'vehicle.share',
         section: S,
         title: 'Front axle share',
-        prompt: 'Share of the vehicle\'s weight on the front axle (0 to 1; Enter for 0.55-0.65)',
+        prompt: "Share of the vehicle's weight on the front axle (0 to 1; Enter for 0.55-0.65)",
         help: {
           why: 'Each wheel brakes in proportion to the weight it carries, so a failed front brake costs more than a failed rear one. Weight shifts forward under braking, so the static share overstates n when only the rear brakes work.',
           how: 'Best from weighing the vehicle or its specification. Front-engine cars typically carry about 0.55-0.65 on the front axle (common practice; from memory).',

@@ -2,7 +2,9 @@
 import { RULES } from '../case/quantity.js';
 import type { Answers, AnswerContext, Question } from './types.js';
 import { choiceQuestion, quantityQuestion } from './question-kinds.js';
-import { choiceOf } from './answers-read.js';
+import { choiceOf, unitsOf } from './answers-read.js';
+import { spread } from '../case/quantity.js';
+import { radiusFromChord, unitsOf as engineUnits } from '../engine/index.js';
 import { readQuantity } from './read-quantity.js';
 import { dragQuestions } from './questions-drag.js';
 import { bankQuestions } from './questions-grade.js';
@@ -26,15 +28,37 @@ function ordinateCheck(chordId: string) {
     const q = value as number | { value: number; high?: number };
     const top = typeof q === 'number' ? q : (q.high ?? q.value);
     const unit = ctx.units === 'metric' ? 'm' : 'ft';
-    return top >= c / 2 ? `the middle ordinate must be less than half the chord (under ${c / 2} ${unit}); check both measurements` : undefined;
+    return top >= c / 2
+      ? `the middle ordinate must be less than half the chord (under ${c / 2} ${unit}); check both measurements`
+      : undefined;
   };
+}
+
+/** The engine's radius step for the chord and ordinate answered, with its warnings (nearly straight). */
+function radiusLine(a: Answers, p: string): string | undefined {
+  const units = unitsOf(a);
+  const read = (id: string) => {
+    const t = a[id]?.text;
+    const r = t === undefined ? undefined : readQuantity(t, LENGTH, units);
+    return r?.ok ? spread(r.value) : undefined;
+  };
+  const C = read(`${p}.chord`);
+  const M = read(`${p}.ordinate`);
+  if (!C || !M) return undefined;
+  const r = radiusFromChord(C, M, engineUnits(units));
+  return r.ok ? [r.value.step.substituted, ...r.value.warnings].join(' ') : undefined;
 }
 
 /**
  * Yaw questions of analysis `i`. `askTrack` says whether this analysis is where the track width
  * is asked (the first yaw analysis using the centre-of-mass path).
  */
-export function yawQuestions(i: number, section: string, applies: (a: Answers) => boolean, askTrack: (a: Answers) => boolean): Question[] {
+export function yawQuestions(
+  i: number,
+  section: string,
+  applies: (a: Answers) => boolean,
+  askTrack: (a: Answers) => boolean,
+): Question[] {
   const p = `a${i}`;
   return [
     quantityQuestion(
@@ -45,7 +69,7 @@ export function yawQuestions(i: number, section: string, applies: (a: Answers) =
         prompt: 'Chord length across the first part of the yaw mark',
         help: {
           why: 'The chord and its middle ordinate give the radius of the mark: R = C²/(8M) + M/2.',
-          how: 'Use the outside front tire\'s mark where the vehicle first yaws: stretch a tape between two points on the mark (chords of about 30-50 ft, or 10-15 m, are usual) and measure the tape\'s length.',
+          how: "Use the outside front tire's mark where the vehicle first yaws: stretch a tape between two points on the mark (chords of about 30-50 ft, or 10-15 m, are usual) and measure the tape's length.",
         },
         appliesWhen: applies,
         example: '45',
@@ -57,13 +81,15 @@ export function yawQuestions(i: number, section: string, applies: (a: Answers) =
         id: `${p}.ordinate`,
         section,
         title: 'Middle ordinate',
-        prompt: 'Middle ordinate: from the chord\'s midpoint to the mark, at right angles (e.g. 3.5, or 3 ft 6 in)',
+        prompt:
+          "Middle ordinate: from the chord's midpoint to the mark, at right angles (e.g. 3.5, or 3 ft 6 in)",
         help: {
           why: 'The radius is very sensitive to it: an error of one part in ten in the ordinate moves the radius by about the same share and the speed by about half that. Read it as finely as you can.',
-          how: 'At the chord\'s midpoint, measure square to the tape to the mark\'s outer edge; read to the nearest 1/8 inch (or few mm). It must be less than half the chord.',
+          how: "At the chord's midpoint, measure square to the tape to the mark's outer edge; read to the nearest 1/8 inch (or few mm). It must be less than half the chord.",
         },
         appliesWhen: applies,
         example: '3.5',
+        explainChoice: (a) => radiusLine(a, p),
       },
       { ...LENGTH, rule: { ...RULES.length, what: 'middle ordinate' } },
       ordinateCheck(`${p}.chord`),
@@ -77,8 +103,8 @@ export function yawQuestions(i: number, section: string, applies: (a: Answers) =
         title: 'Path',
         prompt: 'Which path should the radius describe?',
         help: {
-          why: 'The mark is the outside front tire\'s path; the centre of mass runs about half a track width inside it (common practice), a slightly smaller radius and a lower speed.',
-          how: 'The centre-of-mass path needs the vehicle\'s track width (centre to centre of the tires on one axle).',
+          why: "The mark is the outside front tire's path; the centre of mass runs about half a track width inside it (common practice), a slightly smaller radius and a lower speed.",
+          how: "The centre-of-mass path needs the vehicle's track width (centre to centre of the tires on one axle).",
         },
         appliesWhen: applies,
         defaultText: () => 'none',
@@ -94,7 +120,10 @@ export function yawQuestions(i: number, section: string, applies: (a: Answers) =
         section,
         title: 'Track width',
         prompt: 'Track width of the vehicle (centre to centre of the tires on one axle)',
-        help: { why: 'Half of it is taken off the radius for the centre-of-mass path.', how: 'Measure the vehicle, or take it from its specification.' },
+        help: {
+          why: 'Half of it is taken off the radius for the centre-of-mass path.',
+          how: 'Measure the vehicle, or take it from its specification.',
+        },
         appliesWhen: (a) => askTrack(a) && applies(a) && choiceOf(a, `${p}.path`) === 'half-track',
         example: '5.2',
       },

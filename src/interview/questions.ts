@@ -4,7 +4,18 @@
  */
 import type { Answers, Question } from './types.js';
 import { choiceQuestion, confirmQuestion, textQuestion, unitHintOf } from './question-kinds.js';
-import { analysisCount, choiceOf, isSlideLook, markLook, MAX_ANALYSES, maxIndexIn, segmentCount, surfaceMode, unitsOf, type MarkLook } from './answers-read.js';
+import {
+  analysisCount,
+  choiceOf,
+  isSlideLook,
+  markLook,
+  MAX_ANALYSES,
+  maxIndexIn,
+  segmentCount,
+  surfaceMode,
+  unitsOf,
+  type MarkLook,
+} from './answers-read.js';
 import { caseQuestions } from './questions-case.js';
 import { vehicleQuestions } from './questions-vehicle.js';
 import { slideQuestions } from './questions-slide.js';
@@ -15,7 +26,13 @@ export function analysisSection(a: Answers, i: number): string {
   const look = markLook(a, i);
   const mode = surfaceMode(a, i);
   const chain =
-    look === undefined ? '' : look === 'yaw' ? ' - critical speed' : look === 'gap' || mode === 'several' || mode === 'quick' ? ' - slide in parts' : ' - slide';
+    look === undefined
+      ? ''
+      : look === 'yaw'
+        ? ' - critical speed'
+        : look === 'gap' || mode === 'several' || mode === 'quick'
+          ? ' - slide in parts'
+          : ' - slide';
   return `Analysis ${i + 1}${chain}`;
 }
 
@@ -49,7 +66,10 @@ function analysisQuestions(i: number, now: Answers, segments: number): Question[
         id: `${p}.look`,
         section,
         title: 'Marks',
-        prompt: i === 0 ? 'What do the marks look like?' : 'What do the marks of this analysis look like?',
+        prompt:
+          i === 0
+            ? 'What do the marks look like?'
+            : 'What do the marks of this analysis look like?',
         help: {
           why: 'The look of the marks tells how they were made, and so which formula chain applies.',
           how: 'Look along the whole length: locked-wheel marks are straight and darken toward the end; yaw marks curve and show striations across the mark.',
@@ -84,7 +104,9 @@ function analysisQuestions(i: number, now: Answers, segments: number): Question[
       section,
       title: 'Another analysis?',
       prompt: 'Add another analysis (another set of marks, or the same marks another way)?',
-      help: { why: 'A case may hold several analyses, e.g. a slide before an impact and yaw marks after it.' },
+      help: {
+        why: 'A case may hold several analyses, e.g. a slide before an impact and yaw marks after it.',
+      },
       appliesWhen: (a) => inPlay(a) && i < MAX_ANALYSES - 1,
       defaultText: () => 'no',
     }),
@@ -96,10 +118,25 @@ function analysisQuestions(i: number, now: Answers, segments: number): Question[
  * (so that answers kept from them can be named); `appliesWhen` tells which apply.
  */
 export function allQuestions(answers: Answers): Question[] {
+  // Answers are never mutated (every change makes a new object), so the list can be kept per object.
+  const hit = ALL.get(answers);
+  if (hit) return hit;
+  const list = expand(answers);
+  ALL.set(answers, list);
+  return list;
+}
+
+const ALL = new WeakMap<Answers, Question[]>();
+const APPLICABLE = new WeakMap<Answers, Question[]>();
+
+function expand(answers: Answers): Question[] {
   const analyses = Math.max(analysisCount(answers), maxIndexIn(answers, /^a(\d+)\./));
   const out: Question[] = [...caseQuestions(), ...vehicleQuestions()];
   for (let i = 0; i < analyses; i++) {
-    const segs = Math.max(segmentCount(answers, i), maxIndexIn(answers, new RegExp(`^a${i}\\.seg(\\d+)\\.`)));
+    const segs = Math.max(
+      segmentCount(answers, i),
+      maxIndexIn(answers, new RegExp(`^a${i}\\.seg(\\d+)\\.`)),
+    );
     out.push(...analysisQuestions(i, answers, segs));
   }
   const units = unitsOf(answers);
@@ -111,10 +148,14 @@ export function allQuestions(answers: Answers): Question[] {
 
 /** The questions that apply now, in the order asked. */
 export function questionsFor(answers: Answers): Question[] {
+  const hit = APPLICABLE.get(answers);
+  if (hit) return hit;
   const seen = new Set<string>();
-  return allQuestions(answers).filter((q) => {
+  const list = allQuestions(answers).filter((q) => {
     if (seen.has(q.id) || !q.appliesWhen(answers)) return false;
     seen.add(q.id);
     return true;
   });
+  APPLICABLE.set(answers, list);
+  return list;
 }

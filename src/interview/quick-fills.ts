@@ -15,7 +15,9 @@ const answer = (text: string, value: unknown = text) => ({ text, value });
 function dragFills(fills: Answers, p: string, d: DragV1): void {
   if (d.source !== 'entered' && d.source !== 'table') return;
   fills[`${p}.drag.source`] = answer(d.source);
-  fills[`${p}.drag.value`] = answer(quantityText({ value: d.value, low: d.low ?? d.value, high: d.high ?? d.value }));
+  fills[`${p}.drag.value`] = answer(
+    quantityText({ value: d.value, low: d.low ?? d.value, high: d.high ?? d.value }),
+  );
   if (d.source === 'table') {
     const known = surfaceRow(d.surface) !== undefined;
     fills[`${p}.drag.surface`] = answer(known ? d.surface : OTHER_SURFACE);
@@ -31,7 +33,8 @@ function segmentFills(fills: Answers, sp: string, s: SegmentV1, answers: Answers
   dragFills(fills, sp, s.drag);
   const g = s.grade ?? 0;
   const v = typeof g === 'number' ? g : g.value;
-  const flat = typeof g === 'number' ? g === 0 : g.value === 0 && (g.low ?? 0) === 0 && (g.high ?? 0) === 0;
+  const flat =
+    typeof g === 'number' ? g === 0 : g.value === 0 && (g.low ?? 0) === 0 && (g.high ?? 0) === 0;
   if (flat) fills[`${sp}.grade.dir`] = answer('level');
   else {
     fills[`${sp}.grade.dir`] = answer(v < 0 ? 'downhill' : 'uphill');
@@ -46,10 +49,16 @@ function segmentFills(fills: Answers, sp: string, s: SegmentV1, answers: Answers
 export function quickFills(text: string, ctx: AnswerContext, p: string): ParseResult {
   const r = parseSegmentLine(text, { units: ctx.units });
   if (!r.ok) return r;
-  if (r.segments.length > 20) return { ok: false, message: `at most 20 segments (${r.segments.length} typed)` };
+  if (r.segments.length > 20)
+    return { ok: false, message: `at most 20 segments (${r.segments.length} typed)` };
   const fills: Answers = {};
   r.segments.forEach((s, j) => segmentFills(fills, `${p}.seg${j}`, s, ctx.answers));
   const n = r.segments.length;
   const filled = `${n} segment${n === 1 ? '' : 's'} filled in; each can be checked or changed question by question.`;
-  return { ok: true, value: r.segments, fills, notice: r.converted ? `${filled} Converted: ${r.converted}` : filled };
+  return {
+    ok: true,
+    value: r.segments,
+    fills,
+    notice: r.converted ? `${filled} Converted: ${r.converted}` : filled,
+  };
 }

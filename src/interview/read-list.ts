@@ -7,7 +7,8 @@ import type { Quantity, QuantityRule } from '../case/quantity.js';
 import { parseList, parseMarksLine } from '../input/index.js';
 import { readQuantity, type QuantitySpec } from './read-quantity.js';
 
-export type ListRead = { ok: true; value: Quantity[]; notice?: string } | { ok: false; message: string };
+export type ListRead =
+  { ok: true; value: Quantity[]; notice?: string } | { ok: false; message: string };
 
 const withNote = (value: Quantity[], converted?: string, extra?: string): ListRead => {
   const notes = [extra, converted && `converted: ${converted}`].filter((s): s is string => !!s);
@@ -37,8 +38,20 @@ export function readMarks(text: string, units: UnitSystem, count?: number): List
 }
 
 /** Reads several values of one kind (sled pulls, decelerometer readings). */
-export function readValues(text: string, spec: QuantitySpec, units: UnitSystem, item: string): ListRead {
-  const r = parseList(text, { field: spec.rule.what, item, kind: spec.kind, units, rule: spec.rule, allowRange: spec.range });
+export function readValues(
+  text: string,
+  spec: QuantitySpec,
+  units: UnitSystem,
+  item: string,
+): ListRead {
+  const r = parseList(text, {
+    field: spec.rule.what,
+    item,
+    kind: spec.kind,
+    units,
+    rule: spec.rule,
+    allowRange: spec.range,
+  });
   if (!r.ok) return r;
   return withNote(r.values, r.converted);
 }
@@ -58,14 +71,16 @@ export function readTestSkids(
   rules: { speed: QuantityRule; distance: QuantityRule },
 ): { ok: true; value: TestSkid[]; notice?: string } | { ok: false; message: string } {
   const items = text.split(/\s*[,;]\s*/).filter((s) => s.trim() !== '');
-  if (items.length === 0) return { ok: false, message: 'give at least one test as speed/distance, e.g. 30/42' };
+  if (items.length === 0)
+    return { ok: false, message: 'give at least one test as speed/distance, e.g. 30/42' };
   const out: TestSkid[] = [];
   const notes: string[] = [];
   for (const [i, item] of items.entries()) {
     // A slash splits the pair, except the one inside "km/h" (and "mi/h", "ft/s").
     const parts = item.split(/\s+\/\s+|(?<![a-z])\/|\/(?![a-z])/i);
     const where = items.length > 1 ? `test ${i + 1} ("${item.trim()}"): ` : '';
-    if (parts.length !== 2) return { ok: false, message: `${where}write each test as speed/distance, e.g. 30/42` };
+    if (parts.length !== 2)
+      return { ok: false, message: `${where}write each test as speed/distance, e.g. 30/42` };
     const s = readQuantity(parts[0]!, { kind: 'speed', rule: rules.speed, range: true }, units);
     if (!s.ok) return { ok: false, message: where + s.message };
     const d = readQuantity(parts[1]!, { kind: 'length', rule: rules.distance, range: true }, units);
@@ -73,5 +88,7 @@ export function readTestSkids(
     for (const n of [s.notice, d.notice]) if (n) notes.push(n);
     out.push({ speed: s.value, distance: d.value });
   }
-  return notes.length ? { ok: true, value: out, notice: notes.join('; ') } : { ok: true, value: out };
+  return notes.length
+    ? { ok: true, value: out, notice: notes.join('; ') }
+    : { ok: true, value: out };
 }

@@ -15,7 +15,8 @@ export interface QuantitySpec {
   noMinus?: string;
 }
 
-export type QuantityRead = { ok: true; value: Quantity; notice?: string } | { ok: false; message: string };
+export type QuantityRead =
+  { ok: true; value: Quantity; notice?: string } | { ok: false; message: string };
 
 /**
  * Reads `text` into a Quantity in the case's units; a converted unit comes back as a notice.
@@ -32,7 +33,9 @@ export function readQuantity(text: string, spec: QuantitySpec, units: UnitSystem
     ...(spec.noMinus ? { signed: false, negativeHint: spec.noMinus } : {}),
   });
   if (!r.ok) return r;
-  return r.converted ? { ok: true, value: r.value, notice: `converted: ${r.converted}` } : { ok: true, value: r.value };
+  return r.converted
+    ? { ok: true, value: r.value, notice: `converted: ${r.converted}` }
+    : { ok: true, value: r.value };
 }
 
 /** Writes a Quantity back as text the reader accepts: `80.5` or `80.5 (79.5-81.5)`. */

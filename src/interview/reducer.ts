@@ -44,7 +44,9 @@ function submit(state: InterviewState, q: Question, typed: string): InterviewSta
   if (text.trim() === '' && !q.optional) text = q.defaultText?.(state.answers) ?? '';
   const r = q.parse(text, contextOf(state.answers));
   if (!r.ok) return { ...quiet(state), error: { id: q.id, text: typed, message: r.message } };
-  let answers: Answers = { ...state.answers, [q.id]: { text: text.trim(), value: r.value } };
+  // A choice is stored by its value, not the key pressed, so a later change of keys cannot re-read it.
+  const stored = q.choices && typeof r.value === 'string' ? r.value : text.trim();
+  let answers: Answers = { ...state.answers, [q.id]: { text: stored, value: r.value } };
   if (r.fills) answers = withFills(answers, r.fills);
   const next: InterviewState = {
     ...quiet(state),
@@ -52,7 +54,8 @@ function submit(state: InterviewState, q: Question, typed: string): InterviewSta
     cursor: nextOpenAfter(answers, q.id),
     undo: [...state.undo, { answers: state.answers, cursor: state.cursor }].slice(-UNDO_LIMIT),
   };
-  const unitsChanged = q.id === 'units' && state.answers.units && state.answers.units.value !== r.value;
+  const unitsChanged =
+    q.id === 'units' && state.answers.units && state.answers.units.value !== r.value;
   const notice = unitsChanged ? UNITS_NOTE : (r.notice ?? q.explainChoice?.(answers));
   return notice ? { ...next, notice } : next;
 }
@@ -65,18 +68,35 @@ export function reduce(state: InterviewState, action: Action): InterviewState {
   const s = cursor === state.cursor ? state : { ...state, cursor };
   switch (action.type) {
     case 'answer':
-      return here ? submit(s, here, action.text) : { ...quiet(s), notice: 'The review is open: choose a question to change an answer.' };
+      return here
+        ? submit(s, here, action.text)
+        : { ...quiet(s), notice: 'The review is open: choose a question to change an answer.' };
     case 'accept-default': {
       if (!here) return quiet(s);
       const d = here.defaultText?.(s.answers);
       if (d === undefined && !here.optional)
-        return { ...quiet(s), error: { id: here.id, text: '', message: 'there is no default for this question: type an answer' } };
+        return {
+          ...quiet(s),
+          error: {
+            id: here.id,
+            text: '',
+            message: 'there is no default for this question: type an answer',
+          },
+        };
       return submit(s, here, d ?? '');
     }
     case 'choose': {
       if (!here) return quiet(s);
       const c = here.choices && matchChoice(here.choices, action.value);
-      if (!c) return { ...quiet(s), error: { id: here.id, text: action.value, message: `"${action.value}" is not one of the choices here` } };
+      if (!c)
+        return {
+          ...quiet(s),
+          error: {
+            id: here.id,
+            text: action.value,
+            message: `"${action.value}" is not one of the choices here`,
+          },
+        };
       return submit(s, here, c.value);
     }
     case 'back':
@@ -84,12 +104,19 @@ export function reduce(state: InterviewState, action: Action): InterviewState {
     case 'forward':
       return { ...quiet(s), cursor: nextOf(questions, cursor) };
     case 'jump':
-      if (action.id === REVIEW || questions.some((q) => q.id === action.id)) return { ...quiet(s), cursor: action.id };
+      if (action.id === REVIEW || questions.some((q) => q.id === action.id))
+        return { ...quiet(s), cursor: action.id };
       return { ...quiet(s), notice: 'That question does not apply with the answers given so far.' };
     case 'undo': {
       const last = s.undo[s.undo.length - 1];
       if (!last) return { ...quiet(s), notice: 'Nothing to undo.' };
-      return { ...quiet(s), answers: last.answers, cursor: last.cursor, undo: s.undo.slice(0, -1), notice: 'Last answer undone.' };
+      return {
+        ...quiet(s),
+        answers: last.answers,
+        cursor: last.cursor,
+        undo: s.undo.slice(0, -1),
+        notice: 'Last answer undone.',
+      };
     }
     case 'open-review':
       return { ...quiet(s), cursor: REVIEW };

@@ -42,8 +42,7 @@ export interface Choice {
 
 /** Result of parsing a typed answer: the value, or the message the user sees. */
 export type ParseResult =
-  | { ok: true; value: unknown; notice?: string; fills?: Answers }
-  | { ok: false; message: string };
+  { ok: true; value: unknown; notice?: string; fills?: Answers } | { ok: false; message: string };
 
 /**
  * A question as data. The concrete list of questions that apply is `questionsFor(answers)`;

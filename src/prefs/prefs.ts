@@ -59,16 +59,26 @@ function open(opts: PrefsOptions): Opened {
 export function loadPrefs(opts: PrefsOptions = {}): LoadedPrefs {
   try {
     const { conf, parseError } = open(opts);
-    if (parseError) return { prefs: { ...DEFAULT_PREFS }, warnings: [`${conf.path}: ${parseError}; defaults are used`], file: conf.path };
+    if (parseError)
+      return {
+        prefs: { ...DEFAULT_PREFS },
+        warnings: [`${conf.path}: ${parseError}; defaults are used`],
+        file: conf.path,
+      };
     const { prefs, warnings } = readPrefs(conf.store);
     return { prefs, warnings: warnings.map((w) => `${conf.path}: ${w}`), file: conf.path };
   } catch (e) {
     // Unreadable folder or file: still never a crash.
-    return { prefs: { ...DEFAULT_PREFS }, warnings: [`preferences could not be read: ${reason(e)}; defaults are used`], file: '' };
+    return {
+      prefs: { ...DEFAULT_PREFS },
+      warnings: [`preferences could not be read: ${reason(e)}; defaults are used`],
+      file: '',
+    };
   }
 }
 
-export type SavePrefResult = { ok: true; file: string; warning?: string } | { ok: false; message: string };
+export type SavePrefResult =
+  { ok: true; file: string; warning?: string } | { ok: false; message: string };
 
 /**
  * Saves one preference after checking it (`reactionTime` 0.5 to 5 s, ...); `undefined` removes an
@@ -78,9 +88,14 @@ export type SavePrefResult = { ok: true; file: string; warning?: string } | { ok
  * @example
  * savePref('units', 'metric');
  */
-export function savePref<K extends PrefKey>(key: K, value: Prefs[K], opts: PrefsOptions = {}): SavePrefResult {
+export function savePref<K extends PrefKey>(
+  key: K,
+  value: Prefs[K],
+  opts: PrefsOptions = {},
+): SavePrefResult {
   const checked = PREF_FIELDS[key].safeParse(value);
-  if (!checked.success) return { ok: false, message: checked.error.issues[0]?.message ?? `${key} is not valid` };
+  if (!checked.success)
+    return { ok: false, message: checked.error.issues[0]?.message ?? `${key} is not valid` };
   try {
     let { conf, parseError } = open(opts);
     let warning: string | undefined;

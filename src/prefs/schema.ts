@@ -10,7 +10,10 @@ export const PREF_FIELDS = {
     .number({ error: 'reactionTime must be a number of seconds' })
     .min(REACTION_TIME.min, `reactionTime must be at least ${REACTION_TIME.min} s`)
     .max(REACTION_TIME.max, `reactionTime must be at most ${REACTION_TIME.max} s`),
-  sessionsDir: z.string({ error: 'sessionsDir must be a folder path' }).min(1, 'sessionsDir must not be empty').optional(),
+  sessionsDir: z
+    .string({ error: 'sessionsDir must be a folder path' })
+    .min(1, 'sessionsDir must not be empty')
+    .optional(),
   hints: z.boolean({ error: 'hints must be true or false' }),
   mode: z.enum(['guided', 'brisk'], { error: 'mode must be guided or brisk' }),
 } as const;
@@ -37,7 +40,11 @@ export function readPrefs(stored: unknown): { prefs: Prefs; warnings: string[] }
   const prefs: Prefs = { ...DEFAULT_PREFS };
   const warnings: string[] = [];
   if (typeof stored !== 'object' || stored === null || Array.isArray(stored))
-    return { prefs, warnings: stored === undefined ? [] : ['the preferences are not an object; defaults are used'] };
+    return {
+      prefs,
+      warnings:
+        stored === undefined ? [] : ['the preferences are not an object; defaults are used'],
+    };
   const obj = stored as Record<string, unknown>;
   for (const key of Object.keys(PREF_FIELDS) as PrefKey[]) {
     if (!(key in obj) || obj[key] === undefined) continue;

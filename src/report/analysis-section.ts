@@ -56,7 +56,8 @@ function boundaryTable(s: AnalysisSolution, units: Units): Block[] {
 
 /**
  * One analysis: the "at least" statement, the chain step by step, the speed along the slide, the
- * drag factor's sources, assumptions and warnings, then any further sections (`more`). A failed
+ * drag factor's sources, any further sections (`more`: pictures, sensitivity, ...), assumptions
+ * and warnings. A failed
  * analysis says why it could not be computed, naming the field when the engine does.
  */
 export function analysisSection(
@@ -89,10 +90,10 @@ export function analysisSection(
       ? [section(`${id}-along`, 'Speed along the slide', boundaryTable(s, units))]
       : []),
     section(`${id}-drag`, 'Where the drag factor comes from', [list(dragLines(a))]),
+    ...more,
     section(`${id}-assumptions`, 'Assumptions', [
       s.assumptions.length ? list(s.assumptions) : para('None recorded beyond the method itself.'),
     ]),
     section(`${id}-warnings`, 'Warnings', [s.warnings.length ? list(s.warnings) : para('None.')]),
-    ...more,
   ]);
 }

@@ -18,6 +18,7 @@ import { speedText } from './figures-text.js';
 import { formatNumber } from '../format/numbers.js';
 import { measurementTables } from './measurements.js';
 
+/** What the report says about itself, and settings of its further sections. */
 export interface ReportMeta {
   /** skidcase's version, printed in the report. */
   toolVersion: string;
@@ -45,12 +46,12 @@ function detailsSection(c: Case, meta: ReportMeta): Section {
   ];
   const blocks: Block[] = [
     table(
-      'Case details',
+      '',
       ['Field', 'Entry'],
       rows.filter((r) => r[1] !== ''),
     ),
   ];
-  if (d.notes) blocks.push(table('Notes', ['Notes'], [[d.notes]]));
+  if (d.notes) blocks.push(para(`Notes: ${d.notes}`));
   return section('details', 'Case details', blocks);
 }
 
@@ -68,7 +69,7 @@ function summarySection(c: Case, sol: CaseSolution): Section {
     ];
   });
   const blocks: Block[] = [
-    table('Results', ['Analysis', 'Kind', 'Minimum', 'Computed', 'Range'], rows, [
+    table('', ['Analysis', 'Kind', 'Minimum', 'Computed', 'Range'], rows, [
       'left',
       'left',
       'left',
@@ -108,6 +109,9 @@ function limitSection(sol: CaseSolution): Section | undefined {
  * step (with sensitivity, sampling, time and distance and pictures where they apply), the posted
  * limit comparison, file warnings, the cautions and where the figures come from. Pure: every
  * figure is read from `solution` (the engine's steps and ranges); nothing is computed here.
+ * @example
+ * const doc = buildReport(c, solveCase(c), { toolVersion: '0.1.0', generatedAt: new Date().toISOString(), caseFile: 'harbor.json' });
+ * renderText(doc) // 'Speed from tire marks: ...', 80 columns
  */
 export function buildReport(c: Case, solution: CaseSolution, meta: ReportMeta): ReportDoc {
   const units = solution.units;

@@ -9,6 +9,7 @@
 export const REPORT_FORMAT = 'skidcase-report';
 export const REPORT_VERSION = 1;
 
+/** A paragraph of text; `tone` says how much it stands out. */
 export interface Paragraph {
   kind: 'paragraph';
   text: string;
@@ -16,11 +17,13 @@ export interface Paragraph {
   tone: 'plain' | 'strong' | 'note';
 }
 
+/** A list of items, in order. */
 export interface BulletList {
   kind: 'list';
   items: string[];
 }
 
+/** A table of text cells; `caption` may be empty. */
 export interface Table {
   kind: 'table';
   caption: string;
@@ -55,8 +58,10 @@ export interface Figure {
   textLines: string[];
 }
 
+/** Anything a section holds. */
 export type Block = Paragraph | BulletList | Table | StepBlock | Figure;
 
+/** A titled part of the report, with its blocks and its own sub-sections. */
 export interface Section {
   /** Stable anchor, [a-z0-9-]. */
   id: string;
@@ -65,6 +70,7 @@ export interface Section {
   sections: Section[];
 }
 
+/** The whole report: what it is, what it was made from and by, and its sections. */
 export interface ReportDoc {
   format: typeof REPORT_FORMAT;
   version: typeof REPORT_VERSION;
@@ -82,8 +88,10 @@ export const para = (text: string, tone: Paragraph['tone'] = 'plain'): Paragraph
   tone,
 });
 
+/** A list block. */
 export const list = (items: string[]): BulletList => ({ kind: 'list', items });
 
+/** A table block; columns are left-aligned unless `align` says otherwise. */
 export function table(
   caption: string,
   columns: string[],
@@ -93,6 +101,7 @@ export function table(
   return { kind: 'table', caption, columns, align: align ?? columns.map(() => 'left'), rows };
 }
 
+/** A section; sub-sections optional. */
 export function section(
   id: string,
   title: string,

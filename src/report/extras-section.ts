@@ -1,26 +1,24 @@
 import type { Case } from '../case/load.js';
 import type { AnalysisSolution, Units } from '../engine/types.js';
-import { sampleSpeeds, type SampleShape } from '../extras/sampling.js';
+import { samplingFromCase } from '../extras/case-fields.js';
+import { sensitivitySvg } from '../extras/pictures-svg.js';
+import { sampleSpeeds, type SampleOptions } from '../extras/sampling.js';
 import { sensitivityBars } from '../extras/sensitivity-bars.js';
 import { sensitivity, type SensitivityRow } from '../extras/sensitivity.js';
 import { formatNumber } from '../format/numbers.js';
-import { fileSafe, para, section, table, type Block, type Section } from './doc.js';
+import { para, section, table, type Block, type Section } from './doc.js';
 import { speedText } from './figures-text.js';
+import { figureName, picturesSection } from './pictures-section.js';
 import { TEXT_WIDTH } from './render-text.js';
-
-/** Settings of the draws: the case's own `sampling` field wins over these. */
-export interface ReportSampling {
-  shape?: SampleShape;
-  samples?: number;
-  seed?: number;
-}
+import { timeDistanceSection } from './time-distance-section.js';
+import { offsetsSection } from './offsets-section.js';
 
 /** Settings of the further sections. */
 export interface ReportExtrasOptions {
-  /** Perception-reaction time in seconds for the time-distance section; default 1.5. */
+  /** Perception-reaction time in seconds (the user's preference); the case's own field wins. */
   reactionTime?: number;
-  /** Sample the inputs even when the case does not ask for it. */
-  sampling?: ReportSampling;
+  /** Sample the inputs even when the case has no `sampling` field (the case's field wins). */
+  sampling?: SampleOptions;
 }
 
 /** A change of speed with its sign; a change that rounds to zero shows as 0.0, unsigned. */
@@ -29,8 +27,11 @@ function signedSpeed(n: number): string {
   return n > 0 && /[1-9]/.test(t) ? `+${t}` : t;
 }
 
-/** An input's own number without float noise, close to how it was entered (6 significant digits). */
-const plain = (n: number) => String(Number(n.toPrecision(6)));
+/**
+ * An input's own number without float noise: 4 significant digits (one decimal from 100 up), so
+ * an entered 17.95 stays 17.95 and a mean of test skids reads 0.6924.
+ */
+const plain = (n: number) => (Math.abs(n) >= 100 ? n.toFixed(1) : String(Number(n.toPrecision(4))));
 
 function inputRange(r: SensitivityRow): string {
   const u = r.unit === '%' ? '%' : r.unit ? ` ${r.unit}` : '';
@@ -38,6 +39,8 @@ function inputRange(r: SensitivityRow): string {
 }
 
 function sensitivityTable(rows: SensitivityRow[], u: Units): Block {
+  const at = (s: number | undefined) =>
+    s === undefined ? 'not computable' : formatNumber(s, 'speed');
   return table(
     'Speed at each end of one input, all others at their value',
     [
@@ -47,25 +50,25 @@ function sensitivityTable(rows: SensitivityRow[], u: Units): Block {
       `At its high end (${u.speed})`,
       'Change',
     ],
-    rows.map((r) => {
-      const at = (s: number | undefined) =>
-        s === undefined ? 'not computable' : formatNumber(s, 'speed');
-      return [
-        `${r.key}: ${r.label}`,
-        inputRange(r),
-        at(r.atLow),
-        at(r.atHigh),
-        `${signedSpeed(r.down)} / ${signedSpeed(r.up)}`,
-      ];
-    }),
+    rows.map((r) => [
+      `${r.key}: ${r.label}`,
+      inputRange(r),
+      at(r.atLow),
+      at(r.atHigh),
+      `${signedSpeed(r.down)} / ${signedSpeed(r.up)}`,
+    ]),
     ['left', 'right', 'right', 'right', 'right'],
   );
 }
 
-function sensitivitySection(s: AnalysisSolution, id: string, u: Units): Section | undefined {
+function sensitivitySection(
+  c: Case,
+  s: AnalysisSolution,
+  id: string,
+  u: Units,
+): Section | undefined {
   const rows = sensitivity(s);
   if (rows.length === 0) return undefined;
-  const bars = sensitivityBars(rows, TEXT_WIDTH - 4, { speedUnit: u.speed });
   return section(`${id}-sensitivity`, 'Which measurement moves the speed most', [
     para(
       `Each input in turn set to the low and then the high end of its range, every other input at its value; largest swing first. The base figure is ${speedText(rows[0]!.base, u.speed)}. Re-measuring the input at the top narrows the range most.`,
@@ -73,26 +76,12 @@ function sensitivitySection(s: AnalysisSolution, id: string, u: Units): Section 
     sensitivityTable(rows, u),
     {
       kind: 'figure',
-      name: fileSafe(`${s.id}-sensitivity`),
-      caption: `Sensitivity of ${s.id}`,
-      svg: '',
-      textLines: bars,
+      name: figureName(c, s.id, 'sensitivity'),
+      caption: `Sensitivity of ${s.id}: change in speed with each input at the ends of its range`,
+      svg: sensitivitySvg(rows, { speedUnit: u.speed }),
+      textLines: sensitivityBars(rows, TEXT_WIDTH - 4, { speedUnit: u.speed }),
     },
   ]);
-}
-
-/** The case's own `sampling` field (proposed for the schema), read defensively, else the options. */
-function samplingSettings(c: Case, opts: ReportExtrasOptions): ReportSampling | undefined {
-  const raw = (c as Record<string, unknown>).sampling;
-  if (raw && typeof raw === 'object') {
-    const o = raw as Record<string, unknown>;
-    return {
-      ...(o.shape === 'uniform' || o.shape === 'normal' ? { shape: o.shape } : {}),
-      ...(typeof o.samples === 'number' ? { samples: o.samples } : {}),
-      ...(typeof o.seed === 'number' ? { seed: o.seed } : {}),
-    };
-  }
-  return opts.sampling;
 }
 
 function samplingSection(
@@ -102,22 +91,22 @@ function samplingSection(
   u: Units,
   opts: ReportExtrasOptions,
 ): Section | undefined {
-  const set = samplingSettings(c, opts);
-  if (!set) return undefined;
-  const r = sampleSpeeds(s.model, {
-    ...(set.samples !== undefined ? { n: set.samples } : {}),
-    ...(set.seed !== undefined ? { seed: set.seed } : {}),
-    ...(set.shape !== undefined ? { shape: set.shape } : {}),
-  });
-  if (!r.ok)
-    return section(`${id}-sampling`, 'Spread of the speed by sampling', [
-      para(`Not sampled: ${r.reason}.`),
+  const title = 'Spread of the speed by sampling';
+  const field = samplingFromCase(c);
+  if (!field.ok)
+    return section(`${id}-sampling`, title, [
+      para(`Not sampled: ${field.reason}${field.path ? ` (field ${field.path})` : ''}.`),
     ]);
+  const set = field.value ?? opts.sampling;
+  if (!set) return undefined;
+  const r = sampleSpeeds(s.model, set);
+  if (!r.ok) return section(`${id}-sampling`, title, [para(`Not sampled: ${r.reason}.`)]);
   const v = r.value;
   const sp = (n: number) => formatNumber(n, 'speed');
-  return section(`${id}-sampling`, 'Spread of the speed by sampling', [
+  const skipped = v.skipped ? ` ${v.skipped} draws gave no speed and are left out.` : '';
+  return section(`${id}-sampling`, title, [
     para(
-      `${v.samples} draws, ${v.method}; seed ${v.seed}, so the same file gives the same figures. ${v.skipped ? `${v.skipped} draws gave no speed and are left out.` : ''}`.trim(),
+      `${v.samples} draws, ${v.method}; seed ${v.seed}, so the same file gives the same figures.${skipped}`,
     ),
     table(
       `Percentiles of the start speed (${u.speed}) beside the bounds`,
@@ -126,13 +115,18 @@ function samplingSection(
       ['right', 'right', 'right', 'right', 'right'],
     ),
     para(
-      'The percentiles depend on the assumed shape of each input\u2019s spread; the bounds do not. The minimum stated above rests on the bounds.',
+      'The percentiles depend on the assumed shape of each input’s spread; the bounds do not. The minimum stated above rests on the bounds.',
       'note',
     ),
   ]);
 }
 
-/** The further sections of one analysis (sensitivity, sampling, time and distance, pictures). */
+/**
+ * The further sections of one analysis, each where it applies: sensitivity (any input with a
+ * range), sampling (when the case asks for it), time and distance at the posted limit (a slide
+ * in a case with a limit), the picture (speed along a slide, or the yaw arc), and the circle
+ * fitted to offsets where a yaw analysis has them.
+ */
 export function extrasSections(
   c: Case,
   s: AnalysisSolution,
@@ -141,7 +135,11 @@ export function extrasSections(
   opts: ReportExtrasOptions = {},
 ): Section[] {
   const id = `analysis-${i + 1}`;
-  return [sensitivitySection(s, id, units), samplingSection(c, s, id, units, opts)].filter(
-    (x): x is Section => x !== undefined,
-  );
+  return [
+    picturesSection(c, s, id, units),
+    offsetsSection(c, s, id, units),
+    sensitivitySection(c, s, id, units),
+    samplingSection(c, s, id, units, opts),
+    timeDistanceSection(c, s, id, units, opts.reactionTime),
+  ].filter((x): x is Section => x !== undefined);
 }

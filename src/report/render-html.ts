@@ -42,6 +42,7 @@ figcaption { font-style: italic; font-size: .9rem; }
   body { margin: 0; max-width: none; padding: 0; font-size: 10pt; }
   h2, h3, h4 { break-after: avoid; }
   table, .step, figure { break-inside: avoid; }
+  main > section[id^="analysis-"] { break-before: page; }
 }
 `.trim();
 

@@ -54,7 +54,7 @@ function blockMd(b: Block, opts: MarkdownOptions): string {
       if (href) parts.push(`![${escapeMd(b.caption)}](${encodeURI(href)})`);
       if (b.textLines.length > 0) parts.push(['```text', ...b.textLines, '```'].join('\n'));
       if (!href && b.svg)
-        parts.push(`(Picture file \`${b.name}.svg\` is written beside the report with --out.)`);
+        parts.push('(The picture is written beside the report as an SVG file with --out.)');
       return parts.join('\n\n');
     }
   }

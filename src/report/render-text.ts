@@ -5,6 +5,7 @@ import { hang, width, wrap } from './wrap.js';
 /** Line width of the plain-text report. */
 export const TEXT_WIDTH = 80;
 
+/** Options of the text form. */
 export interface TextOptions {
   /** Line width; default 80. */
   width?: number;

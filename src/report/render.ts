@@ -4,7 +4,9 @@ import { renderJson } from './render-json.js';
 import { renderMarkdown } from './render-markdown.js';
 import { renderText } from './render-text.js';
 
+/** The forms a report is rendered in: Markdown, plain text, JSON, printable HTML. */
 export type ReportFormat = 'md' | 'txt' | 'json' | 'html';
+/** Every form, in the order the help lists them. */
 export const REPORT_FORMATS: readonly ReportFormat[] = ['md', 'txt', 'json', 'html'];
 
 /**

@@ -10,6 +10,8 @@ import { list, para, section, table, type Section } from './doc.js';
 /** Perception-reaction time when neither the case nor the user's preference sets one (DOMAIN.md). */
 export const DEFAULT_REACTION_TIME = 1.5;
 
+const asChosen = (t: number) => String(Number(t.toPrecision(4)));
+
 const rangeText = (r: Range, kind: 'length' | 'seconds' | 'speed', unit: string) =>
   formatRange(r, kind, unit);
 
@@ -85,9 +87,8 @@ export function timeDistanceSection(
   const t = r.value;
   const limit = `${t.postedLimit} ${u.speed}`;
   return section(`${id}-time`, title, [
-    para(
-      `Perception-reaction time ${formatNumber(t.reactionTime, 'seconds')} s (${t.reactionSource}).`,
-    ),
+    // The time as chosen (1.25 s stays 1.25 s), not rounded like a computed time.
+    para(`Perception-reaction time ${asChosen(t.reactionTime)} s (${t.reactionSource}).`),
     para(verdictText(t.endOfMarks, limit, u), 'strong'),
     ...(t.conflict ? [para(verdictText(t.conflict, limit, u), 'strong')] : []),
     figuresTable(t, u),

@@ -9,6 +9,7 @@ export interface OutFile {
   content: string;
 }
 
+/** Written (the paths, in order), refused because files exist (their paths), or an I/O failure. */
 export type WriteResult =
   | { ok: true; written: string[] }
   | { ok: false; kind: 'exists'; paths: string[] }
@@ -73,6 +74,8 @@ export async function writeFiles(files: OutFile[], force: boolean): Promise<Writ
       }
       written.push(f.path);
     } catch (e) {
+      // Without --force every file written here was new: remove them, so a failed run leaves nothing.
+      if (!force) await Promise.all(written.map((p) => unlink(p).catch(() => undefined)));
       return {
         ok: false,
         kind: 'io',

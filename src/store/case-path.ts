@@ -18,7 +18,10 @@ export function checkId(id: string): string | undefined {
 /** Shows control characters (NUL and the like) as `\u0000` so a message never hides them. */
 function printable(s: string): string {
   // eslint-disable-next-line no-control-regex
-  return s.replace(/[\u0000-\u001f\u007f]/g, (ch) => `\\u${ch.charCodeAt(0).toString(16).padStart(4, '0')}`);
+  return s.replace(
+    /[\u0000-\u001f\u007f]/g,
+    (ch) => `\\u${ch.charCodeAt(0).toString(16).padStart(4, '0')}`,
+  );
 }
 
 /** True when `file` is `dir` itself or lies beneath it (both already resolved). */
@@ -47,7 +50,10 @@ export function caseFilePath(dir: string, id: string): PathResult {
     return { ok: false, message: `case id "${id}" would lead outside the sessions folder ${root}` };
   try {
     if (fs.lstatSync(file).isSymbolicLink())
-      return { ok: false, message: `${file} is a symbolic link; skidcase keeps cases only as plain files` };
+      return {
+        ok: false,
+        message: `${file} is a symbolic link; skidcase keeps cases only as plain files`,
+      };
   } catch {
     // Not there yet: fine, the first save creates it.
   }

@@ -2,10 +2,28 @@
  * The sessions store: where cases live, and how they are saved (atomically, with a backup),
  * opened (migrated, validated, locked), listed and restored. No UI here.
  */
-export { resolveSessionsDir, SESSIONS_ENV, type SessionsDirOptions, type SessionsDirSource } from './sessions-dir.js';
-export { caseFilePath, checkId, slugifyId, uniqueId, CASE_ID, type PathResult } from './case-path.js';
+export {
+  resolveSessionsDir,
+  SESSIONS_ENV,
+  type SessionsDirOptions,
+  type SessionsDirSource,
+} from './sessions-dir.js';
+export {
+  caseFilePath,
+  checkId,
+  slugifyId,
+  uniqueId,
+  CASE_ID,
+  type PathResult,
+} from './case-path.js';
 export { saveCase, type SaveResult } from './save.js';
-export { openCase, checkBackup, type OpenResult, type OpenOptions, type OpenFailureKind } from './open.js';
+export {
+  openCase,
+  checkBackup,
+  type OpenResult,
+  type OpenOptions,
+  type OpenFailureKind,
+} from './open.js';
 export { listCases, type CaseEntry } from './list.js';
 export { restoreBackup, type RestoreResult } from './restore.js';
 export { releaseAllLocks, releaseAllLocksSync, releaseLock } from './lock.js';

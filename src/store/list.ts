@@ -35,7 +35,9 @@ export async function listCases(dir: string): Promise<CaseEntry[]> {
     if ((e as NodeJS.ErrnoException).code === 'ENOENT') return [];
     throw e;
   }
-  const files = names.filter((n) => n.endsWith('.json') && !isSideFile(n)).map((n) => path.join(path.resolve(dir), n));
+  const files = names
+    .filter((n) => n.endsWith('.json') && !isSideFile(n))
+    .map((n) => path.join(path.resolve(dir), n));
   const entries = await Promise.all(files.map(readEntry));
   return entries.sort((a, b) => b.updated.localeCompare(a.updated) || a.id.localeCompare(b.id));
 }
@@ -50,14 +52,30 @@ async function readEntry(file: string): Promise<CaseEntry> {
     const loaded = loadCaseText(await fs.readFile(file, 'utf8'));
     if (!loaded.ok) {
       const first = loaded.issues[0];
-      return { id, path: file, updated: mtime, problem: first ? describeIssue(first) : loaded.kind };
+      return {
+        id,
+        path: file,
+        updated: mtime,
+        problem: first ? describeIssue(first) : loaded.kind,
+      };
     }
     const c = loaded.case;
-    const entry: CaseEntry = { id: c.id, path: file, updated: normalise(c.updated) ?? mtime, case: c };
-    if (c.id !== id) entry.warning = `the case inside has id "${c.id}", the file is named ${id}.json`;
+    const entry: CaseEntry = {
+      id: c.id,
+      path: file,
+      updated: normalise(c.updated) ?? mtime,
+      case: c,
+    };
+    if (c.id !== id)
+      entry.warning = `the case inside has id "${c.id}", the file is named ${id}.json`;
     return entry;
   } catch (e) {
-    return { id, path: file, updated: mtime, problem: `cannot be read (${(e as NodeJS.ErrnoException).code ?? String(e)})` };
+    return {
+      id,
+      path: file,
+      updated: mtime,
+      problem: `cannot be read (${(e as NodeJS.ErrnoException).code ?? String(e)})`,
+    };
   }
 }
 

@@ -1,5 +1,6 @@
 import fs from 'node:fs/promises';
 import os from 'node:os';
+import { randomBytes } from 'node:crypto';
 
 /** What a lock file holds: enough to tell the user who has the case open, and to judge staleness. */
 export interface LockInfo {
@@ -8,6 +9,8 @@ export interface LockInfo {
   host: string;
   /** ISO time the lock was taken. */
   since: string;
+  /** Random, so that two locks never read the same (inode numbers are reused at once). */
+  token?: string;
 }
 
 /**
@@ -18,14 +21,27 @@ export const LOCK_STALE_MS = 30_000;
 export const LOCK_REFRESH_MS = 10_000;
 
 export function ownLockInfo(): LockInfo {
-  return { app: 'skidcase', pid: process.pid, host: os.hostname(), since: new Date().toISOString() };
+  const token = randomBytes(8).toString('hex');
+  return {
+    app: 'skidcase',
+    pid: process.pid,
+    host: os.hostname(),
+    since: new Date().toISOString(),
+    token,
+  };
 }
 
 /** Parses a lock file's text; undefined when it is not one of ours (empty, hand-made, cut short). */
 export function parseLockInfo(text: string): LockInfo | undefined {
   try {
     const o = JSON.parse(text) as Partial<LockInfo>;
-    if (typeof o.pid === 'number' && Number.isInteger(o.pid) && o.pid > 0 && typeof o.host === 'string' && typeof o.since === 'string')
+    if (
+      typeof o.pid === 'number' &&
+      Number.isInteger(o.pid) &&
+      o.pid > 0 &&
+      typeof o.host === 'string' &&
+      typeof o.since === 'string'
+    )
       return { app: 'skidcase', pid: o.pid, host: o.host, since: o.since };
   } catch {
     // fall through
@@ -69,10 +85,10 @@ export function describeHolder(info: LockInfo | undefined): string {
 /** Reads a lock file: its parsed content and times, or undefined when it is gone. */
 export async function readLock(
   file: string,
-): Promise<{ info: LockInfo | undefined; mtimeMs: number; ino: number; text: string } | undefined> {
+): Promise<{ info: LockInfo | undefined; mtimeMs: number; text: string } | undefined> {
   try {
     const [text, st] = await Promise.all([fs.readFile(file, 'utf8'), fs.stat(file)]);
-    return { info: parseLockInfo(text), mtimeMs: st.mtimeMs, ino: st.ino, text };
+    return { info: parseLockInfo(text), mtimeMs: st.mtimeMs, text };
   } catch (e) {
     if ((e as NodeJS.ErrnoException).code === 'ENOENT') return undefined;
     throw e;

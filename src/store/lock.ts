@@ -1,9 +1,17 @@
 import fsSync from 'node:fs';
 import fs from 'node:fs/promises';
 import { randomBytes } from 'node:crypto';
+import { onExit } from 'signal-exit';
 import { lockPath } from './side-files.js';
 import { noLinks } from './keep-aside.js';
-import { describeHolder, isStale, LOCK_REFRESH_MS, ownLockInfo, readLock, type LockInfo } from './lock-info.js';
+import {
+  describeHolder,
+  isStale,
+  LOCK_REFRESH_MS,
+  ownLockInfo,
+  readLock,
+  type LockInfo,
+} from './lock-info.js';
 
 /**
  * Case locks. A lock is a small JSON file `<id>.json.lock` holding pid, host and time, so that a
@@ -17,8 +25,8 @@ import { describeHolder, isStale, LOCK_REFRESH_MS, ownLockInfo, readLock, type L
 export interface LockHandle {
   caseFile: string;
   lockFile: string;
-  /** The lock file's inode when we made it: if it changes, someone cleared our lock as stale. */
-  ino: number;
+  /** What we wrote in the lock file: if it reads otherwise, someone cleared our lock as stale. */
+  text: string;
   lost: boolean;
 }
 
@@ -30,7 +38,8 @@ export type LockOutcome =
 const held = new Map<string, LockHandle>();
 let timer: NodeJS.Timeout | undefined;
 
-const tmpName = (lock: string, tag: string) => `${lock}.${tag}.${process.pid}.${randomBytes(4).toString('hex')}`;
+const tmpName = (lock: string, tag: string) =>
+  `${lock}.${tag}.${process.pid}.${randomBytes(4).toString('hex')}`;
 const errCode = (e: unknown) => (e as NodeJS.ErrnoException).code;
 
 /** The lock this process holds on a case file, if any. */
@@ -38,24 +47,25 @@ export function heldLock(caseFile: string): LockHandle | undefined {
   return held.get(caseFile);
 }
 
-/** Creates the lock file complete, or reports EEXIST. */
-async function createLock(lockFile: string): Promise<number> {
+/** Creates the lock file complete, or reports EEXIST; returns the text written. */
+async function createLock(lockFile: string): Promise<string> {
   const tmp = tmpName(lockFile, 'new');
-  await fs.writeFile(tmp, JSON.stringify(ownLockInfo()) + '\n', { flag: 'wx' });
+  const text = JSON.stringify(ownLockInfo()) + '\n';
+  await fs.writeFile(tmp, text, { flag: 'wx' });
   try {
     await fs.link(tmp, lockFile);
   } catch (e) {
     if (!noLinks(e)) throw e;
     // No hard links here: an exclusive create is still atomic, only its content may be seen empty.
-    await fs.writeFile(lockFile, await fs.readFile(tmp), { flag: 'wx' });
+    await fs.writeFile(lockFile, text, { flag: 'wx' });
   } finally {
     await fs.unlink(tmp).catch(() => undefined);
   }
-  return (await fs.stat(lockFile)).ino;
+  return text;
 }
 
 /** Moves a stale lock aside and removes it, unless another process replaced it meanwhile. */
-async function clearStale(lockFile: string, seenIno: number): Promise<void> {
+async function clearStale(lockFile: string, seenText: string): Promise<void> {
   const aside = tmpName(lockFile, 'stale');
   try {
     await fs.rename(lockFile, aside);
@@ -63,9 +73,9 @@ async function clearStale(lockFile: string, seenIno: number): Promise<void> {
     if (errCode(e) === 'ENOENT') return; // someone else cleared it
     throw e;
   }
-  const st = await fs.stat(aside);
   // A fresh lock slipped in between our look and the rename: put it back where it was.
-  if (st.ino !== seenIno) await fs.link(aside, lockFile).catch(() => undefined);
+  if ((await fs.readFile(aside, 'utf8')) !== seenText)
+    await fs.link(aside, lockFile).catch(() => undefined);
   await fs.unlink(aside).catch(() => undefined);
 }
 
@@ -79,22 +89,32 @@ export async function acquireLock(caseFile: string): Promise<LockOutcome> {
   const lockFile = lockPath(caseFile);
   for (let attempt = 0; attempt < 5; attempt++) {
     try {
-      const ino = await createLock(lockFile);
-      const handle: LockHandle = { caseFile, lockFile, ino, lost: false };
+      const text = await createLock(lockFile);
+      const handle: LockHandle = { caseFile, lockFile, text, lost: false };
       held.set(caseFile, handle);
       startRefresh();
       installExitHooks();
       return { kind: 'acquired', handle };
     } catch (e) {
-      if (errCode(e) !== 'EEXIST') return { kind: 'error', code: errCode(e), message: `cannot lock ${caseFile}: ${String(e)}` };
+      if (errCode(e) !== 'EEXIST')
+        return {
+          kind: 'error',
+          code: errCode(e),
+          message: `cannot lock ${caseFile}: ${String(e)}`,
+        };
     }
     try {
       const seen = await readLock(lockFile);
       if (!seen) continue; // released meanwhile: try again
-      if (!isStale(seen.info, seen.mtimeMs)) return { kind: 'held', reason: describeHolder(seen.info), info: seen.info };
-      await clearStale(lockFile, seen.ino);
+      if (!isStale(seen.info, seen.mtimeMs))
+        return { kind: 'held', reason: describeHolder(seen.info), info: seen.info };
+      await clearStale(lockFile, seen.text);
     } catch (e) {
-      return { kind: 'error', code: errCode(e), message: `cannot check the lock ${lockFile}: ${String(e)}` };
+      return {
+        kind: 'error',
+        code: errCode(e),
+        message: `cannot check the lock ${lockFile}: ${String(e)}`,
+      };
     }
   }
   return { kind: 'held', reason: 'open in another skidcase (the lock kept changing)' };
@@ -104,7 +124,18 @@ export async function acquireLock(caseFile: string): Promise<LockOutcome> {
 export async function stillHeld(handle: LockHandle): Promise<boolean> {
   if (handle.lost) return false;
   try {
-    handle.lost = (await fs.stat(handle.lockFile)).ino !== handle.ino;
+    handle.lost = (await fs.readFile(handle.lockFile, 'utf8')) !== handle.text;
+  } catch {
+    handle.lost = true;
+  }
+  return !handle.lost;
+}
+
+/** The same check, synchronous, for the save path (one read of a tiny file). */
+export function stillHeldSync(handle: LockHandle): boolean {
+  if (handle.lost) return false;
+  try {
+    handle.lost = fsSync.readFileSync(handle.lockFile, 'utf8') !== handle.text;
   } catch {
     handle.lost = true;
   }
@@ -129,7 +160,8 @@ export async function releaseAllLocks(): Promise<void> {
 export function releaseAllLocksSync(): void {
   for (const handle of held.values()) {
     try {
-      if (!handle.lost && fsSync.statSync(handle.lockFile).ino === handle.ino) fsSync.unlinkSync(handle.lockFile);
+      if (!handle.lost && fsSync.readFileSync(handle.lockFile, 'utf8') === handle.text)
+        fsSync.unlinkSync(handle.lockFile);
     } catch {
       // already gone
     }
@@ -158,20 +190,13 @@ export async function refreshAll(): Promise<void> {
 }
 
 let hooked = false;
+/**
+ * Releases the locks when the process ends, also by SIGINT, SIGTERM or SIGHUP. signal-exit does
+ * this the way write-file-atomic (used for every save) does, so the two agree on when a signal
+ * should still kill the process; two hand-made signal handlers would each wait for the other.
+ */
 function installExitHooks(): void {
   if (hooked) return;
   hooked = true;
-  process.once('exit', releaseAllLocksSync);
-  for (const sig of ['SIGINT', 'SIGTERM', 'SIGHUP'] as const) {
-    const onSignal = () => {
-      // Alone on this signal, our listener replaced its default (die): release, then die as it
-      // would have. Otherwise the program's own handler decides whether to quit, and the 'exit'
-      // hook releases then; releasing here would leave it writing without a lock.
-      if (process.listenerCount(sig) !== 1) return;
-      releaseAllLocksSync();
-      process.removeListener(sig, onSignal);
-      process.kill(process.pid, sig);
-    };
-    process.on(sig, onSignal);
-  }
+  onExit(() => releaseAllLocksSync(), { alwaysLast: true });
 }

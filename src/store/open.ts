@@ -7,7 +7,8 @@ import { backupPath } from './side-files.js';
 import { getKnown, sigOf } from './known-files.js';
 import { acquireLock, releaseLock } from './lock.js';
 
-export type OpenFailureKind = 'missing' | 'unreadable' | 'json' | 'invalid' | 'newer' | 'format' | 'locked-error';
+export type OpenFailureKind =
+  'missing' | 'unreadable' | 'json' | 'invalid' | 'newer' | 'format' | 'locked-error';
 
 export type OpenResult =
   | {
@@ -60,7 +61,8 @@ export async function openCase(dirOrPath: string, opts: OpenOptions = {}): Promi
   let file: string;
   if (opts.id !== undefined) {
     const where = caseFilePath(dirOrPath, opts.id);
-    if (!where.ok) return fail('missing', path.resolve(dirOrPath), [{ path: 'id', message: where.message }]);
+    if (!where.ok)
+      return fail('missing', path.resolve(dirOrPath), [{ path: 'id', message: where.message }]);
     file = where.path;
   } else file = path.resolve(dirOrPath);
   const load = opts.load ?? loadCaseText;
@@ -77,8 +79,11 @@ export async function openCase(dirOrPath: string, opts: OpenOptions = {}): Promi
     }
   } catch (e) {
     const code = errCode(e);
-    if (code === 'ENOENT' || code === 'ENOTDIR') return fail('missing', file, [{ path: '(file)', message: 'no such case file' }]);
-    return fail('unreadable', file, [{ path: '(file)', message: `cannot be read (${code ?? String(e)})` }]);
+    if (code === 'ENOENT' || code === 'ENOTDIR')
+      return fail('missing', file, [{ path: '(file)', message: 'no such case file' }]);
+    return fail('unreadable', file, [
+      { path: '(file)', message: `cannot be read (${code ?? String(e)})` },
+    ]);
   }
 
   const loaded = load(text);
@@ -88,7 +93,9 @@ export async function openCase(dirOrPath: string, opts: OpenOptions = {}): Promi
       const backup = await checkBackup(file, load);
       if (backup) {
         r.backup = backup;
-        r.message += backup.loadable ? `; a backup is available: ${backup.path}` : `; the backup ${backup.path} is broken too`;
+        r.message += backup.loadable
+          ? `; a backup is available: ${backup.path}`
+          : `; the backup ${backup.path} is broken too`;
       }
     }
     return r;
@@ -102,7 +109,8 @@ export async function openCase(dirOrPath: string, opts: OpenOptions = {}): Promi
     const lock = await acquireLock(file);
     if (lock.kind === 'acquired') locked = true;
     else if (lock.kind === 'held') readOnlyReason = lock.reason;
-    else if (lock.code && CANNOT_WRITE.has(lock.code)) readOnlyReason = `the folder cannot be written (${lock.code})`;
+    else if (lock.code && CANNOT_WRITE.has(lock.code))
+      readOnlyReason = `the folder cannot be written (${lock.code})`;
     else return fail('locked-error', file, [{ path: '(file)', message: lock.message }]);
   }
   known.sig = sig;
@@ -129,7 +137,11 @@ export async function openCase(dirOrPath: string, opts: OpenOptions = {}): Promi
   return result;
 }
 
-function fail(kind: OpenFailureKind, file: string, issues: FieldIssue[]): OpenResult & { ok: false } {
+function fail(
+  kind: OpenFailureKind,
+  file: string,
+  issues: FieldIssue[],
+): OpenResult & { ok: false } {
   const first = issues[0];
   const more = issues.length > 1 ? ` (and ${issues.length - 1} more)` : '';
   const message = `${file}: ${first ? describeIssue(first) : kind}${more}`;

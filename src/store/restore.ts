@@ -9,7 +9,12 @@ import { acquireLock } from './lock.js';
 import { moveToFreeName } from './keep-aside.js';
 
 export type RestoreResult =
-  | { ok: true; path: string; case: Case; /** where the broken file was kept */ keptBroken?: string }
+  | {
+      ok: true;
+      path: string;
+      case: Case;
+      /** where the broken file was kept */ keptBroken?: string;
+    }
   | { ok: false; message: string };
 
 /**
@@ -35,10 +40,14 @@ export async function restoreBackup(dir: string, id: string): Promise<RestoreRes
     const loaded = loadCaseText(text);
     if (!loaded.ok) {
       const first = loaded.issues[0];
-      return { ok: false, message: `the backup ${bak} is broken too: ${first ? describeIssue(first) : loaded.kind}` };
+      return {
+        ok: false,
+        message: `the backup ${bak} is broken too: ${first ? describeIssue(first) : loaded.kind}`,
+      };
     }
     const lock = await acquireLock(file);
-    if (lock.kind === 'held') return { ok: false, message: `not restored: ${file} is ${lock.reason}` };
+    if (lock.kind === 'held')
+      return { ok: false, message: `not restored: ${file} is ${lock.reason}` };
     if (lock.kind === 'error') return { ok: false, message: `not restored: ${lock.message}` };
     try {
       const result: RestoreResult = { ok: true, path: file, case: loaded.case };
@@ -55,7 +64,10 @@ export async function restoreBackup(dir: string, id: string): Promise<RestoreRes
       delete known.readOnly;
       return result;
     } catch (e) {
-      return { ok: false, message: `not restored: ${file}: ${e instanceof Error ? e.message : String(e)}` };
+      return {
+        ok: false,
+        message: `not restored: ${file}: ${e instanceof Error ? e.message : String(e)}`,
+      };
     }
   });
 }

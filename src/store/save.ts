@@ -1,3 +1,4 @@
+import fsSync from 'node:fs';
 import fs from 'node:fs/promises';
 import path from 'node:path';
 import writeFileAtomic from 'write-file-atomic';
@@ -7,8 +8,8 @@ import { loadCaseText, type Case } from '../case/load.js';
 import { caseFilePath } from './case-path.js';
 import { backupPath, brokenPath, versionPath } from './side-files.js';
 import { getKnown, serial, sigOf, sameSig } from './known-files.js';
-import { acquireLock, stillHeld } from './lock.js';
-import { linkReplacing, linkUnderFreeName, moveToFreeName } from './keep-aside.js';
+import { acquireLock, stillHeldSync } from './lock.js';
+import { linkReplacingSync, linkUnderFreeName, moveToFreeName } from './keep-aside.js';
 
 export type SaveResult =
   | {
@@ -23,7 +24,12 @@ export type SaveResult =
       /** Where a broken file found in the way was moved instead of being overwritten. */
       keptBroken?: string;
     }
-  | { ok: false; kind: 'invalid' | 'path' | 'locked' | 'read-only' | 'io'; message: string; issues?: FieldIssue[] };
+  | {
+      ok: false;
+      kind: 'invalid' | 'path' | 'locked' | 'read-only' | 'io';
+      message: string;
+      issues?: FieldIssue[];
+    };
 
 const errCode = (e: unknown) => (e as NodeJS.ErrnoException).code;
 const madeDirs = new Set<string>();
@@ -47,15 +53,30 @@ export async function saveCase(dir: string, c: Case): Promise<SaveResult> {
   const parsed = caseV1.safeParse(next);
   if (!parsed.success) {
     const issues = fromZod(parsed.error);
-    return { ok: false, kind: 'invalid', issues, message: `not saved, the case is not valid: ${issues.map(describeIssue).join('; ')}` };
+    return {
+      ok: false,
+      kind: 'invalid',
+      issues,
+      message: `not saved, the case is not valid: ${issues.map(describeIssue).join('; ')}`,
+    };
   }
   const text = JSON.stringify(next, null, 2) + '\n';
   return serial(file, () => write(file, next, text));
 }
 
+/*
+ * The small metadata calls on the save path (lstat, link, rename, the lock check) are synchronous
+ * on purpose: each takes microseconds, less than the thread-pool round trip of its async form,
+ * and a save runs after every answer. The data write itself stays asynchronous.
+ */
 async function write(file: string, c: Case, text: string): Promise<SaveResult> {
   const known = getKnown(file);
-  if (known.readOnly) return { ok: false, kind: 'read-only', message: `not saved: ${file} was opened read-only (${known.readOnly})` };
+  if (known.readOnly)
+    return {
+      ok: false,
+      kind: 'read-only',
+      message: `not saved: ${file} was opened read-only (${known.readOnly})`,
+    };
   const dir = path.dirname(file);
   try {
     if (!madeDirs.has(dir)) {
@@ -63,18 +84,29 @@ async function write(file: string, c: Case, text: string): Promise<SaveResult> {
       madeDirs.add(dir);
     }
     const lock = await acquireLock(file);
-    if (lock.kind === 'held') return { ok: false, kind: 'locked', message: `not saved: ${file} is ${lock.reason}` };
-    if (lock.kind === 'error') return { ok: false, kind: 'io', message: `not saved: ${lock.message}` };
-    if (!(await stillHeld(lock.handle)))
-      return { ok: false, kind: 'locked', message: `not saved: another skidcase took over ${file} while it was idle` };
+    if (lock.kind === 'held')
+      return { ok: false, kind: 'locked', message: `not saved: ${file} is ${lock.reason}` };
+    if (lock.kind === 'error')
+      return { ok: false, kind: 'io', message: `not saved: ${lock.message}` };
+    if (!stillHeldSync(lock.handle))
+      return {
+        ok: false,
+        kind: 'locked',
+        message: `not saved: another skidcase took over ${file} while it was idle`,
+      };
     const result: SaveResult = { ok: true, path: file, case: c };
     await keepPrevious(file, known, result);
     await writeFileAtomic(file, text, { encoding: 'utf8' });
-    known.sig = sigOf(await fs.stat(file));
+    known.sig = sigOf(fsSync.statSync(file));
     known.created = c.created;
     return result;
   } catch (e) {
-    return { ok: false, kind: 'io', message: `not saved: ${file}: ${e instanceof Error ? e.message : String(e)}` };
+    madeDirs.delete(dir); // the folder may have been removed: make it again next time
+    return {
+      ok: false,
+      kind: 'io',
+      message: `not saved: ${file}: ${e instanceof Error ? e.message : String(e)}`,
+    };
   }
 }
 
@@ -82,10 +114,14 @@ async function write(file: string, c: Case, text: string): Promise<SaveResult> {
  * Before a write: keep the file now on disk as the backup if it is good; keep a migrated case's
  * original once; move a broken file aside rather than overwrite it.
  */
-async function keepPrevious(file: string, known: ReturnType<typeof getKnown>, out: SaveResult & { ok: true }) {
+async function keepPrevious(
+  file: string,
+  known: ReturnType<typeof getKnown>,
+  out: SaveResult & { ok: true },
+) {
   let st;
   try {
-    st = await fs.lstat(file);
+    st = fsSync.lstatSync(file);
   } catch (e) {
     if (errCode(e) === 'ENOENT') return;
     throw e;
@@ -93,7 +129,9 @@ async function keepPrevious(file: string, known: ReturnType<typeof getKnown>, ou
   // Known good (we wrote or validated exactly this file): no re-read. Otherwise look at it.
   const good = sameSig(known.sig, st) || loadCaseText(await fs.readFile(file, 'utf8')).ok;
   if (!good) {
-    out.keptBroken = await moveToFreeName(file, (n) => brokenPath(file).replace(/\.json$/, n > 1 ? `-${n}.json` : '.json'));
+    out.keptBroken = await moveToFreeName(file, (n) =>
+      brokenPath(file).replace(/\.json$/, n > 1 ? `-${n}.json` : '.json'),
+    );
     return;
   }
   if (known.migratedFrom !== undefined) {
@@ -102,7 +140,7 @@ async function keepPrevious(file: string, known: ReturnType<typeof getKnown>, ou
     delete known.migratedFrom;
   }
   const bak = backupPath(file);
-  await linkReplacing(file, bak);
+  linkReplacingSync(file, bak);
   out.backup = bak;
 }
 

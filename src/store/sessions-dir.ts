@@ -26,14 +26,18 @@ export interface SessionsDirOptions {
  * resolveSessionsDir({ cwd: '/cases', env: { SKIDCASE_SESSIONS: 'field' } })
  * // => { dir: '/cases/field', from: 'env' }
  */
-export function resolveSessionsDir(opts: SessionsDirOptions): { dir: string; from: SessionsDirSource } {
+export function resolveSessionsDir(opts: SessionsDirOptions): {
+  dir: string;
+  from: SessionsDirSource;
+} {
   const candidates: [string | undefined, SessionsDirSource][] = [
     [opts.flag, 'flag'],
     [opts.env?.[SESSIONS_ENV], 'env'],
     [opts.prefs?.sessionsDir, 'preference'],
   ];
   for (const [value, from] of candidates) {
-    if (value !== undefined && value.trim() !== '') return { dir: path.resolve(opts.cwd, value.trim()), from };
+    if (value !== undefined && value.trim() !== '')
+      return { dir: path.resolve(opts.cwd, value.trim()), from };
   }
   return { dir: path.resolve(opts.cwd, 'sessions'), from: 'default' };
 }

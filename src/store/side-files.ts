@@ -12,7 +12,10 @@ export function lockPath(file: string): string {
 
 /** A compact UTC stamp safe in file names on every system: `20261130T151000Z`. */
 export function fileStamp(d: Date = new Date()): string {
-  return d.toISOString().replace(/[-:]/g, '').replace(/\.\d+Z$/, 'Z');
+  return d
+    .toISOString()
+    .replace(/[-:]/g, '')
+    .replace(/\.\d+Z$/, 'Z');
 }
 
 /** `<id>.broken-<time>.json`: where a broken file is kept instead of being overwritten. */

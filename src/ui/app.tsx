@@ -8,12 +8,14 @@ import { HomeScreen } from './home-screen.js';
 import { Header } from './header.js';
 import { InterviewScreen } from './interview-screen.js';
 import { ReviewScreen } from './review-screen.js';
-import { HelpOverlay } from './help-overlay.js';
+import { HelpOverlay, helpLines } from './help-overlay.js';
 import { JumpList } from './jump-list.js';
 import { Footer } from './footer.js';
 import { ReadOnlyBanner } from './read-only-banner.js';
 import { filterQuestions } from './jump-filter.js';
 import { reviewLines, type ShownLine } from './review-lines.js';
+import { isChoice } from './question-view.js';
+import type { Question } from '../interview/types.js';
 
 export interface AppProps {
   services: Services;
@@ -35,7 +37,14 @@ function useSize(columns?: number, rows?: number) {
     stdout.on('resize', on);
     return () => void stdout.off('resize', on);
   }, [stdout]);
-  return { width: columns ?? stdout.columns ?? 80, height: rows ?? stdout.rows ?? 24 };
+  // One row spare: a frame as tall as the terminal makes Ink redraw by scrolling.
+  return { width: columns ?? stdout.columns ?? 80, height: (rows ?? stdout.rows ?? 24) - 1 };
+}
+
+/** A choice's default is shown by its label, as the list shows it. */
+function shownDefault(q: Question, text: string | undefined): string | undefined {
+  if (text === undefined || !isChoice(q)) return text;
+  return q.choices!.find((c) => c.value === text)?.label ?? text;
 }
 
 /** The whole program on screen: home, a case's questions, its review, and the overlays. */
@@ -59,35 +68,71 @@ export function App(props: AppProps) {
   const review = useMemo((): ShownLine[] => {
     if (!s || question) return [];
     const built = port.build(s.state, s.open.case);
-    if (!built.ok) return [{ text: `The case is not complete yet: ${built.message}`, tone: 'warning' }];
+    if (!built.ok)
+      return [{ text: `The case is not complete yet: ${built.message}`, tone: 'warning' }];
     return reviewLines(port.solve(built.case), width);
   }, [s?.state, question, width]);
 
   const onReport = () => {
+    // Read at the moment of the key, not from this render: a key may arrive before the next one.
+    const s = app.current().session;
     if (!s) return;
     const built = port.build(s.state, s.open.case);
     if (!built.ok) return;
-    void props.services.writeReport(s.open, built.case).then((r) => {
-      const reportMessage = r.ok ? `Report written to ${r.path}` : `No report written: ${r.message}`;
+    const say = (reportMessage: string) =>
       app.update((m) => (m.session ? { ...m, session: { ...m.session, reportMessage } } : m));
-    });
+    say('Writing the report…');
+    props.services.writeReport(s.open, built.case).then(
+      (r) => say(r.ok ? `Report written to ${r.path}` : `No report written: ${r.message}`),
+      (e: unknown) => say(`No report written: ${e instanceof Error ? e.message : String(e)}`),
+    );
   };
-  useAppInput({ app, port, services: props.services, page: Math.max(1, body - 3), onReport });
+  // Window heights as ReviewScreen and HelpOverlay lay them out (title, border, position line).
+  const reviewWindow = body - 2 - (s?.reportMessage ? 1 : 0);
+  const helpWindow = body + (s ? 2 : 0) - 3;
+  const maxTop = {
+    review: Math.max(0, review.length - reviewWindow),
+    help: Math.max(0, helpLines(width - 4, props.quickEntry).length - helpWindow),
+  };
+  useAppInput({
+    app,
+    port,
+    services: props.services,
+    page: Math.max(1, body - 3),
+    maxTop,
+    onReport,
+  });
 
   const ctx = contextOf(app, port);
   const overlay = model.overlay;
   let main: React.ReactNode;
   if (overlay?.kind === 'help') {
-    main = <HelpOverlay width={width} height={body + (s ? 2 : 0)} top={overlay.top} quickEntry={props.quickEntry} />;
+    main = (
+      <HelpOverlay
+        width={width}
+        height={body + (s ? 2 : 0)}
+        top={overlay.top}
+        quickEntry={props.quickEntry}
+      />
+    );
   } else if (overlay?.kind === 'jump' && s) {
     const matches = filterQuestions(port.states(s.state), overlay.filter.value);
-    main = <JumpList matches={matches} filter={overlay.filter} selected={overlay.selected} width={width} height={body} color={props.color} />;
+    main = (
+      <JumpList
+        matches={matches}
+        filter={overlay.filter}
+        selected={overlay.selected}
+        width={width}
+        height={body}
+        color={props.color}
+      />
+    );
   } else if (s && question) {
     main = (
       <InterviewScreen
         session={s}
         question={question}
-        defaultText={port.defaultText(s.state)}
+        defaultText={shownDefault(question, port.defaultText(s.state))}
         explain={question.explainChoice?.(s.state.answers)}
         draft={port.draft(s.state, s.open.case)}
         width={width}
@@ -96,9 +141,20 @@ export function App(props: AppProps) {
       />
     );
   } else if (s) {
-    main = <ReviewScreen lines={review} top={s.reviewTop} height={body} message={s.reportMessage} />;
+    main = (
+      <ReviewScreen lines={review} top={s.reviewTop} height={body} message={s.reportMessage} />
+    );
   } else {
-    main = <HomeScreen {...model.home} rows={model.home.rows} sessionsDir={props.services.sessionsDir} sessionsFrom={props.services.sessionsFrom} height={body} color={props.color} />;
+    main = (
+      <HomeScreen
+        {...model.home}
+        rows={model.home.rows}
+        sessionsDir={props.services.sessionsDir}
+        sessionsFrom={props.services.sessionsFrom}
+        height={body}
+        color={props.color}
+      />
+    );
   }
   const showHeader = s && overlay?.kind !== 'help';
   return (

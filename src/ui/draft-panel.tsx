@@ -12,21 +12,54 @@ export interface DraftView {
 }
 
 /** Side or lower panel: the formula chain so far and the running result. */
-export function DraftPanel({ view, width, maxLines }: { view: DraftView; width: number; maxLines: number }) {
+export function DraftPanel({
+  view,
+  width,
+  maxLines,
+}: {
+  view: DraftView;
+  width: number;
+  maxLines: number;
+}) {
   // Keep the latest steps when space is short: they are the ones the current answer moves.
-  const room = Math.max(0, maxLines - 3);
-  const steps = view.steps.slice(Math.max(0, view.steps.length - room));
+  const inner = width - 4;
+  // A step whose name and result do not fit on one line takes two.
+  const rowsOf = (st: DraftView['steps'][number]) =>
+    st.name.length + st.result.length + 2 <= inner ? 1 : 2;
+  let room = Math.max(0, maxLines - 3 - (view.result && view.result.length > inner ? 1 : 0));
+  const steps: DraftView['steps'] = [];
+  for (let i = view.steps.length - 1; i >= 0 && rowsOf(view.steps[i]!) <= room; i--) {
+    room -= rowsOf(view.steps[i]!);
+    steps.unshift(view.steps[i]!);
+  }
   const hidden = view.steps.length - steps.length;
   return (
-    <Box flexDirection="column" borderStyle="single" borderColor={TONE.muted} paddingX={1} width={width}>
+    <Box
+      flexDirection="column"
+      borderStyle="single"
+      borderColor={TONE.muted}
+      paddingX={1}
+      width={width}
+    >
       <Text bold>Chain so far</Text>
-      {hidden ? <Text color={TONE.muted}>({hidden} earlier steps in the review)</Text> : null}
-      {steps.map((s, i) => (
-        <Text key={i} wrap="truncate">
-          {s.name}: {s.result}
+      {hidden ? <Text color={TONE.muted}>({hidden} earlier {hidden === 1 ? 'step' : 'steps'} in the review)</Text> : null}
+      {steps.map((s, i) =>
+        rowsOf(s) === 1 ? (
+          <Text key={i}>
+            {s.name}: {s.result}
+          </Text>
+        ) : (
+          <Box key={i} flexDirection="column">
+            <Text wrap="truncate">{s.name}:</Text>
+            <Text wrap="truncate"> {s.result}</Text>
+          </Box>
+        ),
+      )}
+      {view.result ? (
+        <Text color={TONE.result} bold>
+          {view.result}
         </Text>
-      ))}
-      {view.result ? <Text color={TONE.result} bold>{view.result}</Text> : null}
+      ) : null}
       {view.note ? <Text color={TONE.muted}>{view.note}</Text> : null}
     </Box>
   );

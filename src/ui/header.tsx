@@ -22,7 +22,13 @@ export function savedText(at: Date): string {
 
 /** Top line of a case screen: which case, where in it, how far, and the save status. */
 export function Header(p: HeaderProps) {
-  const status = p.readOnly ? 'not saved (read-only)' : p.saveError ? p.saveError : p.savedAt ? savedText(p.savedAt) : 'not saved yet';
+  const status = p.readOnly
+    ? 'not saved (read-only)'
+    : p.saveError
+      ? p.saveError
+      : p.savedAt
+        ? savedText(p.savedAt)
+        : 'no changes yet';
   return (
     <Box flexDirection="column">
       <Box justifyContent="space-between" flexWrap="wrap" columnGap={2}>

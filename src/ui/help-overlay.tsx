@@ -1,6 +1,6 @@
 import React from 'react';
 import { Box, Text } from 'ink';
-import { KEY_TABLE, bindingKeys, type KeyContext } from './keys.js';
+import { KEY_TABLE, bindingKeys, keysFor, type KeyContext } from './keys.js';
 import type { ShownLine } from './review-lines.js';
 import { wrap } from '../report/wrap.js';
 import { ScrollView } from './scroll-view.js';
@@ -16,6 +16,8 @@ const PLACES: Record<KeyContext, string> = {
   path: 'file name',
 };
 
+const ALL = Object.keys(PLACES).filter((k) => k !== 'help') as KeyContext[];
+
 /**
  * The help as lines: every binding of the key table with its keys, what it does and where it
  * works, then the quick-entry syntax. Built from the table, so it can never disagree with it.
@@ -24,9 +26,13 @@ export function helpLines(width: number, quickEntry: readonly string[]): ShownLi
   const out: ShownLine[] = [{ text: 'Keys', bold: true, tone: 'heading' }];
   const keyW = Math.max(...KEY_TABLE.map((b) => bindingKeys(b).length)) + 2;
   for (const b of KEY_TABLE) {
-    const where = [...new Set(b.when.filter((w) => w !== 'help').map((w) => PLACES[w]))].join(', ');
+    const places: KeyContext[] = b.when.filter((w) => w !== 'help');
+    const everywhere = ALL.every((w) => places.includes(w));
+    const where = everywhere ? 'everywhere' : [...new Set(places.map((w) => PLACES[w]))].join(', ');
     const body = wrap(`${b.description} (${where})`, Math.max(20, width - keyW));
-    body.forEach((l, i) => out.push({ text: (i === 0 ? bindingKeys(b).padEnd(keyW) : ' '.repeat(keyW)) + l }));
+    body.forEach((l, i) =>
+      out.push({ text: (i === 0 ? bindingKeys(b).padEnd(keyW) : ' '.repeat(keyW)) + l }),
+    );
   }
   out.push({ text: '' }, { text: 'Quick entry', bold: true, tone: 'heading' });
   // These lines are laid out by hand (aligned columns): keep their spacing, wrap only when too wide.
@@ -37,15 +43,26 @@ export function helpLines(width: number, quickEntry: readonly string[]): ShownLi
       for (const l of wrap(q, width - indent.length - 2)) out.push({ text: indent + l });
     }
   }
-  out.push({ text: '' }, { text: 'Esc or Ctrl+K closes this list.', tone: 'muted' });
+  out.push({ text: '' }, { text: `${keysFor('close')} or ${keysFor('help')} closes this list.`, tone: 'muted' });
   return out;
 }
 
 /** The help overlay: a bordered, scrollable list of every key. */
-export function HelpOverlay(props: { width: number; height: number; top: number; quickEntry: readonly string[] }) {
+export function HelpOverlay(props: {
+  width: number;
+  height: number;
+  top: number;
+  quickEntry: readonly string[];
+}) {
   const lines = helpLines(props.width - 4, props.quickEntry);
   return (
-    <Box flexDirection="column" borderStyle="round" borderColor={TONE.heading} paddingX={1} width={props.width}>
+    <Box
+      flexDirection="column"
+      borderStyle="round"
+      borderColor={TONE.heading}
+      paddingX={1}
+      width={props.width}
+    >
       <ScrollView lines={lines} top={props.top} height={props.height - 2} />
     </Box>
   );

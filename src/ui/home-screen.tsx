@@ -60,8 +60,10 @@ export function HomeScreen(p: HomeProps) {
       <Text wrap="truncate-middle">Cases in {p.sessionsDir}</Text>
       <Text color={TONE.muted}>({sessionsFromText(p.sessionsFrom)})</Text>
       {p.rows === undefined ? <Text>Reading the cases…</Text> : null}
-      {p.rows?.length === 0 ? <Text>No cases here yet. Press n to start one, or d for the demo case.</Text> : null}
-      {w.above ? <Text color={TONE.muted}>  ↑ {w.above} more</Text> : null}
+      {p.rows?.length === 0 ? (
+        <Text>No cases here yet. Press n to start one, or d for the demo case.</Text>
+      ) : null}
+      {w.above ? <Text color={TONE.muted}> ↑ {w.above} more</Text> : null}
       {w.shown.map((r, i) => {
         const at = w.start + i === p.selected;
         return (
@@ -71,14 +73,17 @@ export function HomeScreen(p: HomeProps) {
               {r.id}
               {r.reference ? ` · ${r.reference}` : ''}
             </Text>
-            <Text color={r.problem ? TONE.error : r.result ? TONE.result : TONE.muted} wrap="truncate">
+            <Text
+              color={r.problem ? TONE.error : r.result ? TONE.result : TONE.muted}
+              wrap="truncate"
+            >
               {'    '}
               {rowStatus(r)}
             </Text>
           </Box>
         );
       })}
-      {w.below ? <Text color={TONE.muted}>  ↓ {w.below} more</Text> : null}
+      {w.below ? <Text color={TONE.muted}> ↓ {w.below} more</Text> : null}
       {sel?.problem ? (
         <Text color={TONE.warning}>
           {sel.problem.hasBackup

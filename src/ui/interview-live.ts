@@ -5,8 +5,14 @@
 import { loadCase, type Case } from '../case/load.js';
 import { solveCase, type CaseSolution } from '../engine/index.js';
 import { formatRange } from '../format/numbers.js';
-import { reduce } from '../interview/reducer.js';
-import { currentQuestion, firstOpenQuestion, progress, questionStates, summaryOfDone } from '../interview/derived.js';
+import { initialState, reduce } from '../interview/reducer.js';
+import {
+  currentQuestion,
+  firstOpenQuestion,
+  progress,
+  questionStates,
+  summaryOfDone,
+} from '../interview/derived.js';
 import { buildCase } from '../interview/build-case.js';
 import { solveDraft } from '../interview/draft.js';
 import { stateFromCase } from '../interview/from-case.js';
@@ -18,7 +24,13 @@ import { atLeast, kindForUnit } from './review-lines.js';
 /** Solves a case exactly as `solve` would read it from its file: through the loader first. */
 export function solveAsFile(c: Case): CaseSolution {
   const loaded = loadCase(JSON.parse(JSON.stringify(c)));
-  if (!loaded.ok) return { id: c.id, units: c.units === 'metric' ? { length: 'm', speed: 'km/h' } : { length: 'ft', speed: 'mph' }, analyses: [], warnings: loaded.issues.map((i) => `${i.path}: ${i.message}`) };
+  if (!loaded.ok)
+    return {
+      id: c.id,
+      units: c.units === 'metric' ? { length: 'm', speed: 'km/h' } : { length: 'ft', speed: 'mph' },
+      analyses: [],
+      warnings: loaded.issues.map((i) => `${i.path}: ${i.message}`),
+    };
   return solveCase(loaded.case);
 }
 
@@ -30,13 +42,23 @@ export function draftView(sol: CaseSolution): DraftView {
   sol.analyses.forEach((a, i) => {
     if (!a.ok) return void problems.push(`Analysis ${i + 1}: ${a.reason}`);
     for (const s of a.solution.steps)
-      steps.push({ name: s.name, result: formatRange({ value: s.result, low: s.low, high: s.high }, kindForUnit(s.unit), s.unit) });
-    results.push(`${sol.analyses.length > 1 ? `Analysis ${i + 1}: ` : ''}${formatRange(a.solution.speed, 'speed', sol.units.speed)}, ${atLeast(a.solution, sol.units.speed)}`);
+      steps.push({
+        name: s.name,
+        result: formatRange(
+          { value: s.result, low: s.low, high: s.high },
+          kindForUnit(s.unit),
+          s.unit,
+        ),
+      });
+    results.push(
+      `${sol.analyses.length > 1 ? `Analysis ${i + 1}: ` : ''}${formatRange(a.solution.speed, 'speed', sol.units.speed)}, ${atLeast(a.solution, sol.units.speed)}`,
+    );
   });
   const view: DraftView = { steps };
   if (results.length) view.result = results.join('; ');
   if (problems.length) view.note = problems.join('; ');
-  else if (!results.length) view.note = 'No figure yet: the chain fills in once an analysis is complete.';
+  else if (!results.length)
+    view.note = 'No figure yet: the chain fills in once an analysis is complete.';
   return view;
 }
 
@@ -53,6 +75,7 @@ export const liveInterview: InterviewPort = {
     const meta = { id: base.id, ...(base.created ? { created: base.created } : {}) };
     return { ok: true, case: buildCase(state, meta) };
   },
+  fresh: (mode) => initialState(mode),
   fromCase(c, mode) {
     // Resume lands on the first open question, whatever the file's cursor says.
     const st = stateFromCase(c);

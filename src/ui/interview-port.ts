@@ -24,7 +24,12 @@ export interface InterviewPort {
   /** The default Enter accepts for the current question, if any. */
   defaultText(state: InterviewState): string | undefined;
   /** The case the answers make, or why they do not make one yet. */
-  build(state: InterviewState, base: Case): { ok: true; case: Case } | { ok: false; message: string };
+  build(
+    state: InterviewState,
+    base: Case,
+  ): { ok: true; case: Case } | { ok: false; message: string };
+  /** A new interview on its first question. */
+  fresh(mode: InterviewMode): InterviewState;
   /** Resumes from a saved case: on the first open question. */
   fromCase(c: Case, mode: InterviewMode): InterviewState;
   /** Lines saying what is done, shown when a case is resumed. */

@@ -44,11 +44,17 @@ export function InterviewScreen(p: InterviewScreenProps) {
       explain={p.explain}
       color={p.color}
       width={questionW}
+      choiceRows={Math.max(3, p.height - 12)}
     />
   );
-  const choiceRows = question.choices?.length ?? 1;
-  const draftRows = side ? Math.max(4, Math.min(10, p.height - 4)) : Math.max(3, Math.min(6, p.height - choiceRows - 10));
-  const whyRows = Math.max(2, p.height - (side ? Math.max(choiceRows + 5, draftRows) : choiceRows + 5 + draftRows));
+  const choiceRows = Math.min(question.choices?.length ?? 1, Math.max(3, p.height - 12));
+  const draftRows = side
+    ? Math.max(4, Math.min(10, p.height - 4))
+    : Math.max(3, Math.min(6, p.height - choiceRows - 10));
+  const whyRows = Math.max(
+    2,
+    p.height - (side ? Math.max(choiceRows + 5, draftRows) : choiceRows + 5 + draftRows),
+  );
   return (
     <Box flexDirection="column">
       <Text color={TONE.muted}>{question.title}</Text>
@@ -75,7 +81,9 @@ export function InterviewScreen(p: InterviewScreenProps) {
       ) : session.state.explain ? (
         <WhyPanel help={question.help} width={p.width} maxLines={whyRows} />
       ) : (
-        <Text color={TONE.muted}>{keysFor('explain')} shows why this is asked and how to measure it.</Text>
+        <Text color={TONE.muted}>
+          {keysFor('explain')} shows why this is asked and how to measure it.
+        </Text>
       )}
     </Box>
   );

@@ -7,7 +7,12 @@ import { windowOf } from './scroll.js';
 import { TextField } from './text-field.js';
 import { TONE } from './theme.js';
 
-const TONE_OF = { answered: TONE.result, open: undefined, invalid: TONE.error, unused: TONE.muted } as const;
+const TONE_OF = {
+  answered: TONE.result,
+  open: undefined,
+  invalid: TONE.error,
+  unused: TONE.muted,
+} as const;
 
 export interface JumpProps {
   matches: QuestionState[];
@@ -25,12 +30,20 @@ export function JumpList(p: JumpProps) {
   const w = windowOf(p.matches, top, room);
   const wordW = 13;
   return (
-    <Box flexDirection="column" borderStyle="round" borderColor={TONE.heading} paddingX={1} width={p.width}>
+    <Box
+      flexDirection="column"
+      borderStyle="round"
+      borderColor={TONE.heading}
+      paddingX={1}
+      width={p.width}
+    >
       <Box>
         <Text bold>Go to: </Text>
         <TextField line={p.filter} color={p.color} placeholder="type part of a question's name" />
       </Box>
-      {p.matches.length === 0 ? <Text color={TONE.warning}>No question matches "{p.filter.value}".</Text> : null}
+      {p.matches.length === 0 ? (
+        <Text color={TONE.warning}>No question matches "{p.filter.value}".</Text>
+      ) : null}
       {w.shown.map((q, i) => {
         const at = w.start + i === p.selected;
         return (

@@ -39,5 +39,8 @@ export function editLine(line: Line, input: string, key: Key): Line {
   // Strip control characters a paste may carry (a newline would end the answer early).
   const text = input.replace(/[\u0000-\u001f\u007f]/g, '');
   if (!text) return line;
-  return { value: value.slice(0, cursor) + text + value.slice(cursor), cursor: cursor + text.length };
+  return {
+    value: value.slice(0, cursor) + text + value.slice(cursor),
+    cursor: cursor + text.length,
+  };
 }

@@ -4,6 +4,7 @@ import type { Question } from '../interview/types.js';
 import type { Line } from './line-edit.js';
 import { TextField } from './text-field.js';
 import { TONE } from './theme.js';
+import { windowOf } from './scroll.js';
 
 export interface QuestionViewProps {
   question: Question;
@@ -16,15 +17,61 @@ export interface QuestionViewProps {
   explain?: string | undefined;
   color: boolean;
   width: number;
+  /** Rows the list of choices may take; a longer list scrolls with the highlight. */
+  choiceRows: number;
 }
 
 /** True when the question is answered by picking, not typing. */
-export const isChoice = (q: Question): boolean => (q.kind === 'choice' || q.kind === 'confirm') && !!q.choices?.length;
+export const isChoice = (q: Question): boolean =>
+  (q.kind === 'choice' || q.kind === 'confirm') && !!q.choices?.length;
+
+/**
+ * The choices, each with its key; a window around the highlight when the list is long. The
+ * highlighted choice's hint is shown in full under the list, the others' only as fits.
+ */
+function ChoiceList({
+  question,
+  highlight,
+  rows,
+}: {
+  question: Question;
+  highlight: number;
+  rows: number;
+}) {
+  const choices = question.choices!;
+  const room = Math.max(2, choices.length > rows ? rows - 2 : rows);
+  const w = windowOf(choices, Math.max(0, highlight - room + 1), room);
+  const hint = choices[highlight]?.hint;
+  return (
+    <Box flexDirection="column">
+      {w.above ? <Text color={TONE.muted}> ↑ {w.above} more</Text> : null}
+      {w.shown.map((c, j) => {
+        const i = w.start + j;
+        return (
+          <Text key={c.value} wrap="truncate" bold={i === highlight}>
+            {i === highlight ? '> ' : '  '}
+            <Text color={TONE.key}>[{c.key}]</Text> {c.label}
+          </Text>
+        );
+      })}
+      {w.below ? <Text color={TONE.muted}> ↓ {w.below} more</Text> : null}
+      {hint ? (
+        <Text color={TONE.muted} wrap="wrap">
+          {hint}
+        </Text>
+      ) : null}
+    </Box>
+  );
+}
 
 /** The question: prompt, the input (or the choices), the default, and the message in place. */
 export function QuestionView(p: QuestionViewProps) {
   const q = p.question;
-  const hint = [q.unitHint ? `in ${q.unitHint}` : '', q.example ? `e.g. ${q.example}` : '', q.optional ? 'may be left empty' : '']
+  const hint = [
+    q.unitHint ? `in ${q.unitHint}` : '',
+    q.example ? `e.g. ${q.example}` : '',
+    q.optional ? 'may be left empty' : '',
+  ]
     .filter(Boolean)
     .join(' · ');
   return (
@@ -34,13 +81,7 @@ export function QuestionView(p: QuestionViewProps) {
       </Text>
       {hint ? <Text color={TONE.muted}>({hint})</Text> : null}
       {isChoice(q) ? (
-        q.choices!.map((c, i) => (
-          <Text key={c.value} wrap="truncate" bold={i === p.highlight}>
-            {i === p.highlight ? '> ' : '  '}
-            <Text color={TONE.key}>[{c.key}]</Text> {c.label}
-            {c.hint ? <Text color={TONE.muted}> · {c.hint}</Text> : null}
-          </Text>
-        ))
+        <ChoiceList question={q} highlight={p.highlight} rows={p.choiceRows} />
       ) : (
         <Box>
           <Text color={TONE.key}>{'> '}</Text>

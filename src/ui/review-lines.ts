@@ -34,7 +34,13 @@ export function atLeast(s: AnalysisSolution, speedUnit: string): string {
   return `at least ${formatNumber(s.minimum, 'integer')} ${speedUnit}`;
 }
 
-function push(out: ShownLine[], text: string, width: number, indent: string, style: Omit<ShownLine, 'text'> = {}) {
+function push(
+  out: ShownLine[],
+  text: string,
+  width: number,
+  indent: string,
+  style: Omit<ShownLine, 'text'> = {},
+) {
   const lines = wrap(text, Math.max(10, width - indent.length - 2));
   lines.forEach((l, i) => out.push({ text: (i === 0 ? indent : indent + '  ') + l, ...style }));
 }
@@ -44,7 +50,9 @@ function stepLines(out: ShownLine[], step: Step, n: number, width: number) {
   push(out, `formula  ${step.formula}`, width, '     ');
   push(out, `numbers  ${step.substituted}`, width, '     ');
   const r = { value: step.result, low: step.low, high: step.high };
-  push(out, `result   ${formatRange(r, kindForUnit(step.unit), step.unit)}`, width, '     ', { tone: 'result' });
+  push(out, `result   ${formatRange(r, kindForUnit(step.unit), step.unit)}`, width, '     ', {
+    tone: 'result',
+  });
   if (step.why) push(out, `why      ${step.why}`, width, '     ', { tone: 'muted' });
 }
 
@@ -52,12 +60,26 @@ function analysisLines(out: ShownLine[], s: AnalysisSolution, sol: CaseSolution,
   const unit = sol.units.speed;
   s.steps.forEach((step, i) => stepLines(out, step, i + 1, width));
   out.push({ text: '' });
-  push(out, `Speed when the marks began: ${formatRange(s.speed, 'speed', unit)}`, width, '  ', { tone: 'result', bold: true });
-  push(out, `Result: ${atLeast(s, unit)} (the low end, rounded down).`, width, '  ', { tone: 'result', bold: true });
+  push(out, `Speed when the marks began: ${formatRange(s.speed, 'speed', unit)}`, width, '  ', {
+    tone: 'result',
+    bold: true,
+  });
+  push(out, `Result: ${atLeast(s, unit)} (the low end, rounded down).`, width, '  ', {
+    tone: 'result',
+    bold: true,
+  });
   if (sol.postedLimit) {
-    const limit = `${formatNumber(sol.postedLimit.value, 'integer')} ${unit}`;
+    const v = sol.postedLimit.value;
+    // A limit converted from the other unit is not whole: show it as converted, not rounded.
+    const limit = `${formatNumber(v, Number.isInteger(v) ? 'integer' : 'speed')} ${unit}`;
     const above = s.speed.low > sol.postedLimit.value;
-    push(out, `Posted limit ${limit}: the low end is ${above ? 'above' : 'not above'} the limit.`, width, '  ', { tone: above ? 'warning' : undefined });
+    push(
+      out,
+      `Posted limit ${limit}: the low end is ${above ? 'above' : 'not above'} the limit.`,
+      width,
+      '  ',
+      { tone: above ? 'warning' : undefined },
+    );
   }
   if (s.assumptions.length) {
     out.push({ text: '  Assumptions', bold: true });
@@ -70,7 +92,8 @@ function analysisLines(out: ShownLine[], s: AnalysisSolution, sol: CaseSolution,
   const rows = sensitivity(s);
   if (rows.length) {
     out.push({ text: '  What moves the result', bold: true });
-    for (const l of sensitivityBars(rows, width - 2, { speedUnit: unit })) out.push({ text: '  ' + l });
+    for (const l of sensitivityBars(rows, width - 2, { speedUnit: unit }))
+      out.push({ text: '  ' + l });
   }
 }
 
@@ -84,14 +107,23 @@ export function reviewLines(sol: CaseSolution, width: number): ShownLine[] {
     const head = a.ok ? a.solution : a;
     const kind = head.kind === 'skid' ? 'slide' : 'critical speed (yaw)';
     const label = a.ok && a.solution.label ? ` · ${a.solution.label}` : '';
-    push(out, `Analysis ${i + 1} · ${kind} · ${head.id}${label}`, width, '', { tone: 'heading', bold: true });
+    push(out, `Analysis ${i + 1} · ${kind} · ${head.id}${label}`, width, '', {
+      tone: 'heading',
+      bold: true,
+    });
     if (a.ok) analysisLines(out, a.solution, sol, width);
-    else push(out, `Cannot be computed${a.path ? ` (${a.path})` : ''}: ${a.reason}`, width, '  ', { tone: 'error' });
+    else
+      push(out, `Cannot be computed${a.path ? ` (${a.path})` : ''}: ${a.reason}`, width, '  ', {
+        tone: 'error',
+      });
     out.push({ text: '' });
   });
-  if (sol.analyses.length === 0) out.push({ text: 'No analysis yet: answer the questions about the marks.', tone: 'warning' });
+  if (sol.analyses.length === 0)
+    out.push({ text: 'No analysis yet: answer the questions about the marks.', tone: 'warning' });
   if (sol.postedLimit?.exceededAtMinimum)
-    push(out, 'At its low end, at least one analysis is above the posted limit.', width, '', { tone: 'warning' });
+    push(out, 'At its low end, at least one analysis is above the posted limit.', width, '', {
+      tone: 'warning',
+    });
   if (sol.warnings.length) {
     out.push({ text: 'About the file', bold: true, tone: 'warning' });
     for (const w of sol.warnings) push(out, `! ${w}`, width, '  ', { tone: 'warning' });

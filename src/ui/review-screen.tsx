@@ -5,7 +5,12 @@ import { ScrollView } from './scroll-view.js';
 import { TONE } from './theme.js';
 
 /** The review: the lines built by reviewLines, scrolled, with the report status under them. */
-export function ReviewScreen(p: { lines: ShownLine[]; top: number; height: number; message?: string | undefined }) {
+export function ReviewScreen(p: {
+  lines: ShownLine[];
+  top: number;
+  height: number;
+  message?: string | undefined;
+}) {
   return (
     <Box flexDirection="column">
       <Text bold color={TONE.heading}>

@@ -10,7 +10,6 @@ import { liveInterview } from './interview-live.js';
 import { liveServices } from './services-live.js';
 import { applyColorPolicy } from './theme.js';
 import type { Start } from './use-app-model.js';
-import { writeCaseReport } from './write-report.js';
 import { QUICK_ENTRY_HELP, UNIT_SUFFIX_HELP } from '../input/index.js';
 
 export interface RunOptions {
@@ -27,14 +26,13 @@ export const NO_TTY_MESSAGE =
 export async function runInteractive(opts: RunOptions): Promise<number> {
   if (!process.stdin.isTTY || !process.stdout.isTTY) {
     process.stderr.write(NO_TTY_MESSAGE);
-    return 2;
+    return 1;
   }
   const color = applyColorPolicy(process.env);
   const services = liveServices({
     sessionsDir: opts.sessionsDir,
     sessionsFrom: opts.sessionsFrom,
     port: liveInterview,
-    writeReport: (open, c) => writeCaseReport(open, c),
   });
   let code = 0;
   const instance = render(

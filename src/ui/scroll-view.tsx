@@ -5,7 +5,15 @@ import { windowOf } from './scroll.js';
 import { TONE } from './theme.js';
 
 /** A window onto pre-wrapped lines, with "more above/below" markers so nothing seems missing. */
-export function ScrollView({ lines, top, height }: { lines: ShownLine[]; top: number; height: number }) {
+export function ScrollView({
+  lines,
+  top,
+  height,
+}: {
+  lines: ShownLine[];
+  top: number;
+  height: number;
+}) {
   const w = windowOf(lines, top, Math.max(1, height - 1));
   const more =
     w.above || w.below
@@ -16,7 +24,12 @@ export function ScrollView({ lines, top, height }: { lines: ShownLine[]; top: nu
   return (
     <Box flexDirection="column">
       {w.shown.map((l, i) => (
-        <Text key={w.start + i} color={l.tone ? TONE[l.tone] : undefined} bold={l.bold ?? false} wrap="truncate">
+        <Text
+          key={w.start + i}
+          color={l.tone ? TONE[l.tone] : undefined}
+          bold={l.bold ?? false}
+          wrap="truncate"
+        >
           {l.text || ' '}
         </Text>
       ))}

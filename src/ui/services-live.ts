@@ -7,12 +7,21 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { Case } from '../case/load.js';
 import { loadCaseText } from '../case/load.js';
-import { checkBackup, listCases, openCase, restoreBackup, saveCase, uniqueId, type OpenResult } from '../store/index.js';
+import {
+  checkBackup,
+  listCases,
+  openCase,
+  restoreBackup,
+  saveCase,
+  uniqueId,
+  type OpenResult,
+} from '../store/index.js';
 import { loadPrefs, savePref, type PrefsOptions } from '../prefs/index.js';
 import type { InterviewMode } from '../interview/types.js';
 import type { InterviewPort } from './interview-port.js';
 import type { CaseRow, Opened, OpenCase, Services } from './services.js';
 import { atLeast } from './review-lines.js';
+import { writeCaseReport } from './write-report.js';
 
 export interface LiveOptions {
   sessionsDir: string;
@@ -21,7 +30,7 @@ export interface LiveOptions {
   /** The demo case to copy from; by default the `sessions/` folder shipped beside the program. */
   demoFile?: string;
   prefs?: PrefsOptions;
-  /** Writes a report; the lead's report module, passed in by run.tsx. */
+  /** Writes a report; by default the Markdown report beside the case file. */
   writeReport?: Services['writeReport'];
   now?: () => Date;
 }
@@ -29,7 +38,10 @@ export interface LiveOptions {
 /** The demo case shipped with skidcase: `sessions/demo*.json` beside dist/ or src/. */
 export async function findDemoFile(): Promise<string | undefined> {
   const here = path.dirname(fileURLToPath(import.meta.url));
-  for (const dir of [path.resolve(here, '..', 'sessions'), path.resolve(here, '..', '..', 'sessions')]) {
+  for (const dir of [
+    path.resolve(here, '..', 'sessions'),
+    path.resolve(here, '..', '..', 'sessions'),
+  ]) {
     const names = await fs.readdir(dir).catch(() => [] as string[]);
     const demo = names.filter((n) => /^demo[a-z0-9-]*\.json$/.test(n)).sort()[0];
     if (demo) return path.join(dir, demo);
@@ -66,11 +78,20 @@ export function liveServices(o: LiveOptions): Services {
   const now = o.now ?? (() => new Date());
   const prefs = loadPrefs(o.prefs ?? {}).prefs;
   const fresh = (id: string): Case =>
-    ({ format: 'skidcase-case', version: 1, id, units: prefs.units, vehicle: {}, analyses: [] }) as Case;
-  const createAndOpen = async (c: Case): Promise<Opened> => {
+    ({
+      format: 'skidcase-case',
+      version: 1,
+      id,
+      units: prefs.units,
+      vehicle: {},
+      analyses: [],
+    }) as Case;
+  const createAndOpen = async (c: Case, isNew: boolean): Promise<Opened> => {
     const saved = await saveCase(dir, c);
     if (!saved.ok) return { ok: false, message: saved.message };
-    return opened(await openCase(dir, { id: c.id }));
+    const o = opened(await openCase(dir, { id: c.id }));
+    if (o.ok && isNew) o.open.isNew = true;
+    return o;
   };
   return {
     sessionsDir: dir,
@@ -83,7 +104,12 @@ export function liveServices(o: LiveOptions): Services {
         entries.map(async (e): Promise<CaseRow> => {
           if (e.case) return summarise(o.port, e.case, e.path, e.updated);
           const bak = await checkBackup(e.path);
-          return { id: e.id, file: e.path, updated: e.updated, problem: { message: e.problem ?? 'cannot be read', hasBackup: !!bak?.loadable } };
+          return {
+            id: e.id,
+            file: e.path,
+            updated: e.updated,
+            problem: { message: e.problem ?? 'cannot be read', hasBackup: !!bak?.loadable },
+          };
         }),
       );
     },
@@ -93,14 +119,23 @@ export function liveServices(o: LiveOptions): Services {
     async newCase() {
       const d = now();
       const stamp = d.toISOString().slice(0, 16).replace(/[-:]/g, '').replace('T', '-');
-      return createAndOpen(fresh(uniqueId(dir, `case-${stamp}`)));
+      return createAndOpen(fresh(uniqueId(dir, `case-${stamp}`)), true);
     },
     async openDemo() {
       const file = o.demoFile ?? (await findDemoFile());
-      if (!file) return { ok: false, message: 'The demo case is not installed (sessions/demo.json next to skidcase).' };
+      if (!file)
+        return {
+          ok: false,
+          message: 'The demo case is not installed (sessions/demo.json next to skidcase).',
+        };
       const loaded = loadCaseText(await fs.readFile(file, 'utf8').catch(() => ''));
-      if (!loaded.ok) return { ok: false, message: `The demo case ${file} cannot be read`, issues: loaded.issues };
-      return createAndOpen({ ...loaded.case, id: uniqueId(dir, 'demo-copy') });
+      if (!loaded.ok)
+        return {
+          ok: false,
+          message: `The demo case ${file} cannot be read`,
+          issues: loaded.issues,
+        };
+      return createAndOpen({ ...loaded.case, id: uniqueId(dir, 'demo-copy') }, false);
     },
     async saveCase(open, c) {
       const r = await saveCase(path.dirname(open.file), c);
@@ -110,7 +145,7 @@ export function liveServices(o: LiveOptions): Services {
       const r = await restoreBackup(dir, id);
       return r.ok ? { ok: true } : { ok: false, message: r.message };
     },
-    writeReport: o.writeReport ?? (async () => ({ ok: false, message: 'writing reports is not available in this build' })),
+    writeReport: o.writeReport ?? ((open, c) => writeCaseReport(open, c, now())),
     saveMode(mode: InterviewMode) {
       savePref('mode', mode, o.prefs ?? {});
     },

@@ -30,10 +30,13 @@ export interface OpenCase {
   file: string;
   readOnly?: string;
   migratedFrom?: number;
+  /** Just created: the interview starts from its first question. */
+  isNew?: boolean;
   release(): Promise<void>;
 }
 
-export type Opened = { ok: true; open: OpenCase } | { ok: false; message: string; issues?: FieldIssue[] };
+export type Opened =
+  { ok: true; open: OpenCase } | { ok: false; message: string; issues?: FieldIssue[] };
 
 export type Saved = { ok: true; at: Date } | { ok: false; message: string };
 
@@ -51,7 +54,10 @@ export interface Services {
   saveCase(open: OpenCase, c: Case): Promise<Saved>;
   restoreBackup(id: string): Promise<{ ok: true } | { ok: false; message: string }>;
   /** Writes the report for a case; the path written, or why not. */
-  writeReport(open: OpenCase, c: Case): Promise<{ ok: true; path: string } | { ok: false; message: string }>;
+  writeReport(
+    open: OpenCase,
+    c: Case,
+  ): Promise<{ ok: true; path: string } | { ok: false; message: string }>;
   initialMode: InterviewMode;
   saveMode(mode: InterviewMode): void;
   now(): Date;

@@ -23,7 +23,10 @@ export interface Session {
 }
 
 /** The line and highlight a question starts with: its current answer, else its default choice. */
-export function inputFor(port: InterviewPort, state: InterviewState): { line: Line; highlight: number } {
+export function inputFor(
+  port: InterviewPort,
+  state: InterviewState,
+): { line: Line; highlight: number } {
   const q = port.current(state);
   if (!q) return { line: EMPTY_LINE, highlight: 0 };
   const answer = state.answers[q.id];
@@ -44,14 +47,22 @@ export function applyAction(port: InterviewPort, s: Session, action: Action): Se
   if (next === s.state) return s;
   const moved = next.cursor !== s.state.cursor || next.answers !== s.state.answers;
   const keepTyped = next.error !== undefined && next.cursor === s.state.cursor;
-  const input = moved && !keepTyped ? inputFor(port, next) : { line: s.line, highlight: s.highlight };
+  const input =
+    moved && !keepTyped ? inputFor(port, next) : { line: s.line, highlight: s.highlight };
   const { reportMessage: _drop, summary: _seen, ...rest } = s;
-  return { ...rest, state: next, ...input, reviewTop: next.cursor === s.state.cursor ? s.reviewTop : 0 };
+  return {
+    ...rest,
+    state: next,
+    ...input,
+    reviewTop: next.cursor === s.state.cursor ? s.reviewTop : 0,
+  };
 }
 
 /** The action Enter makes: the typed text, or the default when nothing is typed. */
 export function submitAction(port: InterviewPort, s: Session): Action {
   const q = port.current(s.state);
   if (q && isChoice(q)) return { type: 'choose', value: q.choices![s.highlight]!.value };
-  return s.line.value.trim() === '' ? { type: 'accept-default' } : { type: 'answer', text: s.line.value };
+  return s.line.value.trim() === ''
+    ? { type: 'accept-default' }
+    : { type: 'answer', text: s.line.value };
 }

@@ -7,7 +7,15 @@ import { TONE } from './theme.js';
  * Draws a line being typed with its cursor. With colour the cursor is an inverted cell; without
  * (NO_COLOR) it is a `_` at the end or a `|` inside the text, so it still shows.
  */
-export function TextField({ line, color, placeholder }: { line: Line; color: boolean; placeholder?: string | undefined }) {
+export function TextField({
+  line,
+  color,
+  placeholder,
+}: {
+  line: Line;
+  color: boolean;
+  placeholder?: string | undefined;
+}) {
   const { value, cursor } = line;
   if (!color) {
     const mark = cursor >= value.length ? '_' : '|';

@@ -9,10 +9,16 @@ import type { InterviewPort } from './interview-port.js';
 import { EMPTY_LINE, type Line } from './line-edit.js';
 import type { CaseRow, Opened, Services } from './services.js';
 import { applyAction, inputFor, type Session } from './session.js';
+import { keysFor } from './keys.js';
 
-export type Start = { kind: 'home' } | { kind: 'resume'; id?: string } | { kind: 'new' } | { kind: 'open'; path: string };
+export type Start =
+  | { kind: 'home' }
+  | { kind: 'resume'; id?: string }
+  | { kind: 'new' }
+  | { kind: 'open'; path: string };
 
-export type Overlay = { kind: 'help'; top: number } | { kind: 'jump'; filter: Line; selected: number };
+export type Overlay =
+  { kind: 'help'; top: number } | { kind: 'jump'; filter: Line; selected: number };
 
 export interface HomeState {
   rows?: CaseRow[];
@@ -30,29 +36,47 @@ export interface Model {
   leaving: boolean;
 }
 
-export function useAppModel(services: Services, port: InterviewPort, start: Start, exit: (code: number) => void) {
-  const [model, setModel] = useState<Model>({ home: { selected: 0 }, mode: services.initialMode, leaving: false });
+export function useAppModel(
+  services: Services,
+  port: InterviewPort,
+  start: Start,
+  exit: (code: number) => void,
+) {
+  const [model, setModel] = useState<Model>({
+    home: { selected: 0 },
+    mode: services.initialMode,
+    leaving: false,
+  });
   const ref = useRef(model);
-  ref.current = model;
   const saving = useRef<Promise<unknown>>(Promise.resolve());
   /** The answers last written (or loaded): a save is due when the session's differ. */
   const savedAnswers = useRef<unknown>(undefined);
 
+  // Applied to the ref at once, not in React's deferred updater, so that a save or a key that
+  // follows in the same tick sees the state this update made.
   const update = useCallback((f: (m: Model) => Model) => {
-    setModel((m) => {
-      const n = f(m);
-      ref.current = n;
-      return n;
-    });
+    const n = f(ref.current);
+    ref.current = n;
+    setModel(n);
   }, []);
   const setHome = (h: Partial<HomeState>) => update((m) => ({ ...m, home: { ...m.home, ...h } }));
 
   const refresh = useCallback(async () => {
     try {
       const rows = await services.listCases();
-      update((m) => ({ ...m, home: { ...m.home, rows, selected: Math.min(m.home.selected, Math.max(0, rows.length - 1)) } }));
+      update((m) => ({
+        ...m,
+        home: {
+          ...m.home,
+          rows,
+          selected: Math.min(m.home.selected, Math.max(0, rows.length - 1)),
+        },
+      }));
     } catch (e) {
-      update((m) => ({ ...m, home: { ...m.home, rows: [], error: `The sessions folder cannot be read: ${String(e)}` } }));
+      update((m) => ({
+        ...m,
+        home: { ...m.home, rows: [], error: `The sessions folder cannot be read: ${String(e)}` },
+      }));
     }
   }, [services, update]);
 
@@ -64,11 +88,17 @@ export function useAppModel(services: Services, port: InterviewPort, start: Star
         setHome({ error: detail ? `${opened.message} (${detail})` : opened.message });
         return;
       }
-      const state = port.fromCase(opened.open.case, ref.current.mode);
+      const mode = ref.current.mode;
+      const state = opened.open.isNew ? port.fresh(mode) : port.fromCase(opened.open.case, mode);
       savedAnswers.current = state.answers;
       const session: Session = { open: opened.open, state, reviewTop: 0, ...inputFor(port, state) };
-      if (Object.keys(state.answers).length > 0) session.summary = port.summary(state);
-      update((m) => ({ ...m, session, overlay: undefined, home: { ...m.home, error: undefined, message: undefined, path: undefined } }));
+      if (!opened.open.isNew) session.summary = port.summary(state);
+      update((m) => ({
+        ...m,
+        session,
+        overlay: undefined,
+        home: { ...m.home, error: undefined, message: undefined, path: undefined },
+      }));
     },
     [port, update],
   );
@@ -112,12 +142,24 @@ export function useAppModel(services: Services, port: InterviewPort, start: Star
     [port, queueSave, update],
   );
 
+  /** Set after a leave found unsaved answers: the next leave goes without them. */
+  const leaveArmed = useRef(false);
+
   const leave = useCallback(async () => {
     if (ref.current.leaving) return;
     update((m) => ({ ...m, leaving: true }));
     queueSave();
     await saving.current.catch(() => undefined);
-    await ref.current.session?.open.release().catch(() => undefined);
+    const s = ref.current.session;
+    const unsaved = s && !s.open.readOnly && s.state.answers !== savedAnswers.current;
+    if (unsaved && !leaveArmed.current) {
+      // Never drop answers silently: say so, and leave only when asked again.
+      leaveArmed.current = true;
+      const saveError = `${s.saveError ?? 'not saved'}; press ${keysFor('save-leave')} again to leave without saving`;
+      update((m) => ({ ...m, leaving: false, session: m.session ? { ...m.session, saveError } : m.session }));
+      return;
+    }
+    await s?.open.release().catch(() => undefined);
     exit(0);
   }, [exit, queueSave, update]);
 
@@ -154,7 +196,20 @@ export function useAppModel(services: Services, port: InterviewPort, start: Star
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, []);
 
-  return { model, update, setHome, refresh, enter, act, leave, closeCase, setMode, queueSave, emptyLine: EMPTY_LINE };
+  return {
+    model,
+    current: () => ref.current,
+    update,
+    setHome,
+    refresh,
+    enter,
+    act,
+    leave,
+    closeCase,
+    setMode,
+    queueSave,
+    emptyLine: EMPTY_LINE,
+  };
 }
 
 export type AppModel = ReturnType<typeof useAppModel>;

@@ -6,7 +6,10 @@ import { TONE } from './theme.js';
 
 /** The "why / how to measure" text as lines of `width`, cut to `maxLines` with a marker. */
 export function whyLines(help: Help, width: number, maxLines: number): string[] {
-  const all = [...wrap(`Why: ${help.why}`, width), ...(help.how ? wrap(`How: ${help.how}`, width) : [])];
+  const all = [
+    ...wrap(`Why: ${help.why}`, width),
+    ...(help.how ? wrap(`How: ${help.how}`, width) : []),
+  ];
   if (all.length <= maxLines) return all;
   const cut = all.slice(0, Math.max(1, maxLines));
   cut[cut.length - 1] = `${cut[cut.length - 1]!.slice(0, Math.max(0, width - 1))}…`;
@@ -14,7 +17,15 @@ export function whyLines(help: Help, width: number, maxLines: number): string[] 
 }
 
 /** Why the question is asked and how to measure it; open by default in guided mode. */
-export function WhyPanel({ help, width, maxLines }: { help: Help; width: number; maxLines: number }) {
+export function WhyPanel({
+  help,
+  width,
+  maxLines,
+}: {
+  help: Help;
+  width: number;
+  maxLines: number;
+}) {
   return (
     <Box flexDirection="column" width={width}>
       {whyLines(help, width, maxLines).map((l, i) => (

@@ -18,9 +18,17 @@ export function reportPath(open: OpenCase, c: Case, at: Date): string {
 }
 
 export async function writeCaseReport(open: OpenCase, c: Case, at = new Date()) {
-  const doc = buildReport(c, solveAsFile(c), { toolVersion: toolVersion(), generatedAt: at.toISOString(), caseFile: open.file });
+  const doc = buildReport(c, solveAsFile(c), {
+    toolVersion: toolVersion(),
+    generatedAt: at.toISOString(),
+    caseFile: open.file,
+  });
   const file = reportPath(open, c, at);
   const r = await writeFiles([{ path: file, content: renderReport(doc, 'md') }], false);
   if (r.ok) return { ok: true as const, path: file };
-  return { ok: false as const, message: r.kind === 'exists' ? `${r.paths.join(', ')} already exists` : `${r.path}: ${r.message}` };
+  return {
+    ok: false as const,
+    message:
+      r.kind === 'exists' ? `${r.paths.join(', ')} already exists` : `${r.path}: ${r.message}`,
+  };
 }

@@ -194,13 +194,13 @@ export class Term {
    * character before Enter arrives, as with a person watching the screen), then presses Enter.
    */
   async answer(text: string, opts: WaitOptions = {}): Promise<void> {
-    const before = this.screen();
+    const squash = (s: string) => s.replace(/\s+/g, ' ');
+    const times = (s: string) => (text.trim() === '' ? 0 : squash(s).split(squash(text.trim())).length - 1);
+    const before = times(this.screen());
     await this.type(text);
-    const tail = text.trim().slice(-12);
-    await this.waitFor((s) => (tail === '' ? true : s.includes(tail)) && (text === '' || s !== before), {
-      what: `the typed text "${text}" to show`,
-      ...opts,
-    });
+    // The text must show once more than before: a prompt or a hint may already hold it.
+    if (text.trim() !== '') await this.waitFor((s) => times(s) > before, { what: `the typed text "${text}" to show`, ...opts });
+    await this.waitForQuiet(40, opts);
     await this.press('enter');
   }
 

@@ -2,7 +2,7 @@
  * Types a whole interview into the real program, the way a person does: read the question on
  * screen, type the answer (or press the choice's letter), Enter, wait for the next question.
  *
- * A script maps question ids to answers. Which question comes next is not guessed: a mirror of
+ * A script maps question ids to answers (`''` is Enter alone: the offered default, or a skip). Which question comes next is not guessed: a mirror of
  * the interview's pure reducer is fed the same answers, so the test knows which question the
  * screen must show, and fails, naming it, if the screen shows anything else.
  */
@@ -19,6 +19,18 @@ export type Script = Record<string, string>;
 
 export const squash = (s: string) => s.replace(/\s+/g, ' ').trim();
 
+/** The screens mark the line being typed with `> ` at its start (src/ui's text field). */
+const INPUT_LINE = /^\s*>\s(.*)$/;
+
+/** True when a screen's input line starts with the text typed (the rest of the row may hold a side panel). */
+export function onInputLine(screen: string, typed: string): boolean {
+  const want = squash(typed);
+  return screen.split('\n').some((l) => {
+    const m = INPUT_LINE.exec(l);
+    return m !== null && squash(m[1]!).startsWith(want);
+  });
+}
+
 /** A piece of the prompt short enough to stay on one screen line at 60 columns. */
 export const promptMark = (q: Question) => squash(q.prompt).slice(0, 26);
 
@@ -32,8 +44,8 @@ function choiceFor(q: Question, answer: string) {
 
 /** One answer fed to the mirror, as the screen would turn it into an action. */
 function mirrorStep(state: InterviewState, q: Question, answer: string): InterviewState {
-  if (isChoice(q)) return reduce(state, { type: 'choose', value: choiceFor(q, answer).value });
   if (answer === '') return reduce(state, { type: 'accept-default' });
+  if (isChoice(q)) return reduce(state, { type: 'choose', value: choiceFor(q, answer).value });
   return reduce(state, { type: 'answer', text: answer });
 }
 
@@ -43,6 +55,20 @@ export interface DriveOptions {
   /** Stop after this many answers. */
   maxAnswers?: number;
   timeoutMs?: number;
+  /** Called after each answer with the question id and the key presses it took. */
+  onAnswer?: (id: string, keys: number) => void;
+}
+
+/**
+ * A test for "the whole answer is on screen now". A short answer must start the input line; a
+ * long one wraps there, so its last characters must show once more than before it was typed.
+ */
+function typedShown(before: string, answer: string, cols: number): (s: string) => boolean {
+  if (answer.length < cols / 2) return (s) => onInputLine(s, answer);
+  const tail = answer.slice(-8);
+  const times = (s: string) => s.split(tail).length - 1;
+  const n = times(before);
+  return (s) => times(s) > n;
 }
 
 /**
@@ -62,6 +88,17 @@ export function dryRun(script: Script, opts: DriveOptions = {}, from: InterviewS
   throw new Error('script: more than 500 answers without reaching the review (a loop?)');
 }
 
+/** The question ids in the order the script answers them, from a fresh interview to the review. */
+export function answerOrder(script: Script): string[] {
+  const ids: string[] = [];
+  let state = initialState();
+  for (let q = currentQuestion(state); q; q = currentQuestion(state)) {
+    ids.push(q.id);
+    state = dryRun(script, { maxAnswers: 1 }, state);
+  }
+  return ids;
+}
+
 /**
  * Types the script into the terminal, from whatever question is on screen (the mirror `from`
  * must match it: a fresh interview, or a resumed one). Returns the mirror's final state.
@@ -76,19 +113,22 @@ export async function typeInterview(t: Term, script: Script, opts: DriveOptions 
     if (answer === undefined) throw new Error(`script has no answer for ${q.id}: "${q.prompt}"`);
     const mark = promptMark(q);
     let screen = await t.waitFor((s) => squash(s).includes(mark), { what: `question ${q.id} ("${mark}")`, ...wait });
-    if (isChoice(q)) await t.type(choiceFor(q, answer).key);
+    const keysBefore = t.keyCount;
+    if (isChoice(q) && answer !== '') await t.type(choiceFor(q, answer).key);
     else {
       if (answer !== '') {
+        // Enter only once the whole answer shows on the input line, as a person watching the
+        // screen would (the prompt or a hint may hold the same words, so only that line counts).
+        const shown = typedShown(screen, answer, t.cols);
         await t.type(answer);
-        // Enter only once the whole answer shows, as a person watching the screen would.
-        const tail = squash(answer).slice(-12);
-        await t.waitFor((s) => s !== screen && squash(s).includes(tail), { what: `the typed answer "${answer}" for ${q.id}`, ...wait });
+        await t.waitFor(shown, { what: `the typed answer "${answer}" on the input line, for ${q.id}`, ...wait });
         screen = await t.waitForQuiet(40, wait);
       }
       await t.press('enter');
     }
     state = mirrorStep(state, q, answer);
     if (state.error) throw new Error(`script answer "${answer}" for ${q.id} was rejected: ${state.error.message}`);
+    opts.onAnswer?.(q.id, t.keyCount - keysBefore);
     await t.waitForChange(screen, { what: `the screen to move on from ${q.id}`, ...wait });
   }
 }

@@ -26,8 +26,8 @@ function runPiped(args: string[], stdin: 'pipe' | 'ignore') {
     const p = spawn(process.execPath, [BINARY, ...args], { cwd: ws.root, env: childEnv(ws.env), stdio: [stdin, 'pipe', 'pipe'] });
     let out = '';
     let err = '';
-    p.stdout.on('data', (d) => (out += d));
-    p.stderr.on('data', (d) => (err += d));
+    p.stdout!.on('data', (d) => (out += d));
+    p.stderr!.on('data', (d) => (err += d));
     if (stdin === 'pipe') p.stdin!.end('80\n');
     const timer = setTimeout(() => p.kill('SIGKILL'), 15_000);
     p.on('close', (code) => {

@@ -23,6 +23,7 @@ describe('parseList', () => {
     ['94, 92,', [94, 92]],
     ['80.2, 79.5,81', [80.2, 79.5, 81]],
     ["94' 92'", [94, 92]],
+    ['94 1/2 92', [94.5, 92]],
   ])('%j', (text, expected) => {
     expect(parseList(text, lengths())).toEqual({ ok: true, values: expected });
   });
@@ -63,8 +64,13 @@ describe('parseList', () => {
     ['94 ftt 92', "mark 1: length: unknown unit 'ftt'"],
     ['94, abc', "mark 2: length: 'abc' is not a number"],
     ['94,, 92', 'mark 2 is empty: there are two separators in a row'],
-    ['94,92', "'94,92' has a comma between digits; to list several values put a space after each comma (94, 92), for a decimal write 94.92"],
+    [
+      '94,92',
+      "'94,92' has a comma between digits; to list several values put a space after each comma (94, 92), for a decimal write 94.92",
+    ],
     ['94 92 # 3', "'#' is not understood here"],
+    ['94,92,95', 'put a space after each comma (94, 92, 95)'],
+    ['1,234.5 92', "mark 1: length: '1,234.5' uses a comma to group thousands; write 1234.5"],
     ['', 'length is empty'],
     ['94 mph', "mark 1: length: 'mph' is a unit of speed"],
     ['90-80 85', 'mark 1: length: the low end comes first; write 80-90'],
@@ -109,7 +115,13 @@ describe('parseMarksLine', () => {
 
   it('gives each equal mark its own copy of a range', () => {
     const r = parseMarksLine('2 x 80 ± 1', ctx);
-    expect(r).toEqual({ ok: true, marks: [{ value: 80, low: 79, high: 81 }, { value: 80, low: 79, high: 81 }] });
+    expect(r).toEqual({
+      ok: true,
+      marks: [
+        { value: 80, low: 79, high: 81 },
+        { value: 80, low: 79, high: 81 },
+      ],
+    });
     if (r.ok) expect(r.marks[0]).not.toBe(r.marks[1]);
   });
 
@@ -134,6 +146,9 @@ describe('parseMarksLine', () => {
 
   it('refuses a range on a mark when the question does not allow one', () => {
     const r = parseMarksLine('80 ± 1', { units: 'metric', allowRange: false });
-    expect(r).toEqual({ ok: false, message: 'mark 1: length: give one value here, not a range or a tolerance' });
+    expect(r).toEqual({
+      ok: false,
+      message: 'mark 1: length: give one value here, not a range or a tolerance',
+    });
   });
 });

@@ -13,7 +13,13 @@ import { expectQuantity, SPECS } from './specs.js';
 const conv = (n: number, from: string, to: string) => unit(n, from).toNumber(to);
 const rng = (value: number, low: number, high: number) => ({ value, low, high });
 
-type Row = [text: string, spec: keyof typeof SPECS, units: 'imperial' | 'metric', expected: Quantity, note?: string];
+type Row = [
+  text: string,
+  spec: keyof typeof SPECS,
+  units: 'imperial' | 'metric',
+  expected: Quantity,
+  note?: string,
+];
 
 const ROWS: Row[] = [
   // plain numbers, in the case's unit
@@ -28,7 +34,13 @@ const ROWS: Row[] = [
   ['24.4 m', 'length', 'metric', 24.4],
   // conversions (mathjs as reference)
   ['24.4 m', 'length', 'imperial', conv(24.4, 'm', 'ft'), '24.4 m = 80.05 ft'],
-  ['12 ft 6 in', 'length', 'metric', add(unit(12, 'ft'), unit(6, 'inch')).toNumber('m'), '12 ft 6 in = 3.81 m'],
+  [
+    '12 ft 6 in',
+    'length',
+    'metric',
+    add(unit(12, 'ft'), unit(6, 'inch')).toNumber('m'),
+    '12 ft 6 in = 3.81 m',
+  ],
   ['12 ft 6 in', 'length', 'imperial', 12.5, '12 ft 6 in = 12.5 ft'],
   [`12' 6"`, 'length', 'imperial', 12.5],
   [`12'6"`, 'length', 'metric', add(unit(12, 'ft'), unit(6, 'inch')).toNumber('m')],
@@ -41,6 +53,16 @@ const ROWS: Row[] = [
   ['3 yd', 'length', 'imperial', conv(3, 'yd', 'ft')],
   ['2 yd 1 ft', 'length', 'imperial', 7],
   ['15 M', 'length', 'metric', 15],
+  ['80 feet 6 inches', 'length', 'imperial', 80.5],
+  ['80’ 6”', 'length', 'imperial', 80.5],
+  ["80' 6''", 'length', 'imperial', 80.5],
+  ['5′', 'length', 'metric', conv(5, 'ft', 'm')],
+  // fractions, as a tape in eighths of an inch reads
+  ['3 1/8 in', 'length', 'imperial', conv(3.125, 'inch', 'ft'), '3 1/8 in = 0.26 ft'],
+  ['12 ft 3 1/8 in', 'length', 'metric', add(unit(12, 'ft'), unit(3.125, 'inch')).toNumber('m')],
+  ['1/2 ft', 'length', 'imperial', 0.5],
+  ['12 1/2', 'length', 'imperial', 12.5],
+  ['12 1/2 ± 1/8', 'length', 'imperial', rng(12.5, 12.375, 12.625)],
   ['50 km/h', 'speed', 'imperial', conv(50, 'km/h', 'mi/h'), '50 km/h = 31.07 mph'],
   ['50 kph', 'speed', 'imperial', conv(50, 'km/h', 'mi/h')],
   ['50 kmh', 'speed', 'imperial', conv(50, 'km/h', 'mi/h')],
@@ -51,6 +73,8 @@ const ROWS: Row[] = [
   ['6%', 'signedGrade', 'imperial', 6],
   ['6', 'signedGrade', 'imperial', 6],
   ['-6 %', 'signedGrade', 'imperial', -6],
+  ['−6%', 'signedGrade', 'imperial', -6],
+  ['-0%', 'signedGrade', 'imperial', 0],
   ['+2', 'grade', 'imperial', 2],
   // percent grade = 100 × rise / run = 100 tan(angle) (definition of percent slope)
   ['3°', 'signedGrade', 'imperial', 100 * tan(unit(3, 'deg')), '3° = 5.24%'],
@@ -86,14 +110,30 @@ const ROWS: Row[] = [
     rng(conv(24.4, 'm', 'ft'), conv(24.3, 'm', 'ft'), conv(24.5, 'm', 'ft')),
     '24.4 m +/- 0.1 = 80.05 ft (79.72 to 80.38)',
   ],
-  ['24.4 m ± 10 cm', 'length', 'imperial', rng(conv(24.4, 'm', 'ft'), conv(24.3, 'm', 'ft'), conv(24.5, 'm', 'ft'))],
+  [
+    '24.4 m ± 10 cm',
+    'length',
+    'imperial',
+    rng(conv(24.4, 'm', 'ft'), conv(24.3, 'm', 'ft'), conv(24.5, 'm', 'ft')),
+  ],
   ['80 ft ± 6 in', 'length', 'imperial', rng(80, 79.5, 80.5)],
   ['80-82 ft', 'length', 'imperial', rng(81, 80, 82)],
-  ['80-82 ft', 'length', 'metric', rng(conv(81, 'ft', 'm'), conv(80, 'ft', 'm'), conv(82, 'ft', 'm')), '80-82 ft = 24.38 to 24.99 m'],
+  [
+    '80-82 ft',
+    'length',
+    'metric',
+    rng(conv(81, 'ft', 'm'), conv(80, 'ft', 'm'), conv(82, 'ft', 'm')),
+    '80-82 ft = 24.38 to 24.99 m',
+  ],
   ['80 ft - 82 ft', 'length', 'imperial', rng(81, 80, 82)],
   ['-4 to -2', 'signedGrade', 'imperial', rng(-3, -4, -2)],
   ['-4--2%', 'signedGrade', 'imperial', rng(-3, -4, -2)],
-  ['3 ± 0.5°', 'signedGrade', 'imperial', rng(100 * tan(unit(3, 'deg')), 100 * tan(unit(2.5, 'deg')), 100 * tan(unit(3.5, 'deg')))],
+  [
+    '3 ± 0.5°',
+    'signedGrade',
+    'imperial',
+    rng(100 * tan(unit(3, 'deg')), 100 * tan(unit(2.5, 'deg')), 100 * tan(unit(3.5, 'deg'))),
+  ],
 ];
 
 describe('parseQuantity: accepted answers', () => {

@@ -18,7 +18,11 @@ const ROWS: Row[] = [
   ['NaN', 'length', "mark length must be a finite number, not 'NaN'"],
   ['Infinity', 'drag', "drag factor must be a finite number, not 'Infinity'"],
   ['-Infinity', 'signedGrade', 'must be a finite number'],
-  ['80 ftt', 'length', "mark length: unknown unit 'ftt'; a length takes ft (or '), in (or \"), yd, m, cm, mm or km"],
+  [
+    '80 ftt',
+    'length',
+    "mark length: unknown unit 'ftt'; a length takes ft (or '), in (or \"), yd, m, cm, mm or km",
+  ],
   ['30 mhp', 'speed', "unknown unit 'mhp'; a speed takes mph, km/h, m/s or ft/s"],
   ['0.9-0.6', 'drag', 'drag factor: the low end comes first; write 0.6-0.9'],
   ['-2 to -4', 'signedGrade', 'the low end comes first; write -4 to -2'],
@@ -26,7 +30,11 @@ const ROWS: Row[] = [
   ['80,5', 'length', 'write 80.5'],
   ['1,234.5', 'length', "'1,234.5' uses a comma to group thousands; write 1234.5"],
   ['1,234', 'length', 'write 1234 for thousands or 1.234 for a decimal'],
-  ['0.72 m', 'drag', "drag factor: 'm' is a unit of length; a drag factor is a plain decimal such as 0.72"],
+  [
+    '0.72 m',
+    'drag',
+    "drag factor: 'm' is a unit of length; a drag factor is a plain decimal such as 0.72",
+  ],
   ['0.7 ft', 'drag', "'ft' is a unit of length"],
   ['80 mph', 'length', "mark length: 'mph' is a unit of speed; a length takes ft"],
   ['30 ft', 'speed', "'ft' is a unit of length; a speed takes mph"],
@@ -56,6 +64,16 @@ const ROWS: Row[] = [
   ['40 km', 'length', 'mark length must be at most 100000 (40 km = 131233.6 ft)'],
   ['80-', 'length', "mark length: a number is missing after '80-'"],
   ['- ', 'length', "a number is missing after '-'"],
+  ['80 to', 'length', "a number is missing after '80 to'"],
+  ['to 80', 'length', "'to' is not a number"],
+  ['100001', 'length', 'mark length must be at most 100000'],
+  ['1e-400', 'length', 'mark length must be greater than 0'],
+  ['80 x', 'length', "cannot read 'x' after '80'"],
+  ['80 ft.', 'length', "'.' is not understood here"],
+  ['3 1/0 in', 'length', "'3 1/0' divides by zero"],
+  ['1/2/3', 'length', "'/' is not understood here"],
+  ['-3 ± 0.5', 'grade', 'no minus sign here'],
+  ['1 ± 2', 'grade', 'no minus sign here'],
 ];
 
 describe('parseQuantity: rejected answers', () => {

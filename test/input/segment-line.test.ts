@@ -19,20 +19,50 @@ describe('parseSegmentLine: accepted lines', () => {
         { length: 22, drag: entered(0.4), grade: -3 },
       ],
     ],
-    ['48 @0.74 +2%; 31 @0.55', [{ length: 48, drag: entered(0.74), grade: 2 }, { length: 31, drag: entered(0.55), grade: 0 }]],
-    ['48@0.74+2%,31@0.55', [{ length: 48, drag: entered(0.74), grade: 2 }, { length: 31, drag: entered(0.55), grade: 0 }]],
+    [
+      '48 @0.74 +2%; 31 @0.55',
+      [
+        { length: 48, drag: entered(0.74), grade: 2 },
+        { length: 31, drag: entered(0.55), grade: 0 },
+      ],
+    ],
+    [
+      '48@0.74+2%,31@0.55',
+      [
+        { length: 48, drag: entered(0.74), grade: 2 },
+        { length: 31, drag: entered(0.55), grade: 0 },
+      ],
+    ],
     ['48 @0.70-0.78 -3%', [{ length: 48, drag: entered(0.74, 0.7, 0.78), grade: -3 }]],
     ['48 @0.70..0.78', [{ length: 48, drag: entered(0.74, 0.7, 0.78), grade: 0 }]],
     ['48 @0.72 (0.65-0.80) + 2 %', [{ length: 48, drag: entered(0.72, 0.65, 0.8), grade: 2 }]],
     ['48 @0.74 ± 0.04', [{ length: 48, drag: entered(0.74, 0.7, 0.78), grade: 0 }]],
-    ['48 @0.74 -3% ± 0.5', [{ length: 48, drag: entered(0.74), grade: { value: -3, low: -3.5, high: -2.5 } }]],
-    ['48 @0.74 -4..-2%', [{ length: 48, drag: entered(0.74), grade: { value: -3, low: -4, high: -2 } }]],
-    ['48 @0.74 -4 to -2%', [{ length: 48, drag: entered(0.74), grade: { value: -3, low: -4, high: -2 } }]],
-    ['48 @0.74 -3% (-4 to -2)', [{ length: 48, drag: entered(0.74), grade: { value: -3, low: -4, high: -2 } }]],
+    [
+      '48 @0.74 -3% ± 0.5',
+      [{ length: 48, drag: entered(0.74), grade: { value: -3, low: -3.5, high: -2.5 } }],
+    ],
+    [
+      '48 @0.74 -4..-2%',
+      [{ length: 48, drag: entered(0.74), grade: { value: -3, low: -4, high: -2 } }],
+    ],
+    [
+      '48 @0.74 -4 to -2%',
+      [{ length: 48, drag: entered(0.74), grade: { value: -3, low: -4, high: -2 } }],
+    ],
+    [
+      '48 @0.74 -3% (-4 to -2)',
+      [{ length: 48, drag: entered(0.74), grade: { value: -3, low: -4, high: -2 } }],
+    ],
     ['48 @0.7 0%', [{ length: 48, drag: entered(0.7), grade: 0 }]],
     ['47-49 @0.7', [{ length: { value: 48, low: 47, high: 49 }, drag: entered(0.7), grade: 0 }]],
-    ['48 ± 0.5 @0.7', [{ length: { value: 48, low: 47.5, high: 48.5 }, drag: entered(0.7), grade: 0 }]],
-    ['48 @0.74 +2% [gravel, loose]', [{ length: 48, drag: entered(0.74), grade: 2, label: 'gravel, loose' }]],
+    [
+      '48 ± 0.5 @0.7',
+      [{ length: { value: 48, low: 47.5, high: 48.5 }, drag: entered(0.7), grade: 0 }],
+    ],
+    [
+      '48 @0.74 +2% [gravel, loose]',
+      [{ length: 48, drag: entered(0.74), grade: 2, label: 'gravel, loose' }],
+    ],
     ['[shoulder] 22 @0.4', [{ length: 22, drag: entered(0.4), grade: 0, label: 'shoulder' }]],
     ['@0.74 -1%', [{ drag: entered(0.74), grade: -1 }]],
   ])('%j', (text, expected) => {
@@ -55,25 +85,80 @@ describe('parseSegmentLine: accepted lines', () => {
     });
   });
 
+  it('reads a unicode minus and an en dash as typed by phone keyboards', () => {
+    expect(parseSegmentLine('48 @0.70–0.78 −3%', imperial)).toEqual({
+      ok: true,
+      segments: [{ length: 48, drag: entered(0.74, 0.7, 0.78), grade: -3 }],
+    });
+  });
+
+  it('reads a metric line with the speed band from the context (30 mph is about 48 km/h)', () => {
+    // Dry new asphalt over 30 mph 0.65-1.00: Baker table (1975), seen in a reprint (Fricke 1990).
+    const r = parseSegmentLine('15 @asphalt-dry-new, 5.5 @0.5 +1%', {
+      units: 'metric',
+      band: 'over-30mph',
+    });
+    expect(r).toEqual({
+      ok: true,
+      segments: [
+        {
+          length: 15,
+          drag: {
+            source: 'table',
+            surface: 'asphalt-dry-new',
+            value: 0.825,
+            low: 0.65,
+            high: 1,
+            band: 'over-30mph',
+          },
+          grade: 0,
+        },
+        { length: 5.5, drag: entered(0.5), grade: 1 },
+      ],
+    });
+  });
+
   it('takes a reference table row by key, with the range of the table', () => {
     // Loose gravel 0.40-0.70: Baker table (1975) row, from memory (verify before use), as in DOMAIN.md.
     const r = parseSegmentLine('22 @gravel-loose', imperial);
     expect(r).toEqual({
       ok: true,
-      segments: [{ length: 22, drag: { source: 'table', surface: 'gravel-loose', value: 0.55, low: 0.4, high: 0.7 }, grade: 0 }],
+      segments: [
+        {
+          length: 22,
+          drag: { source: 'table', surface: 'gravel-loose', value: 0.55, low: 0.4, high: 0.7 },
+          grade: 0,
+        },
+      ],
     });
   });
 
   it('takes the speed band of a two-band row from the key or from the context', () => {
     // Dry travelled asphalt, over 30 mph 0.55-0.70, under 30 mph 0.60-0.80: Baker table (1975),
     // seen in a reprint (Fricke 1990), as in DOMAIN.md.
-    const over = { source: 'table', surface: 'asphalt-dry-travelled', value: 0.625, low: 0.55, high: 0.7, band: 'over-30mph' };
-    const under = { source: 'table', surface: 'asphalt-dry-travelled', value: 0.7, low: 0.6, high: 0.8, band: 'under-30mph' };
+    const over = {
+      source: 'table',
+      surface: 'asphalt-dry-travelled',
+      value: 0.625,
+      low: 0.55,
+      high: 0.7,
+      band: 'over-30mph',
+    };
+    const under = {
+      source: 'table',
+      surface: 'asphalt-dry-travelled',
+      value: 0.7,
+      low: 0.6,
+      high: 0.8,
+      band: 'under-30mph',
+    };
     expect(parseSegmentLine('48 @asphalt-dry-travelled/over30 -1%', imperial)).toEqual({
       ok: true,
       segments: [{ length: 48, drag: over, grade: -1 }],
     });
-    expect(parseSegmentLine('48 @asphalt-dry-travelled', { ...imperial, band: 'under-30mph' })).toEqual({
+    expect(
+      parseSegmentLine('48 @asphalt-dry-travelled', { ...imperial, band: 'under-30mph' }),
+    ).toEqual({
       ok: true,
       segments: [{ length: 48, drag: under, grade: 0 }],
     });
@@ -84,14 +169,25 @@ describe('parseSegmentLine: accepted lines', () => {
     expect(r).toEqual({
       ok: true,
       segments: [
-        { length: 22, drag: { source: 'table', surface: 'gravel-loose', value: 0.5, low: 0.4, high: 0.7 }, grade: 0 },
-        { length: 10, drag: { source: 'table', surface: 'gravel-loose', value: 0.525, low: 0.45, high: 0.6 }, grade: 1 },
+        {
+          length: 22,
+          drag: { source: 'table', surface: 'gravel-loose', value: 0.5, low: 0.4, high: 0.7 },
+          grade: 0,
+        },
+        {
+          length: 10,
+          drag: { source: 'table', surface: 'gravel-loose', value: 0.525, low: 0.45, high: 0.6 },
+          grade: 1,
+        },
       ],
     });
   });
 
   it('returns segments the case file schema accepts', () => {
-    const r = parseSegmentLine('48 @0.70-0.78 -3% [asphalt], 31 @gravel-loose=0.5 +1%, 22 ± 0.5 @0.4', imperial);
+    const r = parseSegmentLine(
+      '48 @0.70-0.78 -3% [asphalt], 31 @gravel-loose=0.5 +1%, 22 ± 0.5 @0.4',
+      imperial,
+    );
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     for (const s of r.segments) expect(segmentV1.safeParse(s).success).toBe(true);
@@ -101,33 +197,55 @@ describe('parseSegmentLine: accepted lines', () => {
 describe('parseSegmentLine: malformed lines name the segment and the part', () => {
   it.each([
     ['', 'segments: type each surface as LENGTH @DRAG GRADE, e.g. 48 @0.74 +2%, 31 @0.55'],
-    ['48 @0.74, 31 @0,55', "segment 2, '31 @0,55': the drag factor '0,55' uses a comma; write 0.55"],
+    [
+      '48 @0.74, 31 @0,55',
+      "segment 2, '31 @0,55': the drag factor '0,55' uses a comma; write 0.55",
+    ],
     ['48,31 @0.7', "segment 1, '48,31 @0.7': the length '48,31' uses a comma; write 48.31"],
     ['48', "segment 1, '48': no drag factor; add it after @, e.g. 48 @0.70"],
     ['48 -3%', "segment 1, '48 -3%': no drag factor; add it after @, e.g. 48 @0.70 -3%"],
-    ['48 @', "segment 1, '48 @': a drag factor is missing after @; write it as a decimal, e.g. @0.70"],
+    [
+      '48 @',
+      "segment 1, '48 @': a drag factor is missing after @; write it as a decimal, e.g. @0.70",
+    ],
     ['48 @-3%', 'a drag factor is missing after @'],
     ['48 @0.7 2%', "the grade '2%' needs a sign: +2% uphill or -2% downhill"],
-    ['48 @0.7 -3', "'0.7 -3' reads as a drag factor range; a grade is written with its sign and %, e.g. -3%"],
-    ['48 @0.7 +3', 'a grade is written with its sign and %'],
+    [
+      '48 @0.7 -3',
+      "'0.7 -3' reads as a drag factor range; a grade is written with its sign and %, e.g. -3%",
+    ],
+    ['48 @0.7 +3', 'write the grade with %, e.g. +3%'],
     ['48 @0.7 +2% [', 'the [ has no closing ]'],
     ['48 @0.7 []', 'the [label] is empty'],
     ['48 @0.7 [a] [b]', 'give one [label] per segment'],
     ['48 @0.7,, 31 @0.5', 'segment 2 is empty: there are two separators in a row'],
-    ['@0.74, 31 @0.5', "segment 1, '@0.74': give the length first; only a slide of one segment may leave it out"],
+    [
+      '@0.74, 31 @0.5',
+      "segment 1, '@0.74': give the length first; only a slide of one segment may leave it out",
+    ],
     ['0 @0.7', "segment 1, '0 @0.7': length must be greater than 0"],
     ['48 @0', 'drag factor must be greater than 0'],
     ['48 @72%', 'drag factor: write a decimal, not a percentage (0.72 for 72%)'],
     ['48 @0.9-0.6', 'the low end comes first; write 0.6-0.9'],
     ['48 mph @0.7', "'mph' is a unit of speed"],
     ['48 @0.7 +120%', 'grade must be less than 100'],
-    ['48 @0.7 xyz', "cannot read 'xyz'"],
+    [
+      '48 @0.7 xyz',
+      "drag factor: unknown unit 'xyz'; a drag factor is a plain decimal such as 0.72",
+    ],
+    ['48 @0.7 +2% xyz', "cannot read 'xyz'"],
     ['48 xyz @0.7', "unknown unit 'xyz'"],
     ['48 @gravl', "'gravl' is not a row of the reference table"],
-    ['48 @gravel', "rows like it: gravel-loose"],
-    ['48 @asphalt-dry-travelled', "'asphalt-dry-travelled' gives two ranges by speed; add /under30 or /over30"],
+    ['48 @gravel', 'rows like it: gravel-loose'],
+    [
+      '48 @asphalt-dry-travelled',
+      "'asphalt-dry-travelled' gives two ranges by speed; add /under30 or /over30",
+    ],
     ['48 @gravel-loose/fast', "'/fast' is not a speed band; use /under30 or /over30"],
-    ['48 @gravel-loose=0.8', 'the drag factor 0.8 is outside the table range 0.4-0.7 of gravel-loose'],
+    [
+      '48 @gravel-loose=0.8',
+      'the drag factor 0.8 is outside the table range 0.4-0.7 of gravel-loose',
+    ],
     ['48 @0.7 # 2', "'#' is not understood here"],
   ])('%j', (text, fragment) => {
     const r = parseSegmentLine(text, imperial);
@@ -139,15 +257,58 @@ describe('parseSegmentLine: malformed lines name the segment and the part', () =
 describe('formatSegmentLine', () => {
   it.each([
     [[{ length: 48, drag: entered(0.74), grade: 2 }], '48 @0.74 +2%'],
-    [[{ length: 48, drag: entered(0.74), grade: 0 }, { length: 31, drag: entered(0.55), grade: -3 }], '48 @0.74, 31 @0.55 -3%'],
+    [
+      [
+        { length: 48, drag: entered(0.74), grade: 0 },
+        { length: 31, drag: entered(0.55), grade: -3 },
+      ],
+      '48 @0.74, 31 @0.55 -3%',
+    ],
     [[{ length: 48, drag: entered(0.74, 0.7, 0.78) }], '48 @0.7-0.78'],
     [[{ length: 48, drag: entered(0.72, 0.65, 0.8) }], '48 @0.72 (0.65-0.8)'],
-    [[{ length: { value: 48, low: 47, high: 49 }, drag: entered(0.7), grade: { value: -3, low: -4, high: -2 } }], '47-49 @0.7 -3% (-4 to -2)'],
-    [[{ drag: entered(0.7), grade: -1, label: 'asphalt' }], '@0.7 -1% [asphalt]'],
-    [[{ length: 22, drag: { source: 'table', surface: 'gravel-loose', value: 0.55, low: 0.4, high: 0.7 } }], '22 @gravel-loose'],
-    [[{ length: 22, drag: { source: 'table', surface: 'gravel-loose', value: 0.5, low: 0.4, high: 0.7 } }], '22 @gravel-loose=0.5'],
     [
-      [{ length: 22, drag: { source: 'table', surface: 'asphalt-dry-travelled', value: 0.6, low: 0.55, high: 0.7, band: 'over-30mph' } }],
+      [
+        {
+          length: { value: 48, low: 47, high: 49 },
+          drag: entered(0.7),
+          grade: { value: -3, low: -4, high: -2 },
+        },
+      ],
+      '47-49 @0.7 -3% (-4 to -2)',
+    ],
+    [[{ drag: entered(0.7), grade: -1, label: 'asphalt' }], '@0.7 -1% [asphalt]'],
+    [
+      [
+        {
+          length: 22,
+          drag: { source: 'table', surface: 'gravel-loose', value: 0.55, low: 0.4, high: 0.7 },
+        },
+      ],
+      '22 @gravel-loose',
+    ],
+    [
+      [
+        {
+          length: 22,
+          drag: { source: 'table', surface: 'gravel-loose', value: 0.5, low: 0.4, high: 0.7 },
+        },
+      ],
+      '22 @gravel-loose=0.5',
+    ],
+    [
+      [
+        {
+          length: 22,
+          drag: {
+            source: 'table',
+            surface: 'asphalt-dry-travelled',
+            value: 0.6,
+            low: 0.55,
+            high: 0.7,
+            band: 'over-30mph',
+          },
+        },
+      ],
       '22 @asphalt-dry-travelled/over30=0.6',
     ],
   ] as const)('%j -> %s', (segments, text) => {
@@ -160,9 +321,21 @@ describe('formatSegmentLine', () => {
   });
 
   it('gives undefined for what the line cannot carry', () => {
-    expect(formatSegmentLine([{ length: 48, drag: { source: 'decelerometer', readings: [0.7] }, grade: 0 }])).toBeUndefined();
-    expect(formatSegmentLine([{ length: 48, drag: { source: 'table', surface: 'wet cobbles', value: 0.5 }, grade: 0 }])).toBeUndefined();
-    expect(formatSegmentLine([{ length: 48, drag: entered(0.5), label: 'a [b]' }] as never)).toBeUndefined();
-    expect(formatSegmentLine([{ drag: entered(0.5) }, { length: 3, drag: entered(0.5) }] as never)).toBeUndefined();
+    expect(
+      formatSegmentLine([
+        { length: 48, drag: { source: 'decelerometer', readings: [0.7] }, grade: 0 },
+      ]),
+    ).toBeUndefined();
+    expect(
+      formatSegmentLine([
+        { length: 48, drag: { source: 'table', surface: 'wet cobbles', value: 0.5 }, grade: 0 },
+      ]),
+    ).toBeUndefined();
+    expect(
+      formatSegmentLine([{ length: 48, drag: entered(0.5), label: 'a [b]' }] as never),
+    ).toBeUndefined();
+    expect(
+      formatSegmentLine([{ drag: entered(0.5) }, { length: 3, drag: entered(0.5) }] as never),
+    ).toBeUndefined();
   });
 });

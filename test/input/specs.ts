@@ -3,8 +3,21 @@ import { RULES, type Quantity, spread } from '../../src/case/quantity.js';
 import type { QuantitySpec } from '../../src/input/index.js';
 import { expect } from 'vitest';
 
-const spec = (field: string, kind: QuantitySpec['kind'], rule: QuantitySpec['rule'], extra: Partial<QuantitySpec> = {}) =>
-  (units: QuantitySpec['units'] = 'imperial'): QuantitySpec => ({ field, kind, units, rule, allowRange: true, ...extra });
+const spec =
+  (
+    field: string,
+    kind: QuantitySpec['kind'],
+    rule: QuantitySpec['rule'],
+    extra: Partial<QuantitySpec> = {},
+  ) =>
+  (units: QuantitySpec['units'] = 'imperial'): QuantitySpec => ({
+    field,
+    kind,
+    units,
+    rule,
+    allowRange: true,
+    ...extra,
+  });
 
 export const SPECS = {
   length: spec('mark length', 'length', RULES.length),
@@ -18,7 +31,11 @@ export const SPECS = {
     negativeHint: 'choose "away from the centre" instead of typing a minus sign',
   }),
   speed: spec('end speed', 'speed', RULES.speed),
-  time: spec('perception-reaction time', 'time', { what: 'perception-reaction time', gt: 0, max: 10 }),
+  time: spec('perception-reaction time', 'time', {
+    what: 'perception-reaction time',
+    gt: 0,
+    max: 10,
+  }),
   weight: spec('sled weight', 'weight', RULES.sledWeight),
   pull: spec('sled pull', 'force', RULES.sledPull),
 };

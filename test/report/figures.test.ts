@@ -73,7 +73,12 @@ describe.each(CASES)('report figures equal solve --json: %s', (_name, file) => {
     for (const format of ['txt', 'md'] as const) {
       const r = await runReport(file, { format });
       const re = new RegExp(`Result: ${NUM}(?:%| [a-z/]+)?(?: \\(${NUM} to ${NUM}\\))?`, 'g');
-      const shown = [...flat(r.out).matchAll(re)];
+      // The engine's chain only: each analysis's "The chain, step by step" up to the next part.
+      const chains = [
+        ...flat(r.out).matchAll(/The chain, step by step(.*?)Where the drag factor comes from/g),
+      ];
+      expect(chains).toHaveLength(json.analyses.length);
+      const shown = chains.flatMap((c) => [...c[1]!.matchAll(re)]);
       const steps = json.analyses.flatMap((a) => a.steps);
       expect(shown).toHaveLength(steps.length);
       shown.forEach((m, k) => {

@@ -79,6 +79,7 @@ describe.each(FILES)('report forms for %s', (file) => {
     expect(html.match(/<body>/g)).toHaveLength(1);
     expect(tagProblem(html)).toBeUndefined();
     const svgs = figuresOf(doc).filter((f) => f.svg);
+    expect(svgs.length).toBeGreaterThan(0);
     expect(html.match(/<svg[\s>]/g) ?? []).toHaveLength(svgs.length);
     expect(html).not.toMatch(/<\?xml/);
     expect(html).not.toMatch(/\s(src|href)="(https?:)?\/\//);
@@ -114,5 +115,27 @@ describe('parseReportJson', () => {
   it('refuses text that is not a report', () => {
     expect(parseReportJson('{"format":"skidcase-case","version":1}')).toBeUndefined();
     expect(parseReportJson('not json')).toBeUndefined();
+  });
+});
+
+describe('drafts and failures (the review screen builds reports from unfinished cases)', () => {
+  it('an analysis that cannot be computed says why and states no figure for it', () => {
+    const c = load(fixture('steep-shoulder.json'));
+    const doc = buildReport(c, solveCase(c), META);
+    const text = flat(renderText(doc));
+    expect(text).toMatch(/Not computed: .*segment 2/);
+    expect(text).not.toMatch(/At least \d/);
+    expect(text).toContain('1. skid-1 skid not computed');
+    for (const form of [text, renderMarkdown(doc), renderHtml(doc)])
+      expect(form).not.toMatch(/NaN|undefined/);
+    for (const caution of CAUTIONS) expect(text).toContain(caution);
+  });
+
+  it('a case with no analysis yet still gives a complete report with its cautions', () => {
+    const c = { ...load(fixture('birchfield-yaw.json')), analyses: [] };
+    const text = flat(renderText(buildReport(c, solveCase(c), META)));
+    expect(text).toContain('The case holds no analysis yet.');
+    expect(text).toContain('This tool does not state fault.');
+    expect(tagProblem(renderHtml(buildReport(c, solveCase(c), META)))).toBeUndefined();
   });
 });

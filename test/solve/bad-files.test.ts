@@ -160,6 +160,10 @@ describe('invalid files: exit 2 naming the field', () => {
       expect(readdirSync(dir).length).toBe(before); // nothing written
     });
 
+  it('a byte-order mark before valid JSON (as some editors save) is accepted', async () => {
+    const r = await runSolve(write(`\uFEFF${JSON.stringify(base())}`), true);
+    expect(r.code).toBe(0);
+  });
   it('a missing file is exit 2 naming the file', async () => {
     const f = join(dir, 'no-such-case.json');
     const r = await runSolve(f);

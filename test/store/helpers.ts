@@ -44,4 +44,5 @@ export function manySegmentCase(id: string, n: number): Case {
   return c as Case;
 }
 
-export const readJson = (file: string): Record<string, unknown> => JSON.parse(fs.readFileSync(file, 'utf8'));
+export const readJson = (file: string): Record<string, unknown> =>
+  JSON.parse(fs.readFileSync(file, 'utf8'));

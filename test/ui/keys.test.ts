@@ -1,11 +1,35 @@
 import { describe, expect, it } from 'vitest';
 import type { Key } from 'ink';
-import { KEY_TABLE, findBinding, keyLabel, keysFor, matches, type KeyContext } from '../../src/ui/keys.js';
+import {
+  KEY_TABLE,
+  findBinding,
+  keyLabel,
+  keysFor,
+  matches,
+  type KeyContext,
+} from '../../src/ui/keys.js';
 
 const none: Key = {
-  upArrow: false, downArrow: false, leftArrow: false, rightArrow: false, pageDown: false, pageUp: false,
-  home: false, end: false, return: false, escape: false, ctrl: false, shift: false, tab: false,
-  backspace: false, delete: false, meta: false, super: false, hyper: false, capsLock: false, numLock: false,
+  upArrow: false,
+  downArrow: false,
+  leftArrow: false,
+  rightArrow: false,
+  pageDown: false,
+  pageUp: false,
+  home: false,
+  end: false,
+  return: false,
+  escape: false,
+  ctrl: false,
+  shift: false,
+  tab: false,
+  backspace: false,
+  delete: false,
+  meta: false,
+  super: false,
+  hyper: false,
+  capsLock: false,
+  numLock: false,
 };
 const key = (k: Partial<Key>): Key => ({ ...none, ...k });
 
@@ -25,12 +49,17 @@ describe('key table', () => {
   it('never binds the same key twice where both are live', () => {
     const contexts: KeyContext[] = ['home', 'question', 'choice', 'review', 'jump', 'help', 'path'];
     for (const ctx of contexts) {
-      const live = KEY_TABLE.filter((b) => b.when.includes(ctx) || (ctx === 'choice' && b.when.includes('question')));
+      const live = KEY_TABLE.filter(
+        (b) => b.when.includes(ctx) || (ctx === 'choice' && b.when.includes('question')),
+      );
       const seen = new Map<string, string>();
       for (const b of live)
         for (const k of b.keys) {
           const id = `${k.ctrl ? 'C-' : ''}${k.name}`;
-          expect(seen.get(id), `${ctx}: ${id} bound to ${seen.get(id)} and ${b.command}`).toBeUndefined();
+          expect(
+            seen.get(id),
+            `${ctx}: ${id} bound to ${seen.get(id)} and ${b.command}`,
+          ).toBeUndefined();
           seen.set(id, b.command);
         }
     }

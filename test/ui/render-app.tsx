@@ -22,7 +22,8 @@ export const DOWN = '\u001B[B';
 export const PAGE_DOWN = '\u001B[6~';
 export const BACKSPACE = '\u007F';
 /** Ctrl+letter: the control byte a terminal sends (Ctrl+A = 0x01 ... Ctrl+Z = 0x1a). */
-export const ctrl = (letter: string) => String.fromCharCode(letter.toLowerCase().charCodeAt(0) - 96);
+export const ctrl = (letter: string) =>
+  String.fromCharCode(letter.toLowerCase().charCodeAt(0) - 96);
 
 // eslint-disable-next-line no-control-regex
 export const strip = (s: string | undefined) => (s ?? '').replace(/\u001B\[[0-9;?]*[A-Za-z]/g, '');
@@ -45,13 +46,19 @@ export function renderApp(o: RenderOptions = {}) {
   const dir = tempDir('skidcase-ui-');
   const cfg = tempDir('skidcase-cfg-');
   for (const [name, body] of Object.entries(o.files ?? {}))
-    fs.writeFileSync(path.join(dir, name), typeof body === 'string' ? body : JSON.stringify(body, null, 2));
+    fs.writeFileSync(
+      path.join(dir, name),
+      typeof body === 'string' ? body : JSON.stringify(body, null, 2),
+    );
   let services = liveServices({
     sessionsDir: dir,
     sessionsFrom: 'flag',
     port: liveInterview,
     prefs: { cwd: cfg },
-    demoFile: path.resolve('sessions', fs.readdirSync('sessions').find((n) => n.startsWith('demo'))!),
+    demoFile: path.resolve(
+      'sessions',
+      fs.readdirSync('sessions').find((n) => n.startsWith('demo'))!,
+    ),
   });
   if (o.services) services = o.services(services);
   const exits: number[] = [];
@@ -70,7 +77,11 @@ export function renderApp(o: RenderOptions = {}) {
   const frame = () => strip(r.lastFrame());
 
   /** Polls until `test` holds for the current frame; fails with the last frame shown. */
-  async function waitFor(test: (f: string) => boolean, what = 'the expected screen', ms = 4000): Promise<string> {
+  async function waitFor(
+    test: (f: string) => boolean,
+    what = 'the expected screen',
+    ms = 4000,
+  ): Promise<string> {
     const until = Date.now() + ms;
     for (;;) {
       const f = frame();
@@ -80,7 +91,11 @@ export function renderApp(o: RenderOptions = {}) {
     }
   }
   const waitText = (text: string | RegExp, ms?: number) =>
-    waitFor((f) => (typeof text === 'string' ? f.includes(text) : text.test(f)), `"${String(text)}"`, ms);
+    waitFor(
+      (f) => (typeof text === 'string' ? f.includes(text) : text.test(f)),
+      `"${String(text)}"`,
+      ms,
+    );
 
   /** Writes keys and waits for the frame to change (or for `text`, when given). */
   async function press(keys: string, text?: string | RegExp): Promise<string> {

@@ -12,9 +12,20 @@ function load(raw: unknown): Case {
 
 // Invented scenario: one 100 ft slide to a stop, f 0.70 (0.60-0.80), all brakes, limit 40 mph.
 const simple = load({
-  format: 'skidcase-case', version: 1, id: 'ui-simple', units: 'imperial', postedLimit: 40,
+  format: 'skidcase-case',
+  version: 1,
+  id: 'ui-simple',
+  units: 'imperial',
+  postedLimit: 40,
   vehicle: { brakes: { mode: 'all' } },
-  analyses: [{ id: 'skid-1', kind: 'skid', marks: [100], segments: [{ drag: { source: 'entered', value: 0.7, low: 0.6, high: 0.8 } }] }],
+  analyses: [
+    {
+      id: 'skid-1',
+      kind: 'skid',
+      marks: [100],
+      segments: [{ drag: { source: 'entered', value: 0.7, low: 0.6, high: 0.8 } }],
+    },
+  ],
 });
 
 describe('reviewLines', () => {
@@ -48,6 +59,8 @@ describe('reviewLines', () => {
   });
 
   it('keeps every line within the width', () => {
-    for (const w of [60, 80]) for (const l of reviewLines(solveCase(simple), w)) expect([...l.text].length).toBeLessThanOrEqual(w);
+    for (const w of [60, 80])
+      for (const l of reviewLines(solveCase(simple), w))
+        expect([...l.text].length).toBeLessThanOrEqual(w);
   });
 });

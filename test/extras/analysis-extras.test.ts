@@ -1,0 +1,63 @@
+import { describe, expect, it } from 'vitest';
+import { analysisExtras } from '../../src/extras/analysis-extras.js';
+import { caseOf, solved } from './helpers.js';
+
+const skid = {
+  id: 's',
+  kind: 'skid',
+  marks: [90],
+  segments: [{ label: 'asphalt', drag: { source: 'entered', value: 0.75, low: 0.7, high: 0.8 } }],
+};
+
+describe('analysisExtras: what applies to an analysis, and only that', () => {
+  it('a skid with a posted limit: sensitivity, limit comparison with the preference, slide picture', () => {
+    const c = caseOf({ postedLimit: 30, analyses: [skid] });
+    const x = analysisExtras(c, solved(c), { reactionTime: 2.5 });
+    expect(x.sensitivity.map((r) => r.key)).toEqual(['f[0]']);
+    expect(x.sampling).toBeUndefined();
+    expect(x.limit?.ok && x.limit.value.reactionTime).toBe(2.5);
+    expect(x.limit?.ok && x.limit.value.reactionSource).toMatch(/^from the preferences; AASHTO/);
+    expect(x.svg.speed).toContain('asphalt');
+    expect(x.svg.yaw).toBeUndefined();
+    expect(x.segmentLabels).toEqual(['asphalt']);
+  });
+
+  it("the case's own timeDistance wins over the preference; sampling runs when the case asks", () => {
+    const c = caseOf({
+      postedLimit: 30,
+      sampling: { samples: 2000, seed: 4 },
+      analyses: [{ ...skid, timeDistance: { reactionTime: 1.5, conflictAt: 5 } }],
+    });
+    const x = analysisExtras(c, solved(c), { reactionTime: 2.5 });
+    expect(x.limit?.ok && x.limit.value.reactionTime).toBe(1.5);
+    expect(x.limit?.ok && x.limit.value.conflict?.at).toBe(5);
+    expect(x.sampling?.ok && x.sampling.value.samples).toBe(2000);
+  });
+
+  it('without a posted limit there is no limit comparison; a bad field is reported, not thrown', () => {
+    const c = caseOf({ analyses: [skid], sampling: { seed: 'x' } });
+    const x = analysisExtras(c, solved(c));
+    expect(x.limit).toBeUndefined();
+    expect(x.sampling).toMatchObject({ ok: false, path: 'sampling.seed' });
+  });
+
+  it('a yaw analysis: the arc picture and the offsets fit when given', () => {
+    const c = caseOf({
+      analyses: [
+        {
+          id: 'y',
+          kind: 'yaw',
+          chord: 40,
+          middleOrdinate: 2,
+          drag: { source: 'entered', value: 0.7 },
+          offsets: { chord: 40, stations: [{ at: 20, offset: 2 }] },
+        },
+      ],
+    });
+    const x = analysisExtras(c, solved(c));
+    expect(x.svg.yaw).toContain('M 2.00 ft');
+    expect(x.svg.speed).toBeUndefined();
+    // R = 40²/(8 × 2) + 2/2 = 101 ft (DOMAIN.md circle geometry).
+    expect(x.offsets?.ok && x.offsets.value.radius.value).toBeCloseTo(101, 9);
+  });
+});

@@ -1,0 +1,56 @@
+/**
+ * Every numeric question of the interview, each in a state where it is the question on screen
+ * (so that checks which depend on earlier answers, such as the middle ordinate against the chord,
+ * are in force). Found by walking whole cases through the pure reducer.
+ */
+import { allQuestions, currentQuestion } from '../../src/interview/index.js';
+import type { InterviewState, Question } from '../../src/interview/types.js';
+import { dryRun, type Script } from '../e2e/interview-driver.js';
+import { OTHER_SOURCES, SLIDE_ONLY_FAST, TWO_SURFACES_AND_YAW } from '../e2e/scripts.js';
+
+export const NUMERIC_KINDS = new Set(['quantity', 'list', 'segments']);
+export const isNumeric = (q: Question) => NUMERIC_KINDS.has(q.kind);
+
+/** `a1.seg12.drag.value` -> `a#.seg#.drag.value`: the same question in another analysis or segment. */
+export const family = (id: string) => id.replace(/\d+/g, '#');
+
+export interface AtQuestion {
+  q: Question;
+  state: InterviewState;
+}
+
+const SCRIPTS: Script[] = [TWO_SURFACES_AND_YAW, OTHER_SOURCES, SLIDE_ONLY_FAST];
+
+/** The first state of each script in which `id` is the current question. */
+export function stateAt(id: string): AtQuestion {
+  for (const script of SCRIPTS) {
+    for (let n = 0; n < 300; n++) {
+      const state = dryRun(script, { maxAnswers: n });
+      const q = currentQuestion(state);
+      if (!q) break;
+      if (q.id === id) return { q, state };
+    }
+  }
+  throw new Error(`no script reaches question ${id}`);
+}
+
+/** One state per numeric question family met on the way through the scripts. */
+export function numericQuestions(): AtQuestion[] {
+  const out = new Map<string, AtQuestion>();
+  for (const script of SCRIPTS) {
+    for (let n = 0; n < 300; n++) {
+      const state = dryRun(script, { maxAnswers: n });
+      const q = currentQuestion(state);
+      if (!q) break;
+      if (isNumeric(q) && !out.has(family(q.id))) out.set(family(q.id), { q, state });
+    }
+  }
+  return [...out.values()];
+}
+
+/** Families of every numeric question the interview knows after the scripts' answers. */
+export function allNumericFamilies(): Set<string> {
+  const fams = new Set<string>();
+  for (const script of SCRIPTS) for (const q of allQuestions(dryRun(script).answers)) if (isNumeric(q)) fams.add(family(q.id));
+  return fams;
+}

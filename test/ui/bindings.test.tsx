@@ -1,0 +1,240 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import { afterEach, describe, expect, it } from 'vitest';
+import { cleanup } from 'ink-testing-library';
+import { KEY_TABLE, bindingKeys, type Command } from '../../src/ui/keys.js';
+import { QUICK_ENTRY_HELP } from '../../src/input/index.js';
+import { DOWN, ENTER, ESC, PAGE_DOWN, UP, ctrl, renderApp } from './render-app.js';
+import { finishedSlide, halfDone, truncated } from './fixtures.js';
+
+afterEach(() => cleanup());
+
+type App = ReturnType<typeof renderApp>;
+const flat = (s: string) => s.replace(/[│╭╮╰╯─]/g, ' ').replace(/\s+/g, ' ');
+
+async function home(o: Parameters<typeof renderApp>[0] = {}): Promise<App> {
+  const app = renderApp(o);
+  await app.waitFor((f) => f.includes('Cases in'), 'the case list');
+  return app;
+}
+async function fresh(o: Parameters<typeof renderApp>[0] = {}): Promise<App> {
+  const app = await home(o);
+  await app.press('n', 'Case or report reference');
+  return app;
+}
+/** The finished case, opened on its review. */
+async function review(rows = 30): Promise<App> {
+  const app = await home({ files: { 'finished-slide.json': finishedSlide }, rows });
+  await app.waitText('finished-slide');
+  await app.press(ENTER, 'Analysis 1 · slide · skid-1');
+  return app;
+}
+async function exited(app: App) {
+  await app.waitFor(() => app.exits.length > 0, 'the app to exit');
+  return app.exits;
+}
+
+/** What each command must do, checked through the keys the table gives it. */
+const CHECKS: Record<Command, (keys: string) => Promise<void>> = {
+  async help(k) {
+    const app = await fresh();
+    let f = await app.press(k, 'Show or hide this list of keys');
+    expect(f).toContain('Keys');
+    f = await app.press(k, 'Case or report reference');
+    expect(f).not.toContain('Show or hide this list of keys');
+  },
+  async 'save-leave'(k) {
+    const app = await fresh();
+    await app.answer('LEAVE-1', /saved \d/);
+    app.stdin.write(k);
+    app.stdin.write(k); // a second press while leaving changes nothing
+    expect(await exited(app)).toEqual([0]);
+    const names = fs.readdirSync(app.dir);
+    expect(names.some((n) => n.endsWith('.lock'))).toBe(false);
+    const file = names.find((n) => n.endsWith('.json'))!;
+    expect(JSON.parse(fs.readFileSync(path.join(app.dir, file), 'utf8')).details.reference).toBe(
+      'LEAVE-1',
+    );
+  },
+  async quit(k) {
+    const app = await home();
+    app.stdin.write(k);
+    expect(await exited(app)).toEqual([0]);
+  },
+  async submit(k) {
+    const app = await fresh();
+    await app.press(k, 'When did the crash happen?');
+  },
+  async pick() {
+    const app = await fresh();
+    for (let i = 0; i < 5; i++) await app.press(ENTER);
+    await app.waitText('Which units');
+    const f = await app.press('m', 'Posted speed limit');
+    expect(f).toContain('in km/h');
+  },
+  async back(k) {
+    const app = await fresh();
+    await app.press(ENTER, 'When did the crash happen?');
+    await app.press(k, 'Case or report reference');
+  },
+  async forward(k) {
+    const app = await fresh();
+    await app.press(ENTER, 'When did the crash happen?');
+    await app.press(ctrl('b'), 'Case or report reference');
+    const f = await app.press(k, 'When did the crash happen?');
+    expect(f).toMatch(/1 of \d+ answered/);
+  },
+  async jump(k) {
+    const app = await fresh();
+    await app.press(k, 'Go to:');
+    for (const ch of 'unit') app.stdin.write(ch);
+    const f = await app.waitText('Go to: unit');
+    expect(f).toMatch(/open\s+Case · Units/);
+    await app.press(ENTER, 'Which units were the measurements taken in?');
+  },
+  async undo(k) {
+    const app = await fresh();
+    await app.answer('UNDO-ME', 'When did the crash happen?');
+    const f = await app.press(k, 'Case or report reference');
+    expect(f).toMatch(/0 of \d+ answered/);
+  },
+  async review(k) {
+    const app = await fresh();
+    const f = await app.press(k, /Review · /);
+    expect(f).toContain('Cautions');
+  },
+  async explain(k) {
+    const app = await fresh();
+    expect(app.frame()).toContain('Why:');
+    let f = await app.press(k, 'shows why this is asked');
+    expect(f).not.toContain('Why:');
+    f = await app.press(k, 'Why:');
+  },
+  async mode(k) {
+    const app = await fresh();
+    await app.press(k, 'brisk mode');
+    const cfg = JSON.parse(fs.readFileSync(path.join(app.cfg, 'config.json'), 'utf8'));
+    expect(cfg.mode).toBe('brisk');
+    await app.press(k, 'guided mode');
+  },
+  async up(k) {
+    const app = await fresh();
+    for (let i = 0; i < 5; i++) await app.press(ENTER);
+    await app.waitText('> [i]');
+    await app.press(DOWN, '> [m]');
+    await app.press(k, '> [i]');
+  },
+  async down(k) {
+    const app = await home({
+      files: { 'finished-slide.json': finishedSlide, 'half-done.json': halfDone },
+    });
+    await app.waitText('> finished-slide');
+    await app.press(k, '> half-done');
+    await app.press(UP, '> finished-slide');
+  },
+  async 'page-up'(k) {
+    const app = await review(24);
+    await app.press(PAGE_DOWN, /lines (?!1-)\d+-/);
+    await app.press(k, /lines 1-/);
+  },
+  async 'page-down'(k) {
+    const app = await review(24);
+    const f = await app.press(k, /lines (?!1-)\d+-/);
+    expect(f).toContain('↑/PgUp back');
+  },
+  async close(k) {
+    const app = await review();
+    await app.press('g', 'Go to:');
+    await app.press(k, 'Analysis 1 · slide · skid-1');
+    app.stdin.write(k);
+    const f = await app.waitFor((x) => !x.includes('Analysis 1 · slide · skid-1'), 'the questions');
+    expect(f).toContain('Another analysis?');
+  },
+  async 'new-case'(k) {
+    const app = await home();
+    await app.press(k, 'Case or report reference');
+  },
+  async 'open-path'(k) {
+    const elsewhere = fs.mkdtempSync(
+      path.join(fs.realpathSync(process.env.TMPDIR ?? '/tmp'), 'skidcase-other-'),
+    );
+    const file = path.join(elsewhere, 'finished-slide.json');
+    fs.writeFileSync(file, JSON.stringify(finishedSlide));
+    const app = await home();
+    await app.press(k, 'File to open:');
+    app.stdin.write(file);
+    await app.waitText('finished-slide.json');
+    await app.press(ENTER, 'UI-TEST-FINISHED');
+  },
+  async demo(k) {
+    const app = await home();
+    const f = await app.press(k, 'Resumed');
+    expect(f).toContain('demo-copy');
+  },
+  async restore(k) {
+    const app = await home({
+      files: { 'cut-off.json': truncated, 'cut-off.json.bak': { ...finishedSlide, id: 'cut-off' } },
+    });
+    await app.waitText('restore its backup');
+    await app.press(k, 'Restored cut-off');
+  },
+  async report(k) {
+    const app = await review();
+    await app.press(k, 'Writing the report');
+    // The report runs the sampling extras: give it longer than a key press.
+    const f = await app.waitText('Report written to', 30_000);
+    const name = /Report written to (\S+)/.exec(f)![1]!;
+    expect(fs.readFileSync(name, 'utf8')).toContain('at least 42 mph');
+  },
+  async 'to-question'(k) {
+    const app = await review();
+    await app.press(k, 'Go to:');
+  },
+};
+
+describe('key bindings', () => {
+  it.each(KEY_TABLE.map((b) => [b.command, b] as const))(
+    '%s does what the help says',
+    async (_c, b) => {
+      const k = b.keys[0]!;
+      const bytes =
+        k.name === 'return'
+          ? ENTER
+          : k.name === 'escape'
+            ? ESC
+            : k.name === 'up'
+              ? UP
+              : k.name === 'down'
+                ? DOWN
+                : k.name === 'pagedown'
+                  ? PAGE_DOWN
+                  : k.name === 'pageup'
+                    ? '\u001B[5~'
+                    : k.ctrl
+                      ? ctrl(k.name)
+                      : k.name;
+      await CHECKS[b.command](bytes);
+    },
+  );
+
+  it('Ctrl+C saves and leaves like Ctrl+Q', async () => {
+    await CHECKS['save-leave'](ctrl('c'));
+  });
+
+  it('the help overlay lists every binding of the table, and the quick-entry syntax', async () => {
+    const app = await fresh({ rows: 200 });
+    const f = flat(await app.press(ctrl('k'), 'Quick entry'));
+    for (const b of KEY_TABLE) {
+      expect(f, b.command).toContain(bindingKeys(b));
+      expect(f, b.command).toContain(b.description.replace(/\s+/g, ' '));
+    }
+    for (const line of QUICK_ENTRY_HELP) expect(f).toContain(line.trim().replace(/\s+/g, ' '));
+  });
+
+  it('the footer hints come from the table', async () => {
+    const app = await home();
+    const f = app.frame();
+    for (const b of KEY_TABLE.filter((x) => x.footer?.includes('home')))
+      expect(f).toContain(`${bindingKeys(b)} ${b.label}`);
+  });
+});

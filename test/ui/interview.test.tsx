@@ -1,0 +1,221 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import chalk from 'chalk';
+import { afterEach, describe, expect, it } from 'vitest';
+import { cleanup } from 'ink-testing-library';
+import { loadCaseText } from '../../src/case/load.js';
+import { solveCase } from '../../src/engine/index.js';
+import { applyColorPolicy } from '../../src/ui/theme.js';
+import { DOWN, ENTER, ESC, ctrl, renderApp } from './render-app.js';
+import { halfDone } from './fixtures.js';
+
+afterEach(() => cleanup());
+
+/** A new case, on its first question. */
+async function newCase(o: Parameters<typeof renderApp>[0] = {}) {
+  const app = renderApp(o);
+  await app.waitText('No cases here yet');
+  await app.press('n', 'Case or report reference');
+  return app;
+}
+
+/** From a new case's first question to the posted limit. */
+async function toLimit(app: Awaited<ReturnType<typeof newCase>>) {
+  await app.answer('UI-7', 'When did the crash happen?');
+  for (let i = 0; i < 4; i++) await app.press(ENTER);
+  await app.waitText('Which units');
+  await app.press('i', 'Posted speed limit');
+}
+
+describe('interview screen', () => {
+  it('shows the case, section and progress, and saves after an answer', async () => {
+    const app = await newCase();
+    let f = app.frame();
+    expect(f).toMatch(/Case · 0 of \d+ answered · guided mode/);
+    expect(f).toContain('no changes yet');
+    f = await app.answer('UI-7', /saved \d\d:\d\d:\d\d/);
+    expect(f).toMatch(/Case · 1 of \d+ answered/);
+    const file = fs.readdirSync(app.dir).find((n) => n.endsWith('.json'))!;
+    const saved = loadCaseText(fs.readFileSync(path.join(app.dir, file), 'utf8'));
+    expect(saved.ok && saved.case.details?.reference).toBe('UI-7');
+  });
+
+  it('shows a rejected answer’s message in place and keeps what was typed', async () => {
+    const app = await newCase();
+    await toLimit(app);
+    const f = await app.answer('fast', /✗/);
+    expect(f).toContain('> fast');
+    expect(f).toContain('Posted speed limit');
+    expect(f).toMatch(/✗ .*not a number/);
+  });
+
+  it('says when it converts a unit', async () => {
+    const app = await newCase();
+    await toLimit(app);
+    // 56 km/h ÷ 1.609344 km per mile (international mile, 1959) = 34.797 mph.
+    const f = await app.answer('56 km/h', 'Which vehicle');
+    expect(f).toMatch(/56 km\/h = 34\.8 mph/);
+  });
+
+  it('shows the why/how panel in guided mode and hides it in brisk mode', async () => {
+    const app = await newCase();
+    expect(app.frame()).toContain('Why:');
+    const f = await app.press(ctrl('t'), 'brisk mode');
+    expect(f).not.toContain('Why:');
+    expect(f).toContain('Ctrl+E shows why');
+  });
+
+  it('resumes on the first open question with a summary of what is done', async () => {
+    const app = renderApp({ files: { 'half-done.json': halfDone }, start: { kind: 'resume' } });
+    const f = await app.waitText('Resumed. Already done:');
+    expect(f).toContain('Which units were the measurements taken in?');
+    expect(f).toContain('Case UI-TEST-HALF');
+    expect(f).toMatch(/5 of \d+ answered/);
+  });
+
+  it('keeps answers in memory and says so when a save fails', async () => {
+    const app = renderApp({
+      services: (s) => ({ ...s, saveCase: async () => ({ ok: false, message: 'disk is full' }) }),
+    });
+    await app.waitText('No cases here yet');
+    await app.press('n', 'Case or report reference');
+    const f = await app.answer('UI-8', 'disk is full');
+    expect(f).toMatch(/Case · 1 of \d+ answered/);
+    await app.press(ctrl('b'), '> UI-8');
+  });
+
+  it('shows a read-only banner when the case is open elsewhere', async () => {
+    const app = renderApp({
+      files: { 'half-done.json': halfDone },
+      start: { kind: 'resume', id: 'half-done' },
+      services: (s) => ({
+        ...s,
+        openCase: async (ref) => {
+          const o = await s.openCase(ref);
+          if (o.ok) o.open.readOnly = 'this case is open in another skidcase (pid 4242).';
+          return o;
+        },
+      }),
+    });
+    const f = await app.waitText('READ-ONLY');
+    expect(f).toContain('pid 4242');
+    expect(f).toContain('not saved (read-only)');
+  });
+
+  it('stacks the panels at 60 columns and keeps every line inside them', async () => {
+    const app = await newCase({ columns: 60 });
+    const f = app.frame();
+    const lines = f.split('\n');
+    const prompt = lines.findIndex((l) => l.includes('Case or report reference'));
+    const chain = lines.findIndex((l) => l.includes('Chain so far'));
+    expect(chain).toBeGreaterThan(prompt);
+    // Stacked: nothing sits beside the prompt.
+    expect(lines[prompt]).not.toContain('│');
+    for (const l of lines) expect([...l].length).toBeLessThanOrEqual(60);
+  });
+
+  it('puts the chain beside the question at 80 columns', async () => {
+    const app = await newCase({ columns: 80, rows: 24 });
+    const line = app
+      .frame()
+      .split('\n')
+      .find((l) => l.includes('Case or report reference'))!;
+    // The panel's border is on the prompt's own line: side by side.
+    expect(line).toMatch(/[│┌]/);
+  });
+});
+
+describe('NO_COLOR', () => {
+  it('draws with colour codes normally and none at all under NO_COLOR', async () => {
+    const level = chalk.level;
+    try {
+      chalk.level = 3;
+      const coloured = renderApp({ color: true });
+      await coloured.waitText('No cases here yet');
+      expect(coloured.lastFrame()).toMatch(/\u001B\[/);
+      cleanup();
+      expect(applyColorPolicy({ NO_COLOR: '1' })).toBe(false);
+      const plain = renderApp({ color: false });
+      await plain.waitText('No cases here yet');
+      await plain.press('n', 'Case or report reference');
+      expect(plain.lastFrame()).not.toMatch(/\u001B/);
+    } finally {
+      chalk.level = level;
+    }
+  });
+
+  it('leaves colour alone when NO_COLOR is empty', () => {
+    const level = chalk.level;
+    chalk.level = 2;
+    expect(applyColorPolicy({ NO_COLOR: '' })).toBe(true);
+    chalk.level = level;
+  });
+});
+
+describe('review', () => {
+  it('shows the figures solve gives for the saved case, the limit and the cautions', async () => {
+    const app = renderApp({ rows: 200, columns: 100 });
+    await app.waitText('No cases here yet');
+    await app.press('d', 'Resumed');
+    await app.press(ctrl('r'), 'Review');
+    let f = await app.waitText('Cautions');
+    // Solve the file as it is on disk, as `skidcase solve` would.
+    const file = fs.readdirSync(app.dir).find((n) => n.endsWith('.json'))!;
+    const loaded = loadCaseText(fs.readFileSync(path.join(app.dir, file), 'utf8'));
+    if (!loaded.ok) throw new Error('saved demo copy does not load');
+    const sol = solveCase(loaded.case);
+    const a = sol.analyses[0]!;
+    if (!a.ok) throw new Error(a.reason);
+    const flat = f.replace(/\s+/g, ' ');
+    for (const s of a.solution.steps) {
+      expect(flat).toContain(s.name);
+      expect(flat).toContain(s.substituted.replace(/\s+/g, ' '));
+    }
+    expect(flat).toContain(`at least ${a.solution.minimum} ${sol.units.speed}`);
+    expect(flat).toContain(`${a.solution.speed.value.toFixed(1)} ${sol.units.speed}`);
+    expect(flat).toMatch(/Posted limit \d+ km\/h/);
+    expect(flat).toContain('This tool does not state fault.');
+    await app.press('w', 'Writing the report');
+    f = await app.waitText('Report written to', 30_000);
+    expect(fs.readdirSync(app.dir).some((n) => n.endsWith('.md'))).toBe(true);
+  });
+});
+
+describe('go-to list', () => {
+  it('shows each question’s state, keeping answers of a branch that no longer applies as unused', async () => {
+    const app = await newCase();
+    await toLimit(app);
+    await app.press(ENTER, 'Which vehicle');
+    await app.press(ENTER, 'Were all four brakes working?');
+    await app.press('e', 'Braking efficiency n');
+    await app.answer('0.8', 'What is the estimate based on?');
+    // Back to the brakes question, and change the answer: the estimate no longer applies.
+    await app.press(ctrl('b'), 'Braking efficiency n');
+    await app.press(ctrl('b'), 'Were all four brakes working?');
+    await app.press('a', 'What do the marks look like?');
+    await app.press(ctrl('g'), 'Go to:');
+    for (const ch of 'brak') app.stdin.write(ch);
+    const f = await app.waitText('Go to: brak');
+    expect(f).toMatch(/answered\s+Vehicle · Brakes/);
+    expect(f).toMatch(/not used now\s+Vehicle · Braking efficiency/);
+    await app.press(ESC, 'What do the marks look like?');
+  });
+
+  it('says when nothing matches', async () => {
+    const app = await newCase();
+    await app.press(ctrl('g'), 'Go to:');
+    for (const ch of 'zzqx') app.stdin.write(ch);
+    await app.waitText('No question matches "zzqx".');
+  });
+});
+
+describe('choices', () => {
+  it('Enter picks the highlighted choice after moving with the arrows', async () => {
+    const app = await newCase();
+    for (let i = 0; i < 5; i++) await app.press(ENTER);
+    await app.waitText('> [i]');
+    await app.press(DOWN, '> [m]');
+    const f = await app.press(ENTER, 'Posted speed limit');
+    expect(f).toContain('in km/h');
+  });
+});
