@@ -27,7 +27,7 @@ async function sessions(flag: string | undefined) {
   ]);
   const { prefs, warnings } = loadPrefs();
   for (const w of warnings) io.err(`skidcase: preferences: ${w}`);
-  return resolveSessionsDir({ flag, env: process.env, prefs, cwd: process.cwd() });
+  return { ...resolveSessionsDir({ flag, env: process.env, prefs, cwd: process.cwd() }), prefs };
 }
 
 type Start = { kind: 'home' } | { kind: 'resume'; id?: string } | { kind: 'new' } | { kind: 'open'; path: string };
@@ -73,7 +73,13 @@ function program(): Command {
     .action(async (target: string, o: { format: 'md' | 'txt' | 'html' | 'json'; out?: string; force?: boolean }) => {
       const where = await sessions(p.opts().sessions);
       const { reportCommand } = await import('./commands/report.js');
-      const opts = { format: o.format, force: Boolean(o.force), sessionsDir: where.dir, ...(o.out ? { out: o.out } : {}) };
+      const opts = {
+        format: o.format,
+        force: Boolean(o.force),
+        sessionsDir: where.dir,
+        reactionTime: where.prefs.reactionTime,
+        ...(o.out ? { out: o.out } : {}),
+      };
       setExit(await reportCommand(target, opts, io));
     });
   return p;

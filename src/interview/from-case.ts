@@ -144,10 +144,8 @@ export function answersFromCase(c: Case): Answers {
     } else if (!one) put(`${p}.count`, '', undefined);
     a.segments.forEach((s, j) => {
       const sp = `${p}.seg${j}`;
-      if (!one) {
-        put(`${sp}.label`, s.label ?? '');
-        if (s.length !== undefined) put(`${sp}.length`, quantityText(s.length));
-      }
+      put(`${sp}.label`, s.label ?? '');
+      if (!one && s.length !== undefined) put(`${sp}.length`, quantityText(s.length));
       dragAnswers(put, sp, s.drag);
       slopeAnswers(put, `${sp}.grade`, s.grade, ['level', 'uphill', 'downhill']);
     });

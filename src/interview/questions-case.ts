@@ -84,7 +84,9 @@ export function caseQuestions(): Question[] {
         explainChoice: (a) => {
           const v = a.limit?.value;
           const unit = unitsOf(a) === 'metric' ? 'km/h' : 'mph';
-          return typeof v === 'number' ? `Speeds will be compared with ${showNumber(v)} ${unit}.` : undefined;
+          return typeof v === 'number'
+            ? `Speeds will be compared with ${showNumber(v)} ${unit}.`
+            : undefined;
         },
       },
       { kind: 'speed', rule: RULES.postedLimit, range: false },

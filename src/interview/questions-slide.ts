@@ -183,10 +183,12 @@ export function slideQuestions(
       textQuestion({
         id: `${sp}.label`,
         section,
-        title: `Label, segment ${j + 1}`,
-        prompt: `A name for segment ${j + 1} (e.g. asphalt lane, gravel shoulder; Enter to skip)`,
-        help: { why: 'Names the segment in the chain and the report.' },
-        appliesWhen: several,
+        title: inParts(now) ? `Label, segment ${j + 1}` : 'Surface label',
+        prompt: inParts(now)
+          ? `A name for segment ${j + 1} (e.g. asphalt lane, gravel shoulder; Enter to skip)`
+          : 'A name for the surface slid over (e.g. asphalt lane; Enter to skip)',
+        help: { why: 'Names the surface in the chain and the report.' },
+        appliesWhen: here,
         optional: true,
       }),
       ...dragQuestions(sp, section, what, here),

@@ -15,10 +15,12 @@ export interface LockInfo {
 
 /**
  * A lock not refreshed for this long is stale even when its pid looks alive (pid reuse after a
- * reboot, another host). Holders refresh the file's time every `LOCK_REFRESH_MS`.
+ * reboot, a holder on another host that died). The values are proper-lockfile's defaults: stale
+ * after 10 s, refreshed every 5 s. A holder whose lock was taken over meanwhile notices on its
+ * next save, which is then refused instead of overwriting the other's work.
  */
-export const LOCK_STALE_MS = 30_000;
-export const LOCK_REFRESH_MS = 10_000;
+export const LOCK_STALE_MS = 10_000;
+export const LOCK_REFRESH_MS = 5_000;
 
 export function ownLockInfo(): LockInfo {
   const token = randomBytes(8).toString('hex');

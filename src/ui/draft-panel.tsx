@@ -42,7 +42,11 @@ export function DraftPanel({
       width={width}
     >
       <Text bold>Chain so far</Text>
-      {hidden ? <Text color={TONE.muted}>({hidden} earlier {hidden === 1 ? 'step' : 'steps'} in the review)</Text> : null}
+      {hidden ? (
+        <Text color={TONE.muted}>
+          ({hidden} earlier {hidden === 1 ? 'step' : 'steps'} in the review)
+        </Text>
+      ) : null}
       {steps.map((s, i) =>
         rowsOf(s) === 1 ? (
           <Text key={i}>

@@ -43,7 +43,10 @@ export function helpLines(width: number, quickEntry: readonly string[]): ShownLi
       for (const l of wrap(q, width - indent.length - 2)) out.push({ text: indent + l });
     }
   }
-  out.push({ text: '' }, { text: `${keysFor('close')} or ${keysFor('help')} closes this list.`, tone: 'muted' });
+  out.push(
+    { text: '' },
+    { text: `${keysFor('close')} or ${keysFor('help')} closes this list.`, tone: 'muted' },
+  );
   return out;
 }
 

@@ -51,7 +51,8 @@ const CONTROL = /[\u0000-\u001a\u007f]/;
  * splitKeys('80\r0.7\r', key) // [['80', none], ['', return], ['0.7', none], ['', return]]
  */
 export function splitKeys(input: string, key: Key): [string, Key][] {
-  if (input.length <= 1 || !CONTROL.test(input) || input.startsWith('\u001b')) return [[input, key]];
+  if (input.length <= 1 || !CONTROL.test(input) || input.startsWith('\u001b'))
+    return [[input, key]];
   const out: [string, Key][] = [];
   let text = '';
   for (const ch of input) {

@@ -47,9 +47,16 @@ export function useAppInput(deps: InputDeps) {
     (chunk, chunkKey) => {
       // One read can hold several keys (typing ahead, a paste); each is handled in turn against
       // the state the previous one left (the model's ref is updated synchronously).
-      for (const [input, key] of splitKeys(chunk, chunkKey)) {
+      const keys = splitKeys(chunk, chunkKey);
+      while (keys.length) {
+        const [input, key] = keys.shift()!;
         const d = latest.current;
         const ctx = contextOf(d.app, d.port);
+        // On a choice each letter is a key of its own: "i56" typed ahead picks [i], then types 56.
+        if (ctx === 'choice' && input.length > 1 && !key.ctrl && !key.meta) {
+          keys.unshift(...[...input].map((ch): [string, Key] => [ch, key]));
+          continue;
+        }
         const binding = findBinding(ctx, input, key);
         if (binding) run(binding.command, ctx, d);
         else typed(ctx, input, key, d);

@@ -156,7 +156,11 @@ export function useAppModel(
       // Never drop answers silently: say so, and leave only when asked again.
       leaveArmed.current = true;
       const saveError = `${s.saveError ?? 'not saved'}; press ${keysFor('save-leave')} again to leave without saving`;
-      update((m) => ({ ...m, leaving: false, session: m.session ? { ...m.session, saveError } : m.session }));
+      update((m) => ({
+        ...m,
+        leaving: false,
+        session: m.session ? { ...m.session, saveError } : m.session,
+      }));
       return;
     }
     await s?.open.release().catch(() => undefined);

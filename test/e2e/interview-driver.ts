@@ -59,6 +59,13 @@ export interface DriveOptions {
   onAnswer?: (id: string, keys: number) => void;
 }
 
+/** The script's answer; an optional question it does not mention is skipped with Enter, as a person would. */
+function answerFor(script: Script, q: Question): string {
+  const answer = script[q.id] ?? (q.optional ? '' : undefined);
+  if (answer === undefined) throw new Error(`script has no answer for ${q.id}: "${q.prompt}"`);
+  return answer;
+}
+
 /**
  * A test for "the whole answer is on screen now". A short answer must start the input line; a
  * long one wraps there, so its last characters must show once more than before it was typed.
@@ -80,8 +87,7 @@ export function dryRun(script: Script, opts: DriveOptions = {}, from: InterviewS
   for (let n = 0; n < 500; n++) {
     const q = currentQuestion(state);
     if (!q || q.id === opts.stopAt || n === opts.maxAnswers) return state;
-    const answer = script[q.id];
-    if (answer === undefined) throw new Error(`script has no answer for ${q.id}: "${q.prompt}"`);
+    const answer = answerFor(script, q);
     state = mirrorStep(state, q, answer);
     if (state.error) throw new Error(`script answer "${answer}" for ${q.id} was rejected: ${state.error.message}`);
   }
@@ -109,8 +115,7 @@ export async function typeInterview(t: Term, script: Script, opts: DriveOptions 
   for (let n = 0; ; n++) {
     const q = currentQuestion(state);
     if (!q || q.id === opts.stopAt || n === opts.maxAnswers) return state;
-    const answer = script[q.id];
-    if (answer === undefined) throw new Error(`script has no answer for ${q.id}: "${q.prompt}"`);
+    const answer = answerFor(script, q);
     const mark = promptMark(q);
     let screen = await t.waitFor((s) => squash(s).includes(mark), { what: `question ${q.id} ("${mark}")`, ...wait });
     const keysBefore = t.keyCount;

@@ -11,8 +11,16 @@ import { OTHER_SOURCES, SLIDE_ONLY_FAST, TWO_SURFACES_AND_YAW } from '../e2e/scr
 export const NUMERIC_KINDS = new Set(['quantity', 'list', 'segments']);
 export const isNumeric = (q: Question) => NUMERIC_KINDS.has(q.kind);
 
-/** `a1.seg12.drag.value` -> `a#.seg#.drag.value`: the same question in another analysis or segment. */
-export const family = (id: string) => id.replace(/\d+/g, '#');
+/**
+ * The same question wherever it is asked: `a1.seg12.length` -> `a#.seg#.length`; the drag
+ * factor questions of a segment and of a yaw are one family (`drag.value`), and so are the four
+ * wheels' braking shares.
+ */
+export const family = (id: string) =>
+  id
+    .replace(/\d+/g, '#')
+    .replace(/^a#\.(seg#\.)?drag\./, 'drag.')
+    .replace(/^vehicle\.wheel\.\w+\.fraction$/, 'vehicle.wheel.*.fraction');
 
 export interface AtQuestion {
   q: Question;

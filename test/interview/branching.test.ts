@@ -127,7 +127,7 @@ describe('branching on the brakes', () => {
 });
 
 describe('branching inside an analysis', () => {
-  const atSource = () => type(atLook(), 'd', '', 'o', '1', '80');
+  const atSource = () => type(atLook(), 'd', '', 'o', '1', '80', '');
 
   it.each([
     ['t', ['a0.seg0.drag.surface', 'a0.seg0.drag.value']],

@@ -32,7 +32,7 @@ describe('back, forward, jump and edits', () => {
     let s = fillUntil(start(), SLIDE, 'a0.seg0.grade.dir');
     const before = s.answers;
     s = act(s, { type: 'back' }, { type: 'back' }, { type: 'back' });
-    expect(s.cursor).toBe('a0.rule');
+    expect(s.cursor).toBe('a0.seg0.label');
     s = act(s, { type: 'forward' });
     expect(s.cursor).toBe('a0.seg0.drag.source');
     expect(s.answers).toEqual(before);

@@ -10,6 +10,7 @@ import {
   releaseAllLocks,
   saveCase,
 } from '../../src/store/index.js';
+import { refreshAll } from '../../src/store/lock.js';
 import { buildStoreBundle, fixture } from './bundle.js';
 import { sampleCase, tempDir } from './helpers.js';
 
@@ -163,6 +164,19 @@ describe('stale locks', () => {
     fs.utimesSync(lock, old, old);
     const again = await openCase(dir, { id: 'stale-4' });
     expect(again.ok && again.readOnly).toBe(false);
+  });
+});
+
+describe('refreshing', () => {
+  it('a holder touches its lock, so a long session never looks stale', async () => {
+    const { dir, lock } = await freshCase('refresh-1');
+    const r = await openCase(dir, { id: 'refresh-1' });
+    expect(r.ok && r.readOnly).toBe(false);
+    const old = new Date(Date.now() - LOCK_STALE_MS - 5_000);
+    fs.utimesSync(lock, old, old); // as if the session had been open a while
+    await refreshAll(); // what the holder's timer runs every LOCK_REFRESH_MS
+    expect(Date.now() - fs.statSync(lock).mtimeMs).toBeLessThan(LOCK_STALE_MS);
+    expect(JSON.parse(fs.readFileSync(lock, 'utf8')).pid).toBe(process.pid); // still our lock
   });
 });
 

@@ -84,6 +84,20 @@ describe('interview screen', () => {
     await app.press(ctrl('b'), '> UI-8');
   });
 
+  it('does not leave with unsaved answers until asked twice', async () => {
+    const app = renderApp({
+      services: (s) => ({ ...s, saveCase: async () => ({ ok: false, message: 'disk is full' }) }),
+    });
+    await app.waitText('No cases here yet');
+    await app.press('n', 'Case or report reference');
+    await app.answer('UI-9', 'disk is full');
+    await app.press(ctrl('q'), 'again to leave without saving');
+    expect(app.exits).toEqual([]);
+    app.stdin.write(ctrl('q'));
+    await app.waitFor(() => app.exits.length > 0, 'exit');
+    expect(app.exits).toEqual([0]);
+  });
+
   it('shows a read-only banner when the case is open elsewhere', async () => {
     const app = renderApp({
       files: { 'half-done.json': halfDone },

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { quantity, RULES } from '../quantity.js';
+import { offsetsFieldV1, samplingFieldV1, timeDistanceFieldV1 } from './extras-fields.js';
 
 /** Case file version 1: the contract in docs/case-file.md. Unknown fields are kept (loose objects). */
 
@@ -178,14 +179,17 @@ export const skidV1 = z.looseObject({
     .array(segmentV1, { error: 'segments must be a list' })
     .min(1, 'at least one segment is needed'),
   end: endV1.optional(),
+  timeDistance: timeDistanceFieldV1.optional(),
 });
 
 export const yawV1 = z.looseObject({
   id: analysisId,
   kind: z.literal('yaw'),
   label: text('label').optional(),
-  chord: q(RULES.length),
-  middleOrdinate: q({ ...RULES.length, what: 'middle ordinate' }),
+  // Either chord + middleOrdinate, or offsets: exactly one way (checked in caseV1's refinement).
+  chord: q(RULES.length).optional(),
+  middleOrdinate: q({ ...RULES.length, what: 'middle ordinate' }).optional(),
+  offsets: offsetsFieldV1.optional(),
   drag: dragV1,
   superelevation: q(RULES.superelevation).optional(),
   pathAdjustment: z
@@ -196,6 +200,56 @@ export const yawV1 = z.looseObject({
 export const analysisV1 = z.discriminatedUnion('kind', [skidV1, yawV1], {
   error: 'kind must be skid or yaw',
 });
+
+type Ctx = z.core.$RefinementCtx<unknown>;
+
+/**
+ * A yaw analysis is measured one way: chord + middleOrdinate, or offsets. Neither, both, or half
+ * of the first way is an issue naming the field; stations must lie inside the chord (its low end,
+ * so that every corner of the chord's range is a valid fit).
+ */
+function yawMeasureIssues(a: z.infer<typeof yawV1>, i: number, ctx: Ctx) {
+  const path = (...rest: (string | number)[]) => ['analyses', i, ...rest];
+  const hasC = a.chord !== undefined;
+  const hasM = a.middleOrdinate !== undefined;
+  if (a.offsets !== undefined) {
+    if (hasC || hasM)
+      ctx.addIssue({
+        code: 'custom',
+        path: path('offsets'),
+        message: 'give either chord and middleOrdinate, or offsets, not both',
+      });
+    const C = endsOf(a.offsets.chord);
+    if (C)
+      a.offsets.stations.forEach((st, j) => {
+        if (typeof st.at === 'number' && st.at >= C.low)
+          ctx.addIssue({
+            code: 'custom',
+            path: path('offsets', 'stations', j, 'at'),
+            message: `at must be less than the chord (${C.low})`,
+          });
+      });
+    return;
+  }
+  if (!hasC && !hasM)
+    ctx.addIssue({
+      code: 'custom',
+      path: path('chord'),
+      message: 'give chord and middleOrdinate, or offsets',
+    });
+  else if (!hasC)
+    ctx.addIssue({
+      code: 'custom',
+      path: path('chord'),
+      message: 'chord is required with middleOrdinate (or give offsets instead)',
+    });
+  else if (!hasM)
+    ctx.addIssue({
+      code: 'custom',
+      path: path('middleOrdinate'),
+      message: 'middle ordinate is required with chord (or give offsets instead)',
+    });
+}
 
 export const caseV1 = z
   .looseObject({
@@ -220,6 +274,7 @@ export const caseV1 = z
       )
       .optional(),
     postedLimit: q(RULES.postedLimit).optional(),
+    sampling: samplingFieldV1.optional(),
     vehicle: vehicleV1,
     analyses: z.array(analysisV1, need('analyses', 'a list')),
     interview: z.unknown().optional(),
@@ -268,6 +323,7 @@ export const caseV1 = z
             path: ['vehicle', 'trackWidth'],
             message: `track width is required for the half-track adjustment of analyses[${i}]`,
           });
+        yawMeasureIssues(a, i, ctx);
         // Checked against the chord's low end, so that every corner of the ranges is a valid arc.
         // The fields may themselves be invalid here (their own issues are already reported), so
         // they are read defensively.
@@ -306,4 +362,10 @@ export type VehicleV1 = z.infer<typeof vehicleV1>;
 export type SegmentV1 = z.infer<typeof segmentV1>;
 export type SkidV1 = z.infer<typeof skidV1>;
 export type YawV1 = z.infer<typeof yawV1>;
+export type {
+  SamplingFieldV1,
+  TimeDistanceFieldV1,
+  OffsetsFieldV1,
+  OffsetStationV1,
+} from './extras-fields.js';
 export type AnalysisV1 = z.infer<typeof analysisV1>;

@@ -1,0 +1,76 @@
+import { z } from 'zod';
+import { quantity, RULES } from '../quantity.js';
+
+/**
+ * The optional fields of case v1 that feed the extras (docs/case-file.md, "Sampling",
+ * "Time and distance", "Offsets"). Additive to version 1: a file without them is unchanged.
+ * Loose objects, as everywhere in v1, so that unknown keys are kept (and warned about by solve).
+ */
+
+/** Top level `sampling`: how to draw the inputs for the percentiles. */
+export const samplingFieldV1 = z.looseObject(
+  {
+    shape: z.enum(['uniform', 'normal'], { error: 'shape must be uniform or normal' }).optional(),
+    samples: z
+      .number({ error: 'samples must be a number' })
+      .int('samples must be a whole number')
+      .min(1000, 'samples must be at least 1000')
+      .max(1_000_000, 'samples must be at most 1000000')
+      .optional(),
+    seed: z
+      .number({ error: 'seed must be a number' })
+      .int('seed must be a whole number')
+      .min(0, 'seed must be at least 0')
+      .max(0xffffffff, 'seed must be at most 4294967295')
+      .optional(),
+  },
+  { error: 'sampling must be an object { "shape", "samples", "seed" }' },
+);
+
+/** Per skid analysis `timeDistance`: a reaction time for this case and a conflict point. */
+export const timeDistanceFieldV1 = z.looseObject(
+  {
+    reactionTime: z
+      .number({ error: 'reactionTime must be a number of seconds' })
+      .min(0, 'reactionTime must be at least 0 s')
+      .max(10, 'reactionTime must be at most 10 s')
+      .optional(),
+    conflictAt: z
+      .number({ error: 'conflictAt must be a distance' })
+      .min(0, 'conflictAt must be 0 or more (a distance from the start of the marks)')
+      .max(100_000, 'conflictAt must be at most 100000')
+      .optional(),
+  },
+  { error: 'timeDistance must be an object { "reactionTime", "conflictAt" }' },
+);
+
+/** One offset station: `at` along the chord from its start, `offset` from the chord to the mark. */
+export const offsetStationV1 = z.looseObject(
+  {
+    at: z
+      .number({ error: 'at must be a distance along the chord' })
+      .gt(0, 'at must be greater than 0'),
+    offset: z.number({ error: 'offset must be a length' }).gt(0, 'offset must be greater than 0'),
+  },
+  { error: 'station must be an object { "at": n, "offset": n }' },
+);
+
+/**
+ * Per yaw analysis `offsets`: offsets at stations along one chord, instead of one middle
+ * ordinate. The chord is a quantity (its spread widens the fitted radius); the offsets are plain
+ * readings (their scatter about the circle gives the fit's own spread).
+ */
+export const offsetsFieldV1 = z.looseObject(
+  {
+    chord: quantity({ ...RULES.length, what: 'chord' }),
+    stations: z
+      .array(offsetStationV1, { error: 'stations must be a list of { "at": n, "offset": n }' })
+      .min(1, 'at least one station is needed'),
+  },
+  { error: 'offsets must be an object { "chord": n, "stations": [...] }' },
+);
+
+export type SamplingFieldV1 = z.infer<typeof samplingFieldV1>;
+export type TimeDistanceFieldV1 = z.infer<typeof timeDistanceFieldV1>;
+export type OffsetStationV1 = z.infer<typeof offsetStationV1>;
+export type OffsetsFieldV1 = z.infer<typeof offsetsFieldV1>;
