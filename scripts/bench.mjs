@@ -17,7 +17,9 @@ const root = fileURLToPath(new URL('..', import.meta.url));
 // SKIDCASE_BENCH_BINARY measures another build of the same CLI (a debugging aid).
 const binary = process.env.SKIDCASE_BENCH_BINARY ?? join(root, 'dist/skidcase.js');
 if (!existsSync(binary)) {
-  console.error('dist/skidcase.js is missing: run `npm run bench` (it builds first) or `npm run build`.');
+  console.error(
+    'dist/skidcase.js is missing: run `npm run bench` (it builds first) or `npm run build`.',
+  );
   process.exit(1);
 }
 const tmp = mkdtempSync(join(tmpdir(), 'skidcase-bench-'));
@@ -35,7 +37,9 @@ mkdirSync(ctx.config);
 
 // BENCH_ONLY=keypress,autosave runs only those steps (when working on one figure).
 const only = process.env.BENCH_ONLY?.split(',');
-const steps = [startScreen, solveJson, keypress, autosave, sampling].filter((s) => !only || only.includes(s.name));
+const steps = [startScreen, solveJson, keypress, autosave, sampling].filter(
+  (s) => !only || only.includes(s.name),
+);
 const FIGURE_NAMES = {
   startScreen: 'start screen painted (pty)',
   solveJson: 'solve --json, 3 segments',
@@ -51,7 +55,11 @@ try {
     try {
       r = await step(ctx);
     } catch (e) {
-      r = { figure: FIGURE_NAMES[step.name] ?? step.name, available: false, note: `failed: ${e instanceof Error ? e.message : String(e)}` };
+      r = {
+        figure: FIGURE_NAMES[step.name] ?? step.name,
+        available: false,
+        note: `failed: ${e instanceof Error ? e.message : String(e)}`,
+      };
     }
     for (const one of [r].flat()) {
       results.push(one);
@@ -61,12 +69,21 @@ try {
   rmSync(tmp, { recursive: true, force: true });
 }
 
-console.log(`skidcase benchmark, ${new Date().toISOString()}, node ${process.version}, ${cpus().length} cpus (${cpus()[0]?.model ?? '?'})`);
-console.log(`medians of ${ctx.processRuns} runs per process figure (solve: ${ctx.processRuns * 2}), ${ctx.inProcessRuns} per in-process figure\n`);
+console.log(
+  `skidcase benchmark, ${new Date().toISOString()}, node ${process.version}, ${cpus().length} cpus (${cpus()[0]?.model ?? '?'})`,
+);
+console.log(
+  `medians of ${ctx.processRuns} runs per process figure (solve: ${ctx.processRuns * 2}), ${ctx.inProcessRuns} per in-process figure\n`,
+);
 console.log(table(results));
 console.log('');
 for (const r of results) {
-  const notes = [r.method && `method: ${r.method}`, r.note, r.firstLine && `screen began: "${r.firstLine}"`, r.detail].filter(Boolean);
+  const notes = [
+    r.method && `method: ${r.method}`,
+    r.note,
+    r.firstLine && `screen began: "${r.firstLine}"`,
+    r.detail,
+  ].filter(Boolean);
   if (notes.length) console.log(`- ${r.figure}: ${notes.join('; ')}`);
 }
 mkdirSync(join(root, '.bench'), { recursive: true });
@@ -77,7 +94,10 @@ const json = {
   cpuModel: cpus()[0]?.model,
   processRuns: ctx.processRuns,
   inProcessRuns: ctx.inProcessRuns,
-  results: results.map((r) => ({ ...r, ratio: r.available && r.baseline ? r.measured / r.baseline : undefined })),
+  results: results.map((r) => ({
+    ...r,
+    ratio: r.available && r.baseline ? r.measured / r.baseline : undefined,
+  })),
 };
 writeFileSync(join(root, '.bench/last.json'), JSON.stringify(json, null, 2) + '\n');
 console.log('\nwritten: .bench/last.json');

@@ -2,9 +2,21 @@
 // published example): a three-surface slide, and the same shape stretched to many segments.
 
 const SURFACES = [
-  { label: 'asphalt lane', drag: { source: 'entered', value: 0.72, low: 0.66, high: 0.78 }, grade: 1.5 },
-  { label: 'gravel shoulder', drag: { source: 'entered', value: 0.48, low: 0.4, high: 0.55 }, grade: 0 },
-  { label: 'grass verge', drag: { source: 'entered', value: 0.35, low: 0.28, high: 0.42 }, grade: -2 },
+  {
+    label: 'asphalt lane',
+    drag: { source: 'entered', value: 0.72, low: 0.66, high: 0.78 },
+    grade: 1.5,
+  },
+  {
+    label: 'gravel shoulder',
+    drag: { source: 'entered', value: 0.48, low: 0.4, high: 0.55 },
+    grade: 0,
+  },
+  {
+    label: 'grass verge',
+    drag: { source: 'entered', value: 0.35, low: 0.28, high: 0.42 },
+    grade: -2,
+  },
 ];
 
 /** A skid case sliding over `n` segments (cycling three surfaces), ending at rest. */
@@ -36,6 +48,8 @@ export function slideCase(n, id = `bench-${n}-segments`) {
     },
     postedLimit: 40,
     vehicle: { label: 'Invented sedan', frontAxleShare: 0.6, brakes: { mode: 'all' } },
-    analyses: [{ id: 'skid-1', kind: 'skid', label: 'bench slide', segments, end: { mode: 'stop' } }],
+    analyses: [
+      { id: 'skid-1', kind: 'skid', label: 'bench slide', segments, end: { mode: 'stop' } },
+    ],
   };
 }

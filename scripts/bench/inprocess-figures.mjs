@@ -13,7 +13,12 @@ export async function autosave(ctx) {
     { figure: 'autosave, typical case (3 segments)', c: slideCase(3, 'bench-typical'), limit: 5 },
     { figure: 'autosave, 500 segments', c: slideCase(500, 'bench-large'), limit: 50 },
   ];
-  if (!saveCase) return figures.map(({ figure }) => ({ figure, available: false, note: 'src/store saveCase does not exist yet' }));
+  if (!saveCase)
+    return figures.map(({ figure }) => ({
+      figure,
+      available: false,
+      note: 'src/store saveCase does not exist yet',
+    }));
   const out = [];
   for (const { figure, c, limit } of figures) {
     const dir = mkdtempSync(join(ctx.tmp, 'save-'));
@@ -21,7 +26,11 @@ export async function autosave(ctx) {
     const bytes = JSON.stringify(c, null, 2);
     const first = await saveCase(dir, c);
     if (first && first.ok === false) {
-      out.push({ figure, available: false, note: `saveCase refused the case: ${first.message ?? JSON.stringify(first)}` });
+      out.push({
+        figure,
+        available: false,
+        note: `saveCase refused the case: ${first.message ?? JSON.stringify(first)}`,
+      });
       continue;
     }
     const runs = ctx.inProcessRuns;
@@ -71,10 +80,18 @@ async function benchModel(ctx) {
   }
   // S = sqrt(30 * sum d_i (f_i n + G_i/100)), three segments, n = 1 (DOMAIN.md, several surfaces)
   const inputs = [
-    ['d[0]', 38.5, 38, 39], ['f[0]', 0.72, 0.66, 0.78], ['d[1]', 27, 26.5, 27.5], ['f[1]', 0.48, 0.4, 0.55],
-    ['d[2]', 19.5, 19, 20], ['f[2]', 0.35, 0.28, 0.42],
+    ['d[0]', 38.5, 38, 39],
+    ['f[0]', 0.72, 0.66, 0.78],
+    ['d[1]', 27, 26.5, 27.5],
+    ['f[1]', 0.48, 0.4, 0.55],
+    ['d[2]', 19.5, 19, 20],
+    ['f[2]', 0.35, 0.28, 0.42],
   ].map(([key, value, low, high]) => ({ key, label: key, unit: '', value, low, high }));
-  const evaluate = (x) => Math.sqrt(30 * (x['d[0]'] * (x['f[0]'] + 0.015) + x['d[1]'] * x['f[1]'] + x['d[2]'] * (x['f[2]'] - 0.02)));
+  const evaluate = (x) =>
+    Math.sqrt(
+      30 *
+        (x['d[0]'] * (x['f[0]'] + 0.015) + x['d[1]'] * x['f[1]'] + x['d[2]'] * (x['f[2]'] - 0.02)),
+    );
   return { model: { inputs, evaluate }, from: 'local formula (engine not there yet)' };
 }
 
@@ -82,7 +99,8 @@ async function benchModel(ctx) {
 export async function sampling(ctx) {
   const figure = 'uncertainty run, 100,000 samples';
   const sampleSpeeds = await findExport(ctx.root, 'src/extras', 'sampleSpeeds');
-  if (!sampleSpeeds) return { figure, available: false, note: 'src/extras sampleSpeeds does not exist yet' };
+  if (!sampleSpeeds)
+    return { figure, available: false, note: 'src/extras sampleSpeeds does not exist yet' };
   const { model, from } = await benchModel(ctx);
   const n = 100_000;
   const x = Object.fromEntries(model.inputs.map((i) => [i.key, i.value]));

@@ -17,7 +17,8 @@ const tick = (ms) => new Promise((r) => setTimeout(r, ms));
 async function until(s, test, ms, what) {
   const deadline = performance.now() + ms;
   while (!test(s.screen())) {
-    if (performance.now() > deadline) throw new Error(`${what} not on screen within ${ms} ms:\n${s.screen()}`);
+    if (performance.now() > deadline)
+      throw new Error(`${what} not on screen within ${ms} ms:\n${s.screen()}`);
     await tick(10);
   }
 }
@@ -70,7 +71,10 @@ export async function keypress(ctx) {
     figure,
     available: true,
     measured: p95,
-    baseline: percentile(baseline.map((x) => x.frame), 95),
+    baseline: percentile(
+      baseline.map((x) => x.frame),
+      95,
+    ),
     goal: { kind: 'ms', limit: 16 },
     pass: p95 < 16,
     runs: PRESSES,

@@ -20,8 +20,13 @@ export async function findExport(root, dir, name) {
   const abs = join(root, dir);
   if (!existsSync(abs)) return undefined;
   const files = readdirSync(abs).filter((f) => /\.tsx?$/.test(f) && !f.endsWith('.d.ts'));
-  const declares = new RegExp(`export\\s+(async\\s+)?(function\\*?|const|let)\\s+${name}\\b|export\\s*\\{[^}]*\\b${name}\\b`);
-  const ordered = [...files.filter((f) => /^index\.tsx?$/.test(f)), ...files.filter((f) => !/^index\.tsx?$/.test(f))];
+  const declares = new RegExp(
+    `export\\s+(async\\s+)?(function\\*?|const|let)\\s+${name}\\b|export\\s*\\{[^}]*\\b${name}\\b`,
+  );
+  const ordered = [
+    ...files.filter((f) => /^index\.tsx?$/.test(f)),
+    ...files.filter((f) => !/^index\.tsx?$/.test(f)),
+  ];
   for (const f of ordered) {
     const file = join(abs, f);
     if (!declares.test(readFileSync(file, 'utf8'))) continue;

@@ -10,7 +10,11 @@ import { slideCase } from './cases.mjs';
 function runNode(argv, opts = {}) {
   return new Promise((resolve, reject) => {
     const t0 = performance.now();
-    const p = spawn(process.execPath, argv, { stdio: ['ignore', 'pipe', 'pipe'], env: benchEnv(), ...opts });
+    const p = spawn(process.execPath, argv, {
+      stdio: ['ignore', 'pipe', 'pipe'],
+      env: benchEnv(),
+      ...opts,
+    });
     let out = '';
     let err = '';
     p.stdout.on('data', (d) => (out += d));
@@ -24,7 +28,11 @@ function runNode(argv, opts = {}) {
 export async function startScreen(ctx) {
   const figure = 'start screen painted (pty)';
   if (!existsSync(join(ctx.root, 'src/ui/run.tsx')))
-    return { figure, available: false, note: 'src/ui/run.tsx (the interactive entry) does not exist yet' };
+    return {
+      figure,
+      available: false,
+      note: 'src/ui/run.tsx (the interactive entry) does not exist yet',
+    };
   const env = benchEnv({ SKIDCASE_SESSIONS: ctx.sessions, SKIDCASE_CONFIG_DIR: ctx.config });
   let lastScreen = '';
   const { subject, baseline } = await interleaved(
@@ -46,8 +54,12 @@ export async function startScreen(ctx) {
     goal: { kind: 'ratio', limit: 2.0 },
     pass: measured / base <= 2.0,
     runs: ctx.processRuns,
-    method: 'spawn to last byte of the first screen followed by 400 ms of silence, headless xterm 120x40',
-    firstLine: lastScreen.split('\n').find((l) => l.trim() !== '')?.trim(),
+    method:
+      'spawn to last byte of the first screen followed by 400 ms of silence, headless xterm 120x40',
+    firstLine: lastScreen
+      .split('\n')
+      .find((l) => l.trim() !== '')
+      ?.trim(),
   };
 }
 
@@ -59,11 +71,17 @@ export async function solveJson(ctx) {
   const probe = await runNode([ctx.binary, 'solve', file, '--json']);
   let solved = false;
   try {
-    solved = probe.code === 0 && typeof JSON.parse(probe.out).analyses?.[0]?.speed?.value === 'number';
+    solved =
+      probe.code === 0 && typeof JSON.parse(probe.out).analyses?.[0]?.speed?.value === 'number';
   } catch {
     solved = false;
   }
-  if (!solved) return { figure, available: false, note: `solve --json did not print a solution yet (exit ${probe.code})` };
+  if (!solved)
+    return {
+      figure,
+      available: false,
+      note: `solve --json did not print a solution yet (exit ${probe.code})`,
+    };
   const { subject, baseline } = await interleaved(
     async () => (await runNode([ctx.binary, 'solve', file, '--json'])).ms,
     async () => (await runNode(['-e', '0'])).ms,

@@ -9,7 +9,8 @@ const { Terminal } = xterm;
 export function benchEnv(extra = {}) {
   const env = {};
   for (const [k, v] of Object.entries(process.env)) {
-    if (v === undefined || k === 'CI' || k === 'CONTINUOUS_INTEGRATION' || k.startsWith('CI_')) continue;
+    if (v === undefined || k === 'CI' || k === 'CONTINUOUS_INTEGRATION' || k.startsWith('CI_'))
+      continue;
     if (k === 'FORCE_COLOR' || k.startsWith('SKIDCASE_')) continue;
     env[k] = v;
   }
@@ -18,7 +19,10 @@ export function benchEnv(extra = {}) {
 }
 
 /** A program in a pty, with its screen and the time of each output chunk. */
-export function spawnTimed(argv, { cols = 120, rows = 40, cwd = process.cwd(), env = benchEnv() } = {}) {
+export function spawnTimed(
+  argv,
+  { cols = 120, rows = 40, cwd = process.cwd(), env = benchEnv() } = {},
+) {
   const term = new Terminal({ cols, rows, allowProposedApi: true, scrollback: 100 });
   const t0 = performance.now();
   const p = pty.spawn(process.execPath, argv, { name: 'xterm-256color', cols, rows, cwd, env });
@@ -45,7 +49,8 @@ export function spawnTimed(argv, { cols = 120, rows = 40, cwd = process.cwd(), e
   state.screen = () => {
     const buf = term.buffer.active;
     const lines = [];
-    for (let i = 0; i < term.rows; i++) lines.push(buf.getLine(buf.baseY + i)?.translateToString(true) ?? '');
+    for (let i = 0; i < term.rows; i++)
+      lines.push(buf.getLine(buf.baseY + i)?.translateToString(true) ?? '');
     return lines.join('\n').trimEnd();
   };
   state.kill = () => {
@@ -78,7 +83,9 @@ export async function timeToSettledScreen(argv, opts = {}) {
     if (settled && s.screen().trim() !== '') break;
     if (now > deadline) {
       await s.kill();
-      throw new Error(`no settled screen within ${opts.timeoutMs ?? 15_000} ms for node ${argv.join(' ')}`);
+      throw new Error(
+        `no settled screen within ${opts.timeoutMs ?? 15_000} ms for node ${argv.join(' ')}`,
+      );
     }
   }
   const ms = s.lastData - s.t0;
@@ -105,7 +112,10 @@ export async function keyToFrame(s, key, { quietMs = 60, timeoutMs = 5_000 } = {
     const now = performance.now();
     if (firstChunk === undefined && s.chunks > before) firstChunk = s.lastData;
     if (s.chunks > before && now - s.lastData >= quietMs) {
-      const frame = s.lastFrameEnd !== frameBefore && s.lastFrameEnd !== undefined ? firstFrameEnd(s, t0) : firstChunk;
+      const frame =
+        s.lastFrameEnd !== frameBefore && s.lastFrameEnd !== undefined
+          ? firstFrameEnd(s, t0)
+          : firstChunk;
       return { frame: frame - t0, burst: s.lastData - t0 };
     }
     if (now > deadline) return undefined;

@@ -48,14 +48,18 @@ export async function interleaved(subject, baseline, { runs, warmup = 1 }) {
   return { subject: a, baseline: b };
 }
 
-const fmtMs = (ms) => (ms === undefined ? '-' : ms < 10 ? `${ms.toFixed(2)} ms` : `${ms.toFixed(1)} ms`);
+const fmtMs = (ms) =>
+  ms === undefined ? '-' : ms < 10 ? `${ms.toFixed(2)} ms` : `${ms.toFixed(1)} ms`;
 
 /** One row of the printed table. */
 function cells(r) {
   if (!r.available) return [r.figure, 'not available yet', '-', '-', '-'];
   const ratio = r.baseline > 0 ? r.measured / r.baseline : undefined;
   const ratioText = ratio === undefined ? '-' : `${ratio.toFixed(2)}x`;
-  const goal = r.goal.kind === 'ratio' ? `${ratioText} / <= ${r.goal.limit.toFixed(1)}x` : `${ratioText} / < ${r.goal.limit} ms`;
+  const goal =
+    r.goal.kind === 'ratio'
+      ? `${ratioText} / <= ${r.goal.limit.toFixed(1)}x`
+      : `${ratioText} / < ${r.goal.limit} ms`;
   return [r.figure, fmtMs(r.measured), fmtMs(r.baseline), goal, r.pass ? 'pass' : 'miss'];
 }
 
@@ -64,6 +68,12 @@ export function table(results) {
   const head = ['figure', 'measured', 'baseline', 'ratio / goal', 'result'];
   const rows = [head, ...results.map(cells)];
   const widths = head.map((_, i) => Math.max(...rows.map((r) => r[i].length)));
-  const line = (r) => r.map((c, i) => c.padEnd(widths[i])).join('  ').trimEnd();
-  return [line(head), widths.map((w) => '-'.repeat(w)).join('  '), ...rows.slice(1).map(line)].join('\n');
+  const line = (r) =>
+    r
+      .map((c, i) => c.padEnd(widths[i]))
+      .join('  ')
+      .trimEnd();
+  return [line(head), widths.map((w) => '-'.repeat(w)).join('  '), ...rows.slice(1).map(line)].join(
+    '\n',
+  );
 }

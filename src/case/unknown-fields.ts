@@ -14,6 +14,7 @@ const KNOWN = {
     'units',
     'details',
     'postedLimit',
+    'sampling',
     'vehicle',
     'analyses',
     'interview',
@@ -33,13 +34,14 @@ const KNOWN = {
     decelerometer: ['source', 'readings', 'note'],
   },
   test: ['speed', 'distance'],
-  skid: ['id', 'kind', 'label', 'marks', 'distanceRule', 'segments', 'end'],
+  skid: ['id', 'kind', 'label', 'marks', 'distanceRule', 'segments', 'end', 'timeDistance'],
   yaw: [
     'id',
     'kind',
     'label',
     'chord',
     'middleOrdinate',
+    'offsets',
     'drag',
     'superelevation',
     'pathAdjustment',
@@ -47,6 +49,10 @@ const KNOWN = {
   segment: ['label', 'length', 'drag', 'grade'],
   end: { stop: ['mode'], speed: ['mode', 'speed', 'basis'] },
   quantity: ['value', 'low', 'high', 'note'],
+  sampling: ['shape', 'samples', 'seed'],
+  timeDistance: ['reactionTime', 'conflictAt'],
+  offsets: ['chord', 'stations'],
+  station: ['at', 'offset'],
 } as const;
 
 type Obj = Record<string, unknown>;
@@ -80,6 +86,7 @@ export function unknownFields(c: CaseV1): string[] {
   extra(o, KNOWN.top, '', out);
   if (c.details) extra(c.details, KNOWN.details, 'details', out);
   qty(c.postedLimit, 'postedLimit', out);
+  if (c.sampling) extra(c.sampling, KNOWN.sampling, 'sampling', out);
   extra(c.vehicle, KNOWN.vehicle, 'vehicle', out);
   qty(c.vehicle.frontAxleShare, 'vehicle.frontAxleShare', out);
   qty(c.vehicle.trackWidth, 'vehicle.trackWidth', out);
@@ -105,11 +112,19 @@ export function unknownFields(c: CaseV1): string[] {
         extra(a.end, KNOWN.end[a.end.mode], `${p}.end`, out);
         if (a.end.mode === 'speed') qty(a.end.speed, `${p}.end.speed`, out);
       }
+      if (a.timeDistance) extra(a.timeDistance, KNOWN.timeDistance, `${p}.timeDistance`, out);
     } else {
       extra(a, KNOWN.yaw, p, out);
       qty(a.chord, `${p}.chord`, out);
       qty(a.middleOrdinate, `${p}.middleOrdinate`, out);
       qty(a.superelevation, `${p}.superelevation`, out);
+      if (a.offsets) {
+        extra(a.offsets, KNOWN.offsets, `${p}.offsets`, out);
+        qty(a.offsets.chord, `${p}.offsets.chord`, out);
+        a.offsets.stations.forEach((st, j) =>
+          extra(st, KNOWN.station, `${p}.offsets.stations[${j}]`, out),
+        );
+      }
       drag(a.drag as Obj, `${p}.drag`, out);
     }
   });

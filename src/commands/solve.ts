@@ -51,7 +51,8 @@ export async function solveCommand(
     r.ok ? [] : [`analyses[${i}] (${r.id}): cannot be computed: ${r.reason}`],
   );
   if (opts.json) {
-    if (failures.length === 0) io.out(`${JSON.stringify(solutionToJson(solution), null, 2)}\n`);
+    if (failures.length === 0)
+      io.out(`${JSON.stringify(solutionToJson(solution, loaded.case), null, 2)}\n`);
   } else {
     io.out(formatChainText(solution, loaded.case));
   }

@@ -5,9 +5,10 @@ import { unitsOf } from './constants.js';
 import { slideDistanceFromMarks } from './distance.js';
 import { dragFactor } from './drag.js';
 import { brakingEfficiency } from './efficiency.js';
-import { slideSpeed, slideStartSpeed, type SlideEnd, type SlideSegment } from './slide.js';
+import { skidModel } from './skid-model.js';
+import { slideSpeed, type SlideEnd, type SlideSegment } from './slide.js';
 import { input, makeStep } from './step.js';
-import type { AnalysisModel, AnalysisOutcome, ModelInput, Range, Step } from './types.js';
+import type { AnalysisOutcome, Range, Step } from './types.js';
 
 /** Marks and segment lengths further apart than this (relative) draw a warning. */
 export const MARKS_MISMATCH = 0.05;
@@ -21,15 +22,6 @@ const sumRanges = (rs: Range[]): Range =>
     low: 0,
     high: 0,
   });
-
-const modelInput = (key: string, label: string, unit: string, r: Range): ModelInput => ({
-  key,
-  label,
-  unit,
-  value: r.value,
-  low: r.low,
-  high: r.high,
-});
 
 /** Solves one skid analysis of a case (index i) into its speed, steps, assumptions and model. */
 export function solveSkid(c: CaseV1, i: number, a: SkidV1): AnalysisOutcome {
@@ -144,43 +136,6 @@ export function solveSkid(c: CaseV1, i: number, a: SkidV1): AnalysisOutcome {
       boundaries: slide.value.boundaries,
       distance: sumRanges(lengths),
       model,
-    },
-  };
-}
-
-function skidModel(
-  a: SkidV1,
-  lengths: Range[],
-  segments: SlideSegment[],
-  n: Range,
-  end: SlideEnd,
-  system: CaseV1['units'],
-): AnalysisModel {
-  const single = segments.length === 1;
-  const dKey = (j: number) => (single ? 'd' : `d[${j}]`);
-  const inputs: ModelInput[] = [];
-  const u = unitsOf(system);
-  segments.forEach((s, j) => {
-    const tag = single ? '' : ` (segment ${j + 1})`;
-    inputs.push(modelInput(dKey(j), `slide distance${tag}`, u.length, lengths[j]!));
-    inputs.push(modelInput(`f[${j}]`, `drag factor${tag}`, '', s.f));
-    if (a.segments[j]!.grade !== undefined)
-      inputs.push(modelInput(`G[${j}]`, `grade${tag}`, '%', s.gradePercent));
-  });
-  inputs.push(modelInput('n', 'braking efficiency', '', n));
-  if (end.mode === 'speed')
-    inputs.push(modelInput('Send', 'speed at the end of the marks', u.speed, end.speed));
-  const base = Object.fromEntries(inputs.map((m) => [m.key, m.value]));
-  return {
-    inputs,
-    evaluate(x) {
-      const get = (k: string) => x[k] ?? base[k] ?? 0;
-      return slideStartSpeed(
-        segments.map((_, j) => ({ d: get(dKey(j)), f: get(`f[${j}]`), G: get(`G[${j}]`) })),
-        get('n'),
-        end.mode === 'speed' ? get('Send') : 0,
-        system,
-      );
     },
   };
 }

@@ -4,7 +4,18 @@ import { unitsOf } from './constants.js';
 import { dragFactor } from './drag.js';
 import { minimumOf } from './solve-skid.js';
 import { exact } from './step.js';
-import type { AnalysisModel, AnalysisOutcome, ModelInput, Range, Step } from './types.js';
+import { radiusFromOffsets } from './radius-offsets.js';
+import {
+  fail,
+  ok,
+  type AnalysisModel,
+  type AnalysisOutcome,
+  type ModelInput,
+  type Outcome,
+  type Range,
+  type Step,
+  type Units,
+} from './types.js';
 import {
   criticalSpeed,
   criticalSpeedOf,
@@ -35,13 +46,12 @@ export function solveYaw(c: CaseV1, i: number, a: YawV1): AnalysisOutcome {
   const warnings: string[] = [];
   const assumptions: string[] = [];
 
-  const C = spread(a.chord);
-  const M = spread(a.middleOrdinate);
-  const r = radiusFromChord(C, M, u);
-  if (!r.ok) return failed(r.reason, `${p}.middleOrdinate`);
-  steps.push(r.value.step);
-  warnings.push(...r.value.warnings);
-  let R = r.value.radius;
+  const measured = yawRadius(a, system, u);
+  if (!measured.ok) return failed(measured.reason, measured.path ? `${p}.${measured.path}` : p);
+  const { C, M } = measured.value;
+  steps.push(measured.value.step);
+  warnings.push(...measured.value.warnings);
+  let R = measured.value.radius;
 
   const halfTrack = a.pathAdjustment === 'half-track';
   let T: Range = exact(0);
@@ -70,14 +80,20 @@ export function solveYaw(c: CaseV1, i: number, a: YawV1): AnalysisOutcome {
 
   assumptions.push(
     'The full drag factor of the surface is used, not reduced by braking efficiency; if the driver braked hard during the yaw, the result is less certain.',
-    'The chord and middle ordinate were taken on the first part of the outside front tire’s mark, where the vehicle first yawed, and that part is a circular arc.',
+    C && M
+      ? 'The chord and middle ordinate were taken on the first part of the outside front tire’s mark, where the vehicle first yawed, and that part is a circular arc.'
+      : 'The offsets were taken along a chord on the first part of the outside front tire’s mark, where the vehicle first yawed; the fit’s residuals check that this part is a circular arc.',
     'The critical speed is a minimum estimate for the speed where the yaw mark begins.',
   );
   if (!halfTrack)
     assumptions.push(
       'The radius is the mark’s own; the centre of mass ran slightly inside it (no half-track adjustment).',
     );
-  const sens = ordinateSensitivity(C.value, M.value, f.value, e.value / 100, system, T.value / 2);
+  // With offsets there is no single ordinate to misread: the fit's scatter stands in for it.
+  const sens =
+    C && M
+      ? ordinateSensitivity(C.value, M.value, f.value, e.value / 100, system, T.value / 2)
+      : undefined;
   if (sens) warnings.push(sens.text);
 
   const speed = s.value.speed;
@@ -94,7 +110,61 @@ export function solveYaw(c: CaseV1, i: number, a: YawV1): AnalysisOutcome {
       warnings,
       radius: R,
       ...(sens ? { sensitivity: sens } : {}),
-      model: yawModel(a, C, M, f, e, T, halfTrack, system),
+      model:
+        C && M
+          ? yawModel(a, C, M, f, e, T, halfTrack, system)
+          : offsetsYawModel(a, measured.value.radius, f, e, T, halfTrack, system),
+    },
+  };
+}
+
+/**
+ * Radius of the mark, measured either way: chord + middle ordinate (R = C²/(8M) + M/2), or the
+ * least-squares circle through offsets. Paths are relative to the analysis.
+ */
+function yawRadius(
+  a: YawV1,
+  system: CaseV1['units'],
+  u: Units,
+): Outcome<{ radius: Range; step: Step; warnings: string[]; C?: Range; M?: Range }> {
+  if (a.offsets) {
+    const r = radiusFromOffsets(spread(a.offsets.chord), a.offsets.stations, system, u);
+    if (!r.ok) return fail(r.reason, `offsets.${r.path ?? 'stations'}`);
+    return ok({ radius: r.value.radius, step: r.value.step, warnings: r.value.warnings });
+  }
+  // The schema guarantees chord and middleOrdinate when there are no offsets.
+  if (a.chord === undefined || a.middleOrdinate === undefined)
+    return fail('give chord and middleOrdinate, or offsets', 'chord');
+  const C = spread(a.chord);
+  const M = spread(a.middleOrdinate);
+  const r = radiusFromChord(C, M, u);
+  if (!r.ok) return fail(r.reason, 'middleOrdinate');
+  return ok({ ...r.value, C, M });
+}
+
+/** The model of a yaw analysis measured by offsets: the fitted radius R is one input. */
+function offsetsYawModel(
+  a: YawV1,
+  R: Range,
+  f: Range,
+  e: Range,
+  T: Range,
+  halfTrack: boolean,
+  system: CaseV1['units'],
+): AnalysisModel {
+  const L = unitsOf(system).length;
+  const inputs: ModelInput[] = [
+    modelInput('R', 'radius from offsets', L, R),
+    modelInput('f', 'drag factor', '', f),
+  ];
+  if (a.superelevation !== undefined) inputs.push(modelInput('e', 'superelevation', '%', e));
+  if (halfTrack) inputs.push(modelInput('T', 'track width', L, T));
+  const base = { R: R.value, f: f.value, e: e.value, T: T.value };
+  return {
+    inputs,
+    evaluate(x) {
+      const r = (x.R ?? base.R) - (halfTrack ? (x.T ?? base.T) / 2 : 0);
+      return criticalSpeedOf(r, x.f ?? base.f, (x.e ?? base.e) / 100, system);
     },
   };
 }

@@ -86,12 +86,19 @@ export function analysisExtras(
       }
     }
   } else if (a && a.kind === 'yaw') {
-    out.svg.yaw = yawArcSvg(spread(a.chord).value, spread(a.middleOrdinate).value, {
-      lengthUnit: u.length,
-    });
     const fit = yawFromOffsets(c, solution.id);
     if (!fit.ok) out.offsets = fit;
     else if (fit.value) out.offsets = { ok: true, value: fit.value };
+    // Measured by offsets, the sketch shows the fitted arc's chord and middle ordinate.
+    const chord = a.chord ?? a.offsets?.chord;
+    const ordinate =
+      a.middleOrdinate !== undefined
+        ? spread(a.middleOrdinate).value
+        : fit.ok
+          ? fit.value?.fit.middleOrdinate
+          : undefined;
+    if (chord !== undefined && ordinate !== undefined)
+      out.svg.yaw = yawArcSvg(spread(chord).value, ordinate, { lengthUnit: u.length });
   }
   return out;
 }

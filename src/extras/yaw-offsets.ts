@@ -1,13 +1,12 @@
 import { spread } from '../case/quantity.js';
 import type { Case } from '../case/load.js';
 import { criticalSpeed, dragFactor, pathRadius, unitsOf } from '../engine/index.js';
+import type { OffsetsFit } from '../engine/offsets-fit.js';
+import { radiusFromOffsets } from '../engine/radius-offsets.js';
 import { fail, ok, type Outcome, type Range, type Step } from '../engine/types.js';
-import { formatNumber } from '../format/numbers.js';
 import { offsetsFromCase } from './case-fields.js';
-import { fitCircleToOffsets, type OffsetsFit } from './offsets-fit.js';
 
-/** How closely an offset is read by default: 1/8 inch (DOMAIN.md, practitioner guidance) or 3 mm. */
-export const OFFSET_READING = { imperial: 0.125 / 12, metric: 0.003 } as const;
+export { OFFSET_READING } from '../engine/radius-offsets.js';
 
 export interface YawFromOffsets {
   fit: OffsetsFit;
@@ -19,11 +18,11 @@ export interface YawFromOffsets {
 }
 
 /**
- * The critical speed of a yaw analysis from its `offsets` field (proposed: offsets at stations
- * along one chord) instead of its chord and middle ordinate: the least-squares circle
- * (fitCircleToOffsets), its radius ± 2 standard errors, the half-track path adjustment if the
- * analysis asks for it, then the engine's critical speed with the analysis's drag factor and
- * superelevation. Ok(undefined) when the analysis has no offsets.
+ * The critical speed of a yaw analysis from its `offsets` field: the engine's radius from offsets
+ * (least-squares circle, ± 2 standard errors, widened by the chord's spread), the half-track
+ * path adjustment if the analysis asks for it, then the critical speed with the analysis's drag
+ * factor and superelevation. The same chain solveCase now runs for such an analysis; this keeps
+ * the fit itself at hand for the report. Ok(undefined) when the analysis has no offsets.
  * @example yawFromOffsets(c, 'yaw-1') // ok: { radius, speed, steps: [fit, (path,) drag, speed] }
  */
 export function yawFromOffsets(c: Case, analysisId: string): Outcome<YawFromOffsets | undefined> {
@@ -34,23 +33,10 @@ export function yawFromOffsets(c: Case, analysisId: string): Outcome<YawFromOffs
   if (!field.ok || field.value === undefined) return field as Outcome<undefined>;
   const u = unitsOf(c.units);
   const p = `analyses[${i}].offsets`;
-  const fitted = fitCircleToOffsets(field.value.chord, field.value.stations, {
-    tolerance: OFFSET_READING[c.units],
-    unit: u.length,
-  });
+  const fitted = radiusFromOffsets(spread(field.value.chord), field.value.stations, c.units, u);
   if (!fitted.ok) return fail(fitted.reason, fitted.path ? `${p}.${fitted.path}` : p);
-  const fit = fitted.value;
-  const se = fit.radiusStdError ?? 0;
-  const R: Range = { value: fit.radius, low: fit.radius - 2 * se, high: fit.radius + 2 * se };
-  if (!(R.low > 0)) return fail('the offsets scatter too much to give a radius', p);
-  const steps: Step[] = [
-    {
-      ...fit.step,
-      low: R.low,
-      high: R.high,
-      why: `${fit.step.why} The range is ± 2 standard errors of the fit (${formatNumber(se, 'length')} ${u.length}); with few stations it understates the doubt.`,
-    },
-  ];
+  const R = fitted.value.radius;
+  const steps: Step[] = [fitted.value.step];
   let path = R;
   if (a.pathAdjustment === 'half-track') {
     if (c.vehicle.trackWidth === undefined)
@@ -66,5 +52,11 @@ export function yawFromOffsets(c: Case, analysisId: string): Outcome<YawFromOffs
   const speed = criticalSpeed(path, drag.value.f, spread(a.superelevation ?? 0), c.units);
   if (!speed.ok) return fail(speed.reason, `analyses[${i}].${speed.path ?? 'offsets'}`);
   steps.push(speed.value.step);
-  return ok({ fit, radius: R, speed: speed.value.speed, steps, warnings: fit.warnings });
+  return ok({
+    fit: fitted.value.fit,
+    radius: R,
+    speed: speed.value.speed,
+    steps,
+    warnings: fitted.value.warnings,
+  });
 }

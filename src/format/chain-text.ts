@@ -7,6 +7,8 @@ import type {
   Units,
 } from '../engine/types.js';
 import { CAUTIONS } from './cautions.js';
+import { extrasTextLines } from './extras-text.js';
+import { solveExtras } from './solve-extras.js';
 import { formatRange, withUnit, type NumberKind } from './numbers.js';
 
 /** The kind of number a step's result is, from its unit. */
@@ -63,6 +65,7 @@ function analysisLines(r: AnalysisOutcome, i: number, units: Units, c: Case): st
       );
   }
   out.push(`  Result: ${formatAtLeast(s, units)}`);
+  out.push(...extrasTextLines(solveExtras(c, i, s), units));
   out.push(...list('  Assumptions', s.assumptions).map((l, k) => (k === 0 ? l : `  ${l}`)));
   out.push(...list('  Warnings', s.warnings).map((l, k) => (k === 0 ? l : `  ${l}`)));
   return out;

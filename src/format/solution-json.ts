@@ -1,7 +1,16 @@
+import type { Case } from '../case/load.js';
 import type { AnalysisSolution, CaseSolution } from '../engine/types.js';
+import { extrasToJson, solveExtras } from './solve-extras.js';
 
-/** One analysis as `solve --json` prints it: the contract's fields first, then extras. */
-export function analysisToJson(s: AnalysisSolution): Record<string, unknown> {
+/**
+ * One analysis as `solve --json` prints it: the contract's fields first, then extras. With the
+ * case and the analysis's index, also `sensitivity`, `timeDistance` and `distribution`
+ * (solveExtras). The yaw middle-ordinate reading check is `ordinateSensitivity`.
+ */
+export function analysisToJson(
+  s: AnalysisSolution,
+  from?: { c: Case; index: number },
+): Record<string, unknown> {
   const out: Record<string, unknown> = {
     id: s.id,
     kind: s.kind,
@@ -15,20 +24,24 @@ export function analysisToJson(s: AnalysisSolution): Record<string, unknown> {
   if (s.distance) out.distance = s.distance;
   if (s.radius) out.radius = s.radius;
   if (s.boundaries) out.boundaries = s.boundaries;
-  if (s.sensitivity) out.sensitivity = s.sensitivity;
+  if (s.sensitivity) out.ordinateSensitivity = s.sensitivity;
+  if (from) Object.assign(out, extrasToJson(solveExtras(from.c, from.index, s)));
   return out;
 }
 
 /**
  * The shape `skidcase solve FILE --json` prints (docs/case-file.md): id, units, analyses, and the
- * posted limit when the case has one, plus the file's warnings. Numbers are unrounded except
+ * posted limit when the case has one, plus the file's warnings; given the case, each analysis
+ * also carries its extras (see analysisToJson). Numbers are unrounded except
  * `minimum`. Only for a solution whose analyses all solved; the caller reports failures instead.
  */
-export function solutionToJson(solution: CaseSolution): Record<string, unknown> {
+export function solutionToJson(solution: CaseSolution, c?: Case): Record<string, unknown> {
   const out: Record<string, unknown> = {
     id: solution.id,
     units: solution.units,
-    analyses: solution.analyses.flatMap((r) => (r.ok ? [analysisToJson(r.solution)] : [])),
+    analyses: solution.analyses.flatMap((r, index) =>
+      r.ok ? [analysisToJson(r.solution, c ? { c, index } : undefined)] : [],
+    ),
   };
   if (solution.postedLimit) out.postedLimit = solution.postedLimit;
   out.warnings = solution.warnings;

@@ -2,105 +2,21 @@
  * The case file (v1) made from the interview's answers: details, vehicle and only the analyses
  * whose questions are all answered and valid, with the interview's progress so it resumes.
  */
-import type { Quantity } from '../case/quantity.js';
 import type { Case } from '../case/load.js';
-import type { AnalysisV1, BrakesV1, DragV1, SegmentV1, VehicleV1 } from '../case/v1/schema.js';
-import type { Answers, CaseMeta, InterviewState, SavedInterview } from './types.js';
-import { formatSegmentLine } from '../input/index.js';
-import {
-  analysisCount,
-  choiceOf,
-  markLook,
-  segmentCount,
-  surfaceMode,
-  unitsOf,
-} from './answers-read.js';
+import type { AnalysisV1, BrakesV1, VehicleV1 } from '../case/v1/schema.js';
+import type { CaseMeta, InterviewState, SavedInterview } from './types.js';
+import { analysisCount, choiceOf, markLook, unitsOf } from './answers-read.js';
 import { readAnswers, type AnswerReader } from './answer-values.js';
-import { OTHER_SURFACE } from './drag-table.js';
 import { WHEELS } from './questions-vehicle.js';
-import { signed } from './signed.js';
+import { analysisKeep, CASE_KEEP, kept, measuredByOffsets, VEHICLE_KEEP } from './kept-fields.js';
+import { dragOf, segmentsOf, slopeOf, text, type Q } from './build-parts.js';
 
-type Q = Quantity;
-
-/** `{ value, low, high }` of a Quantity, for the drag shapes that take the fields flat. */
-function flat(q: Q): { value: number; low?: number; high?: number } {
-  return typeof q === 'number'
-    ? { value: q }
-    : {
-        value: q.value,
-        ...(q.low !== undefined ? { low: q.low } : {}),
-        ...(q.high !== undefined ? { high: q.high } : {}),
-      };
-}
-
-function dragOf(r: AnswerReader, p: string): DragV1 {
-  const source = r.value(`${p}.drag.source`);
-  if (source === 'test-skids')
-    return { source, tests: r.value(`${p}.drag.tests`) as { speed: Q; distance: Q }[] };
-  if (source === 'sled')
-    return {
-      source,
-      weight: r.value(`${p}.drag.weight`) as Q,
-      pulls: r.value(`${p}.drag.pulls`) as Q[],
-    };
-  if (source === 'decelerometer') return { source, readings: r.value(`${p}.drag.readings`) as Q[] };
-  const v = flat(r.value(`${p}.drag.value`) as Q);
-  if (source === 'table') {
-    const key = r.value(`${p}.drag.surface`) as string;
-    const surface = key === OTHER_SURFACE ? (r.value(`${p}.drag.surfaceName`) as string) : key;
-    return { source, surface, ...v };
-  }
-  return { source: 'entered', ...v };
-}
-
-function slopeOf(
-  r: AnswerReader,
-  id: string,
-  negativeWord: string,
-  noneWord: string,
-): Q | undefined {
-  const dir = r.value(`${id}.dir`);
-  if (dir === noneWord || dir === undefined) return undefined;
-  return signed(r.value(`${id}.pct`) as Q, dir === negativeWord);
-}
-
-const text = (r: AnswerReader, id: string) => {
-  const v = r.value(id);
-  return typeof v === 'string' && v !== '' ? v : undefined;
-};
-
-/** The segments of slide `i` as the case stores them; read only when their questions are complete. */
-function segmentsOf(r: AnswerReader, i: number): SegmentV1[] {
-  const several = surfaceMode(r.answers, i) !== 'one';
-  const segments: SegmentV1[] = [];
-  for (let j = 0; j < segmentCount(r.answers, i); j++) {
-    const sp = `a${i}.seg${j}`;
-    const s: SegmentV1 = { drag: dragOf(r, sp) };
-    const label = text(r, `${sp}.label`);
-    if (label) s.label = label;
-    if (several) s.length = r.value(`${sp}.length`) as Q;
-    const g = slopeOf(r, `${sp}.grade`, 'downhill', 'level');
-    if (g !== undefined) s.grade = g;
-    segments.push(s);
-  }
-  return segments;
-}
-
-/**
- * The segments of slide `i` written on one quick-entry line, when every segment question is
- * answered and the line can say them (undefined otherwise): Enter then keeps them as they are.
- */
-export function segmentsLine(answers: Answers, i: number): string | undefined {
-  const r = readAnswers(answers);
-  const own = new RegExp(`^a${i}\\.seg\\d+\\.`);
-  if (segmentCount(answers, i) === 0 || !r.complete((id) => own.test(id))) return undefined;
-  return formatSegmentLine(segmentsOf(r, i));
-}
+export { segmentsLine } from './build-parts.js';
 
 function skidOf(r: AnswerReader, i: number, id: string): AnalysisV1 {
   const p = `a${i}`;
   const segments = segmentsOf(r, i);
-  const out: AnalysisV1 = { id, kind: 'skid', segments };
+  const out: AnalysisV1 = { ...kept(r.answers, analysisKeep(i)), id, kind: 'skid', segments };
   const label = text(r, `${p}.label`);
   if (label) out.label = label;
   const marks = r.value(`${p}.marks`);
@@ -118,13 +34,17 @@ function skidOf(r: AnswerReader, i: number, id: string): AnalysisV1 {
 function yawOf(r: AnswerReader, i: number, id: string): AnalysisV1 {
   const p = `a${i}`;
   const out: AnalysisV1 = {
+    ...kept(r.answers, analysisKeep(i)),
     id,
     kind: 'yaw',
-    chord: r.value(`${p}.chord`) as Q,
-    middleOrdinate: r.value(`${p}.ordinate`) as Q,
     drag: dragOf(r, p),
     pathAdjustment: r.value(`${p}.path`) === 'half-track' ? 'half-track' : 'none',
   };
+  // Measured by offsets (kept from the file): no chord and ordinate to write.
+  if (!measuredByOffsets(r.answers, i)) {
+    out.chord = r.value(`${p}.chord`) as Q;
+    out.middleOrdinate = r.value(`${p}.ordinate`) as Q;
+  }
   const label = text(r, `${p}.label`);
   if (label) out.label = label;
   const e = slopeOf(r, `${p}.bank`, 'away', 'none');
@@ -192,7 +112,7 @@ export function buildCase(state: InterviewState, meta: CaseMeta): Case {
     const v = text(r, `details.${k}`);
     if (v) details[k] = v;
   }
-  const vehicle: VehicleV1 = {};
+  const vehicle: VehicleV1 = { ...kept(answers, VEHICLE_KEEP) };
   const label = text(r, 'vehicle.label');
   if (label) vehicle.label = label;
   const brakes = brakesOf(r);
@@ -224,6 +144,7 @@ export function buildCase(state: InterviewState, meta: CaseMeta): Case {
     mode: state.mode,
   };
   const c: Case = {
+    ...kept(answers, CASE_KEEP),
     format: 'skidcase-case',
     version: 1,
     id: meta.id,

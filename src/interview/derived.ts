@@ -3,11 +3,12 @@ import type { InterviewState, Progress, Question, QuestionState } from './types.
 import { allQuestions } from './questions.js';
 import { readAnswers } from './answer-values.js';
 import { firstOpenIn, validCursor } from './navigate.js';
-import { analysisCount, markLook, segmentCount, surfaceMode } from './answers-read.js';
+import { analysisCount, markLook, segmentCount, surfaceMode, unitsOf } from './answers-read.js';
+import { showNumber } from '../input/index.js';
 import { analysisSection } from './questions.js';
+import { isMetaAnswer } from './kept-fields.js';
 
-/** Answers that are kept for the case file but are not questions (an analysis id from a file). */
-export const isMetaAnswer = (id: string): boolean => /^a\d+\.id$/.test(id);
+export { isMetaAnswer } from './kept-fields.js';
 
 /** The question the cursor is on, or undefined on the review. */
 export function currentQuestion(state: InterviewState): Question | undefined {
@@ -61,8 +62,11 @@ export function summaryOfDone(state: InterviewState): string[] {
   const r = readAnswers(a);
   const lines: string[] = [];
   const ref = a['details.reference']?.text;
+  const metric = unitsOf(a) === 'metric';
+  // Read fresh, so a limit typed with a unit shows in the case's unit.
+  const limit = r.status('limit') === 'answered' ? r.value('limit') : undefined;
   lines.push(
-    `Case${ref ? ` ${ref}` : ''}: ${a.units?.value === 'metric' ? 'metres and km/h' : 'feet and mph'}${a.limit?.text ? `, posted limit ${a.limit.text}` : ''}`,
+    `Case${ref ? ` ${ref}` : ''}: ${metric ? 'metres and km/h' : 'feet and mph'}${typeof limit === 'number' ? `, posted limit ${showNumber(limit)} ${metric ? 'km/h' : 'mph'}` : ''}`,
   );
   const brakes = a['vehicle.brakes']?.value;
   const brakeWords =

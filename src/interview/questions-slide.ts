@@ -22,7 +22,7 @@ import { gradeQuestions } from './questions-grade.js';
 import { quickFills } from './quick-fills.js';
 import { endQuestions } from './questions-end.js';
 // A cycle (build-case reads the questions), safe because it is only called at run time.
-import { segmentsLine } from './build-case.js';
+import { segmentsLine } from './build-parts.js';
 
 const LENGTH = { kind: 'length' as const, rule: RULES.length, range: true };
 

@@ -3,6 +3,7 @@ import { RULES } from '../case/quantity.js';
 import type { Answers, AnswerContext, Question } from './types.js';
 import { choiceQuestion, quantityQuestion } from './question-kinds.js';
 import { choiceOf, unitsOf } from './answers-read.js';
+import { measuredByOffsets } from './kept-fields.js';
 import { spread } from '../case/quantity.js';
 import { radiusFromChord, unitsOf as engineUnits } from '../engine/index.js';
 import { readQuantity } from './read-quantity.js';
@@ -53,7 +54,16 @@ function radiusLine(a: Answers, p: string): string | undefined {
  * Yaw questions of analysis `i`. `askTrack` says whether this analysis is where the track width
  * is asked (the first yaw analysis using the centre-of-mass path).
  */
-export function yawQuestions(
+export function yawQuestions(...args: Parameters<typeof yawQuestionsOf>): Question[] {
+  const [i, , applies] = args;
+  // A yaw measured by offsets (kept from a file) is not asked for a chord and ordinate.
+  const byOrdinate = (a: Answers) => applies(a) && !measuredByOffsets(a, i);
+  return yawQuestionsOf(...args).map((q) =>
+    q.id === `a${i}.chord` || q.id === `a${i}.ordinate` ? { ...q, appliesWhen: byOrdinate } : q,
+  );
+}
+
+function yawQuestionsOf(
   i: number,
   section: string,
   applies: (a: Answers) => boolean,

@@ -42,11 +42,6 @@ const tmpName = (lock: string, tag: string) =>
   `${lock}.${tag}.${process.pid}.${randomBytes(4).toString('hex')}`;
 const errCode = (e: unknown) => (e as NodeJS.ErrnoException).code;
 
-/** The lock this process holds on a case file, if any. */
-export function heldLock(caseFile: string): LockHandle | undefined {
-  return held.get(caseFile);
-}
-
 /** Creates the lock file complete, or reports EEXIST; returns the text written. */
 async function createLock(lockFile: string): Promise<string> {
   const tmp = tmpName(lockFile, 'new');

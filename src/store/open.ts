@@ -4,8 +4,10 @@ import { describeIssue, type FieldIssue } from '../case/issues.js';
 import { loadCaseText, type Case, type LoadResult } from '../case/load.js';
 import { caseFilePath } from './case-path.js';
 import { backupPath } from './side-files.js';
-import { getKnown, sigOf } from './known-files.js';
+import type { Stats } from 'node:fs';
+import { getKnown, sameSig, sigOf, type FileSig } from './known-files.js';
 import { acquireLock, releaseLock } from './lock.js';
+import { sweepLeftovers } from './leftovers.js';
 
 export type OpenFailureKind =
   'missing' | 'unreadable' | 'json' | 'invalid' | 'newer' | 'format' | 'locked-error';
@@ -67,26 +69,10 @@ export async function openCase(dirOrPath: string, opts: OpenOptions = {}): Promi
   } else file = path.resolve(dirOrPath);
   const load = opts.load ?? loadCaseText;
 
-  let text: string;
-  let sig;
-  try {
-    const handle = await fs.open(file, 'r');
-    try {
-      sig = sigOf(await handle.stat());
-      text = await handle.readFile('utf8');
-    } finally {
-      await handle.close();
-    }
-  } catch (e) {
-    const code = errCode(e);
-    if (code === 'ENOENT' || code === 'ENOTDIR')
-      return fail('missing', file, [{ path: '(file)', message: 'no such case file' }]);
-    return fail('unreadable', file, [
-      { path: '(file)', message: `cannot be read (${code ?? String(e)})` },
-    ]);
-  }
-
-  const loaded = load(text);
+  const read = await readWithSig(file);
+  if ('kind' in read) return read;
+  let { text, sig } = read;
+  let loaded = load(text);
   if (!loaded.ok) {
     const r = fail(loaded.kind, file, loaded.issues);
     if (loaded.kind !== 'newer') {
@@ -107,8 +93,21 @@ export async function openCase(dirOrPath: string, opts: OpenOptions = {}): Promi
   if (opts.readOnly) readOnlyReason = 'opened for viewing only';
   else {
     const lock = await acquireLock(file);
-    if (lock.kind === 'acquired') locked = true;
-    else if (lock.kind === 'held') readOnlyReason = lock.reason;
+    if (lock.kind === 'acquired') {
+      locked = true;
+      // Another skidcase may have saved between our read and our lock: read its version then.
+      const again = await readWithSig(file);
+      if ('kind' in again || !sameSig(sig, again.stat)) {
+        const fresh = 'kind' in again ? undefined : load(again.text);
+        if (!fresh?.ok || 'kind' in again) {
+          await releaseLock(file);
+          return 'kind' in again ? again : openCase(dirOrPath, opts);
+        }
+        ({ text, sig } = again);
+        loaded = fresh;
+      }
+      await sweepLeftovers(file);
+    } else if (lock.kind === 'held') readOnlyReason = lock.reason;
     else if (lock.code && CANNOT_WRITE.has(lock.code))
       readOnlyReason = `the folder cannot be written (${lock.code})`;
     else return fail('locked-error', file, [{ path: '(file)', message: lock.message }]);
@@ -135,6 +134,28 @@ export async function openCase(dirOrPath: string, opts: OpenOptions = {}): Promi
   if (readOnlyReason !== undefined) result.readOnlyReason = readOnlyReason;
   if (loaded.migratedFrom !== undefined) result.migratedFrom = loaded.migratedFrom;
   return result;
+}
+
+/** Reads a file with the identity of what was read (from the same open handle). */
+async function readWithSig(
+  file: string,
+): Promise<{ text: string; sig: FileSig; stat: Stats } | (OpenResult & { ok: false })> {
+  try {
+    const handle = await fs.open(file, 'r');
+    try {
+      const stat = await handle.stat();
+      return { text: await handle.readFile('utf8'), sig: sigOf(stat), stat };
+    } finally {
+      await handle.close();
+    }
+  } catch (e) {
+    const code = errCode(e);
+    if (code === 'ENOENT' || code === 'ENOTDIR')
+      return fail('missing', file, [{ path: '(file)', message: 'no such case file' }]);
+    return fail('unreadable', file, [
+      { path: '(file)', message: `cannot be read (${code ?? String(e)})` },
+    ]);
+  }
 }
 
 function fail(

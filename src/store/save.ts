@@ -26,7 +26,7 @@ export type SaveResult =
     }
   | {
       ok: false;
-      kind: 'invalid' | 'path' | 'locked' | 'read-only' | 'io';
+      kind: 'invalid' | 'path' | 'exists' | 'locked' | 'read-only' | 'io';
       message: string;
       issues?: FieldIssue[];
     };
@@ -95,7 +95,8 @@ async function write(file: string, c: Case, text: string): Promise<SaveResult> {
         message: `not saved: another skidcase took over ${file} while it was idle`,
       };
     const result: SaveResult = { ok: true, path: file, case: c };
-    await keepPrevious(file, known, result);
+    const refused = await keepPrevious(file, known, result);
+    if (refused) return refused;
     await writeFileAtomic(file, text, { encoding: 'utf8' });
     known.sig = sigOf(fsSync.statSync(file));
     known.created = c.created;
@@ -112,27 +113,35 @@ async function write(file: string, c: Case, text: string): Promise<SaveResult> {
 
 /**
  * Before a write: keep the file now on disk as the backup if it is good; keep a migrated case's
- * original once; move a broken file aside rather than overwrite it.
+ * original once; move a file broken while open aside rather than overwrite it. A file this
+ * process never opened or wrote is not written over at all (an id already taken, or a broken
+ * file the user was not shown): the save is refused.
  */
 async function keepPrevious(
   file: string,
   known: ReturnType<typeof getKnown>,
   out: SaveResult & { ok: true },
-) {
+): Promise<(SaveResult & { ok: false }) | undefined> {
   let st;
   try {
     st = fsSync.lstatSync(file);
   } catch (e) {
-    if (errCode(e) === 'ENOENT') return;
+    if (errCode(e) === 'ENOENT') return undefined;
     throw e;
   }
+  if (known.sig === undefined)
+    return {
+      ok: false,
+      kind: 'exists',
+      message: `not saved: ${file} already exists and was not opened here; open it first, or use another id`,
+    };
   // Known good (we wrote or validated exactly this file): no re-read. Otherwise look at it.
   const good = sameSig(known.sig, st) || loadCaseText(await fs.readFile(file, 'utf8')).ok;
   if (!good) {
     out.keptBroken = await moveToFreeName(file, (n) =>
       brokenPath(file).replace(/\.json$/, n > 1 ? `-${n}.json` : '.json'),
     );
-    return;
+    return undefined;
   }
   if (known.migratedFrom !== undefined) {
     const v = known.migratedFrom;
@@ -142,6 +151,7 @@ async function keepPrevious(
   const bak = backupPath(file);
   linkReplacingSync(file, bak);
   out.backup = bak;
+  return undefined;
 }
 
 /**

@@ -73,6 +73,12 @@ export function App(props: AppProps) {
     return reviewLines(port.solve(built.case), width);
   }, [s?.state, question, width]);
 
+  // The running chain only changes with the answers, not with each key typed.
+  const draft = useMemo(
+    () => (s && question ? port.draft(s.state, s.open.case) : undefined),
+    [s?.state.answers, question?.id],
+  );
+
   const onReport = () => {
     // Read at the moment of the key, not from this render: a key may arrive before the next one.
     const s = app.current().session;
@@ -88,7 +94,7 @@ export function App(props: AppProps) {
     );
   };
   // Window heights as ReviewScreen and HelpOverlay lay them out (title, border, position line).
-  const reviewWindow = body - 2 - (s?.reportMessage ? 1 : 0);
+  const reviewWindow = body - 1 - (s?.reportMessage ? 1 : 0);
   const helpWindow = body + (s ? 2 : 0) - 3;
   const maxTop = {
     review: Math.max(0, review.length - reviewWindow),
@@ -134,7 +140,7 @@ export function App(props: AppProps) {
         question={question}
         defaultText={shownDefault(question, port.defaultText(s.state))}
         explain={question.explainChoice?.(s.state.answers)}
-        draft={port.draft(s.state, s.open.case)}
+        draft={draft!}
         width={width}
         height={body - 1}
         color={props.color}

@@ -73,7 +73,7 @@ export function InterviewScreen(p: InterviewScreenProps) {
         <Box flexDirection="column">
           <Text bold>Resumed. Already done:</Text>
           {session.summary.slice(0, Math.max(1, whyRows - 1)).map((l, i) => (
-            <Text key={i} color={TONE.muted} wrap="truncate">
+            <Text key={i} color={TONE.muted} wrap="wrap">
               {l}
             </Text>
           ))}

@@ -32,6 +32,7 @@ export type Command =
   | 'restore'
   | 'report'
   | 'to-question'
+  | 'to-list'
   | 'pick';
 
 /**
@@ -239,6 +240,13 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     label: 'go to',
     description: 'Go to any question from the review',
     when: ['review'],
+  },
+  {
+    command: 'to-list',
+    keys: [ctrl('l')],
+    label: 'case list',
+    description: 'Save the case and go back to the list of cases',
+    when: CASE,
   },
 ];
 

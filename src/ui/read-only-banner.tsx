@@ -6,7 +6,8 @@ import { TONE } from './theme.js';
 export function ReadOnlyBanner({ reason }: { reason: string }) {
   return (
     <Text color={TONE.warning} bold wrap="wrap">
-      READ-ONLY: {reason} Answers are kept on screen but not saved.
+      READ-ONLY: {/[.!?]$/.test(reason) ? reason : `${reason}.`} Answers are kept on screen but not
+      saved.
     </Text>
   );
 }

@@ -4,7 +4,10 @@ import type { ShownLine } from './review-lines.js';
 import { ScrollView } from './scroll-view.js';
 import { TONE } from './theme.js';
 
-/** The review: the lines built by reviewLines, scrolled, with the report status under them. */
+/**
+ * The review: the lines built by reviewLines, scrolled, with the report status under them. The
+ * header above it already says "Review".
+ */
 export function ReviewScreen(p: {
   lines: ShownLine[];
   top: number;
@@ -13,10 +16,7 @@ export function ReviewScreen(p: {
 }) {
   return (
     <Box flexDirection="column">
-      <Text bold color={TONE.heading}>
-        Review
-      </Text>
-      <ScrollView lines={p.lines} top={p.top} height={p.height - 1 - (p.message ? 1 : 0)} />
+      <ScrollView lines={p.lines} top={p.top} height={p.height - (p.message ? 1 : 0)} />
       {p.message ? <Text color={TONE.result}>{p.message}</Text> : null}
     </Box>
   );

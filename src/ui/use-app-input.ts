@@ -185,6 +185,8 @@ function run(command: Command, ctx: KeyContext, d: InputDeps) {
     }
     case 'report':
       return d.onReport();
+    case 'to-list':
+      return void app.closeCase();
     case 'pick':
       return;
   }

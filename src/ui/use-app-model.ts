@@ -84,7 +84,9 @@ export function useAppModel(
   const enter = useCallback(
     (opened: Opened) => {
       if (!opened.ok) {
-        const detail = opened.issues?.map((i) => `${i.path}: ${i.message}`).join('; ');
+        // The store's message already names the file and the first field; add the others.
+        const more = (opened.issues ?? []).filter((i) => !opened.message.includes(i.message));
+        const detail = more.map((i) => `${i.path}: ${i.message}`).join('; ');
         setHome({ error: detail ? `${opened.message} (${detail})` : opened.message });
         return;
       }
@@ -93,6 +95,11 @@ export function useAppModel(
       savedAnswers.current = state.answers;
       const session: Session = { open: opened.open, state, reviewTop: 0, ...inputFor(port, state) };
       if (!opened.open.isNew) session.summary = port.summary(state);
+      if (opened.open.migratedFrom !== undefined)
+        session.summary = [
+          `This file was written in case format version ${opened.open.migratedFrom}; it is saved in the current version once you change an answer, and the original is kept beside it.`,
+          ...(session.summary ?? []),
+        ];
       update((m) => ({
         ...m,
         session,
@@ -170,7 +177,14 @@ export function useAppModel(
   const closeCase = useCallback(async () => {
     queueSave();
     await saving.current.catch(() => undefined);
-    await ref.current.session?.open.release().catch(() => undefined);
+    const s = ref.current.session;
+    if (s && !s.open.readOnly && s.state.answers !== savedAnswers.current) {
+      // The answers live only here until a save succeeds: keep the case open.
+      const saveError = `${s.saveError ?? 'not saved'}; the case stays open`;
+      update((m) => (m.session ? { ...m, session: { ...m.session, saveError } } : m));
+      return;
+    }
+    await s?.open.release().catch(() => undefined);
     update((m) => ({ ...m, session: undefined, overlay: undefined }));
     void refresh();
   }, [queueSave, refresh, update]);

@@ -10,7 +10,13 @@ function setsColour(params: string): boolean {
   const p = params === '' ? [0] : params.split(/[;:]/).map((x) => Number(x));
   for (let i = 0; i < p.length; i++) {
     const n = p[i]!;
-    if ((n >= 30 && n <= 39) || (n >= 40 && n <= 49) || (n >= 90 && n <= 97) || (n >= 100 && n <= 107)) return true;
+    if (
+      (n >= 30 && n <= 39) ||
+      (n >= 40 && n <= 49) ||
+      (n >= 90 && n <= 97) ||
+      (n >= 100 && n <= 107)
+    )
+      return true;
     if (n === 58 || n === 59) return true; // underline colour
   }
   return false;
@@ -25,5 +31,8 @@ export function colourCodes(raw: string): string[] {
 
 /** Removes every escape sequence, leaving the text a person reads. */
 export function stripAnsi(raw: string): string {
-  return raw.replace(/\u001B\[[0-?]*[ -/]*[@-~]|\u001B\][^\u0007\u001B]*(\u0007|\u001B\\)|\u001B[@-Z\\-_]/g, '');
+  return raw.replace(
+    /\u001B\[[0-?]*[ -/]*[@-~]|\u001B\][^\u0007\u001B]*(\u0007|\u001B\\)|\u001B[@-Z\\-_]/g,
+    '',
+  );
 }

@@ -17,7 +17,8 @@ export function childEnv(extra: Record<string, string | undefined> = {}): Record
     if (v === undefined) continue;
     if (k === 'CI' || k === 'CONTINUOUS_INTEGRATION' || k.startsWith('CI_')) continue;
     if (k === 'FORCE_COLOR' || k === 'NO_COLOR' || k === 'COLORTERM') continue;
-    if (k.startsWith('VITEST') || k === 'NODE_OPTIONS' || k === 'TMUX' || k === 'TMUX_PANE') continue;
+    if (k.startsWith('VITEST') || k === 'NODE_OPTIONS' || k === 'TMUX' || k === 'TMUX_PANE')
+      continue;
     if (k.startsWith('SKIDCASE_')) continue;
     env[k] = v;
   }

@@ -60,12 +60,16 @@ describe.skipIf(!pty.ok)(`terminal harness${pty.ok ? '' : ` (skipped: ${pty.reas
   it('fails a wait with the screen in the message, not a bare timeout', async () => {
     const t = await startTerm({ nodeArgs: [ECHO], cols: 30, rows: 6 });
     await t.waitFor('ready');
-    await expect(t.waitFor('never shown', { timeoutMs: 300 })).rejects.toThrow(/timed out waiting for never shown[\s\S]*\| ready size 30x6/);
+    await expect(t.waitFor('never shown', { timeoutMs: 300 })).rejects.toThrow(
+      /timed out waiting for never shown[\s\S]*\| ready size 30x6/,
+    );
   });
 
   it('fails a wait at once when the program has exited without showing the text', async () => {
     const t = await startTerm({ nodeArgs: ['-e', 'console.log("short life")'] });
-    await expect(t.waitFor('never shown', { timeoutMs: 5_000 })).rejects.toThrow(/exited \(code 0\)[\s\S]*short life/);
+    await expect(t.waitFor('never shown', { timeoutMs: 5_000 })).rejects.toThrow(
+      /exited \(code 0\)[\s\S]*short life/,
+    );
   });
 
   it('finds colour codes and only colour codes', async () => {

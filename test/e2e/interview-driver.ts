@@ -34,11 +34,15 @@ export function onInputLine(screen: string, typed: string): boolean {
 /** A piece of the prompt short enough to stay on one screen line at 60 columns. */
 export const promptMark = (q: Question) => squash(q.prompt).slice(0, 26);
 
-const isChoice = (q: Question) => (q.kind === 'choice' || q.kind === 'confirm') && (q.choices?.length ?? 0) > 0;
+const isChoice = (q: Question) =>
+  (q.kind === 'choice' || q.kind === 'confirm') && (q.choices?.length ?? 0) > 0;
 
 function choiceFor(q: Question, answer: string) {
   const c = q.choices!.find((c) => c.value === answer) ?? q.choices!.find((c) => c.key === answer);
-  if (!c) throw new Error(`script: "${answer}" is not a choice of ${q.id} (${q.choices!.map((c) => c.value).join(', ')})`);
+  if (!c)
+    throw new Error(
+      `script: "${answer}" is not a choice of ${q.id} (${q.choices!.map((c) => c.value).join(', ')})`,
+    );
   return c;
 }
 
@@ -82,14 +86,19 @@ function typedShown(before: string, answer: string, cols: number): (s: string) =
  * Runs the script through the reducer alone (no terminal), to the review or to `opts.stopAt`.
  * Throws naming the first question the script has no answer for, or an answer it rejects.
  */
-export function dryRun(script: Script, opts: DriveOptions = {}, from: InterviewState = initialState()): InterviewState {
+export function dryRun(
+  script: Script,
+  opts: DriveOptions = {},
+  from: InterviewState = initialState(),
+): InterviewState {
   let state = from;
   for (let n = 0; n < 500; n++) {
     const q = currentQuestion(state);
     if (!q || q.id === opts.stopAt || n === opts.maxAnswers) return state;
     const answer = answerFor(script, q);
     state = mirrorStep(state, q, answer);
-    if (state.error) throw new Error(`script answer "${answer}" for ${q.id} was rejected: ${state.error.message}`);
+    if (state.error)
+      throw new Error(`script answer "${answer}" for ${q.id} was rejected: ${state.error.message}`);
   }
   throw new Error('script: more than 500 answers without reaching the review (a loop?)');
 }
@@ -109,7 +118,13 @@ export function answerOrder(script: Script): string[] {
  * Types the script into the terminal, from whatever question is on screen (the mirror `from`
  * must match it: a fresh interview, or a resumed one). Returns the mirror's final state.
  */
-export async function typeInterview(t: Term, script: Script, opts: DriveOptions = {}, from?: InterviewState, mode: InterviewMode = 'guided'): Promise<InterviewState> {
+export async function typeInterview(
+  t: Term,
+  script: Script,
+  opts: DriveOptions = {},
+  from?: InterviewState,
+  mode: InterviewMode = 'guided',
+): Promise<InterviewState> {
   let state = from ?? initialState(mode);
   const wait = { timeoutMs: opts.timeoutMs ?? 10_000 };
   for (let n = 0; ; n++) {
@@ -117,7 +132,10 @@ export async function typeInterview(t: Term, script: Script, opts: DriveOptions 
     if (!q || q.id === opts.stopAt || n === opts.maxAnswers) return state;
     const answer = answerFor(script, q);
     const mark = promptMark(q);
-    let screen = await t.waitFor((s) => squash(s).includes(mark), { what: `question ${q.id} ("${mark}")`, ...wait });
+    let screen = await t.waitFor((s) => squash(s).includes(mark), {
+      what: `question ${q.id} ("${mark}")`,
+      ...wait,
+    });
     const keysBefore = t.keyCount;
     if (isChoice(q) && answer !== '') await t.type(choiceFor(q, answer).key);
     else {
@@ -126,13 +144,17 @@ export async function typeInterview(t: Term, script: Script, opts: DriveOptions 
         // screen would (the prompt or a hint may hold the same words, so only that line counts).
         const shown = typedShown(screen, answer, t.cols);
         await t.type(answer);
-        await t.waitFor(shown, { what: `the typed answer "${answer}" on the input line, for ${q.id}`, ...wait });
+        await t.waitFor(shown, {
+          what: `the typed answer "${answer}" on the input line, for ${q.id}`,
+          ...wait,
+        });
         screen = await t.waitForQuiet(40, wait);
       }
       await t.press('enter');
     }
     state = mirrorStep(state, q, answer);
-    if (state.error) throw new Error(`script answer "${answer}" for ${q.id} was rejected: ${state.error.message}`);
+    if (state.error)
+      throw new Error(`script answer "${answer}" for ${q.id} was rejected: ${state.error.message}`);
     opts.onAnswer?.(q.id, t.keyCount - keysBefore);
     await t.waitForChange(screen, { what: `the screen to move on from ${q.id}`, ...wait });
   }

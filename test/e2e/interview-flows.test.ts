@@ -5,7 +5,15 @@ import { existsSync, readFileSync } from 'node:fs';
 import { disposeAll, ptySupport, startTerm, type Term } from './harness.js';
 import { makeWorkspace, type Workspace } from './env.js';
 import { answerOrder, dryRun, squash, typeInterview, type Script } from './interview-driver.js';
-import { asShown, caseFiles, readCase, readReview, shownResults, solveJson, type SolvedJson } from './review.js';
+import {
+  asShown,
+  caseFiles,
+  readCase,
+  readReview,
+  shownResults,
+  solveJson,
+  type SolvedJson,
+} from './review.js';
 import { SLIDE_ONLY_FAST, SLIDE_ONLY_GUIDED, TWO_SURFACES_AND_YAW } from './scripts.js';
 import { stateFromCase } from '../../src/interview/from-case.js';
 import { firstOpenQuestion, currentQuestion } from '../../src/interview/derived.js';
@@ -45,92 +53,113 @@ async function typeWhole(script: Script, onAnswer?: (id: string, keys: number) =
 }
 
 /** The figures of a solution, for comparing two ways of entering the same case. */
-const figures = (s: SolvedJson) => s.analyses.map((a) => ({ kind: a.kind, speed: a.speed, minimum: a.minimum }));
+const figures = (s: SolvedJson) =>
+  s.analyses.map((a) => ({ kind: a.kind, speed: a.speed, minimum: a.minimum }));
 
 let oneGo: Promise<Awaited<ReturnType<typeof typeWhole>> & { solved: SolvedJson }> | undefined;
 /** Issue 3's case typed in one go; shared by the issue 3 and issue 4 tests. */
 const typedInOneGo = () =>
-  (oneGo ??= typeWhole(TWO_SURFACES_AND_YAW).then(async (r) => ({ ...r, solved: await solveJson(r.files[0]!) })));
+  (oneGo ??= typeWhole(TWO_SURFACES_AND_YAW).then(async (r) => ({
+    ...r,
+    solved: await solveJson(r.files[0]!),
+  })));
 
-describe.skipIf(!pty.ok)(`typing whole cases into the terminal${pty.ok ? '' : ` (skipped: ${pty.reason})`}`, () => {
-  afterEach(disposeAll);
+describe.skipIf(!pty.ok)(
+  `typing whole cases into the terminal${pty.ok ? '' : ` (skipped: ${pty.reason})`}`,
+  () => {
+    afterEach(disposeAll);
 
-  it('issue 3: a two-surface downhill slide with a partly failed brake and a banked yaw; the review equals solve --json of the saved file', async () => {
-    const { lines, files, solved } = await typedInOneGo();
-    expect(files).toHaveLength(1);
-    const shown = shownResults(lines);
-    expect(shown).toHaveLength(2);
-    expect(shown).toEqual(asShown(solved));
-    expect(solved.analyses.map((a) => a.kind)).toEqual(['skid', 'yaw']);
-    // The review also says what the figure means and its cautions.
-    expect(lines.join('\n')).toMatch(/Cautions/);
-    expect(lines.join('\n')).toMatch(/Posted limit 40 mph/);
-  }, 120_000);
+    it('issue 3: a two-surface downhill slide with a partly failed brake and a banked yaw; the review equals solve --json of the saved file', async () => {
+      const { lines, files, solved } = await typedInOneGo();
+      expect(files).toHaveLength(1);
+      const shown = shownResults(lines);
+      expect(shown).toHaveLength(2);
+      expect(shown).toEqual(asShown(solved));
+      expect(solved.analyses.map((a) => a.kind)).toEqual(['skid', 'yaw']);
+      // The review also says what the figure means and its cautions.
+      expect(lines.join('\n')).toMatch(/Cautions/);
+      expect(lines.join('\n')).toMatch(/Posted limit 40 mph/);
+    }, 120_000);
 
-  it('issue 4: answer half, SIGKILL the terminal, `skidcase resume`, finish: nothing asked twice, result equal to the case typed in one go', async () => {
-    const whole = await typedInOneGo();
-    const ws = workspace();
-    const order = answerOrder(TWO_SURFACES_AND_YAW);
-    const half = Math.floor(order.length / 2);
-    const first = await startTerm({ cwd: ws.root, env: ws.env, cols: 110, rows: 40 });
-    await openNewCase(first, ws);
-    await typeInterview(first, TWO_SURFACES_AND_YAW, { maxAnswers: half });
-    const lastId = order[half - 1]!;
-    // Kill only once the save of the last answer has landed on disk, as issue 4 requires of a save
-    // that "had returned"; then the kill is as abrupt as a closed terminal window.
-    const file = await waitForSavedAnswer(ws, lastId);
-    first.kill('SIGKILL');
-    expect((await first.waitForExit()).signal).toBe(9);
+    it('issue 4: answer half, SIGKILL the terminal, `skidcase resume`, finish: nothing asked twice, result equal to the case typed in one go', async () => {
+      const whole = await typedInOneGo();
+      const ws = workspace();
+      const order = answerOrder(TWO_SURFACES_AND_YAW);
+      const half = Math.floor(order.length / 2);
+      const first = await startTerm({ cwd: ws.root, env: ws.env, cols: 110, rows: 40 });
+      await openNewCase(first, ws);
+      await typeInterview(first, TWO_SURFACES_AND_YAW, { maxAnswers: half });
+      const lastId = order[half - 1]!;
+      // Kill only once the save of the last answer has landed on disk, as issue 4 requires of a save
+      // that "had returned"; then the kill is as abrupt as a closed terminal window.
+      const file = await waitForSavedAnswer(ws, lastId);
+      first.kill('SIGKILL');
+      expect((await first.waitForExit()).signal).toBe(9);
 
-    const saved = loadCaseText(readFileSync(file, 'utf8'));
-    expect(saved.ok).toBe(true);
-    if (!saved.ok) return;
-    const resumedState = stateFromCase(saved.case);
-    const landing = { ...resumedState, cursor: firstOpenQuestion(resumedState) };
-    // Resume lands on the first question not yet answered: the one after the last typed.
-    const expectNext = currentQuestion(dryRun(TWO_SURFACES_AND_YAW, { maxAnswers: half }));
-    expect(expectNext?.id).toBe(order[half]);
-    expect(currentQuestion(landing)?.id).toBe(order[half]);
+      const saved = loadCaseText(readFileSync(file, 'utf8'));
+      expect(saved.ok).toBe(true);
+      if (!saved.ok) return;
+      const resumedState = stateFromCase(saved.case);
+      const landing = { ...resumedState, cursor: firstOpenQuestion(resumedState) };
+      // Resume lands on the first question not yet answered: the one after the last typed.
+      const expectNext = currentQuestion(dryRun(TWO_SURFACES_AND_YAW, { maxAnswers: half }));
+      expect(expectNext?.id).toBe(order[half]);
+      expect(currentQuestion(landing)?.id).toBe(order[half]);
 
-    const second = await startTerm({ cwd: ws.root, env: ws.env, cols: 110, rows: 40, args: ['resume', saved.case.id] });
-    await second.waitFor((s) => squash(s).includes(squash(expectNext!.prompt).slice(0, 26)), {
-      what: `the resumed case on the first unanswered question, ${expectNext!.id}`,
-    });
-    await typeInterview(second, TWO_SURFACES_AND_YAW, {}, landing);
-    await second.waitFor(REVIEW, { what: 'the review' });
-    const shown = shownResults(await readReview(second));
-    const solved = await solveJson(file);
-    expect(shown).toEqual(asShown(solved));
-    expect(figures(solved)).toEqual(figures(whole.solved));
-    const strip = (c: Record<string, unknown>) => {
-      const { id: _i, created: _c, updated: _u, interview: _v, ...rest } = c;
-      return rest;
-    };
-    expect(strip(readCase(file))).toEqual(strip(readCase(whole.files[0]!)));
-  }, 180_000);
+      const second = await startTerm({
+        cwd: ws.root,
+        env: ws.env,
+        cols: 110,
+        rows: 40,
+        args: ['resume', saved.case.id],
+      });
+      await second.waitFor((s) => squash(s).includes(squash(expectNext!.prompt).slice(0, 26)), {
+        what: `the resumed case on the first unanswered question, ${expectNext!.id}`,
+      });
+      await typeInterview(second, TWO_SURFACES_AND_YAW, {}, landing);
+      await second.waitFor(REVIEW, { what: 'the review' });
+      const shown = shownResults(await readReview(second));
+      const solved = await solveJson(file);
+      expect(shown).toEqual(asShown(solved));
+      expect(figures(solved)).toEqual(figures(whole.solved));
+      const strip = (c: Record<string, unknown>) => {
+        const { id: _i, created: _c, updated: _u, interview: _v, ...rest } = c;
+        return rest;
+      };
+      expect(strip(readCase(file))).toEqual(strip(readCase(whole.files[0]!)));
+    }, 180_000);
 
-  it('issue 5: the two-surface downhill slide by the fast path takes far fewer key presses than question by question, same figures; report written from the review', async () => {
-    const slideKeys = { guided: 0, fast: 0 };
-    const isSlide = (id: string) => /^a0\.(surfaces|segcount|quick|seg\d)/.test(id);
-    const guided = await typeWhole(SLIDE_ONLY_GUIDED, (id, k) => (slideKeys.guided += isSlide(id) ? k : 0));
-    const fast = await typeWhole(SLIDE_ONLY_FAST, (id, k) => (slideKeys.fast += isSlide(id) ? k : 0));
-    const [g, f] = await Promise.all([solveJson(guided.files[0]!), solveJson(fast.files[0]!)]);
-    console.log(
-      `issue 5 key presses, whole case: question by question ${guided.keys}, fast path ${fast.keys}; ` +
-        `the two segments alone: ${slideKeys.guided} question by question (labels typed), ${slideKeys.fast} on one line (no labels)`,
-    );
-    expect(figures(f)).toEqual(figures(g));
-    expect(shownResults(fast.lines)).toEqual(asShown(f));
-    expect(fast.keys).toBeLessThan(guided.keys * 0.6);
+    it('issue 5: the two-surface downhill slide by the fast path takes far fewer key presses than question by question, same figures; report written from the review', async () => {
+      const slideKeys = { guided: 0, fast: 0 };
+      const isSlide = (id: string) => /^a0\.(surfaces|segcount|quick|seg\d)/.test(id);
+      const guided = await typeWhole(
+        SLIDE_ONLY_GUIDED,
+        (id, k) => (slideKeys.guided += isSlide(id) ? k : 0),
+      );
+      const fast = await typeWhole(
+        SLIDE_ONLY_FAST,
+        (id, k) => (slideKeys.fast += isSlide(id) ? k : 0),
+      );
+      const [g, f] = await Promise.all([solveJson(guided.files[0]!), solveJson(fast.files[0]!)]);
+      console.log(
+        `issue 5 key presses, whole case: question by question ${guided.keys}, fast path ${fast.keys}; ` +
+          `the two segments alone: ${slideKeys.guided} question by question (labels typed), ${slideKeys.fast} on one line (no labels)`,
+      );
+      expect(figures(f)).toEqual(figures(g));
+      expect(shownResults(fast.lines)).toEqual(asShown(f));
+      expect(fast.keys).toBeLessThan(guided.keys * 0.6);
 
-    // w on the review writes the report beside the case file; its "at least" is the solved one.
-    await fast.t.type('w');
-    const screen = await fast.t.waitFor(/Report written to (\S+)/, { what: 'the report confirmation' });
-    const path = squash(screen).match(/Report written to (\S+)/)![1]!;
-    expect(existsSync(path)).toBe(true);
-    expect(readFileSync(path, 'utf8')).toContain(`at least ${f.analyses[0]!.minimum} mph`);
-  }, 180_000);
-});
+      // w on the review writes the report beside the case file; its "at least" is the solved one.
+      await fast.t.type('w');
+      const screen = await fast.t.waitFor(/Report written to (\S+)/, {
+        what: 'the report confirmation',
+      });
+      const path = squash(screen).match(/Report written to (\S+)/)![1]!;
+      expect(existsSync(path)).toBe(true);
+      expect(readFileSync(path, 'utf8')).toContain(`at least ${f.analyses[0]!.minimum} mph`);
+    }, 180_000);
+  },
+);
 
 /** Polls the case file until its saved interview holds the answer `id`; returns the file. */
 async function waitForSavedAnswer(ws: Workspace, id: string, timeoutMs = 10_000): Promise<string> {
@@ -145,7 +174,8 @@ async function waitForSavedAnswer(ws: Workspace, id: string, timeoutMs = 10_000)
         // mid-write is impossible with an atomic save; a parse error would fail the next check
       }
     }
-    if (Date.now() > deadline) throw new Error(`the answer ${id} was not saved within ${timeoutMs} ms`);
+    if (Date.now() > deadline)
+      throw new Error(`the answer ${id} was not saved within ${timeoutMs} ms`);
     await new Promise((r) => setTimeout(r, 20));
   }
 }

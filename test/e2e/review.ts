@@ -67,21 +67,34 @@ export function caseFiles(dir: string): string[] {
 export interface SolvedJson {
   id: string;
   units: { length: string; speed: string };
-  analyses: { id: string; kind: string; speed: { value: number; low: number; high: number }; minimum: number }[];
+  analyses: {
+    id: string;
+    kind: string;
+    speed: { value: number; low: number; high: number };
+    minimum: number;
+  }[];
   postedLimit?: { value: number; exceededAtMinimum: boolean };
 }
 
 /** Runs the built `skidcase solve FILE --json` and parses what it printed (exit 0 expected). */
 export function solveJson(file: string): Promise<SolvedJson> {
   return new Promise((resolve, reject) =>
-    execFile(process.execPath, [BINARY, 'solve', file, '--json'], { env: childEnv() }, (e, out, err) => {
-      if (e) return reject(new Error(`solve ${file} failed (${(e as { code?: number }).code}): ${err}`));
-      try {
-        resolve(JSON.parse(out) as SolvedJson);
-      } catch {
-        reject(new Error(`solve --json did not print JSON: ${out.slice(0, 200)}`));
-      }
-    }),
+    execFile(
+      process.execPath,
+      [BINARY, 'solve', file, '--json'],
+      { env: childEnv() },
+      (e, out, err) => {
+        if (e)
+          return reject(
+            new Error(`solve ${file} failed (${(e as { code?: number }).code}): ${err}`),
+          );
+        try {
+          resolve(JSON.parse(out) as SolvedJson);
+        } catch {
+          reject(new Error(`solve --json did not print JSON: ${out.slice(0, 200)}`));
+        }
+      },
+    ),
   );
 }
 
@@ -97,4 +110,5 @@ export function asShown(sol: SolvedJson): ShownResult[] {
 }
 
 /** The parsed case file. */
-export const readCase = (file: string) => JSON.parse(readFileSync(file, 'utf8')) as Record<string, unknown>;
+export const readCase = (file: string) =>
+  JSON.parse(readFileSync(file, 'utf8')) as Record<string, unknown>;

@@ -77,10 +77,24 @@ const YAW: Script = {
 };
 
 /** Issue 3: the two-surface downhill slide with a partly failed brake, and a banked yaw. */
-export const TWO_SURFACES_AND_YAW: Script = { ...CASE, ...VEHICLE, ...SLIDE_START, ...SLIDE_GUIDED, ...SLIDE_END, ...YAW };
+export const TWO_SURFACES_AND_YAW: Script = {
+  ...CASE,
+  ...VEHICLE,
+  ...SLIDE_START,
+  ...SLIDE_GUIDED,
+  ...SLIDE_END,
+  ...YAW,
+};
 
 /** Issue 5: the slide alone, answered question by question. */
-export const SLIDE_ONLY_GUIDED: Script = { ...CASE, ...VEHICLE, ...SLIDE_START, ...SLIDE_GUIDED, ...SLIDE_END, 'a0.more': 'no' };
+export const SLIDE_ONLY_GUIDED: Script = {
+  ...CASE,
+  ...VEHICLE,
+  ...SLIDE_START,
+  ...SLIDE_GUIDED,
+  ...SLIDE_END,
+  'a0.more': 'no',
+};
 
 /**
  * Issue 5: the same slide as an experienced investigator enters it: Enter for every default and
@@ -114,7 +128,14 @@ export const SLIDE_ONLY_FAST: Script = {
 };
 
 /** The slide's segments on one line with their labels: the same content as SLIDE_GUIDED. */
-export const SLIDE_ONLY_QUICK: Script = { ...CASE, ...VEHICLE, ...SLIDE_START, ...SLIDE_QUICK, ...SLIDE_END, 'a0.more': 'no' };
+export const SLIDE_ONLY_QUICK: Script = {
+  ...CASE,
+  ...VEHICLE,
+  ...SLIDE_START,
+  ...SLIDE_QUICK,
+  ...SLIDE_END,
+  'a0.more': 'no',
+};
 
 /**
  * For the bad-input catalogue: the other numeric questions. An estimated braking efficiency, one

@@ -3,7 +3,10 @@
 import { afterAll, afterEach, describe, expect, it } from 'vitest';
 import { spawn } from 'node:child_process';
 import { BINARY, disposeAll, ptySupport, startTerm, type Term } from './harness.js';
-import { childEnv, makeWorkspace } from './env.js';
+import { childEnv, makeWorkspace, type Workspace } from './env.js';
+import { readFileSync } from 'node:fs';
+import { caseFiles } from './review.js';
+import { loadCaseText } from '../../src/case/load.js';
 import { colourCodes } from './ansi.js';
 import { squash, typeInterview, type Script } from './interview-driver.js';
 
@@ -23,7 +26,11 @@ afterAll(() => ws.cleanup());
 /** Runs the binary with pipes (no terminal at all) and collects what it printed. */
 function runPiped(args: string[], stdin: 'pipe' | 'ignore') {
   return new Promise<{ code: number | null; out: string; err: string }>((resolve) => {
-    const p = spawn(process.execPath, [BINARY, ...args], { cwd: ws.root, env: childEnv(ws.env), stdio: [stdin, 'pipe', 'pipe'] });
+    const p = spawn(process.execPath, [BINARY, ...args], {
+      cwd: ws.root,
+      env: childEnv(ws.env),
+      stdio: [stdin, 'pipe', 'pipe'],
+    });
     let out = '';
     let err = '';
     p.stdout!.on('data', (d) => (out += d));
@@ -42,21 +49,26 @@ describe('without a terminal', () => {
     [[], 'pipe'],
     [[], 'ignore'],
     [['resume'], 'pipe'],
-  ] as const)('skidcase %j with stdin %s says to use solve and exits non-zero', async (args, stdin) => {
-    const r = await runPiped([...args], stdin);
-    expect(r.code).not.toBe(0);
-    expect(r.code).not.toBeNull(); // ended by itself, not by the 15 s guard
-    expect(r.out + r.err).toMatch(/skidcase solve FILE/);
-    expect(r.out + r.err).not.toMatch(/\n\s+at\s/); // no stack trace
-  });
+  ] as const)(
+    'skidcase %j with stdin %s says to use solve and exits non-zero',
+    async (args, stdin) => {
+      const r = await runPiped([...args], stdin);
+      expect(r.code).not.toBe(0);
+      expect(r.code).not.toBeNull(); // ended by itself, not by the 15 s guard
+      expect(r.out + r.err).toMatch(/skidcase solve FILE/);
+      expect(r.out + r.err).not.toMatch(/\n\s+at\s/); // no stack trace
+    },
+  );
 });
 
 const pty = await ptySupport();
 if (!pty.ok) console.warn(`terminal edge tests skipped: ${pty.reason}`);
 
 /** Opens the home screen and starts a new case, landing on the first question. */
-async function newCase(t: Term) {
-  await t.waitFor(ws.sessions.slice(-20), { what: 'the home screen naming the sessions folder' });
+async function newCase(t: Term, where: Workspace = ws) {
+  await t.waitFor(where.sessions.slice(-20), {
+    what: 'the home screen naming the sessions folder',
+  });
   await t.type('n');
   return t.waitFor(/Case or report reference/, { what: 'the first question' });
 }
@@ -93,6 +105,32 @@ describe.skipIf(!pty.ok)(`in a terminal${pty.ok ? '' : ` (skipped: ${pty.reason}
     const next = await t.waitFor(/When did the crash happen/);
     expect(t.wrappedRows()).toEqual([]);
     expect(next.split('\n').every((l) => l.length <= 60)).toBe(true);
+  });
+
+  it('Ctrl+C twice in quick succession saves and leaves cleanly: exit 0, the file whole, every answer kept', async () => {
+    const own = makeWorkspace();
+    try {
+      const t = await startTerm({ cwd: own.root, env: own.env });
+      await newCase(t, own);
+      await typeInterview(
+        t,
+        { ...CASE_START, 'details.reference': 'CTRL-C-1', limit: '35' },
+        { stopAt: 'vehicle.label' },
+      );
+      await t.press('ctrl-c');
+      await t.press('ctrl-c');
+      expect((await t.waitForExit()).exitCode).toBe(0);
+      const files = caseFiles(own.sessions);
+      expect(files).toHaveLength(1);
+      const loaded = loadCaseText(readFileSync(files[0]!, 'utf8'));
+      expect(loaded.ok).toBe(true);
+      if (loaded.ok) {
+        expect(loaded.case.details?.reference).toBe('CTRL-C-1');
+        expect(loaded.case.postedLimit).toBe(35);
+      }
+    } finally {
+      own.cleanup();
+    }
   });
 
   it('resized from 100 to 60 columns in the middle of an answer, keeps the typed text, redraws once, and takes the answer', async () => {

@@ -5,7 +5,13 @@ import { describe, expect, it } from 'vitest';
 import { contextOf, reduce, solveDraft } from '../../src/interview/index.js';
 import { dryRun } from '../e2e/interview-driver.js';
 import { TWO_SURFACES_AND_YAW } from '../e2e/scripts.js';
-import { allNumericFamilies, family, numericQuestions, stateAt, type AtQuestion } from './question-states.js';
+import {
+  allNumericFamilies,
+  family,
+  numericQuestions,
+  stateAt,
+  type AtQuestion,
+} from './question-states.js';
 
 /** How a question family takes numbers, from the domain (docs/case-file.md, DOMAIN.md). */
 interface Traits {
@@ -52,13 +58,52 @@ type Expect = 'accepted' | RegExp;
 const CATALOGUE: [string, (t: Traits) => Expect][] = [
   ['', (t) => (t.emptyOk ? 'accepted' : /empty|give at least one|type each/i)],
   ['   ', (t) => (t.emptyOk ? 'accepted' : /empty|give at least one|type each/i)],
-  ['abc', (t) => (t.pairs ? /speed\/distance/ : /'abc' is not a (whole )?number|not a row of the reference table/)],
-  ['-5', (t) => (t.pairs ? /speed\/distance/ : t.unsigned ? /minus sign.*(uphill or downhill|toward or away)/ : t.count ? /whole number from 1/ : /greater than 0|at least 0/)],
-  ['0', (t) => (t.pairs ? /speed\/distance/ : t.zeroOk ? 'accepted' : t.count ? /whole number from 1/ : /greater than 0/)],
+  [
+    'abc',
+    (t) =>
+      t.pairs
+        ? /speed\/distance/
+        : /'abc' is not a (whole )?number|not a row of the reference table/,
+  ],
+  [
+    '-5',
+    (t) =>
+      t.pairs
+        ? /speed\/distance/
+        : t.unsigned
+          ? /minus sign.*(uphill or downhill|toward or away)/
+          : t.count
+            ? /whole number from 1/
+            : /greater than 0|at least 0/,
+  ],
+  [
+    '0',
+    (t) =>
+      t.pairs
+        ? /speed\/distance/
+        : t.zeroOk
+          ? 'accepted'
+          : t.count
+            ? /whole number from 1/
+            : /greater than 0/,
+  ],
   ['1e309', (t) => (t.pairs ? /speed\/distance/ : t.count ? /not a whole number/ : /too large/)],
   ['NaN', (t) => (t.pairs ? /speed\/distance/ : t.count ? /not a whole number/ : /finite number/)],
-  ['80 ftt', (t) => (t.pairs ? /speed\/distance/ : t.count ? /not a whole number/ : /unknown unit 'ftt'/)],
-  ['0.9-0.6', (t) => (t.pairs ? /speed\/distance/ : t.count ? /not a whole number/ : t.single ? /one value/ : /low end comes first/)],
+  [
+    '80 ftt',
+    (t) => (t.pairs ? /speed\/distance/ : t.count ? /not a whole number/ : /unknown unit 'ftt'/),
+  ],
+  [
+    '0.9-0.6',
+    (t) =>
+      t.pairs
+        ? /speed\/distance/
+        : t.count
+          ? /not a whole number/
+          : t.single
+            ? /one value/
+            : /low end comes first/,
+  ],
 ];
 
 const questions = numericQuestions();
@@ -75,26 +120,36 @@ describe('the bad-input catalogue', () => {
     expect([...walked].filter((f) => !(f in TRAITS))).toEqual([]);
   });
 
-  const rows = questions.flatMap((at) => CATALOGUE.map(([input, rule]) => [at.q.id, input, rule(TRAITS[family(at.q.id)] ?? {}), at] as const));
-  it.each(rows.map(([id, input, want, at]) => [id, JSON.stringify(input), String(want), input, want, at] as const))(
-    '%s, typed %s: %s',
-    (_id, _shown, _want, input, want, at) => {
-      const message = messageFor(at, input);
-      if (want === 'accepted') expect(message).toBeUndefined();
-      else {
-        expect(message, 'the answer must be refused with a message').toBeDefined();
-        expect(message).toMatch(want);
-        // Echoes what was typed at most; never a broken number of the program's own.
-        expect(message!.split(input.trim() || '\u0000').join('')).not.toMatch(/NaN|Infinity|undefined/);
-        // The question's own check says the same as the screen (validate is what the screens call).
-        if (input.trim() !== '') expect(at.q.validate(input, contextOf(at.state.answers))).toBe(message);
-      }
+  const rows = questions.flatMap((at) =>
+    CATALOGUE.map(
+      ([input, rule]) => [at.q.id, input, rule(TRAITS[family(at.q.id)] ?? {}), at] as const,
+    ),
+  );
+  it.each(
+    rows.map(
+      ([id, input, want, at]) =>
+        [id, JSON.stringify(input), String(want), input, want, at] as const,
+    ),
+  )('%s, typed %s: %s', (_id, _shown, _want, input, want, at) => {
+    const message = messageFor(at, input);
+    if (want === 'accepted') expect(message).toBeUndefined();
+    else {
+      expect(message, 'the answer must be refused with a message').toBeDefined();
+      expect(message).toMatch(want);
+      // Echoes what was typed at most; never a broken number of the program's own.
+      for (const w of message!.match(/NaN|Infinity|undefined/g) ?? []) expect(input).toContain(w);
+      // The question's own check says the same as the screen (validate is what the screens call).
+      if (input.trim() !== '')
+        expect(at.q.validate(input, contextOf(at.state.answers))).toBe(message);
+    }
+  });
+
+  it.each(['22', '30', '3 (2-25)'])(
+    'a middle ordinate of %s ft, at least half the 44 ft chord, is refused naming the chord',
+    (text) => {
+      expect(messageFor(stateAt('a1.ordinate'), text)).toMatch(/less than half the chord/);
     },
   );
-
-  it.each(['22', '30', '3 (2-25)'])('a middle ordinate of %s ft, at least half the 44 ft chord, is refused naming the chord', (text) => {
-    expect(messageFor(stateAt('a1.ordinate'), text)).toMatch(/less than half the chord/);
-  });
 
   it('a downhill grade steeper than the drag factor can hold is refused, or flagged, at the question', () => {
     // Segment 2: drag factor 0.45-0.55, n at most about 0.9, so a 60% downhill cannot be slowed by sliding.

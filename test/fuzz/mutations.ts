@@ -12,20 +12,26 @@ type PathPart = string | number;
 /** Every path in a JSON value (objects' keys and arrays' indices), the root excluded. */
 export function allPaths(v: Json, prefix: PathPart[] = []): PathPart[][] {
   const out: PathPart[][] = [];
-  if (Array.isArray(v)) v.forEach((x, i) => out.push([...prefix, i], ...allPaths(x, [...prefix, i])));
+  if (Array.isArray(v))
+    v.forEach((x, i) => out.push([...prefix, i], ...allPaths(x, [...prefix, i])));
   else if (v !== null && typeof v === 'object')
-    for (const [k, x] of Object.entries(v)) out.push([...prefix, k], ...allPaths(x, [...prefix, k]));
+    for (const [k, x] of Object.entries(v))
+      out.push([...prefix, k], ...allPaths(x, [...prefix, k]));
   return out;
 }
 
 /** `['analyses', 0, 'marks', 2]` -> `analyses[0].marks[2]`, the way messages name a field. */
 export function pathText(p: readonly PathPart[]): string {
-  return p.reduce<string>((s, x) => (typeof x === 'number' ? `${s}[${x}]` : s ? `${s}.${x}` : x), '');
+  return p.reduce<string>(
+    (s, x) => (typeof x === 'number' ? `${s}[${x}]` : s ? `${s}.${x}` : x),
+    '',
+  );
 }
 
 function parentOf(doc: Json, p: PathPart[]): Json | undefined {
   let cur: Json | undefined = doc;
-  for (const k of p.slice(0, -1)) cur = cur && typeof cur === 'object' ? (cur as Record<PathPart, Json>)[k] : undefined;
+  for (const k of p.slice(0, -1))
+    cur = cur && typeof cur === 'object' ? (cur as Record<PathPart, Json>)[k] : undefined;
   return cur;
 }
 
@@ -41,13 +47,29 @@ export type Mutation =
   | { op: 'duplicate-analysis'; pick: number };
 
 const badValues: fc.Arbitrary<{ value: Json | typeof INFINITE; label: string }> = fc.oneof(
-  fc.constantFrom(-1, 0, 1, -0.5, 2.5, 99.9, 100, 1e6).map((n) => ({ value: n as Json, label: String(n) })),
+  fc
+    .constantFrom(-1, 0, 1, -0.5, 2.5, 99.9, 100, 1e6)
+    .map((n) => ({ value: n as Json, label: String(n) })),
   fc.constant({ value: INFINITE, label: '1e309' }),
-  fc.constantFrom('NaN', 'Infinity', '80 ft', '', '0.72', 'abc').map((s) => ({ value: s as Json, label: JSON.stringify(s) })),
-  fc.constantFrom<Json>(null, true, false, [], {}, [1, 2], { value: 1, low: 2, high: 0 }, { value: 'x' }, { low: 1 }).map((v) => ({
-    value: v,
-    label: JSON.stringify(v),
-  })),
+  fc
+    .constantFrom('NaN', 'Infinity', '80 ft', '', '0.72', 'abc')
+    .map((s) => ({ value: s as Json, label: JSON.stringify(s) })),
+  fc
+    .constantFrom<Json>(
+      null,
+      true,
+      false,
+      [],
+      {},
+      [1, 2],
+      { value: 1, low: 2, high: 0 },
+      { value: 'x' },
+      { low: 1 },
+    )
+    .map((v) => ({
+      value: v,
+      label: JSON.stringify(v),
+    })),
 );
 
 /**
@@ -64,9 +86,24 @@ function tweak(v: number, how: (typeof TWEAKS)[number]): number {
 
 export const mutationArb: fc.Arbitrary<Mutation> = fc.oneof(
   { weight: 3, arbitrary: fc.nat().map((pick): Mutation => ({ op: 'delete', pick })) },
-  { weight: 5, arbitrary: fc.tuple(fc.nat(), badValues).map(([pick, b]): Mutation => ({ op: 'set', pick, ...b })) },
-  { weight: 2, arbitrary: fc.tuple(fc.nat(), fc.constantFrom(...ENUM_POOL)).map(([pick, value]): Mutation => ({ op: 'swap-enum', pick, value })) },
-  { weight: 6, arbitrary: fc.tuple(fc.nat(), fc.constantFrom(...TWEAKS)).map(([pick, how]): Mutation => ({ op: 'tweak', pick, how })) },
+  {
+    weight: 5,
+    arbitrary: fc
+      .tuple(fc.nat(), badValues)
+      .map(([pick, b]): Mutation => ({ op: 'set', pick, ...b })),
+  },
+  {
+    weight: 2,
+    arbitrary: fc
+      .tuple(fc.nat(), fc.constantFrom(...ENUM_POOL))
+      .map(([pick, value]): Mutation => ({ op: 'swap-enum', pick, value })),
+  },
+  {
+    weight: 6,
+    arbitrary: fc
+      .tuple(fc.nat(), fc.constantFrom(...TWEAKS))
+      .map(([pick, how]): Mutation => ({ op: 'tweak', pick, how })),
+  },
   { weight: 1, arbitrary: fc.constant<Mutation>({ op: 'duplicate-id' }) },
   { weight: 1, arbitrary: fc.nat().map((pick): Mutation => ({ op: 'duplicate-analysis', pick })) },
 );
@@ -83,7 +120,10 @@ export function applyMutation(doc: Json, m: Mutation): string {
       return `duplicated analyses[${m.pick % analyses.length}] (same id twice)`;
     }
     const first = analyses[0] as { id?: Json };
-    analyses.push({ ...(structuredClone(analyses[analyses.length - 1]) as object), id: first.id ?? null } as Json);
+    analyses.push({
+      ...(structuredClone(analyses[analyses.length - 1]) as object),
+      id: first.id ?? null,
+    } as Json);
     return `added an analysis with the id of analyses[0]`;
   }
   const want = m.op === 'swap-enum' ? 'string' : m.op === 'tweak' ? 'number' : undefined;
@@ -108,7 +148,8 @@ export function applyMutation(doc: Json, m: Mutation): string {
 
 function get(doc: Json, p: PathPart[]): Json | undefined {
   let cur: Json | undefined = doc;
-  for (const k of p) cur = cur && typeof cur === 'object' ? (cur as Record<PathPart, Json>)[k] : undefined;
+  for (const k of p)
+    cur = cur && typeof cur === 'object' ? (cur as Record<PathPart, Json>)[k] : undefined;
   return cur;
 }
 
@@ -116,7 +157,8 @@ function get(doc: Json, p: PathPart[]): Json | undefined {
 export function pathIsReal(doc: unknown, text: string): boolean {
   if (text === '(file)') return true;
   const parts: PathPart[] = [];
-  for (const m of text.matchAll(/([^.[\]]+)|\[(\d+)\]/g)) parts.push(m[2] !== undefined ? Number(m[2]) : m[1]!);
+  for (const m of text.matchAll(/([^.[\]]+)|\[(\d+)\]/g))
+    parts.push(m[2] !== undefined ? Number(m[2]) : m[1]!);
   if (parts.length === 0) return false;
   const parent = parts.length === 1 ? doc : get(doc as Json, parts.slice(0, -1));
   return parent !== null && typeof parent === 'object';
@@ -139,13 +181,19 @@ export const mutatedCaseArb: fc.Arbitrary<MutatedCase> = fc
       { weight: 1, arbitrary: fc.array(mutationArb, { minLength: 2, maxLength: 3 }) },
     ),
     // about one file in eight cut short (fc.option's freq is the odds of *no* value, hence nil: 7)
-    truncateAt: fc.oneof({ weight: 7, arbitrary: fc.constant(null) }, { weight: 1, arbitrary: fc.double({ min: 0, max: 1, noNaN: true }) }),
+    truncateAt: fc.oneof(
+      { weight: 7, arbitrary: fc.constant(null) },
+      { weight: 1, arbitrary: fc.double({ min: 0, max: 1, noNaN: true }) },
+    ),
     pretty: fc.boolean(),
   })
   .map(({ seed, mutations, truncateAt, pretty }) => {
     const doc = structuredClone(SEEDS[seed]) as Json;
     const did = mutations.map((m) => applyMutation(doc, m));
-    let text = JSON.stringify(doc, null, pretty ? 2 : undefined).replaceAll(`"${INFINITE}"`, '1e309');
+    let text = JSON.stringify(doc, null, pretty ? 2 : undefined).replaceAll(
+      `"${INFINITE}"`,
+      '1e309',
+    );
     let finalDoc: unknown = doc;
     if (truncateAt !== null) {
       const at = Math.floor(truncateAt * (text.length - 1));

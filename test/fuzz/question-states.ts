@@ -59,6 +59,7 @@ export function numericQuestions(): AtQuestion[] {
 /** Families of every numeric question the interview knows after the scripts' answers. */
 export function allNumericFamilies(): Set<string> {
   const fams = new Set<string>();
-  for (const script of SCRIPTS) for (const q of allQuestions(dryRun(script).answers)) if (isNumeric(q)) fams.add(family(q.id));
+  for (const script of SCRIPTS)
+    for (const q of allQuestions(dryRun(script).answers)) if (isNumeric(q)) fams.add(family(q.id));
   return fams;
 }

@@ -14,7 +14,13 @@ export const SEEDS: Record<string, unknown> = {
     vehicle: {
       label: 'invented hatchback',
       frontAxleShare: { value: 0.6, low: 0.57, high: 0.63 },
-      brakes: { mode: 'wheels', frontLeft: 1, frontRight: 1, rearLeft: 0, rearRight: { value: 0.4, low: 0.2, high: 0.6 } },
+      brakes: {
+        mode: 'wheels',
+        frontLeft: 1,
+        frontRight: 1,
+        rearLeft: 0,
+        rearRight: { value: 0.4, low: 0.2, high: 0.6 },
+      },
     },
     analyses: [
       {
@@ -32,7 +38,13 @@ export const SEEDS: Record<string, unknown> = {
     version: 1,
     id: 'fuzz-three',
     units: 'imperial',
-    vehicle: { brakes: { mode: 'estimate', efficiency: { value: 0.85, low: 0.8, high: 0.9 }, basis: 'inspection' } },
+    vehicle: {
+      brakes: {
+        mode: 'estimate',
+        efficiency: { value: 0.85, low: 0.8, high: 0.9 },
+        basis: 'inspection',
+      },
+    },
     analyses: [
       {
         id: 'skid-a',
@@ -42,13 +54,32 @@ export const SEEDS: Record<string, unknown> = {
           {
             label: 'lane',
             length: { value: 41.0, low: 40.5, high: 41.5 },
-            drag: { source: 'test-skids', tests: [{ speed: 30, distance: 44.0 }, { speed: 31, distance: 46.5 }] },
+            drag: {
+              source: 'test-skids',
+              tests: [
+                { speed: 30, distance: 44.0 },
+                { speed: 31, distance: 46.5 },
+              ],
+            },
             grade: { value: -2.5, low: -3, high: -2 },
           },
-          { label: 'shoulder', length: 18, drag: { source: 'sled', weight: 60, pulls: [31, 33, 30] }, grade: -2 },
-          { label: 'verge', length: 9.5, drag: { source: 'decelerometer', readings: [0.41, 0.44] } },
+          {
+            label: 'shoulder',
+            length: 18,
+            drag: { source: 'sled', weight: 60, pulls: [31, 33, 30] },
+            grade: -2,
+          },
+          {
+            label: 'verge',
+            length: 9.5,
+            drag: { source: 'decelerometer', readings: [0.41, 0.44] },
+          },
         ],
-        end: { mode: 'speed', speed: { value: 12, low: 8, high: 15 }, basis: 'invented momentum estimate' },
+        end: {
+          mode: 'speed',
+          speed: { value: 12, low: 8, high: 15 },
+          basis: 'invented momentum estimate',
+        },
       },
     ],
   },
@@ -65,7 +96,14 @@ export const SEEDS: Record<string, unknown> = {
         kind: 'yaw',
         chord: { value: 14.2, low: 14.1, high: 14.3 },
         middleOrdinate: { value: 0.62, low: 0.6, high: 0.64 },
-        drag: { source: 'table', surface: 'asphalt-dry-travelled', value: 0.68, low: 0.6, high: 0.75, band: 'over-30mph' },
+        drag: {
+          source: 'table',
+          surface: 'asphalt-dry-travelled',
+          value: 0.68,
+          low: 0.6,
+          high: 0.75,
+          band: 'over-30mph',
+        },
         superelevation: { value: 3, low: 2.5, high: 3.5 },
         pathAdjustment: 'half-track',
       },
@@ -102,7 +140,30 @@ export const SEEDS: Record<string, unknown> = {
 
 /** Enum values the format knows, and a few it does not, for the swap mutation. */
 export const ENUM_POOL = [
-  'imperial', 'metric', 'skid', 'yaw', 'stop', 'speed', 'all', 'estimate', 'wheels', 'entered', 'table',
-  'test-skids', 'sled', 'decelerometer', 'average', 'longest', 'none', 'half-track', 'under-30mph',
-  'over-30mph', 'skidcase-case', 'Imperial', 'SKID', 'feet', '', 'metre',
+  'imperial',
+  'metric',
+  'skid',
+  'yaw',
+  'stop',
+  'speed',
+  'all',
+  'estimate',
+  'wheels',
+  'entered',
+  'table',
+  'test-skids',
+  'sled',
+  'decelerometer',
+  'average',
+  'longest',
+  'none',
+  'half-track',
+  'under-30mph',
+  'over-30mph',
+  'skidcase-case',
+  'Imperial',
+  'SKID',
+  'feet',
+  '',
+  'metre',
 ];

@@ -29,11 +29,16 @@ export function solveProblems(input: MutatedCase, r: SolveRun, json: boolean): s
       .map((l) => /^([A-Za-z(][\w.()[\]-]*): (.+)$/.exec(l))
       .filter((m): m is RegExpExecArray => m !== null && m[1] !== 'skidcase');
     if (issues.length === 0) p.push(`exit 2 without a "path: message" line on stderr:\n${r.err}`);
-    if (input.doc !== undefined && issues.length > 0 && !issues.some((m) => pathIsReal(input.doc, m[1]!)))
+    if (
+      input.doc !== undefined &&
+      issues.length > 0 &&
+      !issues.some((m) => pathIsReal(input.doc, m[1]!))
+    )
       p.push(`exit 2 but no named path exists in the file: ${issues.map((m) => m[1]).join(', ')}`);
     if (r.out !== '') p.push('exit 2 printed a solution');
   }
-  if (r.code === 3 && !/analyses\[\d+\]/.test(r.err)) p.push(`exit 3 without naming the analysis:\n${r.err}`);
+  if (r.code === 3 && !/analyses\[\d+\]/.test(r.err))
+    p.push(`exit 3 without naming the analysis:\n${r.err}`);
   if (r.code === 0 || (r.code === 3 && !json)) {
     const words = brokenNumbers(r.out, input.text);
     if (words.length) p.push(`${words.join(', ')} in the output:\n${r.out.slice(0, 400)}`);
@@ -44,7 +49,13 @@ export function solveProblems(input: MutatedCase, r: SolveRun, json: boolean): s
 
 /** The JSON contract's figures: finite, low <= value <= high, minimum a whole number <= low. */
 function jsonProblems(out: string): string[] {
-  let sol: { analyses?: { id?: string; speed?: { value: number; low: number; high: number }; minimum?: number }[] };
+  let sol: {
+    analyses?: {
+      id?: string;
+      speed?: { value: number; low: number; high: number };
+      minimum?: number;
+    }[];
+  };
   try {
     sol = JSON.parse(out);
   } catch {
@@ -54,8 +65,13 @@ function jsonProblems(out: string): string[] {
   for (const a of sol.analyses ?? []) {
     const s = a.speed;
     if (!s || ![s.value, s.low, s.high].every(Number.isFinite)) p.push(`${a.id}: speed not finite`);
-    else if (!(s.low <= s.value + 1e-9 && s.value <= s.high + 1e-9)) p.push(`${a.id}: low/value/high out of order`);
-    else if (!(Number.isInteger(a.minimum) && a.minimum! <= s.low + 1e-9 && a.minimum! > s.low - 1 - 1e-9))
+    else if (!(s.low <= s.value + 1e-9 && s.value <= s.high + 1e-9))
+      p.push(`${a.id}: low/value/high out of order`);
+    else if (!(
+      Number.isInteger(a.minimum) &&
+      a.minimum! <= s.low + 1e-9 &&
+      a.minimum! > s.low - 1 - 1e-9
+    ))
       p.push(`${a.id}: minimum ${a.minimum} is not the low end ${s.low} rounded down`);
   }
   return p;

@@ -32,19 +32,28 @@ const fileFor = (text: string) => {
 async function inProcess(file: string, json: boolean): Promise<SolveRun> {
   let out = '';
   let err = '';
-  const code = await solveCommand(file, { json }, { out: (s) => (out += s), err: (s) => (err += s) });
+  const code = await solveCommand(
+    file,
+    { json },
+    { out: (s) => (out += s), err: (s) => (err += s) },
+  );
   return { code, out, err };
 }
 
 function viaBinary(file: string): Promise<SolveRun> {
   return new Promise((resolve) =>
-    execFile(process.execPath, [BINARY, 'solve', file, '--json'], { env: childEnv({ NO_COLOR: '1' }) }, (e, out, err) =>
-      resolve({ code: e ? Number((e as { code?: number }).code ?? 1) : 0, out, err }),
+    execFile(
+      process.execPath,
+      [BINARY, 'solve', file, '--json'],
+      { env: childEnv({ NO_COLOR: '1' }) },
+      (e, out, err) =>
+        resolve({ code: e ? Number((e as { code?: number }).code ?? 1) : 0, out, err }),
     ),
   );
 }
 
-const explain = (m: MutatedCase, problems: string[]) => `${m.seed}: ${m.did.join('; ')}\n${problems.join('\n')}`;
+const explain = (m: MutatedCase, problems: string[]) =>
+  `${m.seed}: ${m.did.join('; ')}\n${problems.join('\n')}`;
 
 describe('solve on damaged case files', () => {
   it('every seed is a valid case that solves (exit 0), so the mutations start from good files', async () => {
@@ -67,7 +76,9 @@ describe('solve on damaged case files', () => {
       { numRuns: IN_PROCESS_RUNS },
     );
     // The mix must exercise every outcome, or the mutations are too tame (or too wild) to mean much.
-    console.log(`solve fuzz, ${IN_PROCESS_RUNS} runs in process: exit 0 x${codes[0]}, exit 2 x${codes[2]}, exit 3 x${codes[3]}`);
+    console.log(
+      `solve fuzz, ${IN_PROCESS_RUNS} runs in process: exit 0 x${codes[0]}, exit 2 x${codes[2]}, exit 3 x${codes[3]}`,
+    );
     expect(codes[2]).toBeGreaterThan(IN_PROCESS_RUNS / 4);
     expect(codes[0]).toBeGreaterThan(10);
   });
@@ -78,16 +89,21 @@ describe('solve on damaged case files', () => {
     ['chord', null],
     ['middleOrdinate', 'deleted'],
     ['middleOrdinate', 'x'],
-  ] as const)('a yaw analysis whose %s is %s is exit 2 naming that field, not a crash', async (field, value) => {
-    const doc = structuredClone(SEEDS['metric banked yaw with half-track path and a table drag factor']) as {
-      analyses: Record<string, unknown>[];
-    };
-    if (value === 'deleted') delete doc.analyses[0]![field];
-    else doc.analyses[0]![field] = value;
-    const r = await inProcess(fileFor(JSON.stringify(doc)), true);
-    expect(r.code).toBe(2);
-    expect(r.err).toMatch(new RegExp(`^analyses\\[0\\]\\.${field}: `, 'm'));
-  });
+  ] as const)(
+    'a yaw analysis whose %s is %s is exit 2 naming that field, not a crash',
+    async (field, value) => {
+      const doc = structuredClone(
+        SEEDS['metric banked yaw with half-track path and a table drag factor'],
+      ) as {
+        analyses: Record<string, unknown>[];
+      };
+      if (value === 'deleted') delete doc.analyses[0]![field];
+      else doc.analyses[0]![field] = value;
+      const r = await inProcess(fileFor(JSON.stringify(doc)), true);
+      expect(r.code).toBe(2);
+      expect(r.err).toMatch(new RegExp(`^analyses\\[0\\]\\.${field}: `, 'm'));
+    },
+  );
 
   it('a downhill steeper than the drag factor is exit 3 naming the analysis, with no JSON printed', async () => {
     const doc = structuredClone(SEEDS['imperial skid, four marks, per-wheel brakes']) as {
@@ -112,18 +128,26 @@ describe('solve on damaged case files', () => {
 });
 
 const wired = await new Promise<boolean>((resolve) =>
-  execFile(process.execPath, [BINARY, 'solve', '/nonexistent.json'], { env: childEnv() }, (_e, out) => resolve(out !== 'solve\n')),
+  execFile(
+    process.execPath,
+    [BINARY, 'solve', '/nonexistent.json'],
+    { env: childEnv() },
+    (_e, out) => resolve(out !== 'solve\n'),
+  ),
 );
 
-describe.skipIf(!wired)(`solve through the built binary${wired ? '' : ' (skipped: src/cli.ts does not call solveCommand yet)'}`, () => {
-  it(`${BINARY_RUNS} random mutations through dist/skidcase.js: exit 0, 2 or 3, never a stack trace`, async () => {
-    await fc.assert(
-      fc.asyncProperty(mutatedCaseArb, async (m) => {
-        const r = await viaBinary(fileFor(m.text));
-        const problems = solveProblems(m, r, true);
-        if (problems.length) throw new Error(explain(m, problems));
-      }),
-      { numRuns: BINARY_RUNS },
-    );
-  }, 120_000);
-});
+describe.skipIf(!wired)(
+  `solve through the built binary${wired ? '' : ' (skipped: src/cli.ts does not call solveCommand yet)'}`,
+  () => {
+    it(`${BINARY_RUNS} random mutations through dist/skidcase.js: exit 0, 2 or 3, never a stack trace`, async () => {
+      await fc.assert(
+        fc.asyncProperty(mutatedCaseArb, async (m) => {
+          const r = await viaBinary(fileFor(m.text));
+          const problems = solveProblems(m, r, true);
+          if (problems.length) throw new Error(explain(m, problems));
+        }),
+        { numRuns: BINARY_RUNS },
+      );
+    }, 120_000);
+  },
+);

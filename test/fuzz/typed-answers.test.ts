@@ -11,8 +11,51 @@ const questions = numericQuestions();
 
 /** Pieces people type, glued at random: numbers, signs, units, separators, typos. */
 const piece = fc.oneof(
-  fc.constantFrom('0', '1', '7', '12', '80', '0.72', '.5', '1e3', '1e309', '-', '+', '.', ',', ' ', '  ', '/', '@', '%', '(', ')', 'x', '±', '+/-', 'to', '..'),
-  fc.constantFrom('ft', "'", '"', 'in', 'm', 'cm', 'km/h', 'mph', 'kg', 'lb', 'ftt', 'NaN', 'Infinity', 'undefined', '[gravel]', 'table:gravel-loose'),
+  fc.constantFrom(
+    '0',
+    '1',
+    '7',
+    '12',
+    '80',
+    '0.72',
+    '.5',
+    '1e3',
+    '1e309',
+    '-',
+    '+',
+    '.',
+    ',',
+    ' ',
+    '  ',
+    '/',
+    '@',
+    '%',
+    '(',
+    ')',
+    'x',
+    '±',
+    '+/-',
+    'to',
+    '..',
+  ),
+  fc.constantFrom(
+    'ft',
+    "'",
+    '"',
+    'in',
+    'm',
+    'cm',
+    'km/h',
+    'mph',
+    'kg',
+    'lb',
+    'ftt',
+    'NaN',
+    'Infinity',
+    'undefined',
+    '[gravel]',
+    'table:gravel-loose',
+  ),
   fc.string({ maxLength: 4 }),
   fc.string({ unit: 'grapheme', maxLength: 3 }),
   fc.double({ noNaN: false }).map(String),
@@ -40,13 +83,14 @@ describe('random text at every numeric question', () => {
           refused++;
           const m = after.error.message;
           expect(m.trim().length).toBeGreaterThan(5);
-          // The typed text may be quoted back; nothing else may be a broken number.
-          expect(m.split(text.trim() || '\u0000').join('')).not.toMatch(/\bNaN\b|Infinity|undefined/);
+          // The typed text may be quoted back; the program never writes these words of its own.
+          for (const w of m.match(/NaN|Infinity|undefined/g) ?? []) expect(text).toContain(w);
           expect(after.answers).toBe(state.answers);
           if (text.trim() !== '') expect(check).toBe(m);
         } else {
           // Accepted: what is kept for the case file holds finite numbers only.
-          for (const n of numbersIn(after.answers[q.id]?.value)) expect(Number.isFinite(n)).toBe(true);
+          for (const n of numbersIn(after.answers[q.id]?.value))
+            expect(Number.isFinite(n)).toBe(true);
           if (text.trim() !== '') expect(check).toBeUndefined();
         }
       }),

@@ -83,7 +83,7 @@ describe('buildCase', () => {
     expect(back.mode).toBe('brisk');
     expect(firstOpenQuestion(back)).toBe('a0.drag.source');
     expect(summaryOfDone(back)).toEqual([
-      'Case HW-77: metres and km/h, posted limit 80',
+      'Case HW-77: metres and km/h, posted limit 80 km/h',
       'Vehicle: all brakes working',
       // Open in the analysis: drag source, bank, path (the source's and bank's follow-ups not yet
       // applicable; "another analysis?" not counted). Applicable: 7 case + 2 vehicle + 8 yaw = 17.
@@ -212,5 +212,60 @@ describe('stateFromCase for a hand-written case', () => {
     const explicit = structuredClone(HAND);
     Object.assign(explicit.analyses[2]!, { distanceRule: 'average', end: { mode: 'stop' } });
     expect({ ...rebuilt, interview: undefined }).toEqual({ ...explicit, interview: undefined });
+  });
+});
+
+describe('fields the interview does not ask about', () => {
+  // Invented: a yaw measured by offsets, a time-distance block, sampling settings, a field the
+  // format does not know, and a front-axle share that no answer uses (brakes all working).
+  const EXTRA: Case = {
+    format: 'skidcase-case',
+    version: 1,
+    id: 'kept-fields',
+    units: 'imperial',
+    sampling: { shape: 'uniform', samples: 5000, seed: 7 },
+    vehicle: { frontAxleShare: 0.57, brakes: { mode: 'all' } },
+    analyses: [
+      {
+        id: 'skid-a',
+        kind: 'skid',
+        marks: [60],
+        segments: [{ drag: { source: 'entered', value: 0.7 } }],
+        timeDistance: { reactionTime: 1.5, conflictAt: 40 },
+      },
+      {
+        id: 'yaw-a',
+        kind: 'yaw',
+        offsets: {
+          chord: 40,
+          stations: [
+            { at: 10, offset: 1.9 },
+            { at: 20, offset: 2.5 },
+            { at: 30, offset: 1.9 },
+          ],
+        },
+        drag: { source: 'entered', value: 0.7 },
+      },
+    ],
+  } as Case;
+  (EXTRA as Record<string, unknown>).witness = 'kept as written';
+
+  it('are kept through resume and rebuild, with the same figures', () => {
+    const s = stateFromCase(EXTRA);
+    expect(s.cursor).toBe(REVIEW);
+    const rebuilt = buildCase(s, { id: EXTRA.id });
+    expect(issues(rebuilt)).toEqual([]);
+    const explicit = structuredClone(EXTRA);
+    Object.assign(explicit.analyses[0]!, { end: { mode: 'stop' } });
+    Object.assign(explicit.analyses[1]!, { pathAdjustment: 'none' });
+    expect({ ...rebuilt, interview: undefined }).toEqual({ ...explicit, interview: undefined });
+    expect(figures(solveCase(rebuilt))).toEqual(figures(solveCase(EXTRA)));
+  });
+
+  it('a yaw measured by offsets is not asked for a chord and ordinate, and hidden answers are not listed', () => {
+    const listed = questionStates(stateFromCase(EXTRA)).map((q) => q.id);
+    expect(listed).toContain('a1.drag.value');
+    expect(listed).not.toContain('a1.chord');
+    expect(listed.some((id) => id.endsWith('.keep') || id.endsWith('.id'))).toBe(false);
   });
 });

@@ -93,16 +93,35 @@ describe('saveCase', () => {
     expect(readJson(path.join(dir, 'elm-6.json')).agencyFileNo).toBe('invented-77');
   });
 
-  it('moves a broken file in the way aside instead of overwriting it', async () => {
+  it('refuses to write over a file it never opened: another case, or a broken file', async () => {
     const dir = tempDir('save');
-    fs.writeFileSync(path.join(dir, 'elm-7.json'), '{"format": "skidcase-case", "vers');
-    const r = await saveCase(dir, sampleCase('elm-7'));
+    const other = JSON.stringify(sampleCase('elm-7', [99]), null, 2);
+    fs.writeFileSync(path.join(dir, 'elm-7.json'), other);
+    fs.writeFileSync(path.join(dir, 'elm-7b.json'), '{"format": "skidcase-case", "vers');
+    for (const id of ['elm-7', 'elm-7b']) {
+      const r = await saveCase(dir, sampleCase(id));
+      expect(r.ok).toBe(false);
+      expect(!r.ok && r.kind).toBe('exists');
+      expect(!r.ok && r.message).toContain(path.join(dir, `${id}.json`));
+    }
+    expect(fs.readFileSync(path.join(dir, 'elm-7.json'), 'utf8')).toBe(other);
+    expect(fs.readFileSync(path.join(dir, 'elm-7b.json'), 'utf8')).toBe(
+      '{"format": "skidcase-case", "vers',
+    );
+  });
+
+  it('moves a file broken by hand while open aside instead of overwriting it', async () => {
+    const dir = tempDir('save');
+    const file = path.join(dir, 'elm-7c.json');
+    await saveCase(dir, sampleCase('elm-7c', [12]));
+    fs.writeFileSync(file, '{"format": "skidcase-case", "vers');
+    const r = await saveCase(dir, sampleCase('elm-7c', [12, 13]));
     if (!r.ok) throw new Error(r.message);
-    expect(r.keptBroken).toMatch(/elm-7\.broken-\d{8}T\d{6}Z\.json$/);
+    expect(r.keptBroken).toMatch(/elm-7c\.broken-\d{8}T\d{6}Z\.json$/);
     expect(fs.readFileSync(r.keptBroken!, 'utf8')).toBe('{"format": "skidcase-case", "vers');
-    expect(loadCaseText(fs.readFileSync(path.join(dir, 'elm-7.json'), 'utf8')).ok).toBe(true);
-    // the broken text is not taken as the backup
-    expect(fs.existsSync(path.join(dir, 'elm-7.json.bak'))).toBe(false);
+    expect(loadCaseText(fs.readFileSync(file, 'utf8')).ok).toBe(true);
+    // the broken text is not taken as the backup: no backup was made by this save
+    expect(r.backup).toBeUndefined();
   });
 
   it('notices a file changed by hand behind its back and keeps that as the backup', async () => {

@@ -186,6 +186,13 @@ const CHECKS: Record<Command, (keys: string) => Promise<void>> = {
     const name = /Report written to (\S+)/.exec(f)![1]!;
     expect(fs.readFileSync(name, 'utf8')).toContain('at least 42 mph');
   },
+  async 'to-list'(k) {
+    const app = await fresh();
+    await app.answer('LIST-1', /saved \d/);
+    const f = await app.press(k, 'LIST-1');
+    expect(f).toContain('Cases in');
+    expect(fs.readdirSync(app.dir).some((n) => n.endsWith('.lock'))).toBe(false);
+  },
   async 'to-question'(k) {
     const app = await review();
     await app.press(k, 'Go to:');

@@ -224,6 +224,18 @@ describe('go-to list', () => {
 });
 
 describe('choices', () => {
+  it('takes keys typed ahead in one read through a choice and on into the next answer', async () => {
+    const app = await newCase();
+    app.stdin.write('REF-9\r\r\r\r\ri56\r');
+    await app.waitText('Which vehicle left the marks?');
+    await app.waitText(/saved \d/);
+    await app.waitFor(() => {
+      const file = fs.readdirSync(app.dir).find((n) => n.endsWith('.json'))!;
+      const c = JSON.parse(fs.readFileSync(path.join(app.dir, file), 'utf8'));
+      return c.postedLimit === 56 && c.details?.reference === 'REF-9';
+    }, 'the typed-ahead answers on disk');
+  });
+
   it('Enter picks the highlighted choice after moving with the arrows', async () => {
     const app = await newCase();
     for (let i = 0; i < 5; i++) await app.press(ENTER);

@@ -1,0 +1,179 @@
+/**
+ * Answers derived from a case's fields, for a hand-written case (or one edited by hand): so it
+ * can be reviewed and edited in the interview, and built again with the same figures.
+ */
+import type { Quantity } from '../case/quantity.js';
+import type { Case } from '../case/load.js';
+import type { DragV1 } from '../case/v1/schema.js';
+import type { Answers } from './types.js';
+import { allQuestions } from './questions.js';
+import { contextOf } from './answer-values.js';
+import { quantityText } from './read-quantity.js';
+import { signed } from './signed.js';
+import { surfaceRow, OTHER_SURFACE } from './drag-table.js';
+import { WHEELS } from './questions-vehicle.js';
+import {
+  analysisExtras,
+  analysisKeep,
+  caseExtras,
+  CASE_KEEP,
+  vehicleExtras,
+  VEHICLE_KEEP,
+} from './kept-fields.js';
+
+const low = (q: Quantity) => (typeof q === 'number' ? q : (q.low ?? q.value));
+const val = (q: Quantity) => (typeof q === 'number' ? q : q.value);
+const list = (qs: readonly Quantity[]) => qs.map(quantityText).join(', ');
+
+/** Sets every answer's value by reading its text through its question, as if it had been typed. */
+function normalize(answers: Answers): Answers {
+  const ctx = contextOf(answers);
+  const out: Answers = { ...answers };
+  for (const q of allQuestions(answers)) {
+    const a = answers[q.id];
+    if (!a) continue;
+    const r = q.parse(a.text, ctx);
+    if (r.ok) out[q.id] = { text: a.text, value: r.value };
+  }
+  return out;
+}
+
+function dragAnswers(
+  put: (id: string, text: string, value?: unknown) => void,
+  p: string,
+  d: DragV1,
+): void {
+  put(`${p}.drag.source`, d.source);
+  if (d.source === 'entered' || d.source === 'table') {
+    put(
+      `${p}.drag.value`,
+      quantityText({
+        value: d.value,
+        ...(d.low !== undefined ? { low: d.low } : {}),
+        ...(d.high !== undefined ? { high: d.high } : {}),
+      }),
+    );
+    if (d.source === 'table') {
+      if (surfaceRow(d.surface)) put(`${p}.drag.surface`, d.surface);
+      else {
+        put(`${p}.drag.surface`, OTHER_SURFACE);
+        put(`${p}.drag.surfaceName`, d.surface);
+      }
+    }
+  } else if (d.source === 'test-skids') {
+    put(
+      `${p}.drag.tests`,
+      d.tests.map((t) => `${quantityText(t.speed)}/${quantityText(t.distance)}`).join(', '),
+    );
+  } else if (d.source === 'sled') {
+    put(`${p}.drag.weight`, quantityText(d.weight));
+    put(`${p}.drag.pulls`, list(d.pulls));
+  } else put(`${p}.drag.readings`, list(d.readings));
+}
+
+/** A signed slope as direction + positive percent. */
+function slopeAnswers(
+  put: (id: string, text: string) => void,
+  id: string,
+  q: Quantity | undefined,
+  words: [string, string, string],
+): void {
+  const [none, up, down] = words;
+  if (
+    q === undefined ||
+    (val(q) === 0 && low(q) === 0 && (typeof q === 'number' || (q.high ?? 0) === 0))
+  )
+    return put(`${id}.dir`, none);
+  const negative = val(q) < 0;
+  put(`${id}.dir`, negative ? down : up);
+  put(`${id}.pct`, quantityText(signed(q, negative)));
+}
+
+/**
+ * Keeps what no question asks: the case's and vehicle's other fields, and a front-axle share or
+ * track width that no answer uses (brakes not given per wheel; no centre-of-mass path).
+ */
+function keepFields(c: Case, put: (id: string, text: string, value?: unknown) => void): void {
+  const top = caseExtras(c);
+  if (top) put(CASE_KEEP, '', top);
+  const v = c.vehicle;
+  const halfTrack = c.analyses.some((a) => a.kind === 'yaw' && a.pathAdjustment === 'half-track');
+  const vehicle = {
+    ...vehicleExtras(v),
+    ...(v.frontAxleShare !== undefined && v.brakes?.mode !== 'wheels'
+      ? { frontAxleShare: v.frontAxleShare }
+      : {}),
+    ...(v.trackWidth !== undefined && !halfTrack ? { trackWidth: v.trackWidth } : {}),
+  };
+  if (Object.keys(vehicle).length) put(VEHICLE_KEEP, '', vehicle);
+}
+
+/** Answers that say what a hand-written case says. */
+export function answersFromCase(c: Case): Answers {
+  const A: Answers = {};
+  const put = (id: string, text: string, value: unknown = text) => {
+    A[id] = { text, value };
+  };
+  for (const k of ['reference', 'occurred', 'location', 'investigator', 'notes'] as const)
+    put(`details.${k}`, c.details?.[k] ?? '');
+  put('units', c.units);
+  put('limit', c.postedLimit === undefined ? '' : quantityText(c.postedLimit));
+  const v = c.vehicle;
+  put('vehicle.label', v.label ?? '');
+  if (v.brakes) put('vehicle.brakes', v.brakes.mode);
+  if (v.brakes?.mode === 'estimate') {
+    put('vehicle.brakes.efficiency', quantityText(v.brakes.efficiency));
+    put('vehicle.brakes.basis', v.brakes.basis ?? '');
+  }
+  if (v.frontAxleShare !== undefined) put('vehicle.share', quantityText(v.frontAxleShare));
+  if (v.brakes?.mode === 'wheels') {
+    const b = v.brakes;
+    for (const w of WHEELS) {
+      const q = b[w.key];
+      const choice = q === 1 ? 'working' : q === 0 ? 'none' : 'partly';
+      put(`vehicle.wheel.${w.id}`, choice);
+      if (choice === 'partly') put(`vehicle.wheel.${w.id}.fraction`, quantityText(q));
+    }
+  }
+  if (v.trackWidth !== undefined) put('vehicle.trackWidth', quantityText(v.trackWidth));
+  keepFields(c, put);
+  c.analyses.forEach((a, i) => {
+    const p = `a${i}`;
+    put(`${p}.id`, a.id);
+    const extra = analysisExtras(a);
+    if (extra) put(analysisKeep(i), '', extra);
+    put(`${p}.label`, a.label ?? '');
+    put(`${p}.more`, i < c.analyses.length - 1 ? 'yes' : 'no');
+    if (a.kind === 'yaw') {
+      put(`${p}.look`, 'yaw');
+      if (a.chord !== undefined) put(`${p}.chord`, quantityText(a.chord));
+      if (a.middleOrdinate !== undefined) put(`${p}.ordinate`, quantityText(a.middleOrdinate));
+      dragAnswers(put, p, a.drag);
+      slopeAnswers(put, `${p}.bank`, a.superelevation, ['none', 'toward', 'away']);
+      put(`${p}.path`, a.pathAdjustment ?? 'none');
+      return;
+    }
+    put(`${p}.look`, 'dark');
+    const one = a.segments.length === 1 && a.segments[0]!.length === undefined;
+    put(`${p}.surfaces`, one ? 'one' : 'several');
+    if (!one) put(`${p}.segcount`, String(a.segments.length), a.segments.length);
+    if (a.marks && a.marks.length > 0) {
+      put(`${p}.count`, String(a.marks.length), a.marks.length);
+      put(`${p}.marks`, list(a.marks));
+      if (a.marks.length > 1) put(`${p}.rule`, a.distanceRule ?? 'average');
+    } else if (!one) put(`${p}.count`, '', undefined);
+    a.segments.forEach((s, j) => {
+      const sp = `${p}.seg${j}`;
+      put(`${sp}.label`, s.label ?? '');
+      if (!one && s.length !== undefined) put(`${sp}.length`, quantityText(s.length));
+      dragAnswers(put, sp, s.drag);
+      slopeAnswers(put, `${sp}.grade`, s.grade, ['level', 'uphill', 'downhill']);
+    });
+    if (a.end?.mode === 'speed') {
+      put(`${p}.end`, 'speed');
+      put(`${p}.end.speed`, quantityText(a.end.speed));
+      put(`${p}.end.basis`, a.end.basis ?? '');
+    } else put(`${p}.end`, 'rest');
+  });
+  return normalize(A);
+}

@@ -1,0 +1,68 @@
+/**
+ * Fields of a case the interview does not ask about (a yaw measured by offsets, a time-distance
+ * block, sampling settings, fields the format does not know): kept from a hand-written file in
+ * hidden answers and written back unchanged, so a round trip never drops them.
+ */
+import type { Answers } from './types.js';
+
+/** Top-level fields the interview writes itself. */
+const CASE_OWN = [
+  'format',
+  'version',
+  'id',
+  'created',
+  'updated',
+  'units',
+  'details',
+  'postedLimit',
+  'vehicle',
+  'analyses',
+  'interview',
+];
+const VEHICLE_OWN = ['label', 'frontAxleShare', 'trackWidth', 'brakes'];
+const SKID_OWN = ['id', 'kind', 'label', 'marks', 'distanceRule', 'segments', 'end'];
+const YAW_OWN = [
+  'id',
+  'kind',
+  'label',
+  'chord',
+  'middleOrdinate',
+  'drag',
+  'superelevation',
+  'pathAdjustment',
+];
+
+/** Hidden answer ids: not questions, never listed in the jump list. */
+export const CASE_KEEP = 'case.keep';
+export const VEHICLE_KEEP = 'vehicle.keep';
+export const analysisKeep = (i: number): string => `a${i}.keep`;
+
+/** The fields of `obj` not in `own`, or undefined when there are none. */
+export function extraFields(
+  obj: object,
+  own: readonly string[],
+): Record<string, unknown> | undefined {
+  const out = Object.fromEntries(
+    Object.entries(obj).filter(([k, v]) => !own.includes(k) && v !== undefined),
+  );
+  return Object.keys(out).length ? out : undefined;
+}
+
+export const caseExtras = (c: object) => extraFields(c, CASE_OWN);
+export const vehicleExtras = (v: object) => extraFields(v, VEHICLE_OWN);
+export const analysisExtras = (a: { kind: string }) =>
+  extraFields(a, a.kind === 'yaw' ? YAW_OWN : SKID_OWN);
+
+/** The kept fields under a hidden answer id (an object), or an empty object. */
+export function kept(answers: Answers, id: string): Record<string, unknown> {
+  const v = answers[id]?.value;
+  return v && typeof v === 'object' && !Array.isArray(v) ? (v as Record<string, unknown>) : {};
+}
+
+/** True for a yaw kept as measured by offsets: its chord and ordinate are not asked. */
+export const measuredByOffsets = (answers: Answers, i: number): boolean =>
+  kept(answers, analysisKeep(i)).offsets !== undefined;
+
+/** Answers that are not questions (kept ids and fields). */
+export const isMetaAnswer = (id: string): boolean =>
+  /^a\d+\.(id|keep)$/.test(id) || id === CASE_KEEP || id === VEHICLE_KEEP;
