@@ -94,8 +94,9 @@ function vehicleRows(v: VehicleV1, length: string): Row[] {
 
 function yawRows(a: YawV1, speed: string, length: string): Row[] {
   return [
-    q('Chord', a.chord, length),
-    q('Middle ordinate', a.middleOrdinate, length),
+    // A yaw measured by offsets along the chord has its own section (offsets-section.ts).
+    ...(a.chord !== undefined ? [q('Chord', a.chord, length)] : []),
+    ...(a.middleOrdinate !== undefined ? [q('Middle ordinate', a.middleOrdinate, length)] : []),
     ...(a.superelevation !== undefined ? [q('Superelevation', a.superelevation, '%')] : []),
     ...dragRows('', a.drag, speed, length),
     choice('Path adjustment', a.pathAdjustment === 'half-track' ? 'half-track' : 'none'),

@@ -71,8 +71,8 @@ export async function openCase(dirOrPath: string, opts: OpenOptions = {}): Promi
 
   const read = await readWithSig(file);
   if ('kind' in read) return read;
-  let { text, sig } = read;
-  let loaded = load(text);
+  let sig = read.sig;
+  let loaded = load(read.text);
   if (!loaded.ok) {
     const r = fail(loaded.kind, file, loaded.issues);
     if (loaded.kind !== 'newer') {
@@ -97,13 +97,18 @@ export async function openCase(dirOrPath: string, opts: OpenOptions = {}): Promi
       locked = true;
       // Another skidcase may have saved between our read and our lock: read its version then.
       const again = await readWithSig(file);
-      if ('kind' in again || !sameSig(sig, again.stat)) {
-        const fresh = 'kind' in again ? undefined : load(again.text);
-        if (!fresh?.ok || 'kind' in again) {
+      if ('kind' in again) {
+        await releaseLock(file);
+        return again;
+      }
+      if (!sameSig(sig, again.stat)) {
+        const fresh = load(again.text);
+        // Broken meanwhile: open again from the start, which reports it and offers the backup.
+        if (!fresh.ok) {
           await releaseLock(file);
-          return 'kind' in again ? again : openCase(dirOrPath, opts);
+          return openCase(dirOrPath, opts);
         }
-        ({ text, sig } = again);
+        sig = again.sig;
         loaded = fresh;
       }
       await sweepLeftovers(file);

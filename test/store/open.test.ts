@@ -87,6 +87,26 @@ describe('openCase on a broken file', () => {
   });
 });
 
+describe('openCase racing another save', () => {
+  it('returns the version saved between its read and its lock, not the older one', async () => {
+    const dir = tempDir('open');
+    const file = path.join(dir, 'raced.json');
+    fs.writeFileSync(file, JSON.stringify(sampleCase('raced', [40]), null, 2));
+    let calls = 0;
+    // Runs after openCase read the file and before it takes the lock: the moment another
+    // skidcase could still save and release. It saves a newer version the way that one would.
+    const load = (text: string) => {
+      if (calls++ === 0) {
+        fs.writeFileSync(`${file}.new`, JSON.stringify(sampleCase('raced', [40, 41.5]), null, 2));
+        fs.renameSync(`${file}.new`, file);
+      }
+      return loadCaseText(text);
+    };
+    const r = await openCase(dir, { id: 'raced', load });
+    expect(r.ok && r.case.analyses[0]).toMatchObject({ marks: [40, 41.5] });
+  });
+});
+
 describe('restoreBackup', () => {
   it('puts the backup back and keeps the broken file as <id>.broken-<time>.json', async () => {
     const { dir, file, text } = await brokenCase('restore-me', (t) => t.slice(0, 40));

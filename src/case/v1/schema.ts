@@ -219,8 +219,9 @@ function yawMeasureIssues(a: z.infer<typeof yawV1>, i: number, ctx: Ctx) {
         path: path('offsets'),
         message: 'give either chord and middleOrdinate, or offsets, not both',
       });
+    // Only against a chord that passed its own checks (its issue is already reported).
     const C = endsOf(a.offsets.chord);
-    if (C)
+    if (C && C.low > 0 && C.low <= C.value)
       a.offsets.stations.forEach((st, j) => {
         if (typeof st.at === 'number' && st.at >= C.low)
           ctx.addIssue({
