@@ -84,77 +84,77 @@ describe('the extras fields in the v1 schema', () => {
   it.each([
     [
       'sampling.shape',
-      (d: Doc) => (d.sampling = { shape: 'flat' }),
+      (d: Doc): unknown => (d.sampling = { shape: 'flat' }),
       'sampling.shape: shape must be uniform or normal',
     ],
     [
       'sampling.samples too few',
-      (d: Doc) => (d.sampling = { samples: 999 }),
+      (d: Doc): unknown => (d.sampling = { samples: 999 }),
       'sampling.samples: samples must be at least 1000',
     ],
     [
       'sampling.samples too many',
-      (d: Doc) => (d.sampling = { samples: 1_000_001 }),
+      (d: Doc): unknown => (d.sampling = { samples: 1_000_001 }),
       'sampling.samples: samples must be at most 1000000',
     ],
     [
       'sampling.samples not whole',
-      (d: Doc) => (d.sampling = { samples: 2500.5 }),
+      (d: Doc): unknown => (d.sampling = { samples: 2500.5 }),
       'sampling.samples: samples must be a whole number',
     ],
     [
       'sampling.seed negative',
-      (d: Doc) => (d.sampling = { seed: -1 }),
+      (d: Doc): unknown => (d.sampling = { seed: -1 }),
       'sampling.seed: seed must be at least 0',
     ],
     [
       'sampling.seed above 2^32 - 1',
-      (d: Doc) => (d.sampling = { seed: 4294967296 }),
+      (d: Doc): unknown => (d.sampling = { seed: 4294967296 }),
       'sampling.seed: seed must be at most 4294967295',
     ],
     [
       'sampling.seed as text',
-      (d: Doc) => (d.sampling = { seed: '7' }),
+      (d: Doc): unknown => (d.sampling = { seed: '7' }),
       'sampling.seed: seed must be a number',
     ],
     [
       'timeDistance.reactionTime above 10 s',
-      (d: Doc) => (d.analyses[0]!.timeDistance = { reactionTime: 11 }),
+      (d: Doc): unknown => (d.analyses[0]!.timeDistance = { reactionTime: 11 }),
       'analyses[0].timeDistance.reactionTime: reactionTime must be at most 10 s',
     ],
     [
       'timeDistance.conflictAt negative',
-      (d: Doc) => (d.analyses[0]!.timeDistance = { conflictAt: -2 }),
+      (d: Doc): unknown => (d.analyses[0]!.timeDistance = { conflictAt: -2 }),
       'analyses[0].timeDistance.conflictAt: conflictAt must be 0 or more (a distance from the start of the marks)',
     ],
     [
       'offsets.chord 0',
-      (d: Doc) => (offsets(d).chord = 0),
+      (d: Doc): unknown => (offsets(d).chord = 0),
       'analyses[1].offsets.chord: chord must be greater than 0',
     ],
     [
       'offsets.chord low above value',
-      (d: Doc) => (offsets(d).chord = { value: 36, low: 37 }),
+      (d: Doc): unknown => (offsets(d).chord = { value: 36, low: 37 }),
       'analyses[1].offsets.chord.low: chord: low must not be above value',
     ],
     [
       'no stations',
-      (d: Doc) => (offsets(d).stations = []),
+      (d: Doc): unknown => (offsets(d).stations = []),
       'analyses[1].offsets.stations: at least one station is needed',
     ],
     [
       'a station at 0',
-      (d: Doc) => (offsets(d).stations[2]!.at = 0),
+      (d: Doc): unknown => (offsets(d).stations[2]!.at = 0),
       'analyses[1].offsets.stations[2].at: at must be greater than 0',
     ],
     [
       'a station beyond the chord’s low end',
-      (d: Doc) => (offsets(d).stations[1]!.at = 35.9),
+      (d: Doc): unknown => (offsets(d).stations[1]!.at = 35.9),
       'analyses[1].offsets.stations[1].at: at must be less than the chord (35.8)',
     ],
     [
       'a negative offset',
-      (d: Doc) => (offsets(d).stations[0]!.offset = -1.2),
+      (d: Doc): unknown => (offsets(d).stations[0]!.offset = -1.2),
       'analyses[1].offsets.stations[0].offset: offset must be greater than 0',
     ],
   ] as const)('%s is refused with its path', (_name, change, expected) => {
