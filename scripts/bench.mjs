@@ -8,7 +8,7 @@ import { mkdirSync, mkdtempSync, rmSync, writeFileSync, existsSync } from 'node:
 import { cpus, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { table } from './bench/stats.mjs';
+import { markdownTable, table } from './bench/stats.mjs';
 import { startScreen, solveJson } from './bench/process-figures.mjs';
 import { autosave, sampling } from './bench/inprocess-figures.mjs';
 import { keypress } from './bench/keypress.mjs';
@@ -100,4 +100,9 @@ const json = {
   })),
 };
 writeFileSync(join(root, '.bench/last.json'), JSON.stringify(json, null, 2) + '\n');
-console.log('\nwritten: .bench/last.json');
+const runsNote = `node ${process.version}, ${cpus().length} cpus, medians of ${ctx.processRuns} runs per process figure, ${ctx.inProcessRuns} in process`;
+writeFileSync(
+  join(root, '.bench/last.md'),
+  markdownTable(results, json.date.slice(0, 10), runsNote),
+);
+console.log('\nwritten: .bench/last.json, .bench/last.md');

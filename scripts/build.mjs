@@ -2,6 +2,42 @@
 // chunks; Ink and React live in a separate chunk loaded by dynamic import when the interview opens.
 import { build } from 'esbuild';
 import { rmSync, chmodSync, readFileSync } from 'node:fs';
+import { readFile } from 'node:fs/promises';
+
+/**
+ * zod's `z` namespace re-exports every locale (about 250 languages), which a namespace import keeps
+ * in the bundle and every start of `solve` would parse. Our messages are our own English, so the
+ * locales namespace is narrowed to English only.
+ */
+const zodEnglishOnly = {
+  name: 'zod-english-only',
+  setup(b) {
+    b.onResolve({ filter: /^\.\.\/locales\/index\.js$/ }, (args) =>
+      /[\\/]zod[\\/]v4[\\/](classic|core)[\\/]/.test(args.importer)
+        ? { path: 'zod-locales-en', namespace: 'zod-locales' }
+        : undefined,
+    );
+    b.onLoad({ filter: /.*/, namespace: 'zod-locales' }, () => ({
+      contents: "export { default as en } from 'zod/v4/locales/en.js';",
+      resolveDir: process.cwd(),
+    }));
+  },
+};
+
+/**
+ * In Node 20 the global `fetch` is a lazy getter: evaluating `typeof fetch` loads Node's whole HTTP
+ * client (undici) at start-up. yoga-layout's loader asks it, although its wasm is an inline data URI
+ * it decodes without fetch either way. Answering "no fetch" at build time spares every start that load.
+ */
+const yogaWithoutFetch = {
+  name: 'yoga-without-fetch',
+  setup(b) {
+    b.onLoad({ filter: /yoga-layout[\\/]dist[\\/]binaries[\\/].*\.js$/ }, async (args) => {
+      const text = await readFile(args.path, 'utf8');
+      return { contents: text.replaceAll('typeof fetch', '"undefined"'), loader: 'js' };
+    });
+  },
+};
 
 const pkg = JSON.parse(readFileSync(new URL('../package.json', import.meta.url), 'utf8'));
 rmSync(new URL('../dist', import.meta.url), { recursive: true, force: true });
@@ -32,6 +68,7 @@ await build({
   },
   define: { 'process.env.NODE_ENV': '"production"', __SKIDCASE_VERSION__: JSON.stringify(pkg.version) },
   external: ['react-devtools-core'],
+  plugins: [zodEnglishOnly, yogaWithoutFetch],
   logLevel: 'warning',
 });
 chmodSync(new URL('../dist/skidcase.js', import.meta.url), 0o755);

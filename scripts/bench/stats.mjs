@@ -77,3 +77,16 @@ export function table(results) {
     '\n',
   );
 }
+
+/** The same table in Markdown, dated, for the README's performance section (.bench/last.md). */
+export function markdownTable(results, when, runsNote) {
+  const rows = results.map((r) => `| ${cells(r).join(' | ')} |`);
+  return [
+    `Measured ${when} with \`npm run bench\` (${runsNote}).`,
+    '',
+    '| figure | measured | baseline | ratio / goal | result |',
+    '| --- | --- | --- | --- | --- |',
+    ...rows,
+    '',
+  ].join('\n');
+}

@@ -42,3 +42,12 @@ export { reactionDistance, brakingDistance, slideDuration } from './time-distanc
 export { solveCase, solveAnalysis } from './solve-case.js';
 export { minimumOf, MARKS_MISMATCH } from './solve-skid.js';
 export { exact } from './step.js';
+export {
+  fitCircleToOffsets,
+  type OffsetStation,
+  type OffsetsFit,
+  type OffsetsFitOptions,
+  type OffsetResidual,
+} from './offsets-fit.js';
+export { radiusFromOffsets, OFFSET_READING, type OffsetsRadius } from './radius-offsets.js';
+export { skidModel } from './skid-model.js';

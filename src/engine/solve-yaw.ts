@@ -187,16 +187,20 @@ function yawModel(
   ];
   if (a.superelevation !== undefined) inputs.push(modelInput('e', 'superelevation', '%', e));
   if (halfTrack) inputs.push(modelInput('T', 'track width', L, T));
-  const base: Record<string, number> = Object.fromEntries(inputs.map((m) => [m.key, m.value]));
+  // Plain numbers, no closure per call: evaluate runs in sampling loops.
+  const c0 = C.value;
+  const m0 = M.value;
+  const f0 = f.value;
+  const e0 = a.superelevation !== undefined ? e.value : 0;
+  const t0 = T.value;
   return {
     inputs,
     evaluate(x) {
-      const get = (k: string) => x[k] ?? base[k] ?? 0;
-      const c = get('C');
-      const m = get('M');
+      const c = x.C ?? c0;
+      const m = x.M ?? m0;
       if (!(m > 0) || !(m < c / 2)) return undefined;
-      const R = (c * c) / (8 * m) + m / 2 - (halfTrack ? get('T') / 2 : 0);
-      return criticalSpeedOf(R, get('f'), get('e') / 100, system);
+      const R = (c * c) / (8 * m) + m / 2 - (halfTrack ? (x.T ?? t0) / 2 : 0);
+      return criticalSpeedOf(R, x.f ?? f0, (x.e ?? e0) / 100, system);
     },
   };
 }

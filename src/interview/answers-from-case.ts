@@ -98,15 +98,20 @@ function keepFields(c: Case, put: (id: string, text: string, value?: unknown) =>
   if (top) put(CASE_KEEP, '', top);
   const v = c.vehicle;
   const halfTrack = c.analyses.some((a) => a.kind === 'yaw' && a.pathAdjustment === 'half-track');
+  // Without a slide the brakes are not asked: brakes given in the file are kept as they are.
+  const asked = hasSlide(c);
   const vehicle = {
     ...vehicleExtras(v),
-    ...(v.frontAxleShare !== undefined && v.brakes?.mode !== 'wheels'
+    ...(v.brakes !== undefined && !asked ? { brakes: v.brakes } : {}),
+    ...(v.frontAxleShare !== undefined && (!asked || v.brakes?.mode !== 'wheels')
       ? { frontAxleShare: v.frontAxleShare }
       : {}),
     ...(v.trackWidth !== undefined && !halfTrack ? { trackWidth: v.trackWidth } : {}),
   };
   if (Object.keys(vehicle).length) put(VEHICLE_KEEP, '', vehicle);
 }
+
+const hasSlide = (c: Case) => c.analyses.some((a) => a.kind === 'skid');
 
 /** Answers that say what a hand-written case says. */
 export function answersFromCase(c: Case): Answers {
@@ -120,14 +125,16 @@ export function answersFromCase(c: Case): Answers {
   put('limit', c.postedLimit === undefined ? '' : quantityText(c.postedLimit));
   const v = c.vehicle;
   put('vehicle.label', v.label ?? '');
-  if (v.brakes) put('vehicle.brakes', v.brakes.mode);
-  if (v.brakes?.mode === 'estimate') {
-    put('vehicle.brakes.efficiency', quantityText(v.brakes.efficiency));
-    put('vehicle.brakes.basis', v.brakes.basis ?? '');
+  const brakes = hasSlide(c) ? v.brakes : undefined;
+  if (brakes) put('vehicle.brakes', brakes.mode);
+  if (brakes?.mode === 'estimate') {
+    put('vehicle.brakes.efficiency', quantityText(brakes.efficiency));
+    put('vehicle.brakes.basis', brakes.basis ?? '');
   }
-  if (v.frontAxleShare !== undefined) put('vehicle.share', quantityText(v.frontAxleShare));
-  if (v.brakes?.mode === 'wheels') {
-    const b = v.brakes;
+  if (v.frontAxleShare !== undefined && brakes?.mode === 'wheels')
+    put('vehicle.share', quantityText(v.frontAxleShare));
+  if (brakes?.mode === 'wheels') {
+    const b = brakes;
     for (const w of WHEELS) {
       const q = b[w.key];
       const choice = q === 1 ? 'working' : q === 0 ? 'none' : 'partly';

@@ -53,6 +53,8 @@ function yawOf(r: AnswerReader, i: number, id: string): AnalysisV1 {
 }
 
 function brakesOf(r: AnswerReader): BrakesV1 | undefined {
+  // Not asked (no slide in the case) or not yet answered: no brakes to write.
+  if (r.status('vehicle.brakes') !== 'answered') return undefined;
   if (
     !r.complete(
       (id) =>

@@ -17,7 +17,7 @@ import {
   type MarkLook,
 } from './answers-read.js';
 import { caseQuestions } from './questions-case.js';
-import { vehicleQuestions } from './questions-vehicle.js';
+import { brakeQuestions, vehicleQuestions } from './questions-vehicle.js';
 import { slideQuestions } from './questions-slide.js';
 import { yawQuestions } from './questions-yaw.js';
 
@@ -48,12 +48,20 @@ export function chainReason(look: MarkLook, metric: boolean): string {
   }[look];
 }
 
+/** Index of the first analysis in play whose marks are a slide, or undefined (none, or yaw only). */
+export function firstSlideOf(a: Answers): number | undefined {
+  for (let k = 0; k < analysisCount(a); k++) if (isSlideLook(markLook(a, k))) return k;
+  return undefined;
+}
+
 function analysisQuestions(i: number, now: Answers, segments: number): Question[] {
   const p = `a${i}`;
   const inPlay = (a: Answers) => i < analysisCount(a);
   const slide = (a: Answers) => inPlay(a) && isSlideLook(markLook(a, i));
   const yaw = (a: Answers) => inPlay(a) && markLook(a, i) === 'yaw';
   const section = analysisSection(now, i);
+  // The brakes are asked once, in the first analysis that is a slide, right after its marks' look.
+  const firstSlide = (a: Answers) => inPlay(a) && firstSlideOf(a) === i;
   // The track width is asked once, in the first yaw analysis that uses the centre-of-mass path.
   const askTrack = (a: Answers) => {
     for (let k = 0; k < analysisCount(a); k++)
@@ -88,6 +96,7 @@ function analysisQuestions(i: number, now: Answers, segments: number): Question[
         { value: 'yaw', key: 'y', label: 'curved sideways marks with diagonal striations (yaw)' },
       ],
     ),
+    ...brakeQuestions(section, firstSlide),
     textQuestion({
       id: `${p}.label`,
       section,
@@ -140,10 +149,24 @@ function expand(answers: Answers): Question[] {
     out.push(...analysisQuestions(i, answers, segs));
   }
   const units = unitsOf(answers);
-  return out.map((q) => {
+  return oneOfEach(out, answers).map((q) => {
     const hint = q.unitKind && unitHintOf(q.unitKind, units);
     return hint ? { ...q, unitHint: hint } : q;
   });
+}
+
+/**
+ * A question asked in whichever analysis needs it (the brakes, the track width) appears once per
+ * analysis; keep one of each id: the one that applies, else the first. So the jump list shows it
+ * where it is asked.
+ */
+function oneOfEach(list: Question[], answers: Answers): Question[] {
+  const pick = new Map<string, Question>();
+  for (const q of list) {
+    const had = pick.get(q.id);
+    if (!had || (!had.appliesWhen(answers) && q.appliesWhen(answers))) pick.set(q.id, q);
+  }
+  return list.filter((q) => pick.get(q.id) === q);
 }
 
 /** The questions that apply now, in the order asked. */

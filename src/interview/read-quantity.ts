@@ -13,6 +13,11 @@ export interface QuantitySpec {
   range: boolean;
   /** Set where the sign is asked separately: a minus sign then gets this hint. */
   noMinus?: string;
+  /**
+   * For a factor with a 0..1 rule: replaces the reader's percent hint ("0.012 for 1.2%"), which
+   * misleads when a value just over 1 was meant as a decimal.
+   */
+  decimalNote?: string;
 }
 
 export type QuantityRead =
@@ -32,7 +37,12 @@ export function readQuantity(text: string, spec: QuantitySpec, units: UnitSystem
     allowRange: spec.range,
     ...(spec.noMinus ? { signed: false, negativeHint: spec.noMinus } : {}),
   });
-  if (!r.ok) return r;
+  if (!r.ok) {
+    const cut = r.message.indexOf('; write it as a decimal');
+    return spec.decimalNote && cut >= 0
+      ? { ok: false, message: `${r.message.slice(0, cut)}; ${spec.decimalNote}` }
+      : r;
+  }
   return r.converted
     ? { ok: true, value: r.value, notice: `converted: ${r.converted}` }
     : { ok: true, value: r.value };

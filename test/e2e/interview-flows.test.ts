@@ -10,7 +10,9 @@ import {
   caseFiles,
   readCase,
   readReview,
+  roundsTo,
   shownResults,
+  shownSteps,
   solveJson,
   type SolvedJson,
 } from './review.js';
@@ -76,6 +78,20 @@ describe.skipIf(!pty.ok)(
       expect(shown).toHaveLength(2);
       expect(shown).toEqual(asShown(solved));
       expect(solved.analyses.map((a) => a.kind)).toEqual(['skid', 'yaw']);
+      // Every step's result on the review is the solved one, rounded as shown.
+      const steps = shownSteps(lines);
+      expect(steps.map((s) => s.length)).toEqual(solved.analyses.map((a) => a.steps.length));
+      solved.analyses.forEach((a, i) =>
+        a.steps.forEach((st, j) => {
+          const seen = steps[i]![j]!;
+          expect(
+            roundsTo(st.result, seen.value),
+            `${a.id} step ${j + 1} ${st.name}: ${st.result} shown ${seen.value.n}`,
+          ).toBe(true);
+          expect(roundsTo(st.low, seen.low), `${a.id} step ${j + 1} ${st.name} low`).toBe(true);
+          expect(roundsTo(st.high, seen.high), `${a.id} step ${j + 1} ${st.name} high`).toBe(true);
+        }),
+      );
       // The review also says what the figure means and its cautions.
       expect(lines.join('\n')).toMatch(/Cautions/);
       expect(lines.join('\n')).toMatch(/Posted limit 40 mph/);

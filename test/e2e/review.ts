@@ -18,25 +18,72 @@ export interface ShownResult {
   unit: string;
 }
 
+/** The scroll marker under a long review: `lines 33-65 of 104 · ...` (src/ui's scroll view). */
+const MARKER = /^lines (\d+)-(\d+) of (\d+)/;
+
 /**
- * Pages through the review (PgDn) until a page no longer changes the screen, and returns every
- * line seen, in order, each once. The last page is known by waiting `endMs` for a change that
- * does not come.
+ * The whole review, line by line in order, as a person paging through it (PgDn) reads it. Each
+ * page's lines are placed by the scroll marker under them, so repeated lines (two steps with the
+ * same result) are kept, and paging overlap is not counted twice. A review that fits on one
+ * screen has no marker: then the screen is the review.
  */
-export async function readReview(t: Term, maxPages = 40, endMs = 1_500): Promise<string[]> {
-  const seen: string[] = [];
+export async function readReview(t: Term, maxPages = 40): Promise<string[]> {
+  const lines: string[] = [];
   let screen = t.screen();
   for (let page = 0; page < maxPages; page++) {
-    for (const line of screen.split('\n')) if (!seen.includes(line)) seen.push(line);
+    const rows = screen.split('\n');
+    const at = rows.findIndex((r) => MARKER.test(r.trim()));
+    if (at < 0) return page === 0 ? rows : lines;
+    const [, from, to, total] = MARKER.exec(rows[at]!.trim())!.map(Number) as [
+      number,
+      number,
+      number,
+      number,
+    ];
+    const shown = rows.slice(at - (to - from + 1), at);
+    shown.forEach((l, i) => (lines[from - 1 + i] = l));
+    if (to >= total) return lines;
     await t.press('pagedown');
-    try {
-      screen = await t.waitForChange(screen, { timeoutMs: endMs });
-    } catch {
-      break;
+    screen = await t.waitForChange(screen, { what: 'the next page of the review' });
+  }
+  throw new Error(`the review did not end within ${maxPages} pages`);
+}
+
+/** A number as shown (`−3.0`, `0.64`), with how many decimals it was shown with. */
+function shownNumber(s: string): { n: number; dp: number } {
+  const t = s.replace('\u2212', '-');
+  return { n: Number(t), dp: t.includes('.') ? t.length - t.indexOf('.') - 1 : 0 };
+}
+
+export interface ShownStep {
+  value: { n: number; dp: number };
+  low: { n: number; dp: number };
+  high: { n: number; dp: number };
+}
+
+const RESULT = /^\s+result\s+([−-]?[\d.]+)[^(]*(?:\(([−-]?[\d.]+) to ([−-]?[\d.]+)\))?/;
+
+/** Each analysis's step results as the review prints them (`result 0.64 (0.58 to 0.70)`). */
+export function shownSteps(lines: string[]): ShownStep[][] {
+  const out: ShownStep[][] = [];
+  for (const l of lines) {
+    if (/^Analysis \d+ · /.test(l)) out.push([]);
+    const m = RESULT.exec(l);
+    if (m && out.length) {
+      const value = shownNumber(m[1]!);
+      out[out.length - 1]!.push({
+        value,
+        low: m[2] ? shownNumber(m[2]) : value,
+        high: m[3] ? shownNumber(m[3]) : value,
+      });
     }
   }
-  return seen;
+  return out;
 }
+
+/** Whether a shown number is the exact one rounded to the decimals shown. */
+export const roundsTo = (exact: number, shown: { n: number; dp: number }) =>
+  Math.abs(exact - shown.n) <= 0.5 * 10 ** -shown.dp + 1e-9;
 
 const SPEED = /Speed when the marks began: ([\d.]+) (mph|km\/h)(?: \(([\d.]+) to ([\d.]+)\))?/;
 const AT_LEAST = /at least (\d+) (mph|km\/h)/;
@@ -72,6 +119,7 @@ export interface SolvedJson {
     kind: string;
     speed: { value: number; low: number; high: number };
     minimum: number;
+    steps: { name: string; result: number; low: number; high: number; unit: string }[];
   }[];
   postedLimit?: { value: number; exceededAtMinimum: boolean };
 }

@@ -3,7 +3,7 @@ import { currentQuestion, questionsFor, buildCase } from '../../src/interview/in
 import { fillUntil, ids, start, type } from './drive.js';
 
 // Invented scenario answers: a case started at the roadside, feet and mph, all brakes working.
-const BASE = { units: 'i', 'vehicle.brakes': 'a' };
+const BASE = { units: 'i' };
 const atLook = () => fillUntil(start(), BASE, 'a0.look');
 
 describe('branching on the look of the marks', () => {
@@ -11,7 +11,9 @@ describe('branching on the look of the marks', () => {
     const s = type(atLook(), 'd');
     expect(s.notice).toContain('locked wheels sliding');
     expect(s.notice).toContain('S = sqrt(30 d f n)');
-    const after = type(s, '', 'o');
+    // The brakes come right after the look of the first slide's marks.
+    expect(currentQuestion(s)?.id).toBe('vehicle.brakes');
+    const after = type(s, 'a', '', 'o');
     expect(ids(after)).toEqual(
       expect.arrayContaining(['a0.count', 'a0.seg0.drag.source', 'a0.seg0.grade.dir', 'a0.end']),
     );
@@ -30,13 +32,13 @@ describe('branching on the look of the marks', () => {
   it('skip skids count the whole length, gaps included', () => {
     const s = type(atLook(), 's');
     expect(s.notice).toContain('gaps included');
-    expect(ids(type(s, '', 'o'))).toContain('a0.count');
+    expect(ids(type(s, 'a', '', 'o'))).toContain('a0.count');
   });
 
   it('gap skids are a slide in parts: no single-surface choice, no mark lengths, gaps left out', () => {
     let s = type(atLook(), 'g');
     expect(s.notice).toContain('gaps were not braking');
-    s = type(s, '');
+    s = type(s, 'a', '');
     const surfaces = currentQuestion(s)!;
     expect(surfaces.id).toBe('a0.surfaces');
     expect(surfaces.choices!.map((c) => c.value)).toEqual(['several', 'quick']);
@@ -68,7 +70,7 @@ describe('branching on the look of the marks', () => {
   });
 
   it('several surfaces add a length and a label per segment, as many as counted', () => {
-    const s = type(atLook(), 'd', '', 's', '', '3');
+    const s = type(atLook(), 'd', 'a', '', 's', '', '3');
     const seg = ids(s).filter((id) => /^a0\.seg\d\.length$/.test(id));
     expect(seg).toEqual(['a0.seg0.length', 'a0.seg1.length', 'a0.seg2.length']);
     expect(ids(s)).toContain('a0.seg2.label');
@@ -76,7 +78,7 @@ describe('branching on the look of the marks', () => {
 });
 
 describe('branching on the brakes', () => {
-  const atBrakes = () => fillUntil(start(), { units: 'i' }, 'vehicle.brakes');
+  const atBrakes = () => fillUntil(start(), { units: 'i', 'a0.look': 'd' }, 'vehicle.brakes');
   const vehicleIds = (s: ReturnType<typeof start>) =>
     ids(s).filter((id) => id.startsWith('vehicle.'));
 
@@ -127,7 +129,7 @@ describe('branching on the brakes', () => {
 });
 
 describe('branching inside an analysis', () => {
-  const atSource = () => type(atLook(), 'd', '', 'o', '1', '80', '');
+  const atSource = () => type(atLook(), 'd', 'a', '', 'o', '1', '80', '');
 
   it.each([
     ['t', ['a0.seg0.drag.surface', 'a0.seg0.drag.value']],
@@ -176,7 +178,7 @@ describe('branching inside an analysis', () => {
   });
 
   it('the centre-of-mass path asks the track width; another analysis adds its questions', () => {
-    let s = type(atLook(), 'y', '', '40', '2.5', 'e', '0.7', 'n');
+    let s = type(atLook(), 'y', '', '', '40', '2.5', 'e', '0.7', 'n');
     expect(currentQuestion(s)!.id).toBe('a0.path');
     expect(ids(type(s, 'm'))).not.toContain('vehicle.trackWidth');
     s = type(s, 'c');
