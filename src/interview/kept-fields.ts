@@ -18,9 +18,10 @@ const CASE_OWN = [
   'vehicle',
   'analyses',
   'interview',
+  'sampling',
 ];
 const VEHICLE_OWN = ['label', 'frontAxleShare', 'trackWidth', 'brakes'];
-const SKID_OWN = ['id', 'kind', 'label', 'marks', 'distanceRule', 'segments', 'end'];
+const SKID_OWN = ['id', 'kind', 'label', 'marks', 'distanceRule', 'segments', 'end', 'timeDistance'];
 const YAW_OWN = [
   'id',
   'kind',
@@ -30,6 +31,7 @@ const YAW_OWN = [
   'drag',
   'superelevation',
   'pathAdjustment',
+  'offsets',
 ];
 
 /** Hidden answer ids: not questions, never listed in the jump list. */
@@ -59,9 +61,9 @@ export function kept(answers: Answers, id: string): Record<string, unknown> {
   return v && typeof v === 'object' && !Array.isArray(v) ? (v as Record<string, unknown>) : {};
 }
 
-/** True for a yaw kept as measured by offsets: its chord and ordinate are not asked. */
+/** True for a yaw whose radius was measured by offsets: its chord and ordinate are not asked. */
 export const measuredByOffsets = (answers: Answers, i: number): boolean =>
-  kept(answers, analysisKeep(i)).offsets !== undefined;
+  answers[`a${i}.measure`]?.value === 'offsets';
 
 /** Answers that are not questions (kept ids and fields). */
 export const isMetaAnswer = (id: string): boolean =>

@@ -20,6 +20,7 @@ export interface QuestionBase {
   explainChoice?(answers: Answers): string | undefined;
   example?: string;
   optional?: boolean;
+  usesPreference?: 'reactionTime';
 }
 
 function finish(

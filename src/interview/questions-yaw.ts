@@ -1,11 +1,16 @@
-/** Questions of a yaw (critical speed) analysis: chord, middle ordinate, drag, bank, path. */
+/**
+ * Questions of a yaw (critical speed) analysis: how the radius was measured (one chord and its
+ * middle ordinate, or offsets at stations along one chord), drag, bank, path.
+ */
 import { RULES } from '../case/quantity.js';
 import type { Answers, AnswerContext, Question } from './types.js';
-import { choiceQuestion, quantityQuestion } from './question-kinds.js';
+import { choiceQuestion, customQuestion, quantityQuestion } from './question-kinds.js';
 import { choiceOf, unitsOf } from './answers-read.js';
 import { measuredByOffsets } from './kept-fields.js';
 import { spread } from '../case/quantity.js';
 import { radiusFromChord, unitsOf as engineUnits } from '../engine/index.js';
+import { radiusFromOffsets } from '../engine/radius-offsets.js';
+import { readStations, STATIONS_SYNTAX, type StationValue } from './read-stations.js';
 import { readQuantity } from './read-quantity.js';
 import { dragQuestions } from './questions-drag.js';
 import { bankQuestions } from './questions-grade.js';
@@ -50,17 +55,87 @@ function radiusLine(a: Answers, p: string): string | undefined {
   return r.ok ? [r.value.step.substituted, ...r.value.warnings].join(' ') : undefined;
 }
 
+/** The engine's radius from the offsets answered, with its warnings (scatter, few stations). */
+function offsetsLine(a: Answers, p: string): string | undefined {
+  const units = unitsOf(a);
+  const t = a[`${p}.offsets.chord`]?.text;
+  const c = t === undefined ? undefined : readQuantity(t, LENGTH, units);
+  const st = a[`${p}.offsets.stations`]?.value as StationValue[] | undefined;
+  if (!c?.ok || !Array.isArray(st)) return undefined;
+  const r = radiusFromOffsets(spread(c.value), st, units, engineUnits(units));
+  return r.ok ? [r.value.step.substituted, ...r.value.warnings].join(' ') : r.reason;
+}
+
 /**
  * Yaw questions of analysis `i`. `askTrack` says whether this analysis is where the track width
  * is asked (the first yaw analysis using the centre-of-mass path).
  */
 export function yawQuestions(...args: Parameters<typeof yawQuestionsOf>): Question[] {
-  const [i, , applies] = args;
-  // A yaw measured by offsets (kept from a file) is not asked for a chord and ordinate.
+  const [i, section, applies] = args;
+  const p = `a${i}`;
   const byOrdinate = (a: Answers) => applies(a) && !measuredByOffsets(a, i);
-  return yawQuestionsOf(...args).map((q) =>
-    q.id === `a${i}.chord` || q.id === `a${i}.ordinate` ? { ...q, appliesWhen: byOrdinate } : q,
-  );
+  const byOffsets = (a: Answers) => applies(a) && measuredByOffsets(a, i);
+  const [chord, ordinate, ...rest] = yawQuestionsOf(...args);
+  return [
+    choiceQuestion(
+      {
+        id: `${p}.measure`,
+        section,
+        title: 'Radius measured by',
+        prompt: 'How was the radius of the mark measured?',
+        help: {
+          why: 'The radius comes from one chord and its middle ordinate, or from a circle fitted to offsets read at several stations along one chord; several offsets show how well the mark follows a circle.',
+          how: 'Offsets: stretch one chord along the mark and read, at stations measured from its start, the distance square to the tape to the mark.',
+        },
+        appliesWhen: applies,
+        defaultText: () => 'ordinate',
+        explainChoice: (a) =>
+          measuredByOffsets(a, i)
+            ? 'The radius will be the circle fitted through the chord ends and the offsets (least squares), with its scatter.'
+            : 'The radius will be R = C²/(8M) + M/2 from the chord and its middle ordinate.',
+      },
+      [
+        { value: 'ordinate', key: 'c', label: 'one chord and its middle ordinate' },
+        { value: 'offsets', key: 'o', label: 'offsets at stations along one chord' },
+      ],
+    ),
+    { ...chord!, appliesWhen: byOrdinate },
+    { ...ordinate!, appliesWhen: byOrdinate },
+    quantityQuestion(
+      {
+        id: `${p}.offsets.chord`,
+        section,
+        title: 'Chord (offsets)',
+        prompt: 'Length of the chord the offsets are read from',
+        help: {
+          why: "The chord's two ends lie on the mark; with the offsets between them they fix the circle.",
+          how: "Use the outside front tire's mark where the vehicle first yaws, as for a single chord.",
+        },
+        appliesWhen: byOffsets,
+        example: '45',
+      },
+      { ...LENGTH, rule: { ...RULES.length, what: 'chord' } },
+    ),
+    customQuestion(
+      {
+        id: `${p}.offsets.stations`,
+        section,
+        title: 'Offsets',
+        prompt:
+          'Offsets along the chord: distance from its start, then the offset, in pairs (e.g. 10 1.9, 20 2.5, 30 1.9)',
+        help: {
+          why: 'A circle is fitted through the chord ends and these points; how far they scatter about it says how well the mark is a circle.',
+          how: `Type the ${STATIONS_SYNTAX}. Each station must lie inside the chord. A unit may be glued to a number (3.1m:0.12m).`,
+        },
+        appliesWhen: byOffsets,
+        example: '10 1.9, 20 2.5, 30 1.9',
+        explainChoice: (a) => offsetsLine(a, p),
+      },
+      'list',
+      (text, ctx) => readStations(text, ctx.units, chordLow(`${p}.offsets.chord`, ctx)),
+    ),
+    ...rest,
+  ];
 }
 
 function yawQuestionsOf(

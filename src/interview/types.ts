@@ -78,6 +78,8 @@ export interface Question {
   defaultText?(answers: Answers): string | undefined;
   /** A sentence saying what the current answer implies (e.g. which formula chain and why). */
   explainChoice?(answers: Answers): string | undefined;
+  /** An empty answer keeps this preference (the screen shows its value as what Enter gives). */
+  usesPreference?: 'reactionTime';
 }
 
 /** A question's state in the jump list. `unused`: answered, but its branch no longer applies. */

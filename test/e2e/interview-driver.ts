@@ -63,11 +63,23 @@ export interface DriveOptions {
   onAnswer?: (id: string, keys: number) => void;
 }
 
-/** The script's answer; an optional question it does not mention is skipped with Enter, as a person would. */
-function answerFor(script: Script, q: Question): string {
-  const answer = script[q.id] ?? (q.optional ? '' : undefined);
-  if (answer === undefined) throw new Error(`script has no answer for ${q.id}: "${q.prompt}"`);
-  return answer;
+/**
+ * The script's answer. A question the script does not mention is answered as a person who does
+ * not care would: Enter, when it is optional or offers a default (said on the console, so a new
+ * question shows up in the test output); otherwise the script is incomplete and the test fails.
+ */
+function answerFor(script: Script, q: Question, state: InterviewState): string {
+  const answer = script[q.id];
+  if (answer !== undefined) return answer;
+  if (q.optional) return '';
+  const offered = q.defaultText?.(state.answers);
+  if (offered !== undefined) {
+    console.log(
+      `interview driver: ${q.id} is not in the script; Enter takes its default "${offered}"`,
+    );
+    return '';
+  }
+  throw new Error(`script has no answer for ${q.id}: "${q.prompt}"`);
 }
 
 /**
@@ -95,7 +107,7 @@ export function dryRun(
   for (let n = 0; n < 500; n++) {
     const q = currentQuestion(state);
     if (!q || q.id === opts.stopAt || n === opts.maxAnswers) return state;
-    const answer = answerFor(script, q);
+    const answer = answerFor(script, q, state);
     state = mirrorStep(state, q, answer);
     if (state.error)
       throw new Error(`script answer "${answer}" for ${q.id} was rejected: ${state.error.message}`);
@@ -130,7 +142,7 @@ export async function typeInterview(
   for (let n = 0; ; n++) {
     const q = currentQuestion(state);
     if (!q || q.id === opts.stopAt || n === opts.maxAnswers) return state;
-    const answer = answerFor(script, q);
+    const answer = answerFor(script, q, state);
     const mark = promptMark(q);
     let screen = await t.waitFor((s) => squash(s).includes(mark), {
       what: `question ${q.id} ("${mark}")`,
