@@ -34,7 +34,7 @@ const KNOWN = {
     decelerometer: ['source', 'readings', 'note'],
   },
   test: ['speed', 'distance'],
-  skid: ['id', 'kind', 'label', 'marks', 'distanceRule', 'segments', 'end', 'timeDistance'],
+  skid: ['id', 'kind', 'label', 'appearance', 'marks', 'distanceRule', 'segments', 'end', 'timeDistance'],
   yaw: [
     'id',
     'kind',

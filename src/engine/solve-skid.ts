@@ -23,6 +23,14 @@ const sumRanges = (rs: Range[]): Range =>
     high: 0,
   });
 
+/** The caveat each look of the marks carries (DOMAIN.md, "Marks"; all common practice). */
+const APPEARANCE_NOTES: Record<'locked' | 'abs' | 'skip' | 'gap', string | undefined> = {
+  locked: undefined,
+  abs: 'The marks are faint, evenly dashed anti-lock braking marks: they show hard braking, but the slide-to-stop figure from them is an estimate (common practice); say so in the report.',
+  skip: 'Skip skid: the tire bounced, so the short regular gaps are part of the slide and the whole length, gaps included, counts as sliding distance (common practice).',
+  gap: 'Gap skid: the brakes were released and reapplied, so the gaps are not braking; only the marked parts count, each as its own segment (common practice).',
+};
+
 /** Solves one skid analysis of a case (index i) into its speed, steps, assumptions and model. */
 export function solveSkid(c: CaseV1, i: number, a: SkidV1): AnalysisOutcome {
   const system = c.units;
@@ -115,6 +123,8 @@ export function solveSkid(c: CaseV1, i: number, a: SkidV1): AnalysisOutcome {
   assumptions.push(
     'Speed lost before the marks began (before the wheels locked) is not counted: the figure is a minimum for the speed where the marks begin.',
   );
+  const look = APPEARANCE_NOTES[a.appearance ?? 'locked'];
+  if (look) assumptions.push(look);
   if (a.segments.some((s) => s.grade !== undefined))
     assumptions.push(
       'Grade enters as f × n + G/100 (trade approximation of f n cos θ + sin θ, under 0.5% apart below a 10% grade).',

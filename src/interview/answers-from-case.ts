@@ -12,6 +12,7 @@ import { quantityText } from './read-quantity.js';
 import { signed } from './signed.js';
 import { surfaceRow, OTHER_SURFACE } from './drag-table.js';
 import { WHEELS } from './questions-vehicle.js';
+import { DEFAULT_SAMPLES, DEFAULT_SEED } from '../extras/sampling.js';
 import {
   analysisExtras,
   analysisKeep,
@@ -147,12 +148,25 @@ export function answersFromCase(c: Case): Answers {
   c.analyses.forEach((a, i) => {
     const p = `a${i}`;
     put(`${p}.id`, a.id);
-    const extra = analysisExtras(a);
-    if (extra) put(analysisKeep(i), '', extra);
+    // Without a limit the time-distance questions are not asked: the field is kept as it is.
+    const timeKept =
+      a.kind === 'skid' && a.timeDistance && c.postedLimit === undefined
+        ? { timeDistance: a.timeDistance }
+        : {};
+    const extra = { ...analysisExtras(a), ...timeKept };
+    if (Object.keys(extra).length) put(analysisKeep(i), '', extra);
     put(`${p}.label`, a.label ?? '');
     put(`${p}.more`, i < c.analyses.length - 1 ? 'yes' : 'no');
     if (a.kind === 'yaw') {
       put(`${p}.look`, 'yaw');
+      put(`${p}.measure`, a.offsets ? 'offsets' : 'ordinate');
+      if (a.offsets) {
+        put(`${p}.offsets.chord`, quantityText(a.offsets.chord));
+        put(
+          `${p}.offsets.stations`,
+          a.offsets.stations.map((st) => `${st.at} ${st.offset}`).join(', '),
+        );
+      }
       if (a.chord !== undefined) put(`${p}.chord`, quantityText(a.chord));
       if (a.middleOrdinate !== undefined) put(`${p}.ordinate`, quantityText(a.middleOrdinate));
       dragAnswers(put, p, a.drag);
@@ -181,6 +195,17 @@ export function answersFromCase(c: Case): Answers {
       put(`${p}.end.speed`, quantityText(a.end.speed));
       put(`${p}.end.basis`, a.end.basis ?? '');
     } else put(`${p}.end`, 'rest');
+    if (c.postedLimit !== undefined) {
+      const t = a.timeDistance;
+      put(`${p}.conflict`, t?.conflictAt === undefined ? '' : String(t.conflictAt));
+      put(`${p}.reaction`, t?.reactionTime === undefined ? '' : String(t.reactionTime));
+    }
   });
+  const sm = c.sampling;
+  put('sampling.shape', sm ? (sm.shape ?? 'uniform') : 'none');
+  if (sm) {
+    put('sampling.samples', String(sm.samples ?? DEFAULT_SAMPLES));
+    put('sampling.seed', String(sm.seed ?? DEFAULT_SEED));
+  }
   return normalize(A);
 }

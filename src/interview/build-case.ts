@@ -28,6 +28,13 @@ function skidOf(r: AnswerReader, i: number, id: string): AnalysisV1 {
     const basis = text(r, `${p}.end.basis`);
     out.end = { mode: 'speed', speed: r.value(`${p}.end.speed`) as Q, ...(basis ? { basis } : {}) };
   } else out.end = { mode: 'stop' };
+  const reaction = r.value(`${p}.reaction`);
+  const conflict = r.value(`${p}.conflict`);
+  if (typeof reaction === 'number' || typeof conflict === 'number')
+    out.timeDistance = {
+      ...(typeof reaction === 'number' ? { reactionTime: reaction } : {}),
+      ...(typeof conflict === 'number' ? { conflictAt: conflict } : {}),
+    };
   return out;
 }
 
@@ -40,8 +47,14 @@ function yawOf(r: AnswerReader, i: number, id: string): AnalysisV1 {
     drag: dragOf(r, p),
     pathAdjustment: r.value(`${p}.path`) === 'half-track' ? 'half-track' : 'none',
   };
-  // Measured by offsets (kept from the file): no chord and ordinate to write.
-  if (!measuredByOffsets(r.answers, i)) {
+  // One way of measuring the radius only: the file refuses both.
+  if (measuredByOffsets(r.answers, i))
+    out.offsets = {
+      chord: r.value(`${p}.offsets.chord`) as Q,
+      stations: r.value(`${p}.offsets.stations`) as { at: number; offset: number }[],
+    };
+  else {
+    delete out.offsets;
     out.chord = r.value(`${p}.chord`) as Q;
     out.middleOrdinate = r.value(`${p}.ordinate`) as Q;
   }
@@ -88,6 +101,18 @@ function brakesOf(r: AnswerReader): BrakesV1 | undefined {
     frontRight: wheel(WHEELS[1]),
     rearLeft: wheel(WHEELS[2]),
     rearRight: wheel(WHEELS[3]),
+  };
+}
+
+/** The distribution asked at the end of the case, when one was chosen and its questions are answered. */
+function samplingOf(r: AnswerReader): Case['sampling'] {
+  const shape = r.value('sampling.shape');
+  if (shape !== 'uniform' && shape !== 'normal') return undefined;
+  if (!r.complete((id) => id.startsWith('sampling.'))) return undefined;
+  return {
+    shape,
+    samples: r.value('sampling.samples') as number,
+    seed: r.value('sampling.seed') as number,
   };
 }
 
@@ -160,5 +185,7 @@ export function buildCase(state: InterviewState, meta: CaseMeta): Case {
   if (Object.keys(details).length) c.details = details;
   const limit = r.value('limit');
   if (limit !== undefined) c.postedLimit = limit as Q;
+  const sampling = samplingOf(r);
+  if (sampling) c.sampling = sampling;
   return c;
 }

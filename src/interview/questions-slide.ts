@@ -21,6 +21,7 @@ import { dragQuestions } from './questions-drag.js';
 import { gradeQuestions } from './questions-grade.js';
 import { quickFills } from './quick-fills.js';
 import { endQuestions } from './questions-end.js';
+import { timeDistanceQuestions } from './questions-extras.js';
 // A cycle (build-case reads the questions), safe because it is only called at run time.
 import { segmentsLine } from './build-parts.js';
 
@@ -195,6 +196,6 @@ export function slideQuestions(
       ...gradeQuestions(sp, section, what, here),
     );
   }
-  out.push(...endQuestions(p, section, applies));
+  out.push(...endQuestions(p, section, applies), ...timeDistanceQuestions(p, section, applies));
   return out;
 }

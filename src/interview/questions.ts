@@ -20,6 +20,7 @@ import { caseQuestions } from './questions-case.js';
 import { brakeQuestions, vehicleQuestions } from './questions-vehicle.js';
 import { slideQuestions } from './questions-slide.js';
 import { yawQuestions } from './questions-yaw.js';
+import { samplingQuestions } from './questions-extras.js';
 
 /** Heading of analysis `i`'s section, naming the chain picked. */
 export function analysisSection(a: Answers, i: number): string {
@@ -148,6 +149,7 @@ function expand(answers: Answers): Question[] {
     );
     out.push(...analysisQuestions(i, answers, segs));
   }
+  out.push(...samplingQuestions('End of the case', () => true));
   const units = unitsOf(answers);
   return oneOfEach(out, answers).map((q) => {
     const hint = q.unitKind && unitHintOf(q.unitKind, units);

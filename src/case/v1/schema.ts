@@ -171,6 +171,10 @@ export const skidV1 = z.looseObject({
   id: analysisId,
   kind: z.literal('skid'),
   label: text('label').optional(),
+  /** How the marks looked: decides the caveats the chain carries (docs/case-file.md). */
+  appearance: z
+    .enum(['locked', 'abs', 'skip', 'gap'], { error: 'appearance must be locked, abs, skip or gap' })
+    .optional(),
   marks: z.array(q(RULES.length), { error: 'marks must be a list of lengths' }).optional(),
   distanceRule: z
     .enum(['average', 'longest'], { error: 'distanceRule must be average or longest' })
