@@ -53,9 +53,10 @@ export function dragFactor(drag: DragV1, system: UnitSystem): Outcome<Drag> {
   if (drag.source === 'entered' || drag.source === 'table') {
     const f = fixedRange(drag);
     const isTable = drag.source === 'table';
-    const row = isTable ? dragTableRow(drag.surface) : undefined;
+    const surface = isTable ? (drag.surface ?? 'a surface not named') : '';
+    const row = isTable && drag.surface ? dragTableRow(drag.surface) : undefined;
     const source = isTable
-      ? `table: ${drag.surface}${drag.band ? `, ${drag.band}` : ''}`
+      ? `table: ${surface}${drag.band ? `, ${drag.band}` : ''}`
       : 'entered';
     if (isTable)
       notes.push(
@@ -73,7 +74,7 @@ export function dragFactor(drag: DragV1, system: UnitSystem): Outcome<Drag> {
         result: f,
         unit: '',
         why: isTable
-          ? `chosen from a table of typical ranges for ${drag.surface}: a guide, not a measurement`
+          ? `chosen from a table of typical ranges for ${surface}: a guide, not a measurement`
           : drag.note
             ? `entered: ${drag.note}`
             : 'entered by the investigator',

@@ -30,7 +30,7 @@ function gradeText(q: Quantity | undefined): string {
 
 function dragText(d: DragV1, table: readonly DragTableRow[]): string | undefined {
   if (d.source === 'entered') return `@${formatRangeText(d.value, d.low, d.high)}`;
-  if (d.source !== 'table') return undefined;
+  if (d.source !== 'table' || d.surface === undefined) return undefined;
   const key = d.band ? `${d.surface}/${BAND_SUFFIX[d.band]}` : d.surface;
   const choice = lookupTableKey(key, table);
   // A free-text surface (not a row of the table) cannot be written as @key.

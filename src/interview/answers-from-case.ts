@@ -55,10 +55,10 @@ function dragAnswers(
       }),
     );
     if (d.source === 'table') {
-      if (surfaceRow(d.surface)) put(`${p}.drag.surface`, d.surface);
+      if (d.surface && surfaceRow(d.surface)) put(`${p}.drag.surface`, d.surface);
       else {
         put(`${p}.drag.surface`, OTHER_SURFACE);
-        put(`${p}.drag.surfaceName`, d.surface);
+        put(`${p}.drag.surfaceName`, d.surface ?? '');
       }
     }
   } else if (d.source === 'test-skids') {

@@ -122,6 +122,58 @@ export function analysisId(state: InterviewState, i: number, kind: 'skid' | 'yaw
   return kept && /^[A-Za-z0-9._-]{1,64}$/.test(kept) ? kept : `${kind}-${i + 1}`;
 }
 
+/** An analysis that enters the case: its index in the interview, its stored id and kind. */
+interface Included {
+  i: number;
+  id: string;
+  kind: 'skid' | 'yaw';
+}
+
+/** The analyses complete enough to enter the case, with the ids they are stored under. */
+function included(
+  state: InterviewState,
+  answers: InterviewState['answers'],
+  r: AnswerReader,
+  brakes: boolean,
+  track: boolean,
+): Included[] {
+  const used = new Set<string>();
+  const out: Included[] = [];
+  for (let i = 0; i < analysisCount(answers); i++) {
+    const look = markLook(answers, i);
+    if (look === undefined) continue;
+    const own = r.complete((id) => id.startsWith(`a${i}.`) && id !== `a${i}.more`);
+    if (!own) continue;
+    const kind = look === 'yaw' ? 'yaw' : 'skid';
+    if (kind === 'skid' && !brakes) continue;
+    if (kind === 'yaw' && choiceOf(answers, `a${i}.path`) === 'half-track' && !track) continue;
+    let id = analysisId(state, i, kind);
+    if (used.has(id)) id = `${kind}-${i + 1}-${used.size}`;
+    used.add(id);
+    out.push({ i, id, kind });
+  }
+  return out;
+}
+
+/**
+ * What the look of the marks adds to each analysis that enters the case, by stored id: anti-lock
+ * marks make the slide figure an estimate (common practice, DOMAIN.md). The case file has no field
+ * for the look, so this is read from the answers.
+ */
+export function lookNotes(state: InterviewState): Record<string, string[]> {
+  const r = readAnswers(state.answers);
+  const out: Record<string, string[]> = {};
+  const brakes = brakesOf(r) !== undefined;
+  const track = r.value('vehicle.trackWidth') !== undefined;
+  for (const a of included(state, state.answers, r, brakes, track))
+    if (markLook(state.answers, a.i) === 'abs') out[a.id] = [ABS_NOTE];
+  return out;
+}
+
+/** The caution for a slide read from faint, evenly dashed marks. */
+export const ABS_NOTE =
+  'The marks were described as faint, evenly dashed marks (anti-lock brakes): the slide figure is an estimate from anti-lock marks and must be reported as such (common practice).';
+
 /**
  * The case as far as it is complete. Passes `loadCase`: an analysis enters only when every
  * question it needs (its own and the vehicle's it depends on) is answered and valid.
@@ -148,22 +200,9 @@ export function buildCase(state: InterviewState, meta: CaseMeta): Case {
   if (brakes?.mode === 'wheels' && share !== undefined) vehicle.frontAxleShare = share as Q;
   const track = r.value('vehicle.trackWidth');
   if (track !== undefined) vehicle.trackWidth = track as Q;
-  const used = new Set<string>();
-  const analyses: AnalysisV1[] = [];
-  for (let i = 0; i < analysisCount(answers); i++) {
-    const look = markLook(answers, i);
-    if (look === undefined) continue;
-    const own = r.complete((id) => id.startsWith(`a${i}.`) && id !== `a${i}.more`);
-    if (!own) continue;
-    const kind = look === 'yaw' ? 'yaw' : 'skid';
-    if (kind === 'skid' && !brakes) continue;
-    if (kind === 'yaw' && choiceOf(answers, `a${i}.path`) === 'half-track' && track === undefined)
-      continue;
-    let id = analysisId(state, i, kind);
-    if (used.has(id)) id = `${kind}-${i + 1}-${used.size}`;
-    used.add(id);
-    analyses.push(kind === 'skid' ? skidOf(r, i, id) : yawOf(r, i, id));
-  }
+  const analyses = included(state, answers, r, !!brakes, track !== undefined).map(
+    ({ i, id, kind }) => (kind === 'skid' ? skidOf(r, i, id) : yawOf(r, i, id)),
+  );
   const interview: SavedInterview = {
     version: 1,
     answers: state.answers,

@@ -70,7 +70,9 @@ export function summaryOfDone(state: InterviewState): string[] {
   );
   const brakes = a['vehicle.brakes']?.value;
   const brakeWords =
-    brakes === 'all'
+    r.status('vehicle.brakes') === undefined
+      ? 'brakes not needed (no slide)'
+      : brakes === 'all'
       ? 'all brakes working'
       : brakes === 'estimate'
         ? 'braking efficiency estimated'

@@ -19,9 +19,10 @@ function dragFills(fills: Answers, p: string, d: DragV1): void {
     quantityText({ value: d.value, low: d.low ?? d.value, high: d.high ?? d.value }),
   );
   if (d.source === 'table') {
-    const known = surfaceRow(d.surface) !== undefined;
-    fills[`${p}.drag.surface`] = answer(known ? d.surface : OTHER_SURFACE);
-    if (!known) fills[`${p}.drag.surfaceName`] = answer(d.surface);
+    const surface = d.surface;
+    const known = surface !== undefined && surfaceRow(surface) !== undefined;
+    fills[`${p}.drag.surface`] = answer(known ? surface : OTHER_SURFACE);
+    if (!known && surface !== undefined) fills[`${p}.drag.surfaceName`] = answer(surface);
   }
 }
 

@@ -42,9 +42,9 @@ export function dragSourceLines(d: DragV1, where: string): string[] {
         `${where}: entered by the investigator${d.note ? ` (${d.note})` : ''}; the basis is the investigator's, not the tool's.`,
       ];
     case 'table': {
-      const row = dragTableRow(d.surface);
+      const row = d.surface ? dragTableRow(d.surface) : undefined;
       const lines = [
-        `${where}: chosen from a reference table of typical ranges, surface "${d.surface}"${d.band ? `, speed band ${d.band}` : ''}${d.note ? ` (${d.note})` : ''}.`,
+        `${where}: chosen from a reference table of typical ranges, ${d.surface ? `surface "${d.surface}"` : 'surface not named'}${d.band ? `, speed band ${d.band}` : ''}${d.note ? ` (${d.note})` : ''}.`,
       ];
       lines.push(
         row

@@ -1,70 +1,46 @@
 /**
  * The review as plain lines, built from the engine's solution: each step with its formula, the
  * numbers substituted and its result; the range and the "at least" figure; the posted limit;
- * assumptions, warnings, sensitivity bars and the cautions. Pure, so the screen only scrolls it
+ * assumptions, warnings, sensitivity bars, the extras (with the case: time and distance at the
+ * limit, distribution, offsets fit, pictures as text) and the cautions. Pure, so the screen only scrolls it
  * and the tests read the same lines the user reads.
  */
-import type { AnalysisSolution, CaseSolution, Step } from '../engine/types.js';
+import type { AnalysisSolution, CaseSolution } from '../engine/types.js';
 import { CAUTIONS } from '../format/cautions.js';
-import { formatNumber, formatRange, type NumberKind } from '../format/numbers.js';
+import { formatNumber, formatRange } from '../format/numbers.js';
 import { sensitivity } from '../extras/sensitivity.js';
 import { sensitivityBars } from '../extras/sensitivity-bars.js';
-import { wrap } from '../report/wrap.js';
-import type { TONE } from './theme.js';
+import { pushWrapped, stepLines, type ShownLine } from './review-step.js';
+import { extrasLines, type ReviewContext } from './review-extras.js';
 
-/** One screen line and the meaning it is drawn with. */
-export interface ShownLine {
-  text: string;
-  tone?: keyof typeof TONE;
-  bold?: boolean;
-}
-
-/** Number style for a step's unit: speeds 1 dp, lengths by size, unitless factors 2 dp. */
-export function kindForUnit(unit: string): NumberKind {
-  if (unit === 'mph' || unit === 'km/h') return 'speed';
-  if (unit === 'ft' || unit === 'm') return 'length';
-  if (unit === '%') return 'percent';
-  if (unit === 's') return 'seconds';
-  // Unitless figures in a chain are drag factors and braking efficiencies: both 2 dp.
-  return 'drag';
-}
+export { kindForUnit, type ShownLine } from './review-step.js';
 
 /** "at least 41 mph": the low end rounded down, as the engine gives it in `minimum`. */
 export function atLeast(s: AnalysisSolution, speedUnit: string): string {
   return `at least ${formatNumber(s.minimum, 'integer')} ${speedUnit}`;
 }
 
-function push(
+function analysisLines(
   out: ShownLine[],
-  text: string,
+  s: AnalysisSolution,
+  sol: CaseSolution,
   width: number,
-  indent: string,
-  style: Omit<ShownLine, 'text'> = {},
+  ctx: ReviewContext | undefined,
 ) {
-  const lines = wrap(text, Math.max(10, width - indent.length - 2));
-  lines.forEach((l, i) => out.push({ text: (i === 0 ? indent : indent + '  ') + l, ...style }));
-}
-
-function stepLines(out: ShownLine[], step: Step, n: number, width: number) {
-  push(out, `${n}. ${step.name}`, width, '  ', { bold: true });
-  push(out, `formula  ${step.formula}`, width, '     ');
-  push(out, `numbers  ${step.substituted}`, width, '     ');
-  const r = { value: step.result, low: step.low, high: step.high };
-  push(out, `result   ${formatRange(r, kindForUnit(step.unit), step.unit)}`, width, '     ', {
-    tone: 'result',
-  });
-  if (step.why) push(out, `why      ${step.why}`, width, '     ', { tone: 'muted' });
-}
-
-function analysisLines(out: ShownLine[], s: AnalysisSolution, sol: CaseSolution, width: number) {
   const unit = sol.units.speed;
-  s.steps.forEach((step, i) => stepLines(out, step, i + 1, width));
+  s.steps.forEach((step, i) => stepLines(out, step, i + 1, width, '  '));
   out.push({ text: '' });
-  push(out, `Speed when the marks began: ${formatRange(s.speed, 'speed', unit)}`, width, '  ', {
-    tone: 'result',
-    bold: true,
-  });
-  push(out, `Result: ${atLeast(s, unit)} (the low end, rounded down).`, width, '  ', {
+  pushWrapped(
+    out,
+    `Speed when the marks began: ${formatRange(s.speed, 'speed', unit)}`,
+    width,
+    '  ',
+    {
+      tone: 'result',
+      bold: true,
+    },
+  );
+  pushWrapped(out, `Result: ${atLeast(s, unit)} (the low end, rounded down).`, width, '  ', {
     tone: 'result',
     bold: true,
   });
@@ -73,7 +49,7 @@ function analysisLines(out: ShownLine[], s: AnalysisSolution, sol: CaseSolution,
     // A limit converted from the other unit is not whole: show it as converted, not rounded.
     const limit = `${formatNumber(v, Number.isInteger(v) ? 'integer' : 'speed')} ${unit}`;
     const above = s.speed.low > sol.postedLimit.value;
-    push(
+    pushWrapped(
       out,
       `Posted limit ${limit}: the low end is ${above ? 'above' : 'not above'} the limit.`,
       width,
@@ -83,11 +59,11 @@ function analysisLines(out: ShownLine[], s: AnalysisSolution, sol: CaseSolution,
   }
   if (s.assumptions.length) {
     out.push({ text: '  Assumptions', bold: true });
-    for (const a of s.assumptions) push(out, `- ${a}`, width, '   ');
+    for (const a of s.assumptions) pushWrapped(out, `- ${a}`, width, '   ');
   }
   if (s.warnings.length) {
     out.push({ text: '  Warnings', bold: true, tone: 'warning' });
-    for (const w of s.warnings) push(out, `! ${w}`, width, '   ', { tone: 'warning' });
+    for (const w of s.warnings) pushWrapped(out, `! ${w}`, width, '   ', { tone: 'warning' });
   }
   const rows = sensitivity(s);
   if (rows.length) {
@@ -95,40 +71,53 @@ function analysisLines(out: ShownLine[], s: AnalysisSolution, sol: CaseSolution,
     for (const l of sensitivityBars(rows, width - 2, { speedUnit: unit }))
       out.push({ text: '  ' + l });
   }
+  if (ctx) out.push(...extrasLines(s, sol.units, ctx, width));
 }
 
 /**
  * Lines of the review for a solved case, at most `width` columns each.
  * @example reviewLines(solveCase(c), 80)[0] // { text: 'Analysis 1 · slide · skid-1', ... }
  */
-export function reviewLines(sol: CaseSolution, width: number): ShownLine[] {
+export function reviewLines(sol: CaseSolution, width: number, ctx?: ReviewContext): ShownLine[] {
   const out: ShownLine[] = [];
   sol.analyses.forEach((a, i) => {
     const head = a.ok ? a.solution : a;
     const kind = head.kind === 'skid' ? 'slide' : 'critical speed (yaw)';
     const label = a.ok && a.solution.label ? ` · ${a.solution.label}` : '';
-    push(out, `Analysis ${i + 1} · ${kind} · ${head.id}${label}`, width, '', {
+    pushWrapped(out, `Analysis ${i + 1} · ${kind} · ${head.id}${label}`, width, '', {
       tone: 'heading',
       bold: true,
     });
-    if (a.ok) analysisLines(out, a.solution, sol, width);
+    if (a.ok) analysisLines(out, a.solution, sol, width, ctx);
     else
-      push(out, `Cannot be computed${a.path ? ` (${a.path})` : ''}: ${a.reason}`, width, '  ', {
-        tone: 'error',
-      });
+      pushWrapped(
+        out,
+        `Cannot be computed${a.path ? ` (${a.path})` : ''}: ${a.reason}`,
+        width,
+        '  ',
+        {
+          tone: 'error',
+        },
+      );
     out.push({ text: '' });
   });
   if (sol.analyses.length === 0)
     out.push({ text: 'No analysis yet: answer the questions about the marks.', tone: 'warning' });
   if (sol.postedLimit?.exceededAtMinimum)
-    push(out, 'At its low end, at least one analysis is above the posted limit.', width, '', {
-      tone: 'warning',
-    });
+    pushWrapped(
+      out,
+      'At its low end, at least one analysis is above the posted limit.',
+      width,
+      '',
+      {
+        tone: 'warning',
+      },
+    );
   if (sol.warnings.length) {
     out.push({ text: 'About the file', bold: true, tone: 'warning' });
-    for (const w of sol.warnings) push(out, `! ${w}`, width, '  ', { tone: 'warning' });
+    for (const w of sol.warnings) pushWrapped(out, `! ${w}`, width, '  ', { tone: 'warning' });
   }
   out.push({ text: 'Cautions', bold: true, tone: 'warning' });
-  for (const c of CAUTIONS) push(out, `* ${c}`, width, '  ');
+  for (const c of CAUTIONS) pushWrapped(out, `* ${c}`, width, '  ');
   return out;
 }

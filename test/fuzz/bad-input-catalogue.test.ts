@@ -27,6 +27,8 @@ interface Traits {
   single?: boolean;
   /** Pairs `speed/distance`. */
   pairs?: boolean;
+  /** Pairs `along offset` (stations along a chord). */
+  stations?: boolean;
 }
 
 const TRAITS: Record<string, Traits> = {
@@ -50,6 +52,13 @@ const TRAITS: Record<string, Traits> = {
   'a#.chord': {},
   'a#.ordinate': {},
   'a#.bank.pct': { unsigned: true },
+  'a#.offsets.chord': {},
+  'a#.offsets.stations': { stations: true },
+  'a#.conflict': { emptyOk: true, zeroOk: true, single: true },
+  // Perception-reaction time: DOMAIN.md's values run from about 0.7 s to 2.5 s; 0 s is not one.
+  'a#.reaction': { emptyOk: true, single: true },
+  'sampling.samples': { emptyOk: true, count: true },
+  'sampling.seed': { emptyOk: true, count: true, zeroOk: true },
 };
 
 type Expect = 'accepted' | RegExp;
@@ -73,7 +82,7 @@ const CATALOGUE: [string, (t: Traits) => Expect][] = [
         : t.unsigned
           ? /minus sign.*(uphill or downhill|toward or away)/
           : t.count
-            ? /whole number from 1/
+            ? /whole number from \d+/
             : /greater than 0|at least 0/,
   ],
   [
@@ -84,8 +93,8 @@ const CATALOGUE: [string, (t: Traits) => Expect][] = [
         : t.zeroOk
           ? 'accepted'
           : t.count
-            ? /whole number from 1/
-            : /greater than 0/,
+            ? /whole number from \d+/
+            : /greater than 0|at least 0\.\d|at least [1-9]/,
   ],
   ['1e309', (t) => (t.pairs ? /speed\/distance/ : t.count ? /not a whole number/ : /too large/)],
   ['NaN', (t) => (t.pairs ? /speed\/distance/ : t.count ? /not a whole number/ : /finite number/)],
@@ -106,6 +115,11 @@ const CATALOGUE: [string, (t: Traits) => Expect][] = [
   ],
 ];
 
+/** Stations are typed as pairs: any malformed entry is answered with how to write a pair. */
+const STATION_HELP = /along offset|not a number/;
+const rule = (f: (t: Traits) => Expect) => (t: Traits) =>
+  t.stations ? (f({}) === 'accepted' ? 'accepted' : STATION_HELP) : f(t);
+
 const questions = numericQuestions();
 
 /** The message the screen shows for `text` typed at the question (undefined when accepted). */
@@ -122,7 +136,8 @@ describe('the bad-input catalogue', () => {
 
   const rows = questions.flatMap((at) =>
     CATALOGUE.map(
-      ([input, rule]) => [at.q.id, input, rule(TRAITS[family(at.q.id)] ?? {}), at] as const,
+      ([input, expected]) =>
+        [at.q.id, input, rule(expected)(TRAITS[family(at.q.id)] ?? {}), at] as const,
     ),
   );
   it.each(

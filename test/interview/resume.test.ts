@@ -52,8 +52,9 @@ describe('buildCase', () => {
     }
     const last = buildCase(s, { id: 'hw-77' });
     expect(last.analyses).toHaveLength(1);
-    // Complete once the track width the path needs is given: only "another analysis?" is then left.
-    expect(withAnalysis).toEqual(['a0.more']);
+    // Complete once the track width the path needs is given: only "another analysis?" and the
+    // distribution at the end of the case are then left.
+    expect(withAnalysis).toEqual(['a0.more', 'sampling.shape']);
     expect(last.analyses[0]).toEqual({
       id: 'yaw-1',
       kind: 'yaw',
@@ -84,11 +85,13 @@ describe('buildCase', () => {
     expect(firstOpenQuestion(back)).toBe('a0.drag.source');
     expect(summaryOfDone(back)).toEqual([
       'Case HW-77: metres and km/h, posted limit 80 km/h',
-      'Vehicle: all brakes working',
+      // A yaw-only case is never asked about the brakes.
+      'Vehicle: brakes not needed (no slide)',
       // Open in the analysis: drag source, bank, path (the source's and bank's follow-ups not yet
-      // applicable; "another analysis?" not counted). Applicable: 7 case + 2 vehicle + 8 yaw = 17.
+      // applicable; "another analysis?" not counted). Applicable: 7 case + 1 vehicle + 9 yaw
+      // (look, label, measure, chord, ordinate, drag, bank, path, more) + 1 distribution = 18.
       'Analysis 1 - critical speed: yaw marks; 3 questions left',
-      '13 of 17 questions answered',
+      '13 of 18 questions answered',
     ]);
   });
 });

@@ -80,10 +80,15 @@ describe('messages for bad input', () => {
     );
   });
 
-  it('a braking efficiency above 1 names the bound', () => {
-    expect(
-      rejection({ units: 'i', 'vehicle.brakes': 'e' }, 'vehicle.brakes.efficiency', '1.2'),
-    ).toMatch(/^braking efficiency must be at most 1/);
+  it('a braking efficiency above 1 names the bound and says it is a decimal from 0 to 1', () => {
+    const before = { units: 'i', 'a0.look': 'd', 'vehicle.brakes': 'e' };
+    const m = rejection(before, 'vehicle.brakes.efficiency', '1.2');
+    expect(m).toBe(
+      'braking efficiency must be at most 1; braking efficiency is a decimal from 0 to 1, e.g. 0.85',
+    );
+    // No reading of 1.2 as a percentage: the rule is 0..1.
+    expect(m).not.toContain('0.012');
+    expect(rejection(before, 'vehicle.brakes.efficiency', '85')).toContain('e.g. 0.85');
   });
 
   it('test skids without a slash say how to write them', () => {

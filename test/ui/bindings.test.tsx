@@ -148,7 +148,8 @@ const CHECKS: Record<Command, (keys: string) => Promise<void>> = {
     await app.press(k, 'Analysis 1 · slide · skid-1');
     app.stdin.write(k);
     const f = await app.waitFor((x) => !x.includes('Analysis 1 · slide · skid-1'), 'the questions');
-    expect(f).toContain('Another analysis?');
+    // The last question of the case: the distribution, asked once at its end.
+    expect(f).toContain('Also show a distribution of the speed');
   },
   async 'new-case'(k) {
     const app = await home();
@@ -168,7 +169,8 @@ const CHECKS: Record<Command, (keys: string) => Promise<void>> = {
   },
   async demo(k) {
     const app = await home();
-    const f = await app.press(k, 'Resumed');
+    // The yaw demo is complete (no brakes to ask for a yaw): it opens on its review.
+    const f = await app.press(k, 'critical speed (yaw)');
     expect(f).toContain('demo-copy');
   },
   async restore(k) {

@@ -170,8 +170,8 @@ describe('review', () => {
   it('shows the figures solve gives for the saved case, the limit and the cautions', async () => {
     const app = renderApp({ rows: 200, columns: 100 });
     await app.waitText('No cases here yet');
-    await app.press('d', 'Resumed');
-    await app.press(ctrl('r'), 'Review');
+    // The yaw demo is complete: it opens on its review, with nothing left to ask.
+    await app.press('d', 'Review');
     let f = await app.waitText('Cautions');
     // Solve the file as it is on disk, as `skidcase solve` would.
     const file = fs.readdirSync(app.dir).find((n) => n.endsWith('.json'))!;
@@ -200,19 +200,21 @@ describe('go-to list', () => {
     const app = await newCase();
     await toLimit(app);
     await app.press(ENTER, 'Which vehicle');
-    await app.press(ENTER, 'Were all four brakes working?');
+    await app.press(ENTER, 'What do the marks look like?');
+    // The brakes are asked once the marks are a slide, inside that analysis.
+    await app.press('d', 'Were all four brakes working?');
     await app.press('e', 'Braking efficiency n');
     await app.answer('0.8', 'What is the estimate based on?');
     // Back to the brakes question, and change the answer: the estimate no longer applies.
     await app.press(ctrl('b'), 'Braking efficiency n');
     await app.press(ctrl('b'), 'Were all four brakes working?');
-    await app.press('a', 'What do the marks look like?');
+    await app.press('a', 'A short label');
     await app.press(ctrl('g'), 'Go to:');
     for (const ch of 'brak') app.stdin.write(ch);
     const f = await app.waitText('Go to: brak');
-    expect(f).toMatch(/answered\s+Vehicle · Brakes/);
-    expect(f).toMatch(/not used now\s+Vehicle · Braking efficiency/);
-    await app.press(ESC, 'What do the marks look like?');
+    expect(f).toMatch(/answered\s+Analysis 1 - slide · Brakes/);
+    expect(f).toMatch(/not used now\s+Analysis 1 - slide · Braking efficiency/);
+    await app.press(ESC, 'A short label');
   });
 
   it('says when nothing matches', async () => {

@@ -37,7 +37,8 @@ export const dragV1 = z
       }),
       z.looseObject({
         source: z.literal('table'),
-        surface: text('surface'),
+        // A label for the report, never checked against the table (docs/case-file.md).
+        surface: text('surface').optional(),
         value: z.number({ error: 'drag factor must be a number' }),
         low: z.number({ error: 'drag factor (low) must be a number' }).optional(),
         high: z.number({ error: 'drag factor (high) must be a number' }).optional(),
@@ -160,12 +161,14 @@ export const endV1 = z.discriminatedUnion(
   { error: 'end.mode must be stop or speed' },
 );
 
+// The contract leaves analysis ids free; they only need to tell analyses apart and print cleanly
+// (file names made from them are sanitised where they are written).
 const analysisId = z
   .string({ error: 'id must be text' })
-  .regex(
-    /^[A-Za-z0-9._-]{1,64}$/,
-    'id must be 1 to 64 letters, digits, dots, dashes or underscores',
-  );
+  .min(1, 'id must not be empty')
+  .max(64, 'id must be at most 64 characters')
+  // eslint-disable-next-line no-control-regex
+  .regex(/^[^\u0000-\u001f\u007f]*$/, 'id must not contain control characters');
 
 export const skidV1 = z.looseObject({
   id: analysisId,

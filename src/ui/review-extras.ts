@@ -1,0 +1,182 @@
+/**
+ * The review's lines for what the extras add to one solved analysis: the time-distance comparison
+ * at the posted limit, the distribution of speeds, the offsets fit, and the pictures as text.
+ * Every figure is read from src/extras (analysisExtras); nothing is computed here.
+ */
+import { spread } from '../case/quantity.js';
+import type { Case } from '../case/load.js';
+import type { AnalysisSolution, Outcome, Units } from '../engine/types.js';
+import { analysisExtras, type AnalysisExtras } from '../extras/analysis-extras.js';
+import type { Verdict } from '../extras/limit-steps.js';
+import type { LimitComparison } from '../extras/limit-comparison.js';
+import type { SampleSummary } from '../extras/sampling.js';
+import type { YawFromOffsets } from '../extras/yaw-offsets.js';
+import { speedAlongSlideChart } from '../extras/slide-chart.js';
+import { yawArcSketch } from '../extras/yaw-sketch.js';
+import { formatNumber, formatRange, withUnit } from '../format/numbers.js';
+import type { ShownLine } from './review-lines.js';
+import { pushWrapped, stepLines } from './review-step.js';
+
+/** What the review needs beside the solution to show the extras. */
+export interface ReviewContext {
+  case: Case;
+  /** The investigator's preferred perception-reaction time, s (the case's own wins). */
+  reactionTime?: number;
+  /** Notes by analysis id that the case file cannot hold (the marks' look). */
+  notes?: Record<string, string[]>;
+}
+
+const WORD = { yes: 'yes', no: 'no', depends: 'depends on the inputs' } as const;
+
+function verdictLines(out: ShownLine[], v: Verdict, u: Units, width: number, what: string) {
+  const at = withUnit(v.at, 'length', u.length);
+  pushWrapped(
+    out,
+    `Would have stopped before ${what} (${at} from the start of the marks): ${WORD[v.stops]}`,
+    width,
+    '    ',
+    { bold: true, tone: v.stops === 'no' ? 'warning' : 'result' },
+  );
+  const margin = formatRange(v.margin, 'length', u.length);
+  const there = formatRange(v.speedThere, 'speed', u.speed);
+  pushWrapped(out, `margin ${margin} (+ short of it); speed there ${there}`, width, '      ');
+}
+
+function limitLines(out: ShownLine[], t: LimitComparison, u: Units, width: number) {
+  const limit = withUnit(t.postedLimit, 'speed', u.speed);
+  out.push({ text: `  Time and distance at the posted limit (${limit})`, bold: true });
+  pushWrapped(
+    out,
+    `reaction time ${formatNumber(t.reactionTime, 'seconds')} s: ${t.reactionSource}`,
+    width,
+    '    ',
+  );
+  const rows: [string, string][] = [
+    ['this vehicle, reaction distance', formatRange(t.reactionDistance, 'length', u.length)],
+    ['this vehicle, slide duration', formatRange(t.slideDuration, 'seconds', 's')],
+    ['at the limit, reaction distance', withUnit(t.atLimit.reactionDistance, 'length', u.length)],
+    ['at the limit, braking distance', formatRange(t.atLimit.brakingDistance, 'length', u.length)],
+    [
+      'at the limit, stopping distance',
+      formatRange(t.atLimit.stoppingDistance, 'length', u.length),
+    ],
+  ];
+  for (const [k, v] of rows) pushWrapped(out, `${k}: ${v}`, width, '    ');
+  verdictLines(out, t.endOfMarks, u, width, 'the end of the marks');
+  if (t.conflict) verdictLines(out, t.conflict, u, width, 'the conflict point');
+  t.steps.forEach((s, j) => stepLines(out, s, j + 1, width, '    '));
+  for (const a of t.assumptions) pushWrapped(out, `- ${a}`, width, '    ');
+}
+
+function samplingLines(out: ShownLine[], d: SampleSummary, u: Units, width: number) {
+  const s = (n: number) => formatNumber(n, 'speed');
+  out.push({ text: '  Distribution of the speed', bold: true });
+  pushWrapped(
+    out,
+    `${d.samples} draws, ${d.shape}, seed ${d.seed}: 5th percentile ${s(d.p5)}, median ${s(d.p50)}, 95th percentile ${s(d.p95)} ${u.speed} (mean ${s(d.mean)})`,
+    width,
+    '    ',
+    { tone: 'result' },
+  );
+  pushWrapped(out, d.method, width, '    ', { tone: 'muted' });
+  if (d.skipped > 0)
+    pushWrapped(out, `${d.skipped} draws gave no speed and were left out`, width, '    ', {
+      tone: 'warning',
+    });
+  pushWrapped(out, 'The minimum reported stays the low end of the range.', width, '    ');
+}
+
+function offsetsLines(out: ShownLine[], o: YawFromOffsets, u: Units, width: number) {
+  out.push({ text: '  Circle fitted to the offsets', bold: true });
+  const se = o.fit.radiusStdError;
+  pushWrapped(
+    out,
+    `radius ${withUnit(o.fit.radius, 'length', u.length)}${se === undefined ? '' : ` (standard error ${withUnit(se, 'length', u.length)})`}, used as ${formatRange(o.radius, 'length', u.length)}; RMS scatter ${withUnit(o.fit.rms, 'length', u.length)}`,
+    width,
+    '    ',
+  );
+  for (const r of o.fit.residuals.filter((x) => !x.chordEnd))
+    pushWrapped(
+      out,
+      `at ${withUnit(r.at, 'length', u.length)}: offset ${formatNumber(r.offset, 'length')}, arc ${r.fitted === undefined ? 'none' : formatNumber(r.fitted, 'length')}, off the circle by ${formatNumber(r.residual, 'length')}`,
+      width,
+      '    ',
+    );
+  for (const w of o.warnings) pushWrapped(out, `! ${w}`, width, '    ', { tone: 'warning' });
+}
+
+/** Shows a part that computed; one that could not says why, in one line. */
+function part<T>(
+  out: ShownLine[],
+  what: string,
+  x: Outcome<T> | undefined,
+  width: number,
+  show: (v: T) => void,
+) {
+  if (!x) return;
+  if (x.ok) return show(x.value);
+  pushWrapped(out, `${what}: cannot be computed: ${x.reason}`, width, '  ', { tone: 'warning' });
+}
+
+function pictures(
+  out: ShownLine[],
+  s: AnalysisSolution,
+  c: Case,
+  x: AnalysisExtras,
+  u: Units,
+  width: number,
+) {
+  const w = Math.max(20, width - 4);
+  let pic: string[] = [];
+  if (s.kind === 'skid') {
+    pic = speedAlongSlideChart(s, w, 9, {
+      segmentLabels: x.segmentLabels,
+      speedUnit: u.speed,
+      lengthUnit: u.length,
+    });
+    if (pic.length) out.push({ text: '  Speed along the slide', bold: true });
+  } else {
+    const a = c.analyses.find((y) => y.id === s.id);
+    const chord = a?.kind === 'yaw' ? (a.chord ?? a.offsets?.chord) : undefined;
+    const ordinate =
+      a?.kind === 'yaw' && a.middleOrdinate !== undefined
+        ? spread(a.middleOrdinate).value
+        : x.offsets?.ok
+          ? x.offsets.value.fit.middleOrdinate
+          : undefined;
+    if (chord !== undefined && ordinate !== undefined) {
+      pic = yawArcSketch(spread(chord).value, ordinate, w, 8, { unit: u.length });
+      out.push({ text: '  The arc measured', bold: true });
+    }
+  }
+  for (const l of pic) out.push({ text: `    ${l}` });
+}
+
+/**
+ * The extras' lines for one solved analysis of `ctx.case`, at most `width` columns each.
+ * @example extrasLines(solution, units, { case: c, reactionTime: 1.5 }, 80)
+ */
+export function extrasLines(
+  s: AnalysisSolution,
+  u: Units,
+  ctx: ReviewContext,
+  width: number,
+): ShownLine[] {
+  const out: ShownLine[] = [];
+  for (const n of ctx.notes?.[s.id] ?? [])
+    pushWrapped(out, `! ${n}`, width, '  ', { tone: 'warning', bold: true });
+  const x = analysisExtras(
+    ctx.case,
+    s,
+    ctx.reactionTime !== undefined ? { reactionTime: ctx.reactionTime } : {},
+  );
+  part(out, 'Time and distance at the posted limit', x.limit, width, (v) =>
+    limitLines(out, v, u, width),
+  );
+  part(out, 'Distribution of the speed', x.sampling, width, (v) => samplingLines(out, v, u, width));
+  part(out, 'Circle fitted to the offsets', x.offsets, width, (v) =>
+    offsetsLines(out, v, u, width),
+  );
+  pictures(out, s, ctx.case, x, u, width);
+  return out;
+}
