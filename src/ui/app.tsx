@@ -16,6 +16,9 @@ import { filterQuestions } from './jump-filter.js';
 import { reviewLines, type ShownLine } from './review-lines.js';
 import { isChoice } from './question-view.js';
 import type { Question } from '../interview/types.js';
+import type { ReviewContext } from './review-extras.js';
+import { DEFAULT_REACTION_TIME } from '../extras/analysis-extras.js';
+import { reactionTimeSource } from '../extras/limit-inputs.js';
 
 export interface AppProps {
   services: Services;
@@ -41,8 +44,19 @@ function useSize(columns?: number, rows?: number) {
   return { width: columns ?? stdout.columns ?? 80, height: (rows ?? stdout.rows ?? 24) - 1 };
 }
 
-/** A choice's default is shown by its label, as the list shows it. */
-function shownDefault(q: Question, text: string | undefined): string | undefined {
+/**
+ * A choice's default is shown by its label, as the list shows it; a question that keeps a
+ * preference when left empty shows the preference's value and where that value comes from.
+ */
+function shownDefault(
+  q: Question,
+  text: string | undefined,
+  reactionTime: number | undefined,
+): string | undefined {
+  if (q.usesPreference === 'reactionTime') {
+    const t = reactionTime ?? DEFAULT_REACTION_TIME;
+    return `your preference, ${t} s: ${reactionTimeSource(t)}`;
+  }
   if (text === undefined || !isChoice(q)) return text;
   return q.choices!.find((c) => c.value === text)?.label ?? text;
 }
@@ -70,7 +84,9 @@ export function App(props: AppProps) {
     const built = port.build(s.state, s.open.case);
     if (!built.ok)
       return [{ text: `The case is not complete yet: ${built.message}`, tone: 'warning' }];
-    return reviewLines(port.solve(built.case), width);
+    const ctx: ReviewContext = { case: built.case, notes: port.notes(s.state) };
+    if (props.services.reactionTime !== undefined) ctx.reactionTime = props.services.reactionTime;
+    return reviewLines(port.solve(built.case), width, ctx);
   }, [s?.state, question, width]);
 
   // The running chain only changes with the answers, not with each key typed.
@@ -138,7 +154,7 @@ export function App(props: AppProps) {
       <InterviewScreen
         session={s}
         question={question}
-        defaultText={shownDefault(question, port.defaultText(s.state))}
+        defaultText={shownDefault(question, port.defaultText(s.state), props.services.reactionTime)}
         explain={question.explainChoice?.(s.state.answers)}
         draft={draft!}
         width={width}

@@ -13,7 +13,7 @@ import {
   questionStates,
   summaryOfDone,
 } from '../interview/derived.js';
-import { buildCase } from '../interview/build-case.js';
+import { buildCase, lookNotes } from '../interview/build-case.js';
 import { solveDraft } from '../interview/draft.js';
 import { stateFromCase } from '../interview/from-case.js';
 import type { InterviewState } from '../interview/types.js';
@@ -84,4 +84,5 @@ export const liveInterview: InterviewPort = {
   summary: summaryOfDone,
   draft: (state, base) => draftView(solveDraft(state, base.id)),
   solve: solveAsFile,
+  notes: lookNotes,
 };

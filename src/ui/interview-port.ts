@@ -37,4 +37,6 @@ export interface InterviewPort {
   /** The running chain for the side panel. */
   draft(state: InterviewState, base: Case): DraftView;
   solve(c: Case): CaseSolution;
+  /** Notes by analysis id that the case file cannot hold (anti-lock marks), for the review. */
+  notes(state: InterviewState): Record<string, string[]>;
 }

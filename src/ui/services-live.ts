@@ -97,6 +97,7 @@ export function liveServices(o: LiveOptions): Services {
     sessionsDir: dir,
     sessionsFrom: o.sessionsFrom,
     initialMode: prefs.mode,
+    reactionTime: prefs.reactionTime,
     now,
     async listCases() {
       const entries = await listCases(dir);

@@ -59,6 +59,8 @@ export interface Services {
     c: Case,
   ): Promise<{ ok: true; path: string } | { ok: false; message: string }>;
   initialMode: InterviewMode;
+  /** The preferred perception-reaction time, s, for the comparison at the posted limit. */
+  reactionTime?: number;
   saveMode(mode: InterviewMode): void;
   now(): Date;
 }
