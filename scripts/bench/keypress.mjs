@@ -9,7 +9,7 @@ import { median, percentile } from './stats.mjs';
 import { benchEnv, keyToFrame, spawnTimed } from './pty-timer.mjs';
 import { slideCase } from './cases.mjs';
 
-const PRESSES = 40;
+const PRESSES = 60;
 const ECHO = fileURLToPath(new URL('../../test/e2e/fixtures/echo-keys.mjs', import.meta.url));
 const tick = (ms) => new Promise((r) => setTimeout(r, ms));
 
@@ -49,7 +49,13 @@ export async function keypress(ctx) {
     await until(app, (sc) => /Analysis 1 · /.test(sc), 15_000, 'the review of the resumed case');
     await tick(300);
     app.pty.write('\u001B');
-    await until(app, (sc) => /another analysis/i.test(sc), 5_000, 'its last question');
+    // The last question of the case, a choice (its highlighted option is marked `> [`).
+    await until(
+      app,
+      (sc) => /^\s*> \[/m.test(sc) && !/Analysis 1 · /.test(sc),
+      5_000,
+      'its last question, a choice',
+    );
     await tick(300);
     subject = await latencies(app, ['\u001B[B', '\u001B[A']);
     // The first frame a key causes, and the end of all output it causes (trailing frames too).

@@ -4,7 +4,8 @@ import type { CaseV1 } from './v1/schema.js';
  * Fields a case holds that version 1 does not define. They are kept on save; `solve` warns with
  * their paths so that a misspelt field (`middleOrdinat`) shows instead of silently not counting.
  */
-const KNOWN = {
+/** The fields version 1 defines, by object kind: one list for solve's warnings and the interview. */
+export const KNOWN = {
   top: [
     'format',
     'version',
@@ -34,7 +35,17 @@ const KNOWN = {
     decelerometer: ['source', 'readings', 'note'],
   },
   test: ['speed', 'distance'],
-  skid: ['id', 'kind', 'label', 'appearance', 'marks', 'distanceRule', 'segments', 'end', 'timeDistance'],
+  skid: [
+    'id',
+    'kind',
+    'label',
+    'appearance',
+    'marks',
+    'distanceRule',
+    'segments',
+    'end',
+    'timeDistance',
+  ],
   yaw: [
     'id',
     'kind',

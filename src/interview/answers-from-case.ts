@@ -13,6 +13,7 @@ import { signed } from './signed.js';
 import { surfaceRow, OTHER_SURFACE } from './drag-table.js';
 import { WHEELS } from './questions-vehicle.js';
 import { DEFAULT_SAMPLES, DEFAULT_SEED } from '../extras/sampling.js';
+import { notesOf, NOTES_KEEP } from './kept-notes.js';
 import {
   analysisExtras,
   analysisKeep,
@@ -145,6 +146,8 @@ export function answersFromCase(c: Case): Answers {
   }
   if (v.trackWidth !== undefined) put('vehicle.trackWidth', quantityText(v.trackWidth));
   keepFields(c, put);
+  const notes = notesOf(c);
+  if (notes.length) put(NOTES_KEEP, '', notes);
   c.analyses.forEach((a, i) => {
     const p = `a${i}`;
     put(`${p}.id`, a.id);
@@ -174,7 +177,7 @@ export function answersFromCase(c: Case): Answers {
       put(`${p}.path`, a.pathAdjustment ?? 'none');
       return;
     }
-    put(`${p}.look`, 'dark');
+    put(`${p}.look`, a.appearance && a.appearance !== 'locked' ? a.appearance : 'dark');
     const one = a.segments.length === 1 && a.segments[0]!.length === undefined;
     put(`${p}.surfaces`, one ? 'one' : 'several');
     if (!one) put(`${p}.segcount`, String(a.segments.length), a.segments.length);

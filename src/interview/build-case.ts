@@ -10,6 +10,7 @@ import { readAnswers, type AnswerReader } from './answer-values.js';
 import { WHEELS } from './questions-vehicle.js';
 import { analysisKeep, CASE_KEEP, kept, measuredByOffsets, VEHICLE_KEEP } from './kept-fields.js';
 import { dragOf, segmentsOf, slopeOf, text, type Q } from './build-parts.js';
+import { restoreNotes } from './kept-notes.js';
 
 export { segmentsLine } from './build-parts.js';
 
@@ -19,6 +20,10 @@ function skidOf(r: AnswerReader, i: number, id: string): AnalysisV1 {
   const out: AnalysisV1 = { ...kept(r.answers, analysisKeep(i)), id, kind: 'skid', segments };
   const label = text(r, `${p}.label`);
   if (label) out.label = label;
+  // The look of the marks goes into the file, so solve and the report carry its caveat too.
+  const look = markLook(r.answers, i);
+  // Locked-wheel marks are the default and add nothing, so only the other looks are written.
+  if (look === 'abs' || look === 'skip' || look === 'gap') out.appearance = look;
   const marks = r.value(`${p}.marks`);
   if (Array.isArray(marks)) out.marks = marks as Q[];
   const rule = r.value(`${p}.rule`);
@@ -142,7 +147,10 @@ function included(
   for (let i = 0; i < analysisCount(answers); i++) {
     const look = markLook(answers, i);
     if (look === undefined) continue;
-    const own = r.complete((id) => id.startsWith(`a${i}.`) && id !== `a${i}.more`);
+    // The time-distance questions only add to the comparison at the limit: the slide's own
+    // figure does not wait for them (a valid answer is written when there is one).
+    const extra = new Set([`a${i}.more`, `a${i}.conflict`, `a${i}.reaction`]);
+    const own = r.complete((id) => id.startsWith(`a${i}.`) && !extra.has(id));
     if (!own) continue;
     const kind = look === 'yaw' ? 'yaw' : 'skid';
     if (kind === 'skid' && !brakes) continue;
@@ -226,5 +234,6 @@ export function buildCase(state: InterviewState, meta: CaseMeta): Case {
   if (limit !== undefined) c.postedLimit = limit as Q;
   const sampling = samplingOf(r);
   if (sampling) c.sampling = sampling;
+  restoreNotes(c, answers);
   return c;
 }

@@ -73,12 +73,12 @@ export function summaryOfDone(state: InterviewState): string[] {
     r.status('vehicle.brakes') === undefined
       ? 'brakes not needed (no slide)'
       : brakes === 'all'
-      ? 'all brakes working'
-      : brakes === 'estimate'
-        ? 'braking efficiency estimated'
-        : brakes === 'wheels'
-          ? 'brakes wheel by wheel'
-          : 'brakes not yet given';
+        ? 'all brakes working'
+        : brakes === 'estimate'
+          ? 'braking efficiency estimated'
+          : brakes === 'wheels'
+            ? 'brakes wheel by wheel'
+            : 'brakes not yet given';
   lines.push(
     `Vehicle${a['vehicle.label']?.text ? ` ${a['vehicle.label'].text}` : ''}: ${brakeWords}`,
   );

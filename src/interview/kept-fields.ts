@@ -1,38 +1,16 @@
 /**
- * Fields of a case the interview does not ask about (a yaw measured by offsets, a time-distance
- * block, sampling settings, fields the format does not know): kept from a hand-written file in
- * hidden answers and written back unchanged, so a round trip never drops them.
+ * Fields of a case the interview does not ask about (fields the format does not know, brakes of a
+ * case without a slide, a time-distance block of a case without a posted limit): kept from a
+ * hand-written file in hidden answers and written back unchanged, so a round trip never drops them.
  */
 import type { Answers } from './types.js';
+import { KNOWN } from '../case/unknown-fields.js';
 
-/** Top-level fields the interview writes itself. */
-const CASE_OWN = [
-  'format',
-  'version',
-  'id',
-  'created',
-  'updated',
-  'units',
-  'details',
-  'postedLimit',
-  'vehicle',
-  'analyses',
-  'interview',
-  'sampling',
-];
-const VEHICLE_OWN = ['label', 'frontAxleShare', 'trackWidth', 'brakes'];
-const SKID_OWN = ['id', 'kind', 'label', 'marks', 'distanceRule', 'segments', 'end', 'timeDistance'];
-const YAW_OWN = [
-  'id',
-  'kind',
-  'label',
-  'chord',
-  'middleOrdinate',
-  'drag',
-  'superelevation',
-  'pathAdjustment',
-  'offsets',
-];
+// The fields the interview writes itself are the format's own (one list, in src/case).
+const CASE_OWN = KNOWN.top;
+const VEHICLE_OWN = KNOWN.vehicle;
+const SKID_OWN = KNOWN.skid;
+const YAW_OWN = KNOWN.yaw;
 
 /** Hidden answer ids: not questions, never listed in the jump list. */
 export const CASE_KEEP = 'case.keep';
@@ -67,4 +45,4 @@ export const measuredByOffsets = (answers: Answers, i: number): boolean =>
 
 /** Answers that are not questions (kept ids and fields). */
 export const isMetaAnswer = (id: string): boolean =>
-  /^a\d+\.(id|keep)$/.test(id) || id === CASE_KEEP || id === VEHICLE_KEEP;
+  /^a\d+\.(id|keep)$/.test(id) || id === CASE_KEEP || id === VEHICLE_KEEP || id === 'case.notes';

@@ -109,7 +109,9 @@ export function samplingQuestions(section: string, applies: (a: Answers) => bool
         section,
         title: 'Seed',
         prompt: 'Seed of the draws (the same seed gives the same percentiles every time)',
-        help: { why: 'Recorded so that anyone can run the same draws again and get the same figures.' },
+        help: {
+          why: 'Recorded so that anyone can run the same draws again and get the same figures.',
+        },
         appliesWhen: (a) => applies(a) && drawn(a),
         defaultText: () => String(DEFAULT_SEED),
       },

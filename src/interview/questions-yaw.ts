@@ -63,7 +63,7 @@ function offsetsLine(a: Answers, p: string): string | undefined {
   const st = a[`${p}.offsets.stations`]?.value as StationValue[] | undefined;
   if (!c?.ok || !Array.isArray(st)) return undefined;
   const r = radiusFromOffsets(spread(c.value), st, units, engineUnits(units));
-  return r.ok ? [r.value.step.substituted, ...r.value.warnings].join(' ') : r.reason;
+  return r.ok ? [r.value.step.substituted, ...r.value.warnings].join('. ') : r.reason;
 }
 
 /**
@@ -90,9 +90,11 @@ export function yawQuestions(...args: Parameters<typeof yawQuestionsOf>): Questi
         appliesWhen: applies,
         defaultText: () => 'ordinate',
         explainChoice: (a) =>
-          measuredByOffsets(a, i)
-            ? 'The radius will be the circle fitted through the chord ends and the offsets (least squares), with its scatter.'
-            : 'The radius will be R = C²/(8M) + M/2 from the chord and its middle ordinate.',
+          a[`${p}.measure`] === undefined
+            ? undefined
+            : measuredByOffsets(a, i)
+              ? 'The radius will be the circle fitted through the chord ends and the offsets (least squares), with its scatter.'
+              : 'The radius will be R = C²/(8M) + M/2 from the chord and its middle ordinate.',
       },
       [
         { value: 'ordinate', key: 'c', label: 'one chord and its middle ordinate' },
@@ -122,7 +124,7 @@ export function yawQuestions(...args: Parameters<typeof yawQuestionsOf>): Questi
         section,
         title: 'Offsets',
         prompt:
-          'Offsets along the chord: distance from its start, then the offset, in pairs (e.g. 10 1.9, 20 2.5, 30 1.9)',
+          'Offsets along the chord: distance from its start, then the offset, in pairs separated by commas',
         help: {
           why: 'A circle is fitted through the chord ends and these points; how far they scatter about it says how well the mark is a circle.',
           how: `Type the ${STATIONS_SYNTAX}. Each station must lie inside the chord. A unit may be glued to a number (3.1m:0.12m).`,

@@ -40,7 +40,9 @@ function dragRows(prefix: string, d: DragV1, speed: string, length: string): Row
           : `${d.low ?? d.value} to ${d.high ?? d.value}`;
       const where =
         d.source === 'table'
-          ? [`${d.surface ? `table surface "${d.surface}"` : "table, surface not named"}${d.band ? `, band ${d.band}` : ''}`]
+          ? [
+              `${d.surface ? `table surface "${d.surface}"` : 'table, surface not named'}${d.band ? `, band ${d.band}` : ''}`,
+            ]
           : [];
       const note = [...where, d.note ?? ''].filter(Boolean).join('; ');
       return [[`${prefix}drag factor (${d.source})`, String(d.value), range, '', note]];

@@ -32,7 +32,8 @@ function slideFigure(c: Case, s: AnalysisSolution, u: Units): Figure | undefined
 function yawFigure(c: Case, s: AnalysisSolution, u: Units): Figure | undefined {
   const a = c.analyses.find((x) => x.id === s.id);
   // Drawn from a chord and middle ordinate; a mark measured by offsets is shown by its fit section.
-  if (!a || a.kind !== 'yaw' || a.chord === undefined || a.middleOrdinate === undefined) return undefined;
+  if (!a || a.kind !== 'yaw' || a.chord === undefined || a.middleOrdinate === undefined)
+    return undefined;
   // The chord and middle ordinate as measured (their values), drawn to show the geometry.
   const C = spread(a.chord).value;
   const M = spread(a.middleOrdinate).value;

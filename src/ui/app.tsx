@@ -18,7 +18,6 @@ import { isChoice } from './question-view.js';
 import type { Question } from '../interview/types.js';
 import type { ReviewContext } from './review-extras.js';
 import { DEFAULT_REACTION_TIME } from '../extras/analysis-extras.js';
-import { reactionTimeSource } from '../extras/limit-inputs.js';
 
 export interface AppProps {
   services: Services;
@@ -55,7 +54,7 @@ function shownDefault(
 ): string | undefined {
   if (q.usesPreference === 'reactionTime') {
     const t = reactionTime ?? DEFAULT_REACTION_TIME;
-    return `your preference, ${t} s: ${reactionTimeSource(t)}`;
+    return `your preference, ${t} s (1.5 s: surprise event, M. Green 2000; 2.5 s: AASHTO design)`;
   }
   if (text === undefined || !isChoice(q)) return text;
   return q.choices!.find((c) => c.value === text)?.label ?? text;

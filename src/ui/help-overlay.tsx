@@ -3,6 +3,7 @@ import { Box, Text } from 'ink';
 import { KEY_TABLE, bindingKeys, keysFor, type KeyContext } from './keys.js';
 import type { ShownLine } from './review-lines.js';
 import { wrap } from '../report/wrap.js';
+import { STATIONS_SYNTAX } from '../interview/read-stations.js';
 import { ScrollView } from './scroll-view.js';
 import { TONE } from './theme.js';
 
@@ -43,6 +44,12 @@ export function helpLines(width: number, quickEntry: readonly string[]): ShownLi
       for (const l of wrap(q, width - indent.length - 2)) out.push({ text: indent + l });
     }
   }
+  out.push({ text: '' }, { text: 'Offsets of a yaw mark', bold: true, tone: 'heading' });
+  for (const l of wrap(
+    `When the radius is measured by offsets along one chord, type the ${STATIONS_SYNTAX}: the distance along the chord from its start, then the offset from the chord to the mark. A unit may be glued to a number (3.1m:0.12m).`,
+    Math.max(20, width),
+  ))
+    out.push({ text: l });
   out.push(
     { text: '' },
     { text: `${keysFor('close')} or ${keysFor('help')} closes this list.`, tone: 'muted' },

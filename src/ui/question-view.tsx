@@ -89,7 +89,7 @@ export function QuestionView(p: QuestionViewProps) {
         </Box>
       )}
       {p.defaultText !== undefined && p.defaultText !== '' ? (
-        <Text color={TONE.muted} wrap="truncate">
+        <Text color={TONE.muted} wrap={p.question.usesPreference ? 'wrap' : 'truncate'}>
           Enter accepts: {p.defaultText}
         </Text>
       ) : null}

@@ -22,7 +22,7 @@ export interface ReviewContext {
   case: Case;
   /** The investigator's preferred perception-reaction time, s (the case's own wins). */
   reactionTime?: number;
-  /** Notes by analysis id that the case file cannot hold (the marks' look). */
+  /** Notes by analysis id that the case file cannot hold (the marks' look), shown by the result. */
   notes?: Record<string, string[]>;
 }
 
@@ -39,7 +39,12 @@ function verdictLines(out: ShownLine[], v: Verdict, u: Units, width: number, wha
   );
   const margin = formatRange(v.margin, 'length', u.length);
   const there = formatRange(v.speedThere, 'speed', u.speed);
-  pushWrapped(out, `margin ${margin} (+ short of it); speed there ${there}`, width, '      ');
+  pushWrapped(
+    out,
+    `stops short of it by ${margin} (negative: beyond it); speed there ${there}`,
+    width,
+    '      ',
+  );
 }
 
 function limitLines(out: ShownLine[], t: LimitComparison, u: Units, width: number) {
@@ -86,7 +91,13 @@ function samplingLines(out: ShownLine[], d: SampleSummary, u: Units, width: numb
   pushWrapped(out, 'The minimum reported stays the low end of the range.', width, '    ');
 }
 
-function offsetsLines(out: ShownLine[], o: YawFromOffsets, u: Units, width: number) {
+function offsetsLines(
+  out: ShownLine[],
+  o: YawFromOffsets,
+  u: Units,
+  width: number,
+  shown: readonly string[],
+) {
   out.push({ text: '  Circle fitted to the offsets', bold: true });
   const se = o.fit.radiusStdError;
   pushWrapped(
@@ -98,11 +109,13 @@ function offsetsLines(out: ShownLine[], o: YawFromOffsets, u: Units, width: numb
   for (const r of o.fit.residuals.filter((x) => !x.chordEnd))
     pushWrapped(
       out,
-      `at ${withUnit(r.at, 'length', u.length)}: offset ${formatNumber(r.offset, 'length')}, arc ${r.fitted === undefined ? 'none' : formatNumber(r.fitted, 'length')}, off the circle by ${formatNumber(r.residual, 'length')}`,
+      `at ${withUnit(r.at, 'length', u.length)}: offset ${formatNumber(r.offset, 'length')}, arc ${r.fitted === undefined ? 'none' : formatNumber(r.fitted, 'length')}, off the circle by ${withUnit(r.residual, 'length', u.length)}`,
       width,
       '    ',
     );
-  for (const w of o.warnings) pushWrapped(out, `! ${w}`, width, '    ', { tone: 'warning' });
+  // A warning the chain already listed (the scatter) is not repeated here.
+  for (const w of o.warnings.filter((x) => !shown.includes(x)))
+    pushWrapped(out, `! ${w}`, width, '    ', { tone: 'warning' });
 }
 
 /** Shows a part that computed; one that could not says why, in one line. */
@@ -163,8 +176,6 @@ export function extrasLines(
   width: number,
 ): ShownLine[] {
   const out: ShownLine[] = [];
-  for (const n of ctx.notes?.[s.id] ?? [])
-    pushWrapped(out, `! ${n}`, width, '  ', { tone: 'warning', bold: true });
   const x = analysisExtras(
     ctx.case,
     s,
@@ -175,7 +186,7 @@ export function extrasLines(
   );
   part(out, 'Distribution of the speed', x.sampling, width, (v) => samplingLines(out, v, u, width));
   part(out, 'Circle fitted to the offsets', x.offsets, width, (v) =>
-    offsetsLines(out, v, u, width),
+    offsetsLines(out, v, u, width, s.warnings),
   );
   pictures(out, s, ctx.case, x, u, width);
   return out;

@@ -44,6 +44,8 @@ function analysisLines(
     tone: 'result',
     bold: true,
   });
+  for (const n of ctx?.notes?.[s.id] ?? [])
+    pushWrapped(out, `! ${n}`, width, '  ', { tone: 'warning', bold: true });
   if (sol.postedLimit) {
     const v = sol.postedLimit.value;
     // A limit converted from the other unit is not whole: show it as converted, not rounded.

@@ -2,9 +2,10 @@
  * Types a whole interview into the real program, the way a person does: read the question on
  * screen, type the answer (or press the choice's letter), Enter, wait for the next question.
  *
- * A script maps question ids to answers (`''` is Enter alone: the offered default, or a skip). Which question comes next is not guessed: a mirror of
- * the interview's pure reducer is fed the same answers, so the test knows which question the
- * screen must show, and fails, naming it, if the screen shows anything else.
+ * A script maps question ids to answers (`''` is Enter alone: the offered default, or a skip).
+ * Which question comes next is not guessed: a mirror of the interview's pure reducer is fed the
+ * same answers, so the test knows which question the screen must show, and fails, naming it, if
+ * the screen shows anything else.
  */
 import { initialState, reduce } from '../../src/interview/reducer.js';
 import { currentQuestion } from '../../src/interview/derived.js';

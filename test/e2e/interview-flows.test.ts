@@ -78,20 +78,21 @@ describe.skipIf(!pty.ok)(
       expect(shown).toHaveLength(2);
       expect(shown).toEqual(asShown(solved));
       expect(solved.analyses.map((a) => a.kind)).toEqual(['skid', 'yaw']);
-      // Every step's result on the review is the solved one, rounded as shown.
+      // Every step of the solution is on the review, in order, with its result rounded as shown.
       const steps = shownSteps(lines);
-      expect(steps.map((s) => s.length)).toEqual(solved.analyses.map((a) => a.steps.length));
-      solved.analyses.forEach((a, i) =>
+      solved.analyses.forEach((a, i) => {
+        const seen = steps[i]!.slice(0, a.steps.length);
+        expect(seen.map((x) => x.name)).toEqual(a.steps.map((st) => st.name));
         a.steps.forEach((st, j) => {
-          const seen = steps[i]![j]!;
+          const what = `${a.id} step ${j + 1} (${st.name})`;
           expect(
-            roundsTo(st.result, seen.value),
-            `${a.id} step ${j + 1} ${st.name}: ${st.result} shown ${seen.value.n}`,
+            roundsTo(st.result, seen[j]!.value),
+            `${what}: ${st.result} shown as ${seen[j]!.value.n}`,
           ).toBe(true);
-          expect(roundsTo(st.low, seen.low), `${a.id} step ${j + 1} ${st.name} low`).toBe(true);
-          expect(roundsTo(st.high, seen.high), `${a.id} step ${j + 1} ${st.name} high`).toBe(true);
-        }),
-      );
+          expect(roundsTo(st.low, seen[j]!.low), `${what}, low`).toBe(true);
+          expect(roundsTo(st.high, seen[j]!.high), `${what}, high`).toBe(true);
+        });
+      });
       // The review also says what the figure means and its cautions.
       expect(lines.join('\n')).toMatch(/Cautions/);
       expect(lines.join('\n')).toMatch(/Posted limit 40 mph/);

@@ -56,26 +56,38 @@ function shownNumber(s: string): { n: number; dp: number } {
 }
 
 export interface ShownStep {
+  /** The step's heading as shown (`Slide distance`), from `  1. Slide distance`. */
+  name: string;
   value: { n: number; dp: number };
   low: { n: number; dp: number };
   high: { n: number; dp: number };
 }
 
+const HEADING = /^\s+\d+\.\s+(.+?)\s*$/;
 const RESULT = /^\s+result\s+([−-]?[\d.]+)[^(]*(?:\(([−-]?[\d.]+) to ([−-]?[\d.]+)\))?/;
 
-/** Each analysis's step results as the review prints them (`result 0.64 (0.58 to 0.70)`). */
+/**
+ * Each analysis's numbered steps as the review prints them: the heading (`  1. Slide distance`)
+ * and its result line (`result 0.64 (0.58 to 0.70)`). The engine's steps come first; figures the
+ * review adds after them (time and distance, ...) follow in the same shape.
+ */
 export function shownSteps(lines: string[]): ShownStep[][] {
   const out: ShownStep[][] = [];
+  let name: string | undefined;
   for (const l of lines) {
     if (/^Analysis \d+ · /.test(l)) out.push([]);
+    const h = HEADING.exec(l);
+    if (h) name = h[1]!;
     const m = RESULT.exec(l);
-    if (m && out.length) {
+    if (m && out.length && name !== undefined) {
       const value = shownNumber(m[1]!);
       out[out.length - 1]!.push({
+        name,
         value,
         low: m[2] ? shownNumber(m[2]) : value,
         high: m[3] ? shownNumber(m[3]) : value,
       });
+      name = undefined;
     }
   }
   return out;

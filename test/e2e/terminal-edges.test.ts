@@ -110,6 +110,20 @@ describe.skipIf(!pty.ok)(`in a terminal${pty.ok ? '' : ` (skipped: ${pty.reason}
     expect(next.split('\n').every((l) => l.length <= 60)).toBe(true);
   });
 
+  it('with stdin redirected but the screen a terminal (skidcase < file), says to use solve and exits non-zero', async () => {
+    // A parent in the pty starts skidcase with stdin from /dev/null and its output on the pty.
+    const parent = [
+      "const r = require('node:child_process').spawnSync(process.execPath, [process.argv[1]],",
+      "  { stdio: ['ignore', 'inherit', 'inherit'] });",
+      'process.exit(r.status ?? 99);',
+    ].join('\n');
+    const t = await startTerm({ nodeArgs: ['-e', parent, BINARY], cwd: ws.root, env: ws.env });
+    const info = await t.waitForExit();
+    expect(t.screen()).toMatch(/skidcase solve FILE/);
+    expect(info.exitCode).not.toBe(0);
+    expect(info.exitCode).not.toBe(99);
+  });
+
   it('Ctrl+C twice in quick succession saves and leaves cleanly: exit 0, the file whole, every answer kept', async () => {
     const own = makeWorkspace();
     try {

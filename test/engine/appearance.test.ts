@@ -53,6 +53,10 @@ describe("the marks' appearance carries its caveat into the chain (common practi
   it('an unknown appearance is an invalid file naming the field', () => {
     const r = loadCase(base('ABS'));
     expect(r.ok).toBe(false);
-    if (!r.ok) expect(r.issues).toContainEqual({ path: 'analyses[0].appearance', message: 'appearance must be locked, abs, skip or gap' });
+    if (!r.ok)
+      expect(r.issues).toContainEqual({
+        path: 'analyses[0].appearance',
+        message: 'appearance must be locked, abs, skip or gap',
+      });
   });
 });

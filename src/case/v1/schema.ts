@@ -176,7 +176,9 @@ export const skidV1 = z.looseObject({
   label: text('label').optional(),
   /** How the marks looked: decides the caveats the chain carries (docs/case-file.md). */
   appearance: z
-    .enum(['locked', 'abs', 'skip', 'gap'], { error: 'appearance must be locked, abs, skip or gap' })
+    .enum(['locked', 'abs', 'skip', 'gap'], {
+      error: 'appearance must be locked, abs, skip or gap',
+    })
     .optional(),
   marks: z.array(q(RULES.length), { error: 'marks must be a list of lengths' }).optional(),
   distanceRule: z
