@@ -74,7 +74,8 @@ export function App(props: AppProps) {
   const s = model.session;
   const port = props.port;
   const question = s ? port.current(s.state) : undefined;
-  const footerRows = width < 70 ? 3 : 2;
+  // The footer is one line at any width; one more while leaving (the note).
+  const footerRows = model.leaving ? 2 : 1;
   const banner = s?.open.readOnly ? 2 : 0;
   const body = height - footerRows - banner - (s ? 2 : 0);
 
@@ -194,7 +195,7 @@ export function App(props: AppProps) {
         />
       ) : null}
       {main}
-      <Footer context={ctx} note={model.leaving ? 'Saving and leaving…' : undefined} />
+      <Footer context={ctx} width={width} note={model.leaving ? 'Saving and leaving…' : undefined} />
     </Box>
   );
 }

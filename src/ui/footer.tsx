@@ -1,23 +1,36 @@
 import React from 'react';
 import { Box, Text } from 'ink';
-import { bindingKeys, footerBindings, type KeyContext } from './keys.js';
+import { FOOTER_GAP, footerLine, type KeyContext } from './keys.js';
 import { TONE } from './theme.js';
 
 /**
- * Key hints for the current context, from the key table (so they match the help overlay).
- * Wraps onto a second line in narrow terminals rather than cutting a hint.
+ * Key hints for the current context on one line, from the key table (so they match the help
+ * overlay). Only what fits is shown, the help key always; every other key is in the help.
  */
-export function Footer({ context, note }: { context: KeyContext; note?: string | undefined }) {
-  const hints = footerBindings(context);
+export function Footer({
+  context,
+  width,
+  note,
+}: {
+  context: KeyContext;
+  width: number;
+  note?: string | undefined;
+}) {
+  const hints = footerLine(context, width);
   return (
     <Box flexDirection="column">
-      <Box flexWrap="wrap" columnGap={2}>
-        {hints.map((b) => (
-          <Text key={b.command}>
-            <Text color={TONE.key}>{bindingKeys(b)}</Text> {b.label}
-          </Text>
-        ))}
-      </Box>
+      <Text wrap="truncate">
+        {hints.map((h, i) => {
+          const cut = h.indexOf(' ');
+          return (
+            <Text key={h}>
+              {i ? ' '.repeat(FOOTER_GAP) : ''}
+              <Text color={TONE.key}>{h.slice(0, cut)}</Text>
+              {h.slice(cut)}
+            </Text>
+          );
+        })}
+      </Text>
       {note ? <Text color={TONE.muted}>{note}</Text> : null}
     </Box>
   );

@@ -55,6 +55,13 @@ export interface KeyBinding {
   when: KeyContext[];
   /** Shown in the footer of these contexts (the rest are listed in the help only). */
   footer?: KeyContext[];
+  /**
+   * Footer rank: lower is kept first when the line is short of room (the help key is 0 and is
+   * always kept). Table order breaks ties.
+   */
+  rank?: number;
+  /** A footer label for one context where the key does something else (Enter opens a case). */
+  labelIn?: Partial<Record<KeyContext, string>>;
 }
 
 const ctrl = (name: string): KeySpec => ({ name, ctrl: true });
@@ -67,18 +74,20 @@ export const KEY_TABLE: readonly KeyBinding[] = [
   {
     command: 'help',
     keys: [ctrl('k')],
-    label: 'keys',
+    label: 'all keys',
     description: 'Show or hide this list of keys',
     when: [...EVERYWHERE, 'help'],
     footer: EVERYWHERE,
+    rank: 0,
   },
   {
     command: 'save-leave',
     keys: [ctrl('q'), ctrl('c')],
-    label: 'save+leave',
+    label: 'save & leave',
     description: 'Save the case and leave skidcase',
     when: [...EVERYWHERE, 'help'],
     footer: CASE,
+    rank: 4,
   },
   {
     command: 'quit',
@@ -87,14 +96,18 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     description: 'Leave skidcase',
     when: ['home'],
     footer: ['home'],
+    rank: 5,
   },
   {
     command: 'submit',
     keys: [plain('return')],
     label: 'accept',
-    description: 'Accept the answer as typed; with nothing typed, accept the offered default',
+    description:
+      'Accept the answer as typed; with nothing typed, accept the offered default. In the case list, open the case picked',
     when: ['question', 'choice', 'jump', 'home', 'path'],
-    footer: ['question', 'choice'],
+    footer: ['question', 'choice', 'home', 'jump', 'path'],
+    rank: 1,
+    labelIn: { home: 'open', jump: 'go there', path: 'open' },
   },
   {
     command: 'pick',
@@ -102,15 +115,15 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     label: 'pick',
     description: 'Pick a choice by its letter (shown in brackets beside it)',
     when: ['choice'],
-    footer: ['choice'],
   },
   {
     command: 'back',
     keys: [ctrl('b')],
-    label: 'previous',
+    label: 'back',
     description: 'Go to the previous question (later answers are kept)',
     when: ['question', 'choice'],
     footer: ['question', 'choice'],
+    rank: 2,
   },
   {
     command: 'forward',
@@ -125,7 +138,8 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     label: 'go to',
     description: 'Go to any question: type part of its name, then Enter',
     when: CASE,
-    footer: CASE,
+    footer: ['question', 'choice'],
+    rank: 6,
   },
   {
     command: 'undo',
@@ -133,7 +147,6 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     label: 'undo',
     description: 'Undo the last answer',
     when: ['question', 'choice', 'review'],
-    footer: ['question', 'choice'],
   },
   {
     command: 'review',
@@ -142,6 +155,7 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     description: 'Open the review of the case from any question',
     when: ['question', 'choice'],
     footer: ['question', 'choice'],
+    rank: 5,
   },
   {
     command: 'explain',
@@ -150,6 +164,7 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     description: 'Show or hide why the question is asked and how to measure it',
     when: ['question', 'choice'],
     footer: ['question', 'choice'],
+    rank: 3,
   },
   {
     command: 'mode',
@@ -185,7 +200,8 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     label: 'page down',
     description: 'Scroll down one page (Space does the same)',
     when: ['review', 'help'],
-    footer: ['review'],
+    footer: ['review', 'help'],
+    rank: 3,
   },
   {
     command: 'close',
@@ -194,6 +210,8 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     description: 'Close the list or overlay; from the review, return to the questions',
     when: ['jump', 'help', 'review', 'path'],
     footer: ['jump', 'help', 'review', 'path'],
+    rank: 2,
+    labelIn: { review: 'back to questions' },
   },
   {
     command: 'new-case',
@@ -202,6 +220,7 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     description: 'Start a new case',
     when: ['home'],
     footer: ['home'],
+    rank: 2,
   },
   {
     command: 'open-path',
@@ -210,6 +229,7 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     description: 'Open a case file by its path',
     when: ['home'],
     footer: ['home'],
+    rank: 4,
   },
   {
     command: 'demo',
@@ -218,6 +238,7 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     description: 'Open a copy of the demo case',
     when: ['home'],
     footer: ['home'],
+    rank: 3,
   },
   {
     command: 'restore',
@@ -233,6 +254,7 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     description: 'Write the case report beside the case file',
     when: ['review'],
     footer: ['review'],
+    rank: 1,
   },
   {
     command: 'to-question',
@@ -304,6 +326,33 @@ export function findBinding(ctx: KeyContext, input: string, key: Key): KeyBindin
 /** The bindings to hint in a context's footer, in table order. */
 export function footerBindings(ctx: KeyContext): KeyBinding[] {
   return KEY_TABLE.filter((b) => b.footer?.includes(ctx));
+}
+
+/** One footer hint: the binding's first key and its label for the context, e.g. `Ctrl+B back`. */
+export function footerHint(b: KeyBinding, ctx: KeyContext): string {
+  return `${keyLabel(b.keys[0]!)} ${b.labelIn?.[ctx] ?? b.label}`;
+}
+
+/** Columns between two footer hints. */
+export const FOOTER_GAP = 2;
+
+/**
+ * The footer's hints for a context, as many as fit on one line of `width` columns: kept by rank
+ * (the help key first, always), shown in table order. What is left out is in the help overlay.
+ * @example footerLine('question', 80) // ['Ctrl+K all keys', 'Enter accept', 'Ctrl+B back', ...]
+ */
+export function footerLine(ctx: KeyContext, width: number): string[] {
+  const all = footerBindings(ctx);
+  const byRank = [...all].sort((x, y) => (x.rank ?? 9) - (y.rank ?? 9));
+  const kept = new Set<KeyBinding>();
+  let used = 0;
+  for (const b of byRank) {
+    const w = [...footerHint(b, ctx)].length + (kept.size ? FOOTER_GAP : 0);
+    if (kept.size && used + w > width) continue;
+    kept.add(b);
+    used += w;
+  }
+  return all.filter((b) => kept.has(b)).map((b) => footerHint(b, ctx));
 }
 
 /** The keys of a command as written for people, e.g. `keysFor('explain')` is `Ctrl+E`. */

@@ -16,7 +16,12 @@ import {
   solveJson,
   type SolvedJson,
 } from './review.js';
-import { SLIDE_ONLY_FAST, SLIDE_ONLY_GUIDED, TWO_SURFACES_AND_YAW } from './scripts.js';
+import {
+  SLIDE_ONLY_FAST,
+  SLIDE_ONLY_GUIDED,
+  SLIDE_ONLY_QUICK,
+  TWO_SURFACES_AND_YAW,
+} from './scripts.js';
 import { stateFromCase } from '../../src/interview/from-case.js';
 import { firstOpenQuestion, currentQuestion } from '../../src/interview/derived.js';
 import { loadCaseText } from '../../src/case/load.js';
@@ -157,11 +162,16 @@ describe.skipIf(!pty.ok)(
         SLIDE_ONLY_FAST,
         (id, k) => (slideKeys.fast += isSlide(id) ? k : 0),
       );
+      // The same content as question by question (labels too), the segments on one line.
+      const quick = await typeWhole(SLIDE_ONLY_QUICK);
       const [g, f] = await Promise.all([solveJson(guided.files[0]!), solveJson(fast.files[0]!)]);
       console.log(
         `issue 5 key presses, whole case: question by question ${guided.keys}, fast path ${fast.keys}; ` +
-          `the two segments alone: ${slideKeys.guided} question by question (labels typed), ${slideKeys.fast} on one line (no labels)`,
+          `the two segments alone: ${slideKeys.guided} question by question (labels typed), ${slideKeys.fast} on one line (no labels); ` +
+          `same case with labels, segments on one line: ${quick.keys}`,
       );
+      const analyses = (file: string) => (readCase(file) as { analyses: unknown }).analyses;
+      expect(analyses(quick.files[0]!)).toEqual(analyses(guided.files[0]!));
       expect(figures(f)).toEqual(figures(g));
       expect(shownResults(fast.lines)).toEqual(asShown(f));
       expect(fast.keys).toBeLessThan(guided.keys * 0.6);

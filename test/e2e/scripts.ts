@@ -75,6 +75,7 @@ const YAW: Script = {
   'a1.bank.pct': '4',
   'a1.path': 'none',
   'a1.more': 'no',
+  'sampling.shape': 'none',
 };
 
 /** Issue 3: the two-surface downhill slide with a partly failed brake, and a banked yaw. */
@@ -95,6 +96,7 @@ export const SLIDE_ONLY_GUIDED: Script = {
   ...SLIDE_GUIDED,
   ...SLIDE_END,
   'a0.more': 'no',
+  'sampling.shape': 'none',
 };
 
 /**
@@ -126,6 +128,7 @@ export const SLIDE_ONLY_FAST: Script = {
   'a0.quick': '52.5 @0.70-0.80 -3%, 21 @0.45-0.55 -3%',
   'a0.end': '',
   'a0.more': '',
+  'sampling.shape': '',
 };
 
 /** The slide's segments on one line with their labels: the same content as SLIDE_GUIDED. */
@@ -136,6 +139,7 @@ export const SLIDE_ONLY_QUICK: Script = {
   ...SLIDE_QUICK,
   ...SLIDE_END,
   'a0.more': 'no',
+  'sampling.shape': 'none',
 };
 
 /**
