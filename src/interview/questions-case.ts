@@ -25,13 +25,13 @@ export function caseQuestions(): Question[] {
     detail(
       'reference',
       'Reference',
-      'Case or report reference (Enter to leave blank)',
+      'Case or report reference',
       'Ties this calculation to the agency file it belongs to.',
     ),
     detail(
       'occurred',
       'Date and time',
-      'When did the crash happen? (Enter to leave blank)',
+      'When did the crash happen?',
       'Recorded for the report; the surface and light conditions depend on it.',
     ),
     detail(
@@ -74,7 +74,7 @@ export function caseQuestions(): Question[] {
         id: 'limit',
         section: S,
         title: 'Posted limit',
-        prompt: 'Posted speed limit where the marks are (Enter if none or not known)',
+        prompt: 'Posted speed limit where the marks are (skip if none or not known)',
         help: {
           why: 'The minimum speed is compared with the limit. That comparison is a fact for the report, not a finding of fault.',
         },

@@ -89,7 +89,7 @@ export function dragQuestions(
         ...base(
           'value',
           'Drag factor',
-          `Drag factor for ${what}, with its range (e.g. 0.72 (0.65-0.80) or 0.65-0.80)`,
+          `Drag factor for ${what}: a range, or a value with its range such as 0.72 (0.65-0.80)`,
         ),
         help: {
           why: 'The low and high ends of the range give the low and high ends of the speed.',
@@ -103,7 +103,7 @@ export function dragQuestions(
         explainChoice: (a) => {
           const row = surfaceRow(choiceOf(a, `${p}.surface`));
           return source(a) === 'table' && row
-            ? `Table: ${row.surface}: ${rangesLine(row)} (${row.source}).`
+            ? `Table range for ${row.surface}: ${rangesLine(row)}. A guide, not a measurement.`
             : undefined;
         },
         example: '0.65-0.80',
@@ -115,7 +115,7 @@ export function dragQuestions(
         ...base(
           'tests',
           'Test skids',
-          `Test skids for ${what}: speed/distance for each, separated by commas (units may be typed, e.g. 50 km/h / 14 m)`,
+          `Test skids for ${what}: each test as speed/distance, separated by commas (a unit may follow a number: 50 km/h / 14 m)`,
         ),
         help: {
           why: 'Each test gives f = S² / (30 d) (mph, ft) or S² / (254 d) (km/h, m); several tests show the spread.',

@@ -32,7 +32,7 @@ export function timeDistanceQuestions(
         section,
         title: 'Conflict point',
         prompt:
-          'Where was the conflict point (the pedestrian, the other vehicle), measured from the start of the marks? (Enter to skip)',
+          'Where was the conflict point (the pedestrian, the other vehicle), measured from the start of the marks?',
         help: {
           why: 'The review then says whether a vehicle at the posted limit, perceiving at the same point, would have stopped before it.',
           how: 'Along the path of travel, from where the marks begin; 0 is the start of the marks.',
@@ -48,8 +48,7 @@ export function timeDistanceQuestions(
         id: `${p}.reaction`,
         section,
         title: 'Reaction time',
-        prompt:
-          'Perception-reaction time for this case, in seconds (Enter keeps the one in your preferences)',
+        prompt: 'Perception-reaction time for this case, in seconds',
         help: {
           why: `Used for the comparison at the posted limit. 1.5 s: ${reactionTimeSource(1.5)}. 2.5 s: ${reactionTimeSource(2.5)}.`,
           how: 'Leave it empty to use your preference; give a time here only when this case calls for another one, and say why in the notes.',

@@ -75,10 +75,10 @@ export function slideQuestions(
         section,
         title: 'Number of marks',
         prompt: inParts(now)
-          ? 'How many tire marks did you measure? (Enter to skip: the segments give the distance)'
+          ? 'How many tire marks did you measure? (optional: the segments give the distance)'
           : 'How many tire marks did you measure?',
         help: {
-          why: 'Each tire leaves its own mark; the slide distance comes from all of them. With several segments the marks only cross-check the segment lengths (Enter to skip).',
+          why: 'Each tire leaves its own mark; the slide distance comes from all of them. With several segments the marks only cross-check the segment lengths, so they may be skipped.',
           how: 'Count the separate marks; a car braking on all four wheels can leave up to four.',
         },
         appliesWhen: marksAsked,
@@ -93,8 +93,7 @@ export function slideQuestions(
         id: `${p}.marks`,
         section,
         title: 'Mark lengths',
-        prompt:
-          'Length of each mark, on one line (e.g. 94 92 95 93, or 4 x 80.5 when all are equal)',
+        prompt: 'Length of each mark, on one line (or 4 x 80.5 when all are equal)',
         help: {
           why: 'The slide distance is taken from these lengths.',
           how: 'Measure each mark from where it starts to where that tire came to rest (or left the surface, or the point of impact). For marks with short regular gaps (a bouncing tire), measure the whole length, gaps included (common practice). Add a tolerance to all with +/- (e.g. 94 92 95 93 +/- 1).',
@@ -136,6 +135,8 @@ export function slideQuestions(
           how: 'For skid marks broken by long gaps, count only the marked parts: the gaps were not braking and are left out (common practice).',
         },
         appliesWhen: (a) => applies(a) && surfaceMode(a, i) === 'several',
+        // "Several" is most often two surfaces (a lane, then a shoulder).
+        defaultText: () => '2',
       },
       'segments',
       1,
@@ -186,8 +187,8 @@ export function slideQuestions(
         section,
         title: inParts(now) ? `Label, segment ${j + 1}` : 'Surface label',
         prompt: inParts(now)
-          ? `A name for segment ${j + 1} (e.g. asphalt lane, gravel shoulder; Enter to skip)`
-          : 'A name for the surface slid over (e.g. asphalt lane; Enter to skip)',
+          ? `A name for segment ${j + 1} (e.g. asphalt lane, gravel shoulder)`
+          : 'A name for the surface slid over (e.g. asphalt lane)',
         help: { why: 'Names the surface in the chain and the report.' },
         appliesWhen: here,
         optional: true,

@@ -149,7 +149,7 @@ export function brakeQuestions(section: string, applies: Applies): Question[] {
         id: 'vehicle.share',
         section,
         title: 'Front axle share',
-        prompt: "Share of the vehicle's weight on the front axle (0 to 1; Enter for 0.55-0.65)",
+        prompt: "Share of the vehicle's weight on the front axle, 0 to 1",
         help: {
           why: 'Each wheel brakes in proportion to the weight it carries, so a failed front brake costs more than a failed rear one. Weight shifts forward under braking, so the static share overstates n when only the rear brakes work.',
           how: 'Best from weighing the vehicle or its specification. Front-engine cars typically carry about 0.55-0.65 on the front axle (common practice; from memory).',

@@ -80,7 +80,9 @@ export function reduce(state: InterviewState, action: Action): InterviewState {
           error: {
             id: here.id,
             text: '',
-            message: 'there is no default for this question: type an answer',
+            message: here.choices?.length
+              ? 'pick one of the choices: type its letter, or move to it and press Enter'
+              : `an answer is needed here${here.example ? `, e.g. ${here.example}` : ''}`,
           },
         };
       return submit(s, here, d ?? '');

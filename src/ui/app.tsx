@@ -35,7 +35,13 @@ function useSize(columns?: number, rows?: number) {
   const { stdout } = useStdout();
   const [, redraw] = useState(0);
   useEffect(() => {
-    const on = () => redraw((n) => n + 1);
+    // A terminal that changes width re-wraps the frame on screen, so Ink's erase (which counts the
+    // lines it wrote, not the rows they now take) would leave a stale copy. Clearing the screen just
+    // before the app re-lays itself out for the new width lets Ink paint the frame onto a clean screen.
+    const on = () => {
+      stdout.write('\u001b[2J\u001b[3J\u001b[H');
+      redraw((n) => n + 1);
+    };
     stdout.on('resize', on);
     return () => void stdout.off('resize', on);
   }, [stdout]);
@@ -195,7 +201,11 @@ export function App(props: AppProps) {
         />
       ) : null}
       {main}
-      <Footer context={ctx} width={width} note={model.leaving ? 'Saving and leaving…' : undefined} />
+      <Footer
+        context={ctx}
+        width={width}
+        note={model.leaving ? 'Saving and leaving…' : undefined}
+      />
     </Box>
   );
 }

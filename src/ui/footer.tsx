@@ -19,7 +19,7 @@ export function Footer({
   const hints = footerLine(context, width);
   return (
     <Box flexDirection="column">
-      <Text wrap="truncate">
+      <Text>
         {hints.map((h, i) => {
           const cut = h.indexOf(' ');
           return (

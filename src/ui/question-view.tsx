@@ -5,6 +5,37 @@ import type { Line } from './line-edit.js';
 import { TextField } from './text-field.js';
 import { TONE } from './theme.js';
 import { windowOf } from './scroll.js';
+import { wrap } from '../report/wrap.js';
+
+/**
+ * Text word-wrapped by us rather than by Ink, whose wrapping keeps the space at the break and
+ * starts the next line with it. `indent` starts every line after the first (a hanging indent).
+ */
+function Para({
+  text,
+  width,
+  indent = '',
+  ...style
+}: {
+  text: string;
+  width: number;
+  indent?: string;
+  color?: string | undefined;
+  bold?: boolean;
+}) {
+  const lines = wrap(text, Math.max(10, width));
+  const rest =
+    lines.length > 1 ? wrap(lines.slice(1).join(' '), Math.max(10, width - indent.length)) : [];
+  return (
+    <Box flexDirection="column">
+      {[lines[0]!, ...rest.map((l) => indent + l)].map((l, i) => (
+        <Text key={i} {...style}>
+          {l}
+        </Text>
+      ))}
+    </Box>
+  );
+}
 
 export interface QuestionViewProps {
   question: Question;
@@ -33,10 +64,12 @@ function ChoiceList({
   question,
   highlight,
   rows,
+  width,
 }: {
   question: Question;
   highlight: number;
   rows: number;
+  width: number;
 }) {
   const choices = question.choices!;
   const room = Math.max(2, choices.length > rows ? rows - 2 : rows);
@@ -47,19 +80,26 @@ function ChoiceList({
       {w.above ? <Text color={TONE.muted}> ↑ {w.above} more</Text> : null}
       {w.shown.map((c, j) => {
         const i = w.start + j;
+        // A long label wraps under itself (a cut one could hide what the choice means).
+        const head = `${i === highlight ? '> ' : '  '}[${c.key}] `;
+        const [first, ...more] = wrap(c.label, Math.max(10, width - head.length));
         return (
-          <Text key={c.value} wrap="truncate" bold={i === highlight}>
-            {i === highlight ? '> ' : '  '}
-            <Text color={TONE.key}>[{c.key}]</Text> {c.label}
-          </Text>
+          <Box key={c.value} flexDirection="column">
+            <Text bold={i === highlight}>
+              {head.slice(0, 2)}
+              <Text color={TONE.key}>{head.slice(2, -1)}</Text> {first}
+            </Text>
+            {more.map((l, k) => (
+              <Text key={k} bold={i === highlight}>
+                {' '.repeat(head.length)}
+                {l}
+              </Text>
+            ))}
+          </Box>
         );
       })}
       {w.below ? <Text color={TONE.muted}> ↓ {w.below} more</Text> : null}
-      {hint ? (
-        <Text color={TONE.muted} wrap="wrap">
-          {hint}
-        </Text>
-      ) : null}
+      {hint ? <Para text={hint} width={width} color={TONE.muted} /> : null}
     </Box>
   );
 }
@@ -68,20 +108,19 @@ function ChoiceList({
 export function QuestionView(p: QuestionViewProps) {
   const q = p.question;
   const hint = [
-    q.unitHint ? `in ${q.unitHint}` : '',
+    // A drag factor or share has no unit: say what form it takes instead.
+    q.unitHint ? (q.unitHint === 'decimal' ? 'a decimal' : `in ${q.unitHint}`) : '',
     q.example ? `e.g. ${q.example}` : '',
-    q.optional ? 'may be left empty' : '',
+    q.optional ? 'Enter skips' : '',
   ]
     .filter(Boolean)
     .join(' · ');
   return (
     <Box flexDirection="column" width={p.width}>
-      <Text bold wrap="wrap">
-        {q.prompt}
-      </Text>
-      {hint ? <Text color={TONE.muted}>({hint})</Text> : null}
+      <Para text={q.prompt} width={p.width} bold />
+      {hint ? <Para text={`(${hint})`} width={p.width} color={TONE.muted} /> : null}
       {isChoice(q) ? (
-        <ChoiceList question={q} highlight={p.highlight} rows={p.choiceRows} />
+        <ChoiceList question={q} highlight={p.highlight} rows={p.choiceRows} width={p.width} />
       ) : (
         <Box>
           <Text color={TONE.key}>{'> '}</Text>
@@ -89,25 +128,20 @@ export function QuestionView(p: QuestionViewProps) {
         </Box>
       )}
       {p.defaultText !== undefined && p.defaultText !== '' ? (
-        <Text color={TONE.muted} wrap={p.question.usesPreference ? 'wrap' : 'truncate'}>
-          Enter accepts: {p.defaultText}
-        </Text>
+        <Para
+          text={`Enter accepts: ${p.defaultText}`}
+          width={p.width}
+          color={TONE.muted}
+          indent="  "
+        />
       ) : null}
       {p.error ? (
-        <Text color={TONE.error} wrap="wrap">
-          ✗ {p.error}
-        </Text>
+        <Para text={`✗ ${p.error}`} width={p.width} color={TONE.error} indent="  " />
       ) : null}
       {p.notice ? (
-        <Text color={TONE.result} wrap="wrap">
-          → {p.notice}
-        </Text>
+        <Para text={`→ ${p.notice}`} width={p.width} color={TONE.result} indent="  " />
       ) : null}
-      {p.explain ? (
-        <Text color={TONE.muted} wrap="wrap">
-          {p.explain}
-        </Text>
-      ) : null}
+      {p.explain ? <Para text={p.explain} width={p.width} color={TONE.muted} /> : null}
     </Box>
   );
 }

@@ -175,10 +175,15 @@ describe('modes and rejected answers', () => {
     expect(type(t, '64 66 65 65').error).toBeUndefined();
   });
 
-  it('Enter on a question without default says so', () => {
+  it('Enter on a question without default says what is expected', () => {
     const s = fillUntil(start(), SLIDE, 'a0.look');
     expect(act(s, { type: 'accept-default' }).error?.message).toBe(
-      'there is no default for this question: type an answer',
+      'pick one of the choices: type its letter, or move to it and press Enter',
+    );
+    // A typed answer without default names an example of what to type.
+    const m = fillUntil(start(), SLIDE, 'a0.marks');
+    expect(act(m, { type: 'accept-default' }).error?.message).toBe(
+      'an answer is needed here, e.g. 94 92 95 93',
     );
   });
 
