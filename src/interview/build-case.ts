@@ -70,7 +70,8 @@ function yawOf(r: AnswerReader, i: number, id: string): AnalysisV1 {
   return out;
 }
 
-function brakesOf(r: AnswerReader): BrakesV1 | undefined {
+/** The brakes as answered so far, or undefined while they are not (also read by grade-check.ts). */
+export function brakesOf(r: AnswerReader): BrakesV1 | undefined {
   // Not asked (no slide in the case) or not yet answered: no brakes to write.
   if (r.status('vehicle.brakes') !== 'answered') return undefined;
   if (

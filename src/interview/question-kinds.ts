@@ -98,6 +98,8 @@ export function quantityQuestion(
   base: QuestionBase,
   spec: QuantitySpec,
   check?: (value: unknown, ctx: AnswerContext) => string | undefined,
+  /** A note shown with an accepted answer (a flag, not a refusal). */
+  flag?: (value: unknown, ctx: AnswerContext) => string | undefined,
 ): Question {
   const parse = (text: string, ctx: AnswerContext): ParseResult => {
     const empty = emptyOptional(base, text);
@@ -106,7 +108,8 @@ export function quantityQuestion(
     if (!r.ok) return r;
     const extra = check?.(r.value, ctx);
     if (extra) return { ok: false, message: extra };
-    return r.notice ? { ok: true, value: r.value, notice: r.notice } : { ok: true, value: r.value };
+    const notice = [r.notice, flag?.(r.value, ctx)].filter(Boolean).join(' ');
+    return notice ? { ok: true, value: r.value, notice } : { ok: true, value: r.value };
   };
   return finish(base, 'quantity', parse, { unitKind: spec.kind });
 }

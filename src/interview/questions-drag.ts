@@ -103,7 +103,7 @@ export function dragQuestions(
         explainChoice: (a) => {
           const row = surfaceRow(choiceOf(a, `${p}.surface`));
           return source(a) === 'table' && row
-            ? `Table range for ${row.surface}: ${rangesLine(row)}. A guide, not a measurement.`
+            ? `Table range for ${row.surface}: ${rangesLine(row)}; a guide, not a measurement (${row.source}).`
             : undefined;
         },
         example: '0.65-0.80',

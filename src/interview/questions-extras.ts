@@ -8,13 +8,16 @@ import { choiceQuestion, countQuestion, quantityQuestion } from './question-kind
 import { choiceOf } from './answers-read.js';
 import { reactionTimeSource } from '../extras/limit-inputs.js';
 import { DEFAULT_SAMPLES, DEFAULT_SEED } from '../extras/sampling.js';
+import { REACTION_TIME } from '../prefs/schema.js';
 
 /** A posted limit was given: the time-distance comparison has something to compare with. */
 export const hasLimit = (a: Answers): boolean => typeof a.limit?.value === 'number';
 
 /** Bounds as the case file takes them (src/case/v1/extras-fields.ts). */
 const CONFLICT = { what: 'conflict point', min: 0, max: 100_000 };
-const REACTION = { what: 'reaction time', min: 0, max: 10 };
+// The same bounds as the preference: a perception-reaction time under half a second is not credible
+// for a driver (DOMAIN.md: about 0.7 s even when fully expected).
+const REACTION = { what: 'reaction time', min: REACTION_TIME.min, max: REACTION_TIME.max };
 export const SAMPLES = { min: 1000, max: 1_000_000 };
 const SEED_MAX = 0xffffffff;
 

@@ -6,6 +6,7 @@ import { RULES } from '../case/quantity.js';
 import type { Answers, Question } from './types.js';
 import { choiceQuestion, quantityQuestion } from './question-kinds.js';
 import { choiceOf } from './answers-read.js';
+import { steepDownhillNote } from './grade-check.js';
 
 const PERCENT = { what: 'percent', gt: 0, lt: 100 };
 
@@ -56,6 +57,8 @@ export function gradeQuestions(
         range: true,
         noMinus: 'choose uphill or downhill above instead of typing a sign',
       },
+      undefined,
+      (value, ctx) => steepDownhillNote(prefix, value, ctx),
     ),
   ];
 }

@@ -77,8 +77,9 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     label: 'all keys',
     description: 'Show or hide this list of keys',
     when: [...EVERYWHERE, 'help'],
-    footer: EVERYWHERE,
+    footer: [...EVERYWHERE, 'help'],
     rank: 0,
+    labelIn: { help: 'hide keys' },
   },
   {
     command: 'save-leave',
