@@ -19,6 +19,8 @@ export interface QuestionBase {
   defaultText?(answers: Answers): string | undefined;
   explainChoice?(answers: Answers): string | undefined;
   example?: string;
+  /** The example for a metric case, when the imperial one would mislead (45 m is no chord). */
+  metricExample?: string;
   optional?: boolean;
   usesPreference?: 'reactionTime';
 }

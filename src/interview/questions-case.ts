@@ -81,6 +81,7 @@ export function caseQuestions(): Question[] {
         appliesWhen: always,
         optional: true,
         example: '45',
+        metricExample: '50',
         explainChoice: (a) => {
           const v = a.limit?.value;
           const unit = unitsOf(a) === 'metric' ? 'km/h' : 'mph';

@@ -123,6 +123,7 @@ export function dragQuestions(
         },
         appliesWhen: when('test-skids'),
         example: '30/42, 35/57.5',
+        metricExample: '50/13, 55/16',
       },
       'list',
       (text, ctx) =>

@@ -54,6 +54,7 @@ export function endQuestions(
         },
         appliesWhen: (a) => applies(a) && end(a) === 'speed',
         example: '20-25',
+        metricExample: '30-40',
       },
       { kind: 'speed', rule: RULES.speed, range: true },
     ),

@@ -43,6 +43,7 @@ export function timeDistanceQuestions(
         appliesWhen: asked,
         optional: true,
         example: '60',
+        metricExample: '18',
       },
       { kind: 'length', rule: CONFLICT, range: false },
     ),

@@ -153,7 +153,8 @@ function expand(answers: Answers): Question[] {
   const units = unitsOf(answers);
   return oneOfEach(out, answers).map((q) => {
     const hint = q.unitKind && unitHintOf(q.unitKind, units);
-    return hint ? { ...q, unitHint: hint } : q;
+    const example = units === 'metric' && q.metricExample ? { example: q.metricExample } : {};
+    return hint ? { ...q, unitHint: hint, ...example } : { ...q, ...example };
   });
 }
 

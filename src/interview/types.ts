@@ -67,6 +67,8 @@ export interface Question {
   unitKind?: QuantityKind;
   /** An example of the expected input, e.g. `94 92 95 93` or `4 x 80.5`. */
   example?: string;
+  /** The example for a metric case; `questionsFor` puts it in `example` when the case is metric. */
+  metricExample?: string;
   /** True when an empty answer is accepted (it is stored as an empty text). */
   optional?: boolean;
   appliesWhen(answers: Answers): boolean;
