@@ -12,6 +12,17 @@ export type LoadResult =
   | { ok: true; case: Case; migratedFrom?: number; unknownFields: string[] }
   | { ok: false; kind: 'json' | 'format' | 'newer' | 'invalid'; issues: FieldIssue[] };
 
+/** The issues with exact repeats (one rule checked at several ends of one number) dropped. */
+function withoutRepeats(issues: FieldIssue[]): FieldIssue[] {
+  const seen = new Set<string>();
+  return issues.filter((i) => {
+    const key = `${i.path}\u0000${i.message}`;
+    if (seen.has(key)) return false;
+    seen.add(key);
+    return true;
+  });
+}
+
 /**
  * Reads a case from parsed JSON: checks the format, migrates older versions to the latest in
  * memory, validates, and lists fields the schema does not know (kept, but worth a warning).
@@ -62,7 +73,8 @@ export function loadCase(input: unknown): LoadResult {
     current = step(current as Record<string, unknown>);
   }
   const parsed = caseV1.safeParse(current);
-  if (!parsed.success) return { ok: false, kind: 'invalid', issues: fromZod(parsed.error) };
+  if (!parsed.success)
+    return { ok: false, kind: 'invalid', issues: withoutRepeats(fromZod(parsed.error)) };
   const result: LoadResult = {
     ok: true,
     case: parsed.data,

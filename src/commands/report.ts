@@ -1,6 +1,7 @@
 import { readFile, stat } from 'node:fs/promises';
 import path from 'node:path';
 import { describeIssue } from '../case/issues.js';
+import { decodeCaseBytes } from '../case/decode-bytes.js';
 import { loadCaseText, type Case } from '../case/load.js';
 import { solveCase } from '../engine/solve-case.js';
 import type { CaseSolution } from '../engine/types.js';
@@ -67,7 +68,7 @@ async function loadAndSolve(target: string, sessionsDir: string, io: ReportIo): 
   }
   let text: string;
   try {
-    text = await readFile(where.file, 'utf8');
+    text = decodeCaseBytes(await readFile(where.file));
   } catch (e) {
     io.err(
       `skidcase: ${where.file}: cannot be read (${e instanceof Error ? e.message : String(e)})\n`,
@@ -76,8 +77,9 @@ async function loadAndSolve(target: string, sessionsDir: string, io: ReportIo): 
   }
   const loaded = loadCaseText(text);
   if (!loaded.ok) {
-    io.err(`skidcase: ${where.file} is not a valid case file\n`);
+    // The same order as solve: each issue first, starting with its path; the summary line last.
     for (const issue of loaded.issues) io.err(`${describeIssue(issue)}\n`);
+    io.err(`skidcase: ${where.file} is not a valid case file\n`);
     return { ok: false, code: REPORT_EXIT.invalid };
   }
   const solution = solveCase(loaded.case);

@@ -1,4 +1,5 @@
 import { readFile } from 'node:fs/promises';
+import { decodeCaseBytes } from '../case/decode-bytes.js';
 import { describeIssue } from '../case/issues.js';
 import { loadCaseText } from '../case/load.js';
 import { solveCase } from '../engine/solve-case.js';
@@ -34,16 +35,17 @@ export async function solveCommand(
 ): Promise<number> {
   let text: string;
   try {
-    text = await readFile(file, 'utf8');
+    text = decodeCaseBytes(await readFile(file));
   } catch (e) {
     io.err(`skidcase: ${readError(file, e)}\n`);
     return EXIT.invalid;
   }
-  // A byte-order mark from a Windows editor is not part of the JSON.
-  const loaded = loadCaseText(text.replace(/^\uFEFF/, ''));
+  const loaded = loadCaseText(text);
   if (!loaded.ok) {
-    io.err(`skidcase: ${file} is not a valid case file\n`);
+    // The issues come first, each starting with its path, so that a script can read the first
+    // line as "path: message" (docs/case-file.md); the summary line follows.
     for (const issue of loaded.issues) io.err(`${describeIssue(issue)}\n`);
+    io.err(`skidcase: ${file} is not a valid case file\n`);
     return EXIT.invalid;
   }
   const solution = solveCase(loaded.case);

@@ -21,7 +21,8 @@ export function slideDistanceFromMarks(
   units: Units,
 ): { distance: Range; step: Step } {
   if (marks.length === 0) throw new RangeError('slideDistanceFromMarks needs at least one mark');
-  const pick = rule === 'average' ? mean : (xs: number[]) => Math.max(...xs);
+  // A reduce, not Math.max(...xs): a file may hold more marks than a call can take as arguments.
+  const pick = rule === 'average' ? mean : (xs: number[]) => xs.reduce((a, b) => Math.max(a, b));
   const distance: Range = {
     value: pick(marks.map((m) => m.value)),
     low: pick(marks.map((m) => m.low)),

@@ -19,8 +19,9 @@ export interface Drag {
 export function reduceRepeated(xs: number[]): Range {
   return {
     value: xs.reduce((a, b) => a + b, 0) / xs.length,
-    low: Math.min(...xs),
-    high: Math.max(...xs),
+    // Reduced, not spread into Math.min/max: a file may hold more figures than a call's arguments.
+    low: xs.reduce((a, b) => Math.min(a, b)),
+    high: xs.reduce((a, b) => Math.max(a, b)),
   };
 }
 
@@ -55,9 +56,7 @@ export function dragFactor(drag: DragV1, system: UnitSystem): Outcome<Drag> {
     const isTable = drag.source === 'table';
     const surface = isTable ? (drag.surface ?? 'a surface not named') : '';
     const row = isTable && drag.surface ? dragTableRow(drag.surface) : undefined;
-    const source = isTable
-      ? `table: ${surface}${drag.band ? `, ${drag.band}` : ''}`
-      : 'entered';
+    const source = isTable ? `table: ${surface}${drag.band ? `, ${drag.band}` : ''}` : 'entered';
     if (isTable)
       notes.push(
         `The drag factor ${f2(f.value)} is a guide from a reference table, not a measurement of this surface${row ? `; source: ${row.source}` : ''}.`,

@@ -2,7 +2,7 @@ import { spread } from '../case/quantity.js';
 import type { Case } from '../case/load.js';
 import { unknownFields } from '../case/unknown-fields.js';
 import { unitsOf } from './constants.js';
-import { solveSkid } from './solve-skid.js';
+import { isAboveLimit, solveSkid } from './solve-skid.js';
 import { solveYaw } from './solve-yaw.js';
 import type { AnalysisOutcome, CaseSolution } from './types.js';
 
@@ -46,7 +46,7 @@ export function solveCase(c: Case): CaseSolution {
     const limit = spread(c.postedLimit).value;
     out.postedLimit = {
       value: limit,
-      exceededAtMinimum: analyses.some((r) => r.ok && r.solution.speed.low > limit),
+      exceededAtMinimum: analyses.some((r) => r.ok && isAboveLimit(r.solution.speed.low, limit)),
     };
   }
   return out;

@@ -16,6 +16,13 @@ export const MARKS_MISMATCH = 0.05;
 /** "at least" figure: the low end rounded down, safe against 40.999999 from rounding error. */
 export const minimumOf = (low: number) => Math.floor(low + 1e-9);
 
+/**
+ * Whether a low end is above the posted limit, with the tolerance minimumOf uses: a low end that
+ * is the limit exactly but computes as 24.000000000000004 is not above it (and its minimum is 24).
+ * @example isAboveLimit(24.000000000000004, 24) // false
+ */
+export const isAboveLimit = (low: number, limit: number) => low > limit + 1e-9;
+
 const sumRanges = (rs: Range[]): Range =>
   rs.reduce((a, r) => ({ value: a.value + r.value, low: a.low + r.low, high: a.high + r.high }), {
     value: 0,

@@ -6,6 +6,7 @@ import type {
   Step,
   Units,
 } from '../engine/types.js';
+import { isAboveLimit } from '../engine/solve-skid.js';
 import { CAUTIONS } from './cautions.js';
 import { extrasTextLines } from './extras-text.js';
 import { solveExtras } from './solve-extras.js';
@@ -43,6 +44,12 @@ export function formatAtLeast(s: AnalysisSolution, units: Units): string {
   return `at least ${s.minimum} ${units.speed}: ${formatRange(s.speed, 'speed', units.speed)}`;
 }
 
+/** Appends lines one by one: a case file may carry hundreds of thousands of them (unknown fields),
+ * more than `push(...lines)` can pass as arguments. */
+function append(out: string[], lines: readonly string[]): void {
+  for (const l of lines) out.push(l);
+}
+
 function list(title: string, items: readonly string[]): string[] {
   if (items.length === 0) return [];
   return [`${title}:`, ...items.map((t) => `  - ${t}`)];
@@ -56,7 +63,12 @@ function analysisLines(r: AnalysisOutcome, i: number, units: Units, c: Case): st
   if (!r.ok) return [head, `  cannot be computed: ${r.reason}${r.path ? ` [${r.path}]` : ''}`];
   const s = r.solution;
   const out = [head];
-  s.steps.forEach((st, j) => out.push(...formatStepLines(st, j + 1).map((l) => `  ${l}`)));
+  s.steps.forEach((st, j) =>
+    append(
+      out,
+      formatStepLines(st, j + 1).map((l) => `  ${l}`),
+    ),
+  );
   if (s.boundaries && s.boundaries.length > 2) {
     out.push('  Speed along the slide:');
     for (const b of s.boundaries)
@@ -65,9 +77,15 @@ function analysisLines(r: AnalysisOutcome, i: number, units: Units, c: Case): st
       );
   }
   out.push(`  Result: ${formatAtLeast(s, units)}`);
-  out.push(...extrasTextLines(solveExtras(c, i, s), units));
-  out.push(...list('  Assumptions', s.assumptions).map((l, k) => (k === 0 ? l : `  ${l}`)));
-  out.push(...list('  Warnings', s.warnings).map((l, k) => (k === 0 ? l : `  ${l}`)));
+  append(out, extrasTextLines(solveExtras(c, i, s), units));
+  append(
+    out,
+    list('  Assumptions', s.assumptions).map((l, k) => (k === 0 ? l : `  ${l}`)),
+  );
+  append(
+    out,
+    list('  Warnings', s.warnings).map((l, k) => (k === 0 ? l : `  ${l}`)),
+  );
   return out;
 }
 
@@ -76,7 +94,9 @@ export function formatPostedLimit(solution: CaseSolution): string | undefined {
   const p = solution.postedLimit;
   if (!p) return undefined;
   const u = solution.units.speed;
-  const above = solution.analyses.filter((r) => r.ok && r.solution.speed.low > p.value);
+  const above = solution.analyses.filter(
+    (r) => r.ok && isAboveLimit(r.solution.speed.low, p.value),
+  );
   const limit = withUnit(p.value, 'speed', u);
   if (above.length === 0) return `Posted limit ${limit}: no analysis’s low end is above it.`;
   const names = above.map((r) =>
@@ -94,10 +114,10 @@ export function formatPostedLimit(solution: CaseSolution): string | undefined {
 export function formatChainText(solution: CaseSolution, c: Case): string {
   const u = solution.units;
   const out: string[] = [`Case ${solution.id} (${c.units}: ${u.length}, ${u.speed})`, ''];
-  solution.analyses.forEach((r, i) => out.push(...analysisLines(r, i, u, c), ''));
+  solution.analyses.forEach((r, i) => append(out, [...analysisLines(r, i, u, c), '']));
   const limit = formatPostedLimit(solution);
   if (limit) out.push(limit, '');
-  if (solution.warnings.length) out.push(...list('File warnings', solution.warnings), '');
-  out.push(...list('Cautions', CAUTIONS));
+  if (solution.warnings.length) append(out, [...list('File warnings', solution.warnings), '']);
+  append(out, list('Cautions', CAUTIONS));
   return out.join('\n') + '\n';
 }

@@ -30,6 +30,20 @@ export function analysisToJson(
 }
 
 /**
+ * The file's warnings (unknown fields, by path) that concern analysis i: those inside it and
+ * those outside every analysis (the vehicle and the case apply to all). A reader who knows only
+ * the contract's shape looks for warnings in `analyses[].warnings`, so they are repeated there;
+ * the top-level `warnings` keeps the whole list.
+ */
+function fileWarningsFor(warnings: readonly string[], i: number): string[] {
+  const own = `analyses[${i}]`;
+  return warnings.filter((w) => {
+    if (!w.startsWith('analyses[')) return true;
+    return w.startsWith(`${own}.`) || w.startsWith(`${own}:`);
+  });
+}
+
+/**
  * The shape `skidcase solve FILE --json` prints (docs/case-file.md): id, units, analyses, and the
  * posted limit when the case has one, plus the file's warnings; given the case, each analysis
  * also carries its extras (see analysisToJson). Numbers are unrounded except
@@ -39,9 +53,12 @@ export function solutionToJson(solution: CaseSolution, c?: Case): Record<string,
   const out: Record<string, unknown> = {
     id: solution.id,
     units: solution.units,
-    analyses: solution.analyses.flatMap((r, index) =>
-      r.ok ? [analysisToJson(r.solution, c ? { c, index } : undefined)] : [],
-    ),
+    analyses: solution.analyses.flatMap((r, index) => {
+      if (!r.ok) return [];
+      const a = analysisToJson(r.solution, c ? { c, index } : undefined);
+      a.warnings = [...r.solution.warnings, ...fileWarningsFor(solution.warnings, index)];
+      return [a];
+    }),
   };
   if (solution.postedLimit) out.postedLimit = solution.postedLimit;
   out.warnings = solution.warnings;

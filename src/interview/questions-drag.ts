@@ -17,6 +17,7 @@ import {
   SURFACE_CHOICES,
   surfaceRow,
 } from './drag-table.js';
+import { measuredDragLine } from './drag-line.js';
 
 export const DRAG_SOURCES: Choice[] = [
   { value: 'test-skids', key: 'k', label: 'test skids at the scene' },
@@ -122,6 +123,7 @@ export function dragQuestions(
           how: 'Skid a similar vehicle at a known speed on the same surface and measure the skid. A test at low speed tends to give a slightly higher f than at crash speed (common practice).',
         },
         appliesWhen: when('test-skids'),
+        explainChoice: (a) => measuredDragLine(a, prefix),
         example: '30/42, 35/57.5',
         metricExample: '50/13, 55/16',
       },
@@ -154,6 +156,7 @@ export function dragQuestions(
         },
         appliesWhen: when('sled'),
         example: '52 54 51',
+        explainChoice: (a) => measuredDragLine(a, prefix),
       },
       { kind: 'force', rule: RULES.sledPull, range: false },
       'pull',
@@ -166,6 +169,7 @@ export function dragQuestions(
           how: 'Take them from skid tests with the meter fixed level in the test vehicle.',
         },
         appliesWhen: when('decelerometer'),
+        explainChoice: (a) => measuredDragLine(a, prefix),
         example: '0.71 0.69 0.73',
       },
       { kind: 'factor', rule: RULES.decel, range: false },

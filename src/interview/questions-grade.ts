@@ -77,7 +77,7 @@ export function bankQuestions(
         title: 'Bank',
         prompt: 'Across the road where the marks curve, the surface tilts:',
         help: {
-          why: 'A road banked toward the centre of the curve (superelevation) lets a vehicle take it faster; banked away, slower. S = sqrt(15 R (f + e) / (1 - f e)).',
+          why: 'A road banked toward the centre of the curve (superelevation) lets a vehicle take it faster; banked away, slower. S = sqrt(K R (f + e) / (1 - f e)), K = 15 (mph, ft) or 127 (km/h, m).',
           how: "Measure the cross slope at the chord's midpoint, at right angles to the road, in percent.",
         },
         appliesWhen: applies,

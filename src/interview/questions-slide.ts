@@ -83,6 +83,7 @@ export function slideQuestions(
         },
         appliesWhen: marksAsked,
         optional: inParts(now),
+        example: '4',
       },
       'marks',
       1,

@@ -6,6 +6,7 @@ import { RULES } from '../case/quantity.js';
 import type { Answers, Question } from './types.js';
 import { choiceQuestion, quantityQuestion, textQuestion } from './question-kinds.js';
 import { choiceOf } from './answers-read.js';
+import { wheelsLine } from './brakes-line.js';
 
 const S = 'Vehicle';
 const always = () => true;
@@ -36,6 +37,7 @@ function wheelQuestions(w: (typeof WHEELS)[number], section: string, applies: Ap
         },
         appliesWhen: brakesAre('wheels', applies),
         defaultText: () => 'working',
+        explainChoice: wheelsLine,
       },
       [
         { value: 'working', key: 'w', label: 'working' },
@@ -55,6 +57,7 @@ function wheelQuestions(w: (typeof WHEELS)[number], section: string, applies: Ap
         },
         appliesWhen: (a) => brakesAre('wheels', applies)(a) && choiceOf(a, id) === 'partly',
         example: '0.5',
+        explainChoice: wheelsLine,
       },
       {
         kind: 'factor',

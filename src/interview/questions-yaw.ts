@@ -171,8 +171,7 @@ function yawQuestionsOf(
         id: `${p}.ordinate`,
         section,
         title: 'Middle ordinate',
-        prompt:
-          "Middle ordinate: from the chord's midpoint to the mark, at right angles",
+        prompt: "Middle ordinate: from the chord's midpoint to the mark, at right angles",
         help: {
           why: 'The radius is very sensitive to it: an error of one part in ten in the ordinate moves the radius by about the same share and the speed by about half that. Read it as finely as you can.',
           how: "At the chord's midpoint, measure square to the tape to the mark's outer edge; read to the nearest 1/8 inch (or few mm). It must be less than half the chord.",

@@ -17,6 +17,12 @@ export function initialState(mode: InterviewMode = 'guided'): InterviewState {
   return { answers: {}, cursor: first.id, undo: [], mode, explain: mode === 'guided' };
 }
 
+/** "d, a, s, g or y": the keys of the choices, as a sentence. */
+function keysOf(choices: readonly { key: string }[]): string {
+  const k = choices.map((c) => c.key);
+  return k.length > 1 ? `${k.slice(0, -1).join(', ')} or ${k.at(-1)}` : (k[0] ?? '');
+}
+
 /** Without error and notice: each action decides whether to set them again. */
 function quiet(state: InterviewState): InterviewState {
   const { error: _e, notice: _n, ...rest } = state;
@@ -96,7 +102,7 @@ export function reduce(state: InterviewState, action: Action): InterviewState {
           error: {
             id: here.id,
             text: action.value,
-            message: `"${action.value}" is not one of the choices here`,
+            message: `"${action.value}" is not one of the choices here: press ${keysOf(here.choices ?? [])}`,
           },
         };
       return submit(s, here, c.value);

@@ -196,6 +196,7 @@ export function App(props: AppProps) {
           progress={port.progress(s.state)}
           mode={model.mode}
           savedAt={s.savedAt}
+          lastSaved={s.open.isNew ? undefined : s.open.case.updated}
           saveError={s.saveError}
           readOnly={!!s.open.readOnly}
         />
@@ -204,6 +205,7 @@ export function App(props: AppProps) {
       <Footer
         context={ctx}
         width={width}
+        omit={ctx === 'home' && model.home.rows?.length === 0 ? ['submit'] : []}
         note={model.leaving ? 'Saving and leaving…' : undefined}
       />
     </Box>

@@ -1,6 +1,7 @@
 import React from 'react';
 import { Box, Text } from 'ink';
 import { TONE } from './theme.js';
+import { wrap } from '../report/wrap.js';
 
 /** The running chain, reduced to what fits beside a question: each step's name and result. */
 export interface DraftView {
@@ -23,9 +24,11 @@ export function DraftPanel({
 }) {
   // Keep the latest steps when space is short: they are the ones the current answer moves.
   const inner = width - 4;
-  // A step whose name and result do not fit on one line takes two.
+  // A step whose name and result do not fit on one line: the name wraps (never cut, it says
+  // which segment), the result goes on a line of its own.
+  const nameLines = (st: DraftView['steps'][number]) => wrap(`${st.name}:`, Math.max(10, inner));
   const rowsOf = (st: DraftView['steps'][number]) =>
-    st.name.length + st.result.length + 2 <= inner ? 1 : 2;
+    st.name.length + st.result.length + 2 <= inner ? 1 : nameLines(st).length + 1;
   let room = Math.max(0, maxLines - 3 - (view.result && view.result.length > inner ? 1 : 0));
   const steps: DraftView['steps'] = [];
   for (let i = view.steps.length - 1; i >= 0 && rowsOf(view.steps[i]!) <= room; i--) {
@@ -54,8 +57,10 @@ export function DraftPanel({
           </Text>
         ) : (
           <Box key={i} flexDirection="column">
-            <Text wrap="truncate">{s.name}:</Text>
-            <Text wrap="truncate"> {s.result}</Text>
+            {nameLines(s).map((l, k) => (
+              <Text key={k}>{l}</Text>
+            ))}
+            <Text wrap="truncate">{`  ${s.result}`}</Text>
           </Box>
         ),
       )}

@@ -1,6 +1,6 @@
 import React from 'react';
 import { Box, Text } from 'ink';
-import { FOOTER_GAP, footerLine, type KeyContext } from './keys.js';
+import { FOOTER_GAP, footerLine, type Command, type KeyContext } from './keys.js';
 import { TONE } from './theme.js';
 
 /**
@@ -10,13 +10,15 @@ import { TONE } from './theme.js';
 export function Footer({
   context,
   width,
+  omit,
   note,
 }: {
   context: KeyContext;
   width: number;
+  omit?: readonly Command[];
   note?: string | undefined;
 }) {
-  const hints = footerLine(context, width);
+  const hints = footerLine(context, width, omit);
   return (
     <Box flexDirection="column">
       <Text>

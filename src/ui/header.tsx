@@ -10,6 +10,8 @@ export interface HeaderProps {
   progress: Progress;
   mode: string;
   savedAt?: Date | undefined;
+  /** When the case file was last written, before this session (ISO time), for a case reopened. */
+  lastSaved?: string | undefined;
   saveError?: string | undefined;
   readOnly: boolean;
 }
@@ -20,6 +22,14 @@ export function savedText(at: Date): string {
   return `saved ${p(at.getHours())}:${p(at.getMinutes())}:${p(at.getSeconds())}`;
 }
 
+/** "2026-12-01 23:03": an ISO time shown in local time to the minute; text that is no time as is. */
+export function localTime(iso: string): string {
+  const d = new Date(iso);
+  if (Number.isNaN(d.getTime())) return iso;
+  const p = (n: number) => String(n).padStart(2, '0');
+  return `${d.getFullYear()}-${p(d.getMonth() + 1)}-${p(d.getDate())} ${p(d.getHours())}:${p(d.getMinutes())}`;
+}
+
 /** Top line of a case screen: which case, where in it, how far, and the save status. */
 export function Header(p: HeaderProps) {
   const status = p.readOnly
@@ -28,7 +38,9 @@ export function Header(p: HeaderProps) {
       ? p.saveError
       : p.savedAt
         ? savedText(p.savedAt)
-        : 'no changes yet';
+        : p.lastSaved
+          ? `last saved ${localTime(p.lastSaved)}`
+          : 'no changes yet';
   return (
     <Box flexDirection="column">
       <Box justifyContent="space-between" flexWrap="wrap" columnGap={2}>

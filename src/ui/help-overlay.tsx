@@ -10,7 +10,7 @@ import { TONE } from './theme.js';
 const PLACES: Record<KeyContext, string> = {
   home: 'case list',
   question: 'questions',
-  choice: 'choices',
+  choice: 'questions',
   review: 'review',
   jump: 'go-to list',
   help: 'this list',

@@ -5,6 +5,7 @@ import type { Line } from './line-edit.js';
 import { TextField } from './text-field.js';
 import { windowOf } from './scroll.js';
 import { TONE } from './theme.js';
+import { localTime } from './header.js';
 
 const FROM: Record<string, string> = {
   flag: 'set by --sessions',
@@ -27,7 +28,6 @@ export function rowStatus(r: CaseRow): string {
   if (r.progress) parts.push(`${r.progress.answered} of ${r.progress.applicable} answered`);
   if (r.result) parts.push(r.result);
   else if (r.stoppedAt) parts.push(`stopped at: ${r.stoppedAt}`);
-  if (r.updated) parts.push(`saved ${r.updated.replace('T', ' ').slice(0, 16)}`);
   return parts.join(' · ');
 }
 
@@ -72,6 +72,10 @@ export function HomeScreen(p: HomeProps) {
               {at ? '> ' : '  '}
               {r.id}
               {r.reference ? ` · ${r.reference}` : ''}
+              {/* On the first line, where there is room: a long "stopped at" no longer cuts it. */}
+              {r.updated && !r.problem ? (
+                <Text color={TONE.muted}> · saved {localTime(r.updated)}</Text>
+              ) : null}
             </Text>
             <Text
               color={r.problem ? TONE.error : r.result ? TONE.result : TONE.muted}

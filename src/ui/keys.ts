@@ -208,8 +208,9 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     command: 'close',
     keys: [plain('escape')],
     label: 'close',
-    description: 'Close the list or overlay; from the review, return to the questions',
-    when: ['jump', 'help', 'review', 'path'],
+    description:
+      'Close the list or overlay; from the review, return to the questions; on a question, put back the answer as it was before typing',
+    when: ['jump', 'help', 'review', 'path', 'question', 'choice'],
     footer: ['jump', 'help', 'review', 'path'],
     rank: 2,
     labelIn: { review: 'back to questions' },
@@ -339,11 +340,16 @@ export const FOOTER_GAP = 2;
 
 /**
  * The footer's hints for a context, as many as fit on one line of `width` columns: kept by rank
- * (the help key first, always), shown in table order. What is left out is in the help overlay.
+ * (the help key first, always), shown in that order too. What is left out is in the help overlay.
+ * `omit` drops hints that would mislead on this screen (Enter "open" with no case to open).
  * @example footerLine('question', 80) // ['Ctrl+K all keys', 'Enter accept', 'Ctrl+B back', ...]
  */
-export function footerLine(ctx: KeyContext, width: number): string[] {
-  const all = footerBindings(ctx);
+export function footerLine(
+  ctx: KeyContext,
+  width: number,
+  omit: readonly Command[] = [],
+): string[] {
+  const all = footerBindings(ctx).filter((b) => !omit.includes(b.command));
   const byRank = [...all].sort((x, y) => (x.rank ?? 9) - (y.rank ?? 9));
   const kept = new Set<KeyBinding>();
   let used = 0;
@@ -353,7 +359,7 @@ export function footerLine(ctx: KeyContext, width: number): string[] {
     kept.add(b);
     used += w;
   }
-  return all.filter((b) => kept.has(b)).map((b) => footerHint(b, ctx));
+  return byRank.filter((b) => kept.has(b)).map((b) => footerHint(b, ctx));
 }
 
 /** The keys of a command as written for people, e.g. `keysFor('explain')` is `Ctrl+E`. */

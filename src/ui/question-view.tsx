@@ -115,6 +115,13 @@ export function QuestionView(p: QuestionViewProps) {
   ]
     .filter(Boolean)
     .join(' · ');
+  // What Enter would give now: the highlighted choice, or the default while nothing is typed
+  // (a line filled with an earlier answer submits that answer, not the default).
+  const enterGives = isChoice(q)
+    ? q.choices![p.highlight]?.label
+    : p.line.value.trim() === ''
+      ? p.defaultText
+      : undefined;
   return (
     <Box flexDirection="column" width={p.width}>
       <Para text={q.prompt} width={p.width} bold />
@@ -127,9 +134,9 @@ export function QuestionView(p: QuestionViewProps) {
           <TextField line={p.line} color={p.color} />
         </Box>
       )}
-      {p.defaultText !== undefined && p.defaultText !== '' ? (
+      {enterGives ? (
         <Para
-          text={`Enter accepts: ${p.defaultText}`}
+          text={`Enter accepts: ${enterGives}`}
           width={p.width}
           color={TONE.muted}
           indent="  "

@@ -6,6 +6,7 @@
  * and the tests read the same lines the user reads.
  */
 import type { AnalysisSolution, CaseSolution } from '../engine/types.js';
+import { isAboveLimit } from '../engine/index.js';
 import { CAUTIONS } from '../format/cautions.js';
 import { formatNumber, formatRange } from '../format/numbers.js';
 import { sensitivity } from '../extras/sensitivity.js';
@@ -50,7 +51,7 @@ function analysisLines(
     const v = sol.postedLimit.value;
     // A limit converted from the other unit is not whole: show it as converted, not rounded.
     const limit = `${formatNumber(v, Number.isInteger(v) ? 'integer' : 'speed')} ${unit}`;
-    const above = s.speed.low > sol.postedLimit.value;
+    const above = isAboveLimit(s.speed.low, sol.postedLimit.value);
     pushWrapped(
       out,
       `Posted limit ${limit}: the low end is ${above ? 'above' : 'not above'} the limit.`,

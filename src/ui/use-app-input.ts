@@ -10,7 +10,7 @@ import { editLine } from './line-edit.js';
 import { splitKeys } from './split-keys.js';
 import { filterQuestions } from './jump-filter.js';
 import { isChoice } from './question-view.js';
-import { submitAction } from './session.js';
+import { inputFor, submitAction } from './session.js';
 import type { AppModel } from './use-app-model.js';
 import type { InterviewPort } from './interview-port.js';
 import type { Services } from './services.js';
@@ -73,7 +73,9 @@ function typed(ctx: KeyContext, input: string, key: Key, d: InputDeps) {
   if (ctx === 'choice' && m.session && !key.ctrl && !key.meta) {
     const q = port.current(m.session.state)!;
     const c = q.choices!.find((c) => c.key.toLowerCase() === input.toLowerCase());
-    if (c) app.act({ type: 'choose', value: c.value });
+    // Any other printable key is a miss the investigator should hear about, not silence.
+    if (c || (input.length === 1 && input > ' '))
+      app.act({ type: 'choose', value: c ? c.value : input });
     return;
   }
   if (ctx === 'question' && m.session) {
@@ -92,6 +94,15 @@ function typed(ctx: KeyContext, input: string, key: Key, d: InputDeps) {
     const path = editLine(m.home.path, input, key);
     if (path !== m.home.path) app.setHome({ path });
   }
+}
+
+/** Esc on a question: the message goes, and the line (or highlight) is back as the question began. */
+function putBack(d: InputDeps) {
+  d.app.update((x) => {
+    if (!x.session) return x;
+    const { error: _gone, ...state } = x.session.state;
+    return { ...x, session: { ...x.session, state, ...inputFor(d.port, state) } };
+  });
 }
 
 function move(d: InputDeps, ctx: KeyContext, by: number) {
@@ -135,6 +146,7 @@ function run(command: Command, ctx: KeyContext, d: InputDeps) {
       if (m.overlay) return app.update((x) => ({ ...x, overlay: undefined }));
       if (ctx === 'path') return app.setHome({ path: undefined });
       if (ctx === 'review') return app.act({ type: 'back' });
+      if ((ctx === 'question' || ctx === 'choice') && m.session) return putBack(d);
       return;
     case 'up':
       return move(d, ctx, -1);

@@ -147,9 +147,11 @@ describe('time and distance for a slide', () => {
     });
   });
 
-  it('refuses a reaction time over 10 s, as the case file does', () => {
+  it('refuses a reaction time outside the preference bounds (0.5 to 5 s)', () => {
     const s = fillUntil(start(), { ...SLIDE, limit: '40' }, 'a0.reaction');
-    expect(act(s, { type: 'answer', text: '12' }).error?.message).toContain('at most 10');
+    expect(act(s, { type: 'answer', text: '12' }).error?.message).toContain('at most 5');
+    expect(act(s, { type: 'answer', text: '0.2' }).error?.message).toContain('at least 0.5');
+    expect(act(s, { type: 'answer', text: '2.5' }).error).toBeUndefined();
   });
 });
 

@@ -76,6 +76,13 @@ describe('footer on screen', () => {
     expect(lastLine(app.frame())).toContain('Esc back to questions');
   });
 
+  it('offers no Enter on an empty case list, where there is nothing to open', async () => {
+    const app = renderApp({ columns: 80 });
+    const f = await app.waitText('No cases here yet');
+    expect(lastLine(f)).not.toContain('Enter');
+    expect(lastLine(f)).toContain('n new case');
+  });
+
   it('a key left out of the footer is still in the help overlay', async () => {
     const app = await onQuestion(80);
     expect(lastLine(app.frame())).not.toContain('Ctrl+Z');

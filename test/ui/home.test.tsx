@@ -24,7 +24,9 @@ describe('home screen', () => {
     expect(f).toContain('UI-TEST-FINISHED');
     // S = sqrt(30 × 100 × 0.60) = 42.43 at the low end (DOMAIN.md slide to stop): "at least 42 mph".
     expect(f).toContain('at least 42 mph');
-    expect(f).toMatch(/half-done · UI-TEST-HALF\n\s+5 of \d+ answered · stopped at: Units/);
+    expect(f).toMatch(
+      /half-done · UI-TEST-HALF · saved 2026-11-\d\d \d\d:00\n\s+5 of \d+ answered · stopped at: Units/,
+    );
   });
 
   it('names a broken file with its problem, never opens it, and offers its backup', async () => {

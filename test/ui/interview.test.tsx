@@ -247,3 +247,61 @@ describe('choices', () => {
     expect(f).toContain('in km/h');
   });
 });
+
+describe('a case reopened', () => {
+  it('says when it was last saved instead of "no changes yet"', async () => {
+    const app = renderApp({ files: { 'half-done.json': halfDone } });
+    await app.waitText('half-done');
+    const f = await app.press(ENTER, 'Resumed');
+    // halfDone was saved 2026-11-29T09:00:00Z (fixtures.ts), shown in local time to the minute.
+    const at = new Date('2026-11-29T09:00:00Z');
+    const p = (n: number) => String(n).padStart(2, '0');
+    expect(f).toContain(`last saved 2026-11-${p(at.getDate())} ${p(at.getHours())}:00`);
+    expect(f).not.toContain('no changes yet');
+  });
+});
+
+describe('what Enter gives', () => {
+  it('on a choice, names the choice marked >, following the arrows', async () => {
+    const app = await newCase();
+    for (let i = 0; i < 5; i++) await app.press(ENTER);
+    let f = await app.waitText('Which units');
+    expect(f).toContain('Enter accepts: feet and mph');
+    f = await app.press(DOWN, 'Enter accepts: metres and km/h');
+    expect(f).toMatch(/> \[m\] metres and km\/h/);
+    await app.press(ENTER, 'Posted speed limit');
+    // Back on the units: the answer given is marked and named, not the offered default.
+    f = await app.press(ctrl('b'), 'Which units');
+    expect(f).toContain('Enter accepts: metres and km/h');
+  });
+});
+
+describe('keys pressed by mistake', () => {
+  it('a letter that is no choice says which letters are', async () => {
+    const app = await newCase();
+    for (let i = 0; i < 5; i++) await app.press(ENTER);
+    await app.waitText('Which units');
+    const f = await app.press('x', 'is not one of the choices');
+    expect(f).toContain('"x" is not one of the choices here: press i or m');
+    // Esc takes the message away and the question is as it was.
+    app.stdin.write(ESC);
+    const g = await app.waitFor(
+      (t) => !t.includes('is not one of the choices'),
+      'the message gone',
+    );
+    expect(g).toContain('Which units');
+  });
+
+  it('Esc on a typed question puts back the answer as it was before typing', async () => {
+    const app = await newCase();
+    await toLimit(app);
+    await app.answer('45', 'Which vehicle');
+    await app.press(ctrl('b'), 'Posted speed limit');
+    for (const ch of '9x') app.stdin.write(ch);
+    await app.waitText('459x');
+    app.stdin.write(ESC);
+    const f = await app.waitFor((t) => !t.includes('459x'), 'the typing put back');
+    expect(f).toMatch(/> 45/);
+    expect(f).toContain('Posted speed limit');
+  });
+});

@@ -79,7 +79,12 @@ export const dragV1 = z
         note: text('note').optional(),
       }),
     ],
-    { error: 'drag.source must be one of entered, table, test-skids, sled, decelerometer' },
+    {
+      error: (iss: { input?: unknown }) =>
+        iss.input === undefined
+          ? 'drag is required'
+          : 'drag.source must be one of entered, table, test-skids, sled, decelerometer',
+    },
   )
   .superRefine((d, ctx) => {
     if (d.source !== 'entered' && d.source !== 'table') return;
@@ -164,7 +169,7 @@ export const endV1 = z.discriminatedUnion(
 // The contract leaves analysis ids free; they only need to tell analyses apart and print cleanly
 // (file names made from them are sanitised where they are written).
 const analysisId = z
-  .string({ error: 'id must be text' })
+  .string(need('id', 'text'))
   .min(1, 'id must not be empty')
   .max(64, 'id must be at most 64 characters')
   // eslint-disable-next-line no-control-regex
@@ -266,7 +271,7 @@ export const caseV1 = z
     format: z.literal('skidcase-case', { error: 'format must be "skidcase-case"' }),
     version: z.literal(1),
     id: z
-      .string({ error: 'id must be text' })
+      .string(need('id', 'text'))
       .regex(/^[a-z0-9-]{1,64}$/, 'id must be 1 to 64 lower-case letters, digits or dashes'),
     created: text('created').optional(),
     updated: text('updated').optional(),

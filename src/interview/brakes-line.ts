@@ -1,0 +1,35 @@
+/**
+ * The braking efficiency worked out from the wheel-by-wheel answers, in one line, shown as soon
+ * as the last wheel is answered: the investigator sees what the inspection findings come to.
+ */
+import type { Quantity } from '../case/quantity.js';
+import { brakingEfficiency } from '../engine/index.js';
+import { formatNumber } from '../format/numbers.js';
+import type { Answers } from './types.js';
+import { readAnswers } from './answer-values.js';
+import { brakesOf } from './build-case.js';
+
+/**
+ * "Braking efficiency n = 0.90 (0.89 to 0.91), from the four wheels and the front axle share."
+ * Undefined until every wheel (and the share) is answered.
+ * n = share/2 × (front left + front right) + (1 − share)/2 × (rear left + rear right).
+ * @example wheelsLine(answers)
+ */
+export function wheelsLine(a: Answers): string | undefined {
+  const r = readAnswers(a);
+  if (r.value('vehicle.brakes') !== 'wheels') return undefined;
+  const brakes = brakesOf(r);
+  const share = r.value('vehicle.share') as Quantity | undefined;
+  if (!brakes || share === undefined) return undefined;
+  let n;
+  try {
+    n = brakingEfficiency({ brakes, frontAxleShare: share });
+  } catch {
+    return undefined; // answers not all in yet
+  }
+  if (!n.ok) return undefined;
+  const { value, low, high } = n.value.n;
+  const d = (x: number) => formatNumber(x, 'drag');
+  const range = d(low) === d(high) ? '' : ` (${d(low)} to ${d(high)})`;
+  return `Braking efficiency n = ${d(value)}${range}, from the four wheels and the front axle share.`;
+}

@@ -1,0 +1,49 @@
+/**
+ * The drag factor a measured source gives, in one line for the investigator to check before
+ * going on: the mean and the smallest to largest of the tests, pulls or readings.
+ */
+import { dragFactor } from '../engine/index.js';
+import { formatNumber } from '../format/numbers.js';
+import type { Answers } from './types.js';
+import { readAnswers } from './answer-values.js';
+import { unitsOf } from './answers-read.js';
+import { dragOf } from './build-parts.js';
+
+const WHAT: Record<string, string> = {
+  'test-skids': 'test skid',
+  sled: 'sled pull',
+  decelerometer: 'reading',
+};
+
+/**
+ * "f = 0.71 (0.69 to 0.74): the mean of 3 sled pulls, the range from the smallest to the
+ * largest." Undefined until the source's figures are answered, or when they give no factor.
+ * @example measuredDragLine(answers, 'a0.seg0')
+ */
+export function measuredDragLine(a: Answers, prefix: string): string | undefined {
+  const r = readAnswers(a);
+  const source = r.value(`${prefix}.drag.source`);
+  if (typeof source !== 'string' || !(source in WHAT)) return undefined;
+  const drag = dragOf(r, prefix);
+  const list: unknown =
+    'tests' in drag
+      ? drag.tests
+      : 'pulls' in drag
+        ? drag.pulls
+        : 'readings' in drag
+          ? drag.readings
+          : undefined;
+  const count = Array.isArray(list) ? list.length : 0;
+  if (!count || ('weight' in drag && drag.weight === undefined)) return undefined;
+  let out;
+  try {
+    out = dragFactor(drag, unitsOf(a));
+  } catch {
+    return undefined; // figures not all in yet: nothing to show
+  }
+  if (!out.ok) return undefined;
+  const { value, low, high } = out.value.f;
+  const d = (x: number) => formatNumber(x, 'drag');
+  const one = count === 1;
+  return `f = ${d(value)}${one ? '' : ` (${d(low)} to ${d(high)})`}: ${one ? `from 1 ${WHAT[source]}` : `the mean of ${count} ${WHAT[source]}s, the range from the smallest to the largest`}.`;
+}
