@@ -44,6 +44,9 @@ export function measuredDragLine(a: Answers, prefix: string): string | undefined
   if (!out.ok) return undefined;
   const { value, low, high } = out.value.f;
   const d = (x: number) => formatNumber(x, 'drag');
-  const one = count === 1;
-  return `f = ${d(value)}${one ? '' : ` (${d(low)} to ${d(high)})`}: ${one ? `from 1 ${WHAT[source]}` : `the mean of ${count} ${WHAT[source]}s, the range from the smallest to the largest`}.`;
+  const what = WHAT[source]!;
+  if (count === 1) return `f = ${d(value)}: from 1 ${what}.`;
+  if (d(low) === d(high))
+    return `f = ${d(value)}: the mean of ${count} ${what}s, which agree to two decimals.`;
+  return `f = ${d(value)} (${d(low)} to ${d(high)}): the mean of ${count} ${what}s, the range from the smallest to the largest.`;
 }

@@ -137,8 +137,7 @@ export function slideQuestions(
           how: 'For skid marks broken by long gaps, count only the marked parts: the gaps were not braking and are left out (common practice).',
         },
         appliesWhen: (a) => applies(a) && surfaceMode(a, i) === 'several',
-        // "Several" is most often two surfaces (a lane, then a shoulder).
-        defaultText: () => '2',
+        example: '2',
       },
       'segments',
       1,

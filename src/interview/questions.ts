@@ -31,9 +31,11 @@ export function analysisSection(a: Answers, i: number): string {
       ? ''
       : look === 'yaw'
         ? ' - critical speed'
-        : look === 'gap' || mode === 'several' || mode === 'quick'
+        : look === 'gap'
           ? ' - slide in parts'
-          : ' - slide';
+          : mode === 'several' || mode === 'quick'
+            ? ' - slide, several surfaces'
+            : ' - slide';
   return `Analysis ${i + 1}${chain}`;
 }
 

@@ -45,11 +45,8 @@ export function DraftPanel({
       width={width}
     >
       <Text bold>Chain so far</Text>
-      {hidden ? (
-        <Text color={TONE.muted}>
-          ({hidden} earlier {hidden === 1 ? 'step' : 'steps'} in the review)
-        </Text>
-      ) : null}
+      {/* Short enough for one line of the narrowest panel, so the row budget holds. */}
+      {hidden ? <Text color={TONE.muted}>({hidden} earlier in the review)</Text> : null}
       {steps.map((s, i) =>
         rowsOf(s) === 1 ? (
           <Text key={i}>

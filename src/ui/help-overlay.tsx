@@ -30,7 +30,7 @@ export function helpLines(width: number, quickEntry: readonly string[]): ShownLi
     const places: KeyContext[] = b.when.filter((w) => w !== 'help');
     const everywhere = ALL.every((w) => places.includes(w));
     const where = everywhere ? 'everywhere' : [...new Set(places.map((w) => PLACES[w]))].join(', ');
-    const body = wrap(`${b.description} (${where})`, Math.max(20, width - keyW));
+    const body = wrap(`${b.description} · ${where}`, Math.max(20, width - keyW));
     body.forEach((l, i) =>
       out.push({ text: (i === 0 ? bindingKeys(b).padEnd(keyW) : ' '.repeat(keyW)) + l }),
     );

@@ -119,9 +119,11 @@ export const KEY_TABLE: readonly KeyBinding[] = [
   },
   {
     command: 'back',
-    keys: [ctrl('b')],
+    // Ctrl+P too: inside tmux, Ctrl+B is tmux's own prefix key and never reaches the program.
+    keys: [ctrl('b'), ctrl('p')],
     label: 'back',
-    description: 'Go to the previous question (later answers are kept)',
+    description:
+      'Go to the previous question (later answers are kept). Ctrl+P does the same, for when Ctrl+B is taken (inside tmux)',
     when: ['question', 'choice'],
     footer: ['question', 'choice'],
     rank: 2,

@@ -78,11 +78,40 @@ function analysisLines(
 }
 
 /**
+ * The figures first, one line per analysis, so the answer is on the first screen and the chain
+ * below is there to check it. Worded apart from the per-analysis lines ("Result: ...") on purpose.
+ */
+export function glanceLines(sol: CaseSolution, width: number): ShownLine[] {
+  if (sol.analyses.length === 0) return [];
+  const out: ShownLine[] = [{ text: 'At a glance', bold: true, tone: 'heading' }];
+  sol.analyses.forEach((a, i) => {
+    const kind = (a.ok ? a.solution.kind : a.kind) === 'skid' ? 'slide' : 'critical speed';
+    const what = a.ok
+      ? `${atLeast(a.solution, sol.units.speed)}; ${formatRange(a.solution.speed, 'speed', sol.units.speed)}`
+      : 'cannot be computed, the reason is below';
+    pushWrapped(out, `Analysis ${i + 1} (${kind}): ${what}`, width, '  ', {
+      tone: a.ok ? 'result' : 'error',
+    });
+  });
+  pushWrapped(
+    out,
+    'A result is a minimum estimate. Every step follows; the cautions close the review.',
+    width,
+    '  ',
+    {
+      tone: 'muted',
+    },
+  );
+  out.push({ text: '' });
+  return out;
+}
+
+/**
  * Lines of the review for a solved case, at most `width` columns each.
- * @example reviewLines(solveCase(c), 80)[0] // { text: 'Analysis 1 · slide · skid-1', ... }
+ * @example reviewLines(solveCase(c), 80)[0] // { text: 'At a glance', ... }
  */
 export function reviewLines(sol: CaseSolution, width: number, ctx?: ReviewContext): ShownLine[] {
-  const out: ShownLine[] = [];
+  const out: ShownLine[] = glanceLines(sol, width);
   sol.analyses.forEach((a, i) => {
     const head = a.ok ? a.solution : a;
     const kind = head.kind === 'skid' ? 'slide' : 'critical speed (yaw)';

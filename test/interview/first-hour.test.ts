@@ -40,6 +40,14 @@ describe('a measured drag factor is shown as soon as its figures are in', () => 
     );
   });
 
+  it('tests that agree to two decimals show no range of equal ends', () => {
+    const s = fillUntil(start(), IMPERIAL, 'a0.seg0.drag.source');
+    // 32²/(30 × 48) = 0.711 and 31²/(30 × 45) = 0.712 (worked by hand)
+    expect(type(s, 'k', '32/48, 31/45').notice).toBe(
+      'f = 0.71: the mean of 2 test skids, which agree to two decimals.',
+    );
+  });
+
   it('one decelerometer reading is the factor itself, with no range to speak of', () => {
     const s = fillUntil(start(), IMPERIAL, 'a0.seg0.drag.source');
     expect(type(s, 'd', '0.74').notice).toBe('f = 0.74: from 1 reading.');
@@ -76,7 +84,7 @@ describe('an empty answer says what is expected', () => {
   it('a length without default names an example', () => {
     const s = fillUntil(
       start(),
-      { ...IMPERIAL, 'a0.surfaces': 's', 'a0.count': '' },
+      { ...IMPERIAL, 'a0.surfaces': 's', 'a0.count': '', 'a0.segcount': '2' },
       'a0.seg0.length',
     );
     expect(act(s, { type: 'accept-default' }).error?.message).toBe(
@@ -84,15 +92,15 @@ describe('an empty answer says what is expected', () => {
     );
   });
 
-  it('"several segments" offers two, the usual lane then shoulder', () => {
+  it('the number of segments has no default, and says what to type', () => {
     const s = fillUntil(
       start(),
       { ...IMPERIAL, 'a0.surfaces': 's', 'a0.count': '' },
       'a0.segcount',
     );
-    const next = act(s, { type: 'accept-default' });
-    expect(next.error).toBeUndefined();
-    expect(next.answers['a0.segcount']?.value).toBe(2);
+    expect(act(s, { type: 'accept-default' }).error?.message).toBe(
+      'an answer is needed here, e.g. 2',
+    );
   });
 });
 
@@ -107,5 +115,22 @@ describe('wheel by wheel brakes come to a braking efficiency on screen', () => {
     expect(done.notice).toBe(
       'Braking efficiency n = 0.90 (0.89 to 0.91), from the four wheels and the front axle share.',
     );
+  });
+});
+
+describe('section names', () => {
+  it('a slide over two surfaces is not called a slide in parts (that is a gap skid)', () => {
+    const s = fillUntil(
+      start(),
+      { ...IMPERIAL, 'a0.surfaces': 's', 'a0.count': '' },
+      'a0.segcount',
+    );
+    expect(currentQuestion(s)?.section).toBe('Analysis 1 - slide, several surfaces');
+    const gap = fillUntil(
+      start(),
+      { units: 'i', 'a0.look': 'g', 'vehicle.brakes': 'a' },
+      'a0.label',
+    );
+    expect(currentQuestion(gap)?.section).toBe('Analysis 1 - slide in parts');
   });
 });

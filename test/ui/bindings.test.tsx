@@ -226,6 +226,10 @@ describe('key bindings', () => {
     },
   );
 
+  it('Ctrl+P goes back like Ctrl+B (Ctrl+B is the tmux prefix)', async () => {
+    await CHECKS.back(ctrl('p'));
+  });
+
   it('Ctrl+C saves and leaves like Ctrl+Q', async () => {
     await CHECKS['save-leave'](ctrl('c'));
   });

@@ -54,6 +54,15 @@ describe('reviewLines', () => {
     }
   });
 
+  it('opens with the figure itself, before the steps, on the first screen', () => {
+    // Same figures as above (sqrt(30 × 100 × 0.70) = 45.83, low 42.43): shown first, in one line.
+    expect(text[0]).toBe('At a glance');
+    expect(text[1]).toBe('  Analysis 1 (slide): at least 42 mph; 45.8 mph (42.4 to 49.0)');
+    expect(text.findIndex((l) => l.startsWith('Analysis 1 · slide'))).toBeLessThan(10);
+    // The per-analysis result lines are still the only ones starting "Result:".
+    expect(text.filter((l) => /^\s*Result: at least/.test(l))).toHaveLength(1);
+  });
+
   it('ends with every caution', () => {
     for (const c of CAUTIONS) expect(all.replace(/\s+/g, ' ')).toContain(c);
   });
