@@ -6,7 +6,8 @@ import type { Key } from 'ink';
  * Enters inside would be lost. This splits such a chunk into the keys a person pressed, each with
  * the Key flags Ink gives that key alone. Escape sequences never reach here mixed with text.
  */
-const NO_KEY: Key = {
+/** A Key with no flag set: what Ink reports for plain text. */
+export const NO_KEY: Key = {
   upArrow: false,
   downArrow: false,
   leftArrow: false,

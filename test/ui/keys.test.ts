@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Key } from 'ink';
+import { NO_KEY } from '../../src/ui/split-keys.js';
 import {
   KEY_TABLE,
   findBinding,
@@ -9,28 +10,7 @@ import {
   type KeyContext,
 } from '../../src/ui/keys.js';
 
-const none: Key = {
-  upArrow: false,
-  downArrow: false,
-  leftArrow: false,
-  rightArrow: false,
-  pageDown: false,
-  pageUp: false,
-  home: false,
-  end: false,
-  return: false,
-  escape: false,
-  ctrl: false,
-  shift: false,
-  tab: false,
-  backspace: false,
-  delete: false,
-  meta: false,
-  super: false,
-  hyper: false,
-  capsLock: false,
-  numLock: false,
-};
+const none = NO_KEY;
 const key = (k: Partial<Key>): Key => ({ ...none, ...k });
 
 // Contexts where the user is typing text: a plain letter there must type, never act.

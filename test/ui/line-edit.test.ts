@@ -1,29 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import type { Key } from 'ink';
+import { NO_KEY } from '../../src/ui/split-keys.js';
 import { EMPTY_LINE, editLine, lineOf } from '../../src/ui/line-edit.js';
 
-const none = {
-  upArrow: false,
-  downArrow: false,
-  leftArrow: false,
-  rightArrow: false,
-  pageDown: false,
-  pageUp: false,
-  home: false,
-  end: false,
-  return: false,
-  escape: false,
-  ctrl: false,
-  shift: false,
-  tab: false,
-  backspace: false,
-  delete: false,
-  meta: false,
-  super: false,
-  hyper: false,
-  capsLock: false,
-  numLock: false,
-} as Key;
+const none = NO_KEY;
 const k = (x: Partial<Key>) => ({ ...none, ...x });
 
 describe('editLine', () => {
