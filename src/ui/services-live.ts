@@ -146,7 +146,8 @@ export function liveServices(o: LiveOptions): Services {
       const r = await restoreBackup(dir, id);
       return r.ok ? { ok: true } : { ok: false, message: r.message };
     },
-    writeReport: o.writeReport ?? ((open, c) => writeCaseReport(open, c, now())),
+    writeReport:
+      o.writeReport ?? ((open, c) => writeCaseReport(open, c, now(), prefs.reactionTime)),
     saveMode(mode: InterviewMode) {
       savePref('mode', mode, o.prefs ?? {});
     },

@@ -5,9 +5,8 @@
 import path from 'node:path';
 import type { Case } from '../case/load.js';
 import { buildReport } from '../report/build.js';
-import { renderReport } from '../report/render.js';
 import { toolVersion } from '../report/version.js';
-import { writeFiles } from '../report/write-files.js';
+import { writeReport } from '../report/write-report.js';
 import { solveAsFile } from './interview-live.js';
 import type { OpenCase } from './services.js';
 
@@ -17,14 +16,24 @@ export function reportPath(open: OpenCase, c: Case, at: Date): string {
   return path.join(path.dirname(open.file), `${c.id}-report-${stamp}.md`);
 }
 
-export async function writeCaseReport(open: OpenCase, c: Case, at = new Date()) {
+/**
+ * Writes the Markdown report and its pictures (SVG, beside it), never over an existing file. The
+ * reaction time is the preference, as for `skidcase report`; a case's own wins inside the report.
+ */
+export async function writeCaseReport(
+  open: OpenCase,
+  c: Case,
+  at = new Date(),
+  reactionTime?: number,
+) {
   const doc = buildReport(c, solveAsFile(c), {
     toolVersion: toolVersion(),
     generatedAt: at.toISOString(),
     caseFile: open.file,
+    ...(reactionTime !== undefined ? { extras: { reactionTime } } : {}),
   });
   const file = reportPath(open, c, at);
-  const r = await writeFiles([{ path: file, content: renderReport(doc, 'md') }], false);
+  const r = await writeReport(doc, 'md', file, false);
   if (r.ok) return { ok: true as const, path: file };
   return {
     ok: false as const,

@@ -1,0 +1,34 @@
+import { describe, expect, it } from 'vitest';
+import { mkdtempSync, readdirSync, readFileSync, copyFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { loadCaseText } from '../../src/case/load.js';
+import { writeCaseReport } from '../../src/ui/write-report.js';
+import type { OpenCase } from '../../src/ui/services.js';
+
+const DEMO = path.join(__dirname, '../../sessions/demo-orchard-hill.json');
+
+describe('"write report" from the review', () => {
+  it('writes the Markdown with its speed picture beside it, using the reaction-time preference', async () => {
+    const dir = mkdtempSync(path.join(tmpdir(), 'skidcase-review-report-'));
+    const file = path.join(dir, 'demo-orchard-hill.json');
+    copyFileSync(DEMO, file);
+    const loaded = loadCaseText(readFileSync(file, 'utf8'));
+    if (!loaded.ok) throw new Error('demo case must load');
+    const open = { case: loaded.case, file, release: async () => {} } as unknown as OpenCase;
+    const r = await writeCaseReport(open, loaded.case, new Date('2026-12-01T10:00:00Z'), 2);
+    expect(r.ok).toBe(true);
+    const written = readdirSync(dir).sort();
+    expect(written.some((f) => f.endsWith('.md'))).toBe(true);
+    expect(written.some((f) => f.endsWith('-speed.svg'))).toBe(true);
+    const md = readFileSync(r.ok ? r.path : '', 'utf8');
+    // The demo has a posted limit (35 mph), so the report compares stopping at the limit, with the
+    // reaction time of the preference passed in (2 s), not the default 1.5 s:
+    // 35 mph × 5280/3600 ft/s per mph × 2 s = 102.7 ft during perception-reaction at the limit.
+    expect(md).toContain("Perception-reaction time 2 s (the investigator's preference");
+    expect(md).toMatch(/At the limit: distance during perception-reaction \| 102\.7 ft/);
+    // Never over an existing file: the same moment again is refused.
+    const again = await writeCaseReport(open, loaded.case, new Date('2026-12-01T10:00:00Z'), 2);
+    expect(again.ok).toBe(false);
+  });
+});
