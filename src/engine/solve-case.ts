@@ -2,7 +2,8 @@ import { spread } from '../case/quantity.js';
 import type { Case } from '../case/load.js';
 import { unknownFields } from '../case/unknown-fields.js';
 import { unitsOf } from './constants.js';
-import { isAboveLimit, solveSkid } from './solve-skid.js';
+import { solveSkid } from './solve-skid.js';
+import { isAboveLimit } from './solution.js';
 import { solveYaw } from './solve-yaw.js';
 import type { AnalysisOutcome, CaseSolution } from './types.js';
 

@@ -9,19 +9,11 @@ import { skidModel } from './skid-model.js';
 import { slideSpeed, type SlideEnd, type SlideSegment } from './slide.js';
 import { input, makeStep } from './step.js';
 import type { AnalysisOutcome, Range, Step } from './types.js';
+import { solvedAnalysis } from './solution.js';
 
 /** Marks and segment lengths further apart than this (relative) draw a warning. */
 export const MARKS_MISMATCH = 0.05;
 
-/** "at least" figure: the low end rounded down, safe against 40.999999 from rounding error. */
-export const minimumOf = (low: number) => Math.floor(low + 1e-9);
-
-/**
- * Whether a low end is above the posted limit, with the tolerance minimumOf uses: a low end that
- * is the limit exactly but computes as 24.000000000000004 is not above it (and its minimum is 24).
- * @example isAboveLimit(24.000000000000004, 24) // false
- */
-export const isAboveLimit = (low: number, limit: number) => low > limit + 1e-9;
 
 const sumRanges = (rs: Range[]): Range =>
   rs.reduce((a, r) => ({ value: a.value + r.value, low: a.low + r.low, high: a.high + r.high }), {
@@ -139,20 +131,12 @@ export function solveSkid(c: CaseV1, i: number, a: SkidV1): AnalysisOutcome {
 
   const model = skidModel(a, lengths, segments, n, end, system);
   const speed = slide.value.speed;
-  return {
-    ok: true,
-    solution: {
-      id: a.id,
-      kind: 'skid',
-      ...(a.label !== undefined ? { label: a.label } : {}),
-      speed,
-      minimum: minimumOf(speed.low),
-      steps,
-      assumptions,
-      warnings,
-      boundaries: slide.value.boundaries,
-      distance: sumRanges(lengths),
-      model,
-    },
-  };
+  return solvedAnalysis(a, 'skid', speed, {
+    steps,
+    assumptions,
+    warnings,
+    boundaries: slide.value.boundaries,
+    distance: sumRanges(lengths),
+    model,
+  });
 }

@@ -2,7 +2,7 @@ import { spread } from '../case/quantity.js';
 import type { CaseV1, YawV1 } from '../case/v1/schema.js';
 import { unitsOf } from './constants.js';
 import { dragFactor } from './drag.js';
-import { minimumOf } from './solve-skid.js';
+import { solvedAnalysis } from './solution.js';
 import { exact } from './step.js';
 import { radiusFromOffsets } from './radius-offsets.js';
 import {
@@ -97,25 +97,17 @@ export function solveYaw(c: CaseV1, i: number, a: YawV1): AnalysisOutcome {
   if (sens) warnings.push(sens.text);
 
   const speed = s.value.speed;
-  return {
-    ok: true,
-    solution: {
-      id: a.id,
-      kind: 'yaw',
-      ...(a.label !== undefined ? { label: a.label } : {}),
-      speed,
-      minimum: minimumOf(speed.low),
-      steps,
-      assumptions,
-      warnings,
-      radius: R,
-      ...(sens ? { sensitivity: sens } : {}),
-      model:
-        C && M
-          ? yawModel(a, C, M, f, e, T, halfTrack, system)
-          : offsetsYawModel(a, measured.value.radius, f, e, T, halfTrack, system),
-    },
-  };
+  return solvedAnalysis(a, 'yaw', speed, {
+    steps,
+    assumptions,
+    warnings,
+    radius: R,
+    ...(sens ? { sensitivity: sens } : {}),
+    model:
+      C && M
+        ? yawModel(a, C, M, f, e, T, halfTrack, system)
+        : offsetsYawModel(a, measured.value.radius, f, e, T, halfTrack, system),
+  });
 }
 
 /**

@@ -6,7 +6,7 @@ import type {
   Step,
   Units,
 } from '../engine/types.js';
-import { isAboveLimit } from '../engine/solve-skid.js';
+import { isAboveLimit } from '../engine/solution.js';
 import { CAUTIONS } from './cautions.js';
 import { extrasTextLines } from './extras-text.js';
 import { solveExtras } from './solve-extras.js';
