@@ -40,7 +40,7 @@ export {
 } from './yaw.js';
 export { reactionDistance, brakingDistance, slideDuration } from './time-distance.js';
 export { solveCase, solveAnalysis } from './solve-case.js';
-export { MARKS_MISMATCH } from './solve-skid.js';
+export { MARKS_MISMATCH, APPEARANCE_NOTES } from './solve-skid.js';
 export { minimumOf, isAboveLimit, solvedAnalysis } from './solution.js';
 export { exact } from './step.js';
 export {

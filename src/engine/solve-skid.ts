@@ -14,7 +14,6 @@ import { solvedAnalysis } from './solution.js';
 /** Marks and segment lengths further apart than this (relative) draw a warning. */
 export const MARKS_MISMATCH = 0.05;
 
-
 const sumRanges = (rs: Range[]): Range =>
   rs.reduce((a, r) => ({ value: a.value + r.value, low: a.low + r.low, high: a.high + r.high }), {
     value: 0,
@@ -23,9 +22,9 @@ const sumRanges = (rs: Range[]): Range =>
   });
 
 /** The caveat each look of the marks carries (DOMAIN.md, "Marks"; all common practice). */
-const APPEARANCE_NOTES: Record<'locked' | 'abs' | 'skip' | 'gap', string | undefined> = {
+export const APPEARANCE_NOTES: Record<'locked' | 'abs' | 'skip' | 'gap', string | undefined> = {
   locked: undefined,
-  abs: 'The marks are faint, evenly dashed anti-lock braking marks: they show hard braking, but the slide-to-stop figure from them is an estimate (common practice); say so in the report.',
+  abs: 'The marks were faint, evenly dashed marks (anti-lock brakes): they show hard braking, but the slide figure is an estimate from anti-lock marks and must be reported as such (common practice).',
   skip: 'Skip skid: the tire bounced, so the short regular gaps are part of the slide and the whole length, gaps included, counts as sliding distance (common practice).',
   gap: 'Gap skid: the brakes were released and reapplied, so the gaps are not braking; only the marked parts count, each as its own segment (common practice).',
 };

@@ -3,6 +3,7 @@
  * whose questions are all answered and valid, with the interview's progress so it resumes.
  */
 import type { Case } from '../case/load.js';
+import { APPEARANCE_NOTES } from '../engine/index.js';
 import type { AnalysisV1, BrakesV1, VehicleV1 } from '../case/v1/schema.js';
 import type { CaseMeta, InterviewState, SavedInterview } from './types.js';
 import { analysisCount, choiceOf, markLook, unitsOf } from './answers-read.js';
@@ -180,8 +181,7 @@ export function lookNotes(state: InterviewState): Record<string, string[]> {
 }
 
 /** The caution for a slide read from faint, evenly dashed marks. */
-export const ABS_NOTE =
-  'The marks were described as faint, evenly dashed marks (anti-lock brakes): the slide figure is an estimate from anti-lock marks and must be reported as such (common practice).';
+export const ABS_NOTE = APPEARANCE_NOTES.abs!;
 
 /**
  * The case as far as it is complete. Passes `loadCase`: an analysis enters only when every

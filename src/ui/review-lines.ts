@@ -62,7 +62,9 @@ function analysisLines(
   }
   if (s.assumptions.length) {
     out.push({ text: '  Assumptions', bold: true });
-    for (const a of s.assumptions) pushWrapped(out, `- ${a}`, width, '   ');
+    // A caution already shown beside the result (the anti-lock note) is not repeated here.
+    const shown = ctx?.notes?.[s.id] ?? [];
+    for (const a of s.assumptions) if (!shown.includes(a)) pushWrapped(out, `- ${a}`, width, '   ');
   }
   if (s.warnings.length) {
     out.push({ text: '  Warnings', bold: true, tone: 'warning' });

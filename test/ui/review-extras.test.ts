@@ -164,3 +164,20 @@ describe('the help documents the offsets syntax', () => {
     expect(readStations('5:0.21, 10:0.36', 'imperial').ok).toBe(true);
   });
 });
+
+describe('the anti-lock caution in the review', () => {
+  it('appears once, beside the result, when the case file records anti-lock marks', () => {
+    // The same invented slide, its marks recorded as anti-lock marks: the engine lists the caution
+    // among the assumptions and the review shows it beside the result; it must not say it twice.
+    const base = slide();
+    const abs = load({
+      ...base,
+      analyses: base.analyses.map((a) => ({ ...a, appearance: 'abs' })),
+    });
+    const text = flat(review(abs, 80, { 'skid-1': [ABS_NOTE] }));
+    const times = text.split('estimate from anti-lock marks').length - 1;
+    expect(times).toBe(1);
+    expect(text.indexOf('anti-lock')).toBeGreaterThan(text.indexOf('Result: at least'));
+    expect(text.indexOf('anti-lock')).toBeLessThan(text.indexOf('Assumptions'));
+  });
+});
