@@ -134,6 +134,21 @@ function yawRadius(
   return ok({ ...r.value, C, M });
 }
 
+/** The inputs both yaw models share: drag factor, bank (when given) and track width (half-track). */
+function frictionInputs(
+  a: YawV1,
+  f: Range,
+  e: Range,
+  T: Range,
+  halfTrack: boolean,
+  L: string,
+): ModelInput[] {
+  const inputs = [modelInput('f', 'drag factor', '', f)];
+  if (a.superelevation !== undefined) inputs.push(modelInput('e', 'superelevation', '%', e));
+  if (halfTrack) inputs.push(modelInput('T', 'track width', L, T));
+  return inputs;
+}
+
 /** The model of a yaw analysis measured by offsets: the fitted radius R is one input. */
 function offsetsYawModel(
   a: YawV1,
@@ -147,10 +162,8 @@ function offsetsYawModel(
   const L = unitsOf(system).length;
   const inputs: ModelInput[] = [
     modelInput('R', 'radius from offsets', L, R),
-    modelInput('f', 'drag factor', '', f),
+    ...frictionInputs(a, f, e, T, halfTrack, L),
   ];
-  if (a.superelevation !== undefined) inputs.push(modelInput('e', 'superelevation', '%', e));
-  if (halfTrack) inputs.push(modelInput('T', 'track width', L, T));
   const base = { R: R.value, f: f.value, e: e.value, T: T.value };
   return {
     inputs,
@@ -175,10 +188,8 @@ function yawModel(
   const inputs: ModelInput[] = [
     modelInput('C', 'chord', L, C),
     modelInput('M', 'middle ordinate', L, M),
-    modelInput('f', 'drag factor', '', f),
+    ...frictionInputs(a, f, e, T, halfTrack, L),
   ];
-  if (a.superelevation !== undefined) inputs.push(modelInput('e', 'superelevation', '%', e));
-  if (halfTrack) inputs.push(modelInput('T', 'track width', L, T));
   // Plain numbers, no closure per call: evaluate runs in sampling loops.
   const c0 = C.value;
   const m0 = M.value;
