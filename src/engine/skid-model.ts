@@ -1,16 +1,8 @@
 import type { SkidV1 } from '../case/v1/schema.js';
+import { modelInput } from './model-input.js';
 import { tradeConstants, unitsOf } from './constants.js';
 import type { SlideEnd, SlideSegment } from './slide.js';
 import type { AnalysisModel, ModelInput, Range, UnitSystem } from './types.js';
-
-const modelInput = (key: string, label: string, unit: string, r: Range): ModelInput => ({
-  key,
-  label,
-  unit,
-  value: r.value,
-  low: r.low,
-  high: r.high,
-});
 
 /**
  * The skid analysis as a function of its primary inputs, for sensitivity and sampling:

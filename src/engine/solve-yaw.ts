@@ -1,4 +1,5 @@
 import { spread } from '../case/quantity.js';
+import { modelInput } from './model-input.js';
 import type { CaseV1, YawV1 } from '../case/v1/schema.js';
 import { unitsOf } from './constants.js';
 import { dragFactor } from './drag.js';
@@ -23,15 +24,6 @@ import {
   pathRadius,
   radiusFromChord,
 } from './yaw.js';
-
-const modelInput = (key: string, label: string, unit: string, r: Range): ModelInput => ({
-  key,
-  label,
-  unit,
-  value: r.value,
-  low: r.low,
-  high: r.high,
-});
 
 /** Solves one yaw analysis of a case (index i): radius, path radius, critical speed, sensitivity. */
 export function solveYaw(c: CaseV1, i: number, a: YawV1): AnalysisOutcome {

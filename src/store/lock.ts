@@ -12,6 +12,7 @@ import {
   readLock,
   type LockInfo,
 } from './lock-info.js';
+import { errCode } from './errno.js';
 
 /**
  * Case locks. A lock is a small JSON file `<id>.json.lock` holding pid, host and time, so that a
@@ -40,7 +41,6 @@ let timer: NodeJS.Timeout | undefined;
 
 const tmpName = (lock: string, tag: string) =>
   `${lock}.${tag}.${process.pid}.${randomBytes(4).toString('hex')}`;
-const errCode = (e: unknown) => (e as NodeJS.ErrnoException).code;
 
 /** Creates the lock file complete, or reports EEXIST; returns the text written. */
 async function createLock(lockFile: string): Promise<string> {

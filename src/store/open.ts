@@ -8,6 +8,7 @@ import type { Stats } from 'node:fs';
 import { getKnown, sameSig, sigOf, type FileSig } from './known-files.js';
 import { acquireLock, releaseLock } from './lock.js';
 import { sweepLeftovers } from './leftovers.js';
+import { errCode } from './errno.js';
 
 export type OpenFailureKind =
   'missing' | 'unreadable' | 'json' | 'invalid' | 'newer' | 'format' | 'locked-error';
@@ -47,7 +48,6 @@ export interface OpenOptions {
   load?: (text: string) => LoadResult;
 }
 
-const errCode = (e: unknown) => (e as NodeJS.ErrnoException).code;
 /** Lock errors that only mean "you cannot write here": the case opens read-only, with the reason. */
 const CANNOT_WRITE = new Set(['EACCES', 'EPERM', 'EROFS']);
 

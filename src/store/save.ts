@@ -10,6 +10,7 @@ import { backupPath, brokenPath, versionPath } from './side-files.js';
 import { getKnown, serial, sigOf, sameSig } from './known-files.js';
 import { acquireLock, stillHeldSync } from './lock.js';
 import { linkReplacingSync, linkUnderFreeName, moveToFreeName } from './keep-aside.js';
+import { errCode } from './errno.js';
 
 export type SaveResult =
   | {
@@ -31,7 +32,6 @@ export type SaveResult =
       issues?: FieldIssue[];
     };
 
-const errCode = (e: unknown) => (e as NodeJS.ErrnoException).code;
 const madeDirs = new Set<string>();
 
 /**
