@@ -28,6 +28,12 @@ export interface ReviewContext {
 
 const WORD = { yes: 'yes', no: 'no', depends: 'depends on the inputs' } as const;
 
+/** A distance from the point, named by its side: "12.0 ft short of it" or "3.1 ft beyond it". */
+function side(margin: number, u: Units): string {
+  const d = withUnit(Math.abs(margin), 'length', u.length);
+  return margin >= 0 ? `${d} short of it` : `${d} beyond it`;
+}
+
 function verdictLines(out: ShownLine[], v: Verdict, u: Units, width: number, what: string) {
   const at = withUnit(v.at, 'length', u.length);
   pushWrapped(
@@ -38,13 +44,20 @@ function verdictLines(out: ShownLine[], v: Verdict, u: Units, width: number, wha
     { bold: true, tone: v.stops === 'no' ? 'warning' : 'result' },
   );
   const margin = formatRange(v.margin, 'length', u.length);
-  const there = formatRange(v.speedThere, 'speed', u.speed);
-  pushWrapped(
-    out,
-    `stops short of it by ${margin} (negative: beyond it); speed there ${there}`,
-    width,
-    '      ',
+  const beyond = formatRange(
+    { value: -v.margin.value, low: -v.margin.high, high: -v.margin.low },
+    'length',
+    u.length,
   );
+  const there = formatRange(v.speedThere, 'speed', u.speed);
+  // Said in the direction it goes, so no distance is read as a negative "short of it".
+  const detail =
+    v.stops === 'yes'
+      ? `it comes to rest ${margin} short of it`
+      : v.stops === 'no'
+        ? `it reaches it still moving at ${there} and comes to rest ${beyond} beyond it`
+        : `over the input ranges it comes to rest anywhere from ${side(v.margin.low, u)} to ${side(v.margin.high, u)} (at the values: ${side(v.margin.value, u)}); speed there ${there}`;
+  pushWrapped(out, detail, width, '      ');
 }
 
 function limitLines(out: ShownLine[], t: LimitComparison, u: Units, width: number) {

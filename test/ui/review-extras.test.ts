@@ -181,3 +181,40 @@ describe('the anti-lock caution in the review', () => {
     expect(text.indexOf('anti-lock')).toBeLessThan(text.indexOf('Assumptions'));
   });
 });
+
+describe('the limit comparison says which way the distance goes', () => {
+  // The verdict and the sentence under it, up to the first numbered step that follows.
+  const lineAbout = (c: Case) =>
+    flat(review(c, 100)).match(
+      /Would have stopped before the end of the marks.*?(?= \d+\. [A-Z]| Would have)/,
+    )?.[0] ?? '';
+
+  it('a vehicle at the limit that would not stop in time: still moving, and a positive distance beyond', () => {
+    // Invented: 30 ft of marks at f 0.70 give sqrt(30 × 30 × 0.70) = 25.1 mph, well under the 40 mph
+    // limit, so a vehicle at the limit from the same point of perception passes the end of the marks.
+    const base = slide();
+    const short = load({ ...base, analyses: base.analyses.map((a) => ({ ...a, marks: [30] })) });
+    const text = lineAbout(short);
+    expect(text).toMatch(/: no it reaches it still moving at [\d.]+ mph/);
+    expect(text).toMatch(/comes to rest [\d.]+ ft \([\d.]+ to [\d.]+\) beyond it/);
+    expect(text).not.toMatch(/-\d/);
+  });
+  it('one that would stop in time: short of it, by a positive distance', () => {
+    // 100 ft at f 0.70: sqrt(30 × 100 × 0.70) = 45.8 mph, above the limit; at 40 mph it stops sooner.
+    const text = lineAbout(slide());
+    expect(text).toMatch(/: yes it comes to rest [\d.]+ ft/);
+    expect(text).not.toMatch(/-\d/);
+  });
+  it('at a conflict point the ranges straddle: each end named by its side, no negative distance', () => {
+    // The invented conflict point 50 ft into the 100 ft slide: at the limit the vehicle comes to
+    // rest near it, before or after depending on the drag factor's range.
+    const text =
+      flat(review(slide(), 100)).match(
+        /Would have stopped before the conflict point.*?(?= \d+\. [A-Z])/,
+      )?.[0] ?? '';
+    expect(text).toMatch(
+      /depends on the inputs over the input ranges it comes to rest anywhere from [\d.]+ ft beyond it to [\d.]+ ft short of it/,
+    );
+    expect(text).not.toMatch(/-\d/);
+  });
+});
