@@ -119,11 +119,12 @@ export const KEY_TABLE: readonly KeyBinding[] = [
   },
   {
     command: 'back',
-    // Ctrl+P too: inside tmux, Ctrl+B is tmux's own prefix key and never reaches the program.
-    keys: [ctrl('b'), ctrl('p')],
+    // Ctrl+P first (the footer shows it): inside tmux, Ctrl+B is tmux's own prefix key and never
+    // reaches the program; Ctrl+B still works everywhere else.
+    keys: [ctrl('p'), ctrl('b')],
     label: 'back',
     description:
-      'Go to the previous question (later answers are kept). Ctrl+P does the same, for when Ctrl+B is taken (inside tmux)',
+      'Go to the previous question (later answers are kept). Ctrl+B does the same outside tmux, which keeps Ctrl+B for itself',
     when: ['question', 'choice'],
     footer: ['question', 'choice'],
     rank: 2,

@@ -35,7 +35,7 @@ describe('footer line', () => {
 
   it('keeps the keys a new investigator needs on a question at 80 columns', () => {
     const hints = footerLine('question', 79);
-    for (const h of ['Enter accept', 'Ctrl+B back', 'Ctrl+E why/how', 'Ctrl+Q save & leave'])
+    for (const h of ['Enter accept', 'Ctrl+P back', 'Ctrl+E why/how', 'Ctrl+Q save & leave'])
       expect(hints).toContain(h);
   });
 
