@@ -18,6 +18,9 @@ export interface TradeConstants {
   yaw: 15 | 127;
 }
 
+const IMPERIAL: Readonly<TradeConstants> = Object.freeze({ slide: 30, yaw: 15 });
+const METRIC: Readonly<TradeConstants> = Object.freeze({ slide: 254, yaw: 127 });
+
 /**
  * The trade constants. From v² = 2 a d with a = f g and a speed unit conversion k (speed unit to
  * length unit per second), S² = (2 g / k²) d f:
@@ -28,8 +31,9 @@ export interface TradeConstants {
  * The rounding changes a speed by about 0.15%, far below the drag factor's uncertainty.
  * @example tradeConstants('imperial') // { slide: 30, yaw: 15 }
  */
-export function tradeConstants(system: UnitSystem): TradeConstants {
-  return system === 'imperial' ? { slide: 30, yaw: 15 } : { slide: 254, yaw: 127 };
+export function tradeConstants(system: UnitSystem): Readonly<TradeConstants> {
+  // Two shared frozen objects: the models call this in sampling loops, so nothing is allocated.
+  return system === 'imperial' ? IMPERIAL : METRIC;
 }
 
 /**

@@ -2,26 +2,10 @@ import { spread } from '../case/quantity.js';
 import type { DragV1 } from '../case/v1/schema.js';
 import { formatNumber } from '../format/numbers.js';
 import { tradeConstants, unitsOf } from './constants.js';
+import { testSkidDrag } from './formulas.js';
 import { reduceRepeated } from './reduce.js';
 import { fail, ok, type Outcome, type Range, type Step, type UnitSystem } from './types.js';
 import { input, makeStep } from './step.js';
-
-/**
- * Level drag factor from one test skid run with every wheel locked on a grade G_t (signed percent,
- * + uphill in the direction of the test): S² = C d (f + G_t/100) (physics: the work of friction and
- * of gravity along the slope), so f = S² / (C d) − G_t/100, C = 30 (mph, ft) or 254 (km/h, m).
- * Rising in S, falling in d and in G_t. A level test (G_t = 0) gives the ratio itself.
- * @example testSkidDrag(30, 40, 'imperial') // 0.75
- * @example testSkidDrag(30, 40, 'imperial', 5) // 0.70
- */
-export function testSkidDrag(
-  speed: number,
-  distance: number,
-  system: UnitSystem,
-  testGradePercent = 0,
-): number {
-  return (speed * speed) / (tradeConstants(system).slide * distance) - testGradePercent / 100;
-}
 
 const f2 = (n: number) => formatNumber(n, 'drag');
 type TestSkids = Extract<DragV1, { source: 'test-skids' }>;

@@ -1,6 +1,7 @@
 import { spread } from '../case/quantity.js';
 import type { VehicleV1 } from '../case/v1/schema.js';
 import { formatNumber } from '../format/numbers.js';
+import { wheelsBraking } from './formulas.js';
 import { fail, ok, type Outcome, type Range, type Step } from './types.js';
 import { exact, input, makeStep } from './step.js';
 
@@ -18,8 +19,7 @@ export interface Efficiency {
  * @example wheelsEfficiency(exact(0.6), exact(1), exact(1), exact(0), exact(0)).value // 0.6
  */
 export function wheelsEfficiency(s: Range, fl: Range, fr: Range, rl: Range, rr: Range): Range {
-  const n = (share: number, a: number, b: number, c: number, d: number) =>
-    (share / 2) * (a + b) + ((1 - share) / 2) * (c + d);
+  const n = wheelsBraking;
   const atLow = [s.low, s.high].map((x) => n(x, fl.low, fr.low, rl.low, rr.low));
   const atHigh = [s.low, s.high].map((x) => n(x, fl.high, fr.high, rl.high, rr.high));
   return {

@@ -13,7 +13,7 @@ export {
 export { slideDistanceFromMarks, type DistanceRule } from './distance.js';
 export { brakingEfficiency, wheelsEfficiency, type Efficiency } from './efficiency.js';
 export { dragFactor, type Drag } from './drag.js';
-export { testSkidDrag, testSkidsDrag } from './drag-tests.js';
+export { testSkidsDrag } from './drag-tests.js';
 export { reduceRepeated } from './reduce.js';
 export {
   DRAG_TABLE,
@@ -25,9 +25,19 @@ export {
   type RowKnown,
 } from './drag-table.js';
 export {
-  slideSpeed,
-  slideStartSpeed,
   effectiveDrag,
+  slideSquaredSpeed,
+  slideDistanceFor,
+  slideStartSpeed,
+  arcRadius,
+  centreRadius,
+  criticalSpeedOf,
+  wheelsBraking,
+  testSkidDrag,
+} from './formulas.js';
+export {
+  slideSpeed,
+  effectiveDragRange,
   type Slide,
   type SlideSegment,
   type SlideEnd,
@@ -36,7 +46,6 @@ export {
   radiusFromChord,
   pathRadius,
   criticalSpeed,
-  criticalSpeedOf,
   ordinateSensitivity,
   NEAR_STRAIGHT_RATIO,
 } from './yaw.js';

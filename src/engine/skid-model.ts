@@ -1,6 +1,7 @@
 import type { SkidV1 } from '../case/v1/schema.js';
 import { modelInput } from './model-input.js';
 import { tradeConstants, unitsOf } from './constants.js';
+import { effectiveDrag, slideSquaredSpeed } from './formulas.js';
 import type { SlideEnd, SlideSegment } from './slide.js';
 import type { AnalysisModel, ModelInput, Range, UnitSystem } from './types.js';
 
@@ -60,9 +61,9 @@ export function skidModel(
       const se = atSpeed ? (x.Send ?? send0) : 0;
       let s2 = se * se;
       for (let j = 0; j < count; j++) {
-        const eff = (x[fKeys[j]!] ?? f0[j]!) * nn + (x[gKeys[j]!] ?? g0[j]!) / 100;
+        const eff = effectiveDrag(x[fKeys[j]!] ?? f0[j]!, nn, x[gKeys[j]!] ?? g0[j]!);
         if (!(eff > 0)) return undefined;
-        s2 += C * (x[dKeys[j]!] ?? d0[j]!) * eff;
+        s2 += slideSquaredSpeed(x[dKeys[j]!] ?? d0[j]!, eff, C);
       }
       const S = Math.sqrt(s2);
       return Number.isFinite(S) ? S : undefined;

@@ -1,5 +1,6 @@
 import { formatNumber } from '../format/numbers.js';
 import { tradeConstants, unitsOf } from './constants.js';
+import { effectiveDrag, slideSquaredSpeed } from './formulas.js';
 import {
   fail,
   ok,
@@ -31,47 +32,23 @@ export interface Slide {
 }
 
 /**
- * Effective drag of a segment, f n + G/100 (trade approximation of f n cos θ + sin θ). Braking
- * efficiency multiplies the friction only: gravity does not depend on the brakes. Rising in f, n, G.
- * @example effectiveDrag({value:0.7,low:0.7,high:0.7},{value:1,low:1,high:1},{value:-2,low:-2,high:-2}).value // 0.68
+ * Effective drag of a segment over the ranges, f n + G/100 (see effectiveDrag): each end from the
+ * matching ends of f, n and G, since it rises in each.
+ * @example effectiveDragRange(exact(0.7), exact(1), exact(-2)).value // 0.68
  */
-export function effectiveDrag(f: Range, n: Range, gradePercent: Range): Range {
-  const e = (a: number, b: number, g: number) => a * b + g / 100;
+export function effectiveDragRange(f: Range, n: Range, gradePercent: Range): Range {
   return {
-    value: e(f.value, n.value, gradePercent.value),
-    low: e(f.low, n.low, gradePercent.low),
-    high: e(f.high, n.high, gradePercent.high),
+    value: effectiveDrag(f.value, n.value, gradePercent.value),
+    low: effectiveDrag(f.low, n.low, gradePercent.low),
+    high: effectiveDrag(f.high, n.high, gradePercent.high),
   };
-}
-
-/**
- * Start speed of a slide for single numbers: S² = S_end² + C Σ d_i (f_i n + G_i/100), C = 30
- * (mph, ft) or 254 (km/h, m). Undefined when a segment's f n + G/100 is not positive (it could not
- * slow the vehicle) or the result is not finite.
- * @example slideStartSpeed([{ d: 60, f: 0.75, G: 0 }], 1, 0, 'imperial') // 36.74…
- */
-export function slideStartSpeed(
-  segments: readonly { d: number; f: number; G: number }[],
-  n: number,
-  endSpeed: number,
-  system: UnitSystem,
-): number | undefined {
-  const C = tradeConstants(system).slide;
-  let s2 = endSpeed * endSpeed;
-  for (const s of segments) {
-    const eff = s.f * n + s.G / 100;
-    if (!(eff > 0)) return undefined;
-    s2 += C * s.d * eff;
-  }
-  const S = Math.sqrt(s2);
-  return Number.isFinite(S) ? S : undefined;
 }
 
 const segName = (i: number, s: SlideSegment) => `segment ${i + 1}${s.label ? ` (${s.label})` : ''}`;
 
 /** Why a segment cannot slow the vehicle, checked at its low corner (f low, n low, G low). */
 function cannotSlow(i: number, s: SlideSegment, n: Range): string | undefined {
-  if (effectiveDrag(s.f, n, s.gradePercent).low > 0) return undefined;
+  if (effectiveDragRange(s.f, n, s.gradePercent).low > 0) return undefined;
   const G = s.gradePercent.low;
   const fn = `the drag factor ${formatNumber(s.f.low, 'drag')} × n ${formatNumber(n.low, 'efficiency')}`;
   if (G < 0)
@@ -100,7 +77,7 @@ export function slideSpeed(
     if (why) return fail(why, `segments[${i}]`);
   }
   const steps: Step[] = [];
-  const effs = segments.map((s) => effectiveDrag(s.f, n, s.gradePercent));
+  const effs = segments.map((s) => effectiveDragRange(s.f, n, s.gradePercent));
   segments.forEach((s, i) => {
     const G = s.gradePercent.value / 100;
     steps.push(
@@ -144,9 +121,9 @@ export function slideSpeed(
     const s = segments[i]!;
     const e = effs[i]!;
     sq = {
-      value: sq.value + C * s.d.value * e.value,
-      low: sq.low + C * s.d.low * e.low,
-      high: sq.high + C * s.d.high * e.high,
+      value: sq.value + slideSquaredSpeed(s.d.value, e.value, C),
+      low: sq.low + slideSquaredSpeed(s.d.low, e.low, C),
+      high: sq.high + slideSquaredSpeed(s.d.high, e.high, C),
     };
     const speed: Range = {
       value: Math.sqrt(sq.value),

@@ -17,13 +17,8 @@ import {
   type Step,
   type Units,
 } from './types.js';
-import {
-  criticalSpeed,
-  criticalSpeedOf,
-  ordinateSensitivity,
-  pathRadius,
-  radiusFromChord,
-} from './yaw.js';
+import { arcRadius, centreRadius, criticalSpeedOf } from './formulas.js';
+import { criticalSpeed, ordinateSensitivity, pathRadius, radiusFromChord } from './yaw.js';
 
 /** Solves one yaw analysis of a case (index i): radius, path radius, critical speed, sensitivity. */
 export function solveYaw(c: CaseV1, i: number, a: YawV1): AnalysisOutcome {
@@ -84,7 +79,7 @@ export function solveYaw(c: CaseV1, i: number, a: YawV1): AnalysisOutcome {
   // With offsets there is no single ordinate to misread: the fit's scatter stands in for it.
   const sens =
     C && M
-      ? ordinateSensitivity(C.value, M.value, f.value, e.value / 100, system, T.value / 2)
+      ? ordinateSensitivity(C.value, M.value, f.value, e.value / 100, system, T.value)
       : undefined;
   if (sens) warnings.push(sens.text);
 
@@ -160,7 +155,7 @@ function offsetsYawModel(
   return {
     inputs,
     evaluate(x) {
-      const r = (x.R ?? base.R) - (halfTrack ? (x.T ?? base.T) / 2 : 0);
+      const r = halfTrack ? centreRadius(x.R ?? base.R, x.T ?? base.T) : (x.R ?? base.R);
       return criticalSpeedOf(r, x.f ?? base.f, (x.e ?? base.e) / 100, system);
     },
   };
@@ -194,7 +189,7 @@ function yawModel(
       const c = x.C ?? c0;
       const m = x.M ?? m0;
       if (!(m > 0) || !(m < c / 2)) return undefined;
-      const R = (c * c) / (8 * m) + m / 2 - (halfTrack ? (x.T ?? t0) / 2 : 0);
+      const R = halfTrack ? centreRadius(arcRadius(c, m), x.T ?? t0) : arcRadius(c, m);
       return criticalSpeedOf(R, x.f ?? f0, (x.e ?? e0) / 100, system);
     },
   };

@@ -1,5 +1,6 @@
 import { formatNumber } from '../format/numbers.js';
 import { gravityOf, speedUnitToLengthPerSecond, tradeConstants, unitsOf } from './constants.js';
+import { effectiveDrag, slideDistanceFor } from './formulas.js';
 import { fail, ok, type Outcome, type Step, type UnitSystem } from './types.js';
 import { exact, makeStep } from './step.js';
 
@@ -34,10 +35,6 @@ export function reactionDistance(
   };
 }
 
-function effective(f: number, n: number, gradePercent: number): number {
-  return f * n + gradePercent / 100;
-}
-
 function noSlowing(f: number, n: number, gradePercent: number): string {
   return gradePercent < 0
     ? `a ${formatNumber(-gradePercent, 'percent')}% downhill grade is steeper than the drag factor ${formatNumber(f, 'drag')} × n ${formatNumber(n, 'efficiency')} can hold: the vehicle would not stop`
@@ -56,11 +53,11 @@ export function brakingDistance(
   gradePercent: number,
   system: UnitSystem,
 ): Outcome<{ distance: number; step: Step }> {
-  const eff = effective(f, n, gradePercent);
+  const eff = effectiveDrag(f, n, gradePercent);
   if (!(eff > 0)) return fail(noSlowing(f, n, gradePercent));
   const C = tradeConstants(system).slide;
   const u = unitsOf(system);
-  const distance = (speed * speed) / (C * eff);
+  const distance = slideDistanceFor(speed * speed, eff, C);
   return ok({
     distance,
     step: makeStep({
@@ -92,7 +89,7 @@ export function slideDuration(
   gradePercent: number,
   system: UnitSystem,
 ): Outcome<{ seconds: number; step: Step }> {
-  const eff = effective(f, n, gradePercent);
+  const eff = effectiveDrag(f, n, gradePercent);
   if (!(eff > 0)) return fail(noSlowing(f, n, gradePercent));
   const u = unitsOf(system);
   const v = speedUnitToLengthPerSecond(system) * speed;

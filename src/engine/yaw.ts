@@ -1,5 +1,6 @@
 import { formatNumber } from '../format/numbers.js';
 import { ordinateReadingStep, tradeConstants, unitsOf } from './constants.js';
+import { arcRadius, centreRadius, criticalSpeedOf } from './formulas.js';
 import {
   fail,
   ok,
@@ -30,11 +31,10 @@ export function radiusFromChord(
   if (!(M.low > 0)) return fail('the middle ordinate must be greater than 0', 'middleOrdinate');
   if (!(M.high < C.low / 2))
     return fail('the middle ordinate must be less than half the chord', 'middleOrdinate');
-  const r = (c: number, m: number) => (c * c) / (8 * m) + m / 2;
   const radius: Range = {
-    value: r(C.value, M.value),
-    low: r(C.low, M.high),
-    high: r(C.high, M.low),
+    value: arcRadius(C.value, M.value),
+    low: arcRadius(C.low, M.high),
+    high: arcRadius(C.high, M.low),
   };
   const warnings: string[] = [];
   if (M.value / C.value < NEAR_STRAIGHT_RATIO)
@@ -69,9 +69,9 @@ export function pathRadius(
 ): Outcome<{ radius: Range; step: Step }> {
   const L = units?.length ?? '';
   const radius: Range = {
-    value: R.value - T.value / 2,
-    low: R.low - T.high / 2,
-    high: R.high - T.low / 2,
+    value: centreRadius(R.value, T.value),
+    low: centreRadius(R.low, T.high),
+    high: centreRadius(R.high, T.low),
   };
   if (!(radius.low > 0))
     return fail(
@@ -91,23 +91,6 @@ export function pathRadius(
       why: 'the centre of mass runs about half a track width inside the outside front tire’s mark (common practice)',
     }),
   });
-}
-
-/**
- * Critical speed for single numbers: sqrt(K R (f + e)/(1 − f e)), e a decimal; undefined outside
- * its domain (R ≤ 0, f + e ≤ 0, 1 − f e ≤ 0).
- * @example criticalSpeedOf(100, 0.6, 0, 'imperial') // 30
- */
-export function criticalSpeedOf(
-  R: number,
-  f: number,
-  e: number,
-  system: UnitSystem,
-): number | undefined {
-  const K = tradeConstants(system).yaw;
-  if (!(R > 0) || !(f + e > 0) || !(1 - f * e > 0)) return undefined;
-  const S = Math.sqrt((K * R * (f + e)) / (1 - f * e));
-  return Number.isFinite(S) ? S : undefined;
 }
 
 /**
@@ -171,7 +154,7 @@ export function criticalSpeed(
 /**
  * What a reading error of 1 inch (imperial) or 1 cm (metric) in the middle ordinate does to the
  * radius and the critical speed (dR/R is about −dM/M; S moves about half as much). Undefined when
- * the shifted ordinate leaves the valid arc. `e` is a decimal; `halfTrack` is T/2 when the path
+ * the shifted ordinate leaves the valid arc. `e` is a decimal; `trackWidth` is T when the path
  * adjustment is used.
  * @example ordinateSensitivity(30, 1 / 3, 0.7, 0, 'imperial')?.radiusPercent.plus // about −20
  */
@@ -181,10 +164,10 @@ export function ordinateSensitivity(
   f: number,
   e: number,
   system: UnitSystem,
-  halfTrack = 0,
+  trackWidth = 0,
 ): OrdinateSensitivity | undefined {
   const { size, label } = ordinateReadingStep(system);
-  const R = (m: number) => (C * C) / (8 * m) + m / 2 - halfTrack;
+  const R = (m: number) => centreRadius(arcRadius(C, m), trackWidth);
   const S = (m: number) => criticalSpeedOf(R(m), f, e, system);
   const s0 = S(M);
   const sPlus = M + size < C / 2 ? S(M + size) : undefined;

@@ -1,6 +1,6 @@
 import { spread } from '../case/quantity.js';
 import type { Case } from '../case/load.js';
-import { reactionDistance, tradeConstants, unitsOf } from '../engine/index.js';
+import { effectiveDrag, reactionDistance, tradeConstants, unitsOf } from '../engine/index.js';
 import {
   fail,
   ok,
@@ -109,7 +109,7 @@ export function limitComparison(
     const rS = reactionDistance(corner.S, t, system).distance;
     const rV = reactionDistance(V, t, system).distance;
     const brakeAt = rV - rS;
-    const effs = corner.f.map((f, j) => f * corner.n + corner.G[j]! / 100);
+    const effs = corner.f.map((f, j) => effectiveDrag(f, corner.n, corner.G[j]!));
     const walk = walkToRest(V, stretchesFrom(brakeAt, corner.lengths, effs), C);
     return walk.restAt === undefined
       ? undefined

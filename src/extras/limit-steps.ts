@@ -1,4 +1,4 @@
-import { brakingDistance, unitsOf } from '../engine/index.js';
+import { brakingDistance, effectiveDrag, slideSquaredSpeed, unitsOf } from '../engine/index.js';
 import {
   fail,
   ok,
@@ -66,8 +66,8 @@ export function walkSteps(
       continue;
     }
     const L = leg.stretch.to - leg.stretch.from;
-    const eff = f * n + G / 100;
-    const vOut = Math.sqrt(Math.max(0, leg.v2In - C * L * eff));
+    const eff = effectiveDrag(f, n, G);
+    const vOut = Math.sqrt(Math.max(0, leg.v2In - slideSquaredSpeed(L, eff, C)));
     steps.push({
       name: `Speed at the posted limit leaving ${label}`,
       formula: `v_out = sqrt(v_in² − ${C} × L × (f × n + G/100))`,

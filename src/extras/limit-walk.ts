@@ -3,6 +3,7 @@
  * Positions are distances from the start of the marks (negative: before them). Pure arithmetic;
  * limit-comparison.ts turns it into steps.
  */
+import { slideDistanceFor, slideSquaredSpeed } from '../engine/index.js';
 
 /** One stretch of road with its effective drag f n + G/100. */
 export interface Stretch {
@@ -49,7 +50,7 @@ export function walkToRest(V: number, stretches: readonly Stretch[], C: number):
   for (const s of stretches) {
     const len = s.to - s.from;
     if (s.eff > 0) {
-      const drop = v2 / (C * s.eff);
+      const drop = slideDistanceFor(v2, s.eff, C);
       if (drop <= len) {
         legs.push({ stretch: s, v2In: v2, stoppedAt: s.from + drop });
         return { restAt: s.from + drop, legs };
@@ -58,7 +59,7 @@ export function walkToRest(V: number, stretches: readonly Stretch[], C: number):
     legs.push({ stretch: s, v2In: v2, stoppedAt: undefined });
     // A surface without drag that goes on for ever: the vehicle never stops.
     if (!Number.isFinite(len)) break;
-    v2 -= C * len * s.eff;
+    v2 -= slideSquaredSpeed(len, s.eff, C);
   }
   return { restAt: undefined, legs };
 }
@@ -69,7 +70,7 @@ export function speedAt(V: number, brakeAt: number, walk: Walk, P: number, C: nu
   if (walk.restAt !== undefined && P >= walk.restAt) return 0;
   for (const leg of walk.legs) {
     if (P >= leg.stretch.from && P <= leg.stretch.to) {
-      const v2 = leg.v2In - C * (P - leg.stretch.from) * leg.stretch.eff;
+      const v2 = leg.v2In - slideSquaredSpeed(P - leg.stretch.from, leg.stretch.eff, C);
       return Math.sqrt(Math.max(0, v2));
     }
   }

@@ -1,3 +1,4 @@
+import { arcRadius } from '../engine/index.js';
 import { blankGrid, clip, gridLines, num, put, textWidth } from './text-fit.js';
 
 export interface SketchOptions {
@@ -16,7 +17,7 @@ const GLYPH = {
  * middle ordinate M (circle geometry: R = C²/(8M) + M/2, y = sqrt(R² − (x − C/2)²) − (R − M)).
  */
 export function arcOffset(C: number, M: number, x: number): number {
-  const R = (C * C) / (8 * M) + M / 2;
+  const R = arcRadius(C, M);
   const h = R * R - (x - C / 2) ** 2;
   return h > 0 ? Math.sqrt(h) - (R - M) : 0;
 }

@@ -5,7 +5,7 @@
  * or at the measurement, so the grade or the drag factor can be checked at once.
  */
 import { spread, type Quantity } from '../case/quantity.js';
-import { brakingEfficiency, dragFactor } from '../engine/index.js';
+import { brakingEfficiency, dragFactor, effectiveDrag } from '../engine/index.js';
 import type { AnswerContext } from './types.js';
 import { choiceOf } from './answers-read.js';
 import { readAnswers } from './answer-values.js';
@@ -37,8 +37,7 @@ export function steepDownhillNote(
     : undefined;
   const nLow = n?.ok ? n.value.n.low : 1;
   const steepest = spread(value as Quantity).high; // the most downhill end of the range
-  const held = f.low * nLow;
-  if (held - steepest / 100 > 0) return undefined;
+  if (effectiveDrag(f.low, nLow, -steepest) > 0) return undefined;
   const nText = n?.ok ? ` × braking efficiency ${nLow.toFixed(2)}` : '';
   return `A ${steepest}% downhill is steeper than the drag factor ${f.low.toFixed(2)}${nText} can hold (f × n − G ≤ 0 at the low end): the vehicle could not have slowed by sliding here, so no speed can be computed. Check the grade and the drag factor.`;
 }

@@ -1,18 +1,23 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
+  arcRadius,
+  centreRadius,
   criticalSpeedOf,
   effectiveDrag,
-  radiusFromChord,
+  slideSquaredSpeed,
   slideStartSpeed,
+  testSkidDrag,
+  wheelsBraking,
   wheelsEfficiency,
-  exact,
   reactionDistance,
   brakingDistance,
 } from '../../src/engine/index.js';
 
 // Property-based proof that each formula is monotone in each input over its valid domain, so that
-// setting every input at the matching end of its range gives the lowest and highest figure.
+// setting every input at the matching end of its range gives the lowest and highest figure. Each
+// property tests the scalar function of src/engine/formulas.ts that the ranges, the analysis
+// models, the limit comparison and the interview's checks call (never a copy of it).
 
 const num = (min: number, max: number) =>
   fc.double({ min, max, noNaN: true, noDefaultInfinity: true });
@@ -56,8 +61,7 @@ describe('slide start speed rises with d, f, n, G and the end speed', () => {
   it('effective drag f n + G/100 rises in each input', () => {
     fc.assert(
       fc.property(num(0.05, 1.5), num(0, 1), num(-50, 50), bump, (f, n, G, h) => {
-        const e = (a: number, b: number, c: number) =>
-          effectiveDrag(exact(a), exact(b), exact(c)).value;
+        const e = effectiveDrag;
         expect(e(f + h, n, G)).toBeGreaterThanOrEqual(e(f, n, G));
         expect(e(f, n + h, G)).toBeGreaterThanOrEqual(e(f, n, G));
         expect(e(f, n, G + h)).toBeGreaterThan(e(f, n, G));
@@ -71,13 +75,41 @@ describe('radius rises with the chord and falls with the middle ordinate (M < C/
     fc.assert(
       fc.property(num(1, 500), num(0.001, 0.49), bump, (C, ratio, h) => {
         const M = C * ratio;
-        const R = (c: number, m: number) => {
-          const r = radiusFromChord(exact(c), exact(m));
-          return r.ok ? r.value.radius.value : undefined;
-        };
-        const r0 = R(C, M)!;
-        expect(R(C + h, M)!).toBeGreaterThan(r0);
-        if (M + h * M < C / 2) expect(R(C, M + h * M)!).toBeLessThan(r0);
+        const r0 = arcRadius(C, M);
+        expect(arcRadius(C + h, M)).toBeGreaterThan(r0);
+        if (M + h * M < C / 2) expect(arcRadius(C, M + h * M)).toBeLessThan(r0);
+      }),
+    );
+  });
+  it('the path radius rises with the mark’s radius and falls with the track width', () => {
+    fc.assert(
+      fc.property(num(5, 3000), num(0, 10), bump, (R, T, h) => {
+        expect(centreRadius(R + h, T)).toBeGreaterThan(centreRadius(R, T));
+        expect(centreRadius(R, T + h)).toBeLessThan(centreRadius(R, T));
+      }),
+    );
+  });
+});
+
+describe('the squared speed a slide takes off rises with its distance and its effective drag', () => {
+  it('nudging d or the effective drag up raises C d e', () => {
+    fc.assert(
+      fc.property(num(0.5, 300), num(0.01, 1.5), bump, fc.constantFrom(30, 254), (d, e, h, C) => {
+        expect(slideSquaredSpeed(d + h, e, C)).toBeGreaterThan(slideSquaredSpeed(d, e, C));
+        expect(slideSquaredSpeed(d, e + h, C)).toBeGreaterThan(slideSquaredSpeed(d, e, C));
+      }),
+    );
+  });
+});
+
+describe('test-skid drag rises with the test speed, falls with its distance and its grade', () => {
+  it('nudging S up raises f; nudging d or G_t up lowers it', () => {
+    fc.assert(
+      fc.property(num(5, 80), num(5, 300), num(-15, 15), bump, system, (S, d, G, h, sys) => {
+        const f0 = testSkidDrag(S, d, sys, G);
+        expect(testSkidDrag(S + h, d, sys, G)).toBeGreaterThan(f0);
+        expect(testSkidDrag(S, d + h, sys, G)).toBeLessThan(f0);
+        expect(testSkidDrag(S, d, sys, G + h)).toBeLessThan(f0);
       }),
     );
   });
@@ -110,6 +142,21 @@ describe('critical speed rises with R, f and e wherever 1 − f e > 0', () => {
 });
 
 describe('braking efficiency per wheel rises with each wheel, and its range encloses every share', () => {
+  it('nudging any one wheel up never lowers n', () => {
+    fc.assert(
+      fc.property(
+        num(0, 1),
+        fc.array(num(0, 1), { minLength: 4, maxLength: 4 }),
+        fc.nat(3),
+        bump,
+        (s, w, k, h) => {
+          const [a, b, c, d] = w as [number, number, number, number];
+          const up = w.map((x, i) => (i === k ? x + h : x)) as [number, number, number, number];
+          expect(wheelsBraking(s, ...up)).toBeGreaterThanOrEqual(wheelsBraking(s, a, b, c, d));
+        },
+      ),
+    );
+  });
   it('the low and high ends hold for any share and wheels inside their ranges', () => {
     const q = fc
       .tuple(num(0, 1), num(0, 1), num(0, 1))
@@ -133,9 +180,7 @@ describe('braking efficiency per wheel rises with each wheel, and its range encl
             r.low + u * (r.high - r.low);
           const [ts, t1, t2, t3, t4] = t as [number, number, number, number, number];
           const sv = pick(s, ts);
-          const inside =
-            (sv / 2) * (pick(fl, t1) + pick(fr, t2)) +
-            ((1 - sv) / 2) * (pick(rl, t3) + pick(rr, t4));
+          const inside = wheelsBraking(sv, pick(fl, t1), pick(fr, t2), pick(rl, t3), pick(rr, t4));
           expect(inside).toBeGreaterThanOrEqual(n.low - 1e-12);
           expect(inside).toBeLessThanOrEqual(n.high + 1e-12);
           expect(n.low).toBeLessThanOrEqual(n.value + 1e-12);
