@@ -30,7 +30,7 @@ export const KNOWN = {
   drag: {
     entered: ['source', 'value', 'low', 'high', 'note'],
     table: ['source', 'surface', 'value', 'low', 'high', 'band', 'note'],
-    'test-skids': ['source', 'tests', 'note'],
+    'test-skids': ['source', 'tests', 'testGrade', 'note'],
     sled: ['source', 'weight', 'pulls', 'note'],
     decelerometer: ['source', 'readings', 'note'],
   },
@@ -84,6 +84,7 @@ function drag(d: Obj, path: string, out: string[]) {
       qty(t.speed, `${path}.tests[${i}].speed`, out);
       qty(t.distance, `${path}.tests[${i}].distance`, out);
     });
+  if (d.testGrade !== undefined) qty(d.testGrade, `${path}.testGrade`, out);
   if (d.weight !== undefined) qty(d.weight, `${path}.weight`, out);
   for (const list of ['pulls', 'readings'] as const)
     if (Array.isArray(d[list]))

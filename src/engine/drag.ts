@@ -1,8 +1,9 @@
 import { spread } from '../case/quantity.js';
 import type { DragV1 } from '../case/v1/schema.js';
 import { formatNumber } from '../format/numbers.js';
-import { tradeConstants, unitsOf } from './constants.js';
 import { dragTableRow } from './drag-table.js';
+import { testSkidsDrag } from './drag-tests.js';
+import { reduceRepeated } from './reduce.js';
 import { ok, type Outcome, type Range, type Step, type UnitSystem } from './types.js';
 import { input, makeStep } from './step.js';
 
@@ -15,24 +16,6 @@ export interface Drag {
   notes: string[];
 }
 
-/** Mean, smallest and largest of several figures: the reduction every repeated measure uses. */
-export function reduceRepeated(xs: number[]): Range {
-  return {
-    value: xs.reduce((a, b) => a + b, 0) / xs.length,
-    // Reduced, not spread into Math.min/max: a file may hold more figures than a call's arguments.
-    low: xs.reduce((a, b) => Math.min(a, b)),
-    high: xs.reduce((a, b) => Math.max(a, b)),
-  };
-}
-
-/**
- * Drag factor from one test skid: f = S² / (C d), C = 30 (mph, ft) or 254 (km/h, m).
- * @example testSkidDrag(30, 40, 'imperial') // 0.75
- */
-export function testSkidDrag(speed: number, distance: number, system: UnitSystem): number {
-  return (speed * speed) / (tradeConstants(system).slide * distance);
-}
-
 const f2 = (n: number) => formatNumber(n, 'drag');
 
 function fixedRange(d: { value: number; low?: number; high?: number }): Range {
@@ -42,14 +25,13 @@ function fixedRange(d: { value: number; low?: number; high?: number }): Range {
 /**
  * The drag factor f of a surface as a decimal of g, with its range.
  * - `entered` / `table`: value, low, high (a missing end is the value). A table value is a guide.
- * - `test-skids`: f_i = S_i² / (C d_i); value = mean, low/high = smallest/largest f_i.
+ * - `test-skids`: f_i = S_i² / (C d_i) less the tests' own grade (see testSkidsDrag); value = mean,
+ *   low/high = smallest/largest f_i.
  * - `sled`: f_i = pull_i / weight, same reduction. `decelerometer`: readings in g, same reduction.
  * Each test, pull and reading enters by its `value`.
  * @example dragFactor({ source: 'entered', value: 0.7, low: 0.65, high: 0.75 }, 'imperial') // f 0.70 (0.65 to 0.75)
  */
 export function dragFactor(drag: DragV1, system: UnitSystem): Outcome<Drag> {
-  const C = tradeConstants(system).slide;
-  const u = unitsOf(system);
   const notes: string[] = [];
   if (drag.source === 'entered' || drag.source === 'table') {
     const f = fixedRange(drag);
@@ -81,37 +63,12 @@ export function dragFactor(drag: DragV1, system: UnitSystem): Outcome<Drag> {
     });
   }
   if (drag.source === 'test-skids') {
-    const tests = drag.tests.map((t) => ({
-      S: spread(t.speed).value,
-      d: spread(t.distance).value,
-    }));
-    const fs = tests.map((t) => testSkidDrag(t.S, t.d, system));
-    const f = reduceRepeated(fs);
+    const t = testSkidsDrag(drag, system);
+    if (!t.ok) return t;
     notes.push(
       'A test skid at a lower speed than the crash tends to give a slightly higher drag factor (common practice).',
     );
-    const parts = tests.map(
-      (t) => `${formatNumber(t.S, 'speed')}²/(${C} × ${formatNumber(t.d, 'length')})`,
-    );
-    return ok({
-      f,
-      source: `${fs.length} test skid${fs.length === 1 ? '' : 's'}`,
-      notes,
-      step: makeStep({
-        name: 'Drag factor from test skids',
-        formula: `f_i = S_i² / (${C} × d_i); f = mean, range = smallest to largest`,
-        substituted: `f = mean(${parts.join(', ')}) = mean(${fs.map(f2).join(', ')}) = ${f2(f.value)}`,
-        inputs: Object.fromEntries(
-          tests.flatMap((t, i) => [
-            [`S_${i + 1}`, { value: t.S, unit: u.speed }],
-            [`d_${i + 1}`, { value: t.d, unit: u.length }],
-          ]),
-        ),
-        result: f,
-        unit: '',
-        why: 'measured on scene by test skids at known speed; the spread of the tests is the range',
-      }),
-    });
+    return ok({ ...t.value, notes });
   }
   if (drag.source === 'sled') {
     const W = spread(drag.weight).value;

@@ -12,7 +12,9 @@ export {
 } from './constants.js';
 export { slideDistanceFromMarks, type DistanceRule } from './distance.js';
 export { brakingEfficiency, wheelsEfficiency, type Efficiency } from './efficiency.js';
-export { dragFactor, testSkidDrag, reduceRepeated, type Drag } from './drag.js';
+export { dragFactor, type Drag } from './drag.js';
+export { testSkidDrag, testSkidsDrag } from './drag-tests.js';
+export { reduceRepeated } from './reduce.js';
 export {
   DRAG_TABLE,
   DRAG_TABLE_NOTE,

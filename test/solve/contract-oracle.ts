@@ -28,7 +28,11 @@ function overCorners(inputs: Ends[], fn: (xs: number[]) => number | undefined) {
   return { value, low: Math.min(...xs), high: Math.max(...xs) };
 }
 
-/** Drag factor: entered/table as given; tests, sled and decelerometer as mean, min, max. */
+/**
+ * Drag factor: entered/table as given; tests, sled and decelerometer as mean, min, max. Test skids
+ * with a `testGrade` G_t: value = mean − G_t.value/100, low = min − G_t.high/100,
+ * high = max − G_t.low/100.
+ */
 export function oracleDrag(d: Json, metric: boolean): Ends {
   if (d.source === 'entered' || d.source === 'table')
     return [d.value, d.low ?? d.value, d.high ?? d.value];
@@ -39,7 +43,8 @@ export function oracleDrag(d: Json, metric: boolean): Ends {
       : d.source === 'sled'
         ? d.pulls.map((p: Q) => ends(p)[0] / ends(d.weight)[0])
         : d.readings.map((r: Q) => ends(r)[0]);
-  return [mean(fs), Math.min(...fs), Math.max(...fs)];
+  const [gv, gl, gh] = d.source === 'test-skids' ? ends(d.testGrade ?? 0) : [0, 0, 0];
+  return [mean(fs) - gv / 100, Math.min(...fs) - gh / 100, Math.max(...fs) - gl / 100];
 }
 
 /** Braking efficiency n as a list of ranged inputs and the formula over them. */
@@ -54,11 +59,23 @@ function oracleBrakes(v: Json): { inputs: Ends[]; n: (xs: number[]) => number } 
   };
 }
 
-/** Slide distance from marks: average (mean of each end) or longest (largest of each end). */
+/**
+ * Slide distance from marks: average (mean of each end), longest (largest of each end), shortest
+ * (smallest of each end), spread (mean of the values, smallest low, largest high).
+ */
 function markDistance(marks: Q[], rule: string): Ends {
   const es = marks.map(ends);
-  const pick = rule === 'longest' ? (xs: number[]) => Math.max(...xs) : mean;
-  return [pick(es.map((e) => e[0])), pick(es.map((e) => e[1])), pick(es.map((e) => e[2]))];
+  const max = (xs: number[]) => Math.max(...xs);
+  const min = (xs: number[]) => Math.min(...xs);
+  const [pv, pl, ph] =
+    rule === 'longest'
+      ? [max, max, max]
+      : rule === 'shortest'
+        ? [min, min, min]
+        : rule === 'spread'
+          ? [mean, min, max]
+          : [mean, mean, mean];
+  return [pv(es.map((e) => e[0])), pl(es.map((e) => e[1])), ph(es.map((e) => e[2]))];
 }
 
 export interface OracleAnalysis {

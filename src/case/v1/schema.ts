@@ -61,6 +61,8 @@ export const dragV1 = z
             },
           )
           .min(1, 'at least one test skid is needed'),
+        /** Grade the tests were run on (signed percent, + uphill in their direction); default level. */
+        testGrade: q({ ...RULES.grade, what: 'test grade' }).optional(),
         note: text('note').optional(),
       }),
       z.looseObject({
@@ -187,7 +189,9 @@ export const skidV1 = z.looseObject({
     .optional(),
   marks: z.array(q(RULES.length), { error: 'marks must be a list of lengths' }).optional(),
   distanceRule: z
-    .enum(['average', 'longest'], { error: 'distanceRule must be average or longest' })
+    .enum(['average', 'longest', 'shortest', 'spread'], {
+      error: 'distanceRule must be average, longest, shortest or spread',
+    })
     .optional(),
   segments: z
     .array(segmentV1, { error: 'segments must be a list' })
