@@ -82,7 +82,7 @@ describe('the one-line segment entry, revisited after a later edit', () => {
     let s = gradeTo5(typed());
     s = act(s, { type: 'jump', id: 'a0.seg0.drag.source' });
     s = type(s, 'k', '30/42');
-    s = fill(s, {});
+    s = fill(s, { 'a0.seg0.drag.testWhere': 'e' });
     const before = s.answers;
     s = act(s, { type: 'jump', id: 'a0.quick' });
     // Test skids cannot be written on the line: it keeps the last segments it could say (the
