@@ -10,6 +10,8 @@ import { readItem } from './item.js';
 import { isOp, lex, type Token } from './lexer.js';
 import { badTokenMessage } from './parse-quantity.js';
 import { readList } from './parse-list.js';
+import { tolerancesForAll } from './list-tolerance.js';
+import { mixedUnitsMessage } from './mixed-units.js';
 import type { QuantitySpec } from './types.js';
 
 export interface MarksContext {
@@ -21,7 +23,16 @@ export interface MarksContext {
 }
 
 export type MarksResult =
-  { ok: true; marks: Quantity[]; converted?: string } | { ok: false; message: string };
+  | {
+      ok: true;
+      marks: Quantity[];
+      converted?: string;
+      /** Set when one tolerance typed after the list was taken for every mark. */
+      shared?: string;
+      /** Set when the marks' typed units mix feet and metres: names the entries out of place. */
+      mixed?: string;
+    }
+  | { ok: false; message: string };
 
 const isTimes = (t: Token | undefined) =>
   isOp(t, 'times') || (t?.t === 'word' && t.text.toLowerCase() === 'x');
@@ -58,13 +69,20 @@ export function parseMarksLine(text: string, ctx: MarksContext): MarksResult {
   };
   const x = tokens.findIndex(isTimes);
   if (x >= 0) return equalMarks(tokens, trimmed, x, spec, max);
-  const r = readList(new Cursor(tokens, trimmed), spec);
+  const read = readList(new Cursor(tokens, trimmed), spec);
+  if (read instanceof ReadError) return { ok: false, message: read.message };
+  const r = tolerancesForAll(read, spec);
   if (r instanceof ReadError) return { ok: false, message: r.message };
   if (r.values.length > max)
     return { ok: false, message: `give at most ${max} marks (${r.values.length} typed)` };
-  return r.notes.length
-    ? { ok: true, marks: r.values, converted: r.notes.join('; ') }
-    : { ok: true, marks: r.values };
+  const mixed = mixedUnitsMessage(r.raws, ctx.units, 'mark');
+  return {
+    ok: true,
+    marks: r.values,
+    ...(r.notes.length ? { converted: r.notes.join('; ') } : {}),
+    ...(r.shared ? { shared: r.shared } : {}),
+    ...(mixed ? { mixed } : {}),
+  };
 }
 
 function equalMarks(

@@ -5,7 +5,7 @@
  */
 import { Cursor, ReadError, type Read } from './cursor.js';
 import { checkItem } from './check.js';
-import { readItem } from './item.js';
+import { readItem, type RawItem } from './item.js';
 import { isOp, lex, type Token } from './lexer.js';
 import type { ReadContext } from './measure.js';
 import { badTokenMessage, emptyMessage } from './parse-quantity.js';
@@ -16,6 +16,8 @@ import type { CountResult, CountSpec, ListResult, ListSpec, QuantitySpec } from 
 export interface ListRead {
   values: Quantity[];
   notes: string[];
+  /** Each item as read, in the order typed (for a tolerance written once after the list). */
+  raws: RawItem[];
 }
 
 const isSep = (t: Token | undefined) => isOp(t, 'comma', 'semi');
@@ -24,6 +26,7 @@ const isSep = (t: Token | undefined) => isOp(t, 'comma', 'semi');
 export function readList(cur: Cursor, spec: QuantitySpec & { item: string }): Read<ListRead> {
   const values: Quantity[] = [];
   const notes: string[] = [];
+  const raws: RawItem[] = [];
   while (!cur.done()) {
     const label = `${spec.item} ${values.length + 1}`;
     if (isSep(cur.peek()))
@@ -39,6 +42,7 @@ export function readList(cur: Cursor, spec: QuantitySpec & { item: string }): Re
     const checked = checkItem(raw, spec, ctx);
     if (checked instanceof ReadError) return new ReadError(`${label}: ${checked.message}`);
     values.push(checked.value);
+    raws.push(raw);
     if (checked.converted) notes.push(`${label}: ${checked.converted}`);
     const t = cur.peek();
     if (isSep(t)) {
@@ -50,7 +54,7 @@ export function readList(cur: Cursor, spec: QuantitySpec & { item: string }): Re
     const why = t.t === 'bad' ? t.why : `cannot read '${cur.rest()}' after '${raw.text}'`;
     return new ReadError(`${label}: ${spec.field}: ${why}`);
   }
-  return { values, notes };
+  return { values, notes, raws };
 }
 
 /**

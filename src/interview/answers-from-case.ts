@@ -2,7 +2,7 @@
  * Answers derived from a case's fields, for a hand-written case (or one edited by hand): so it
  * can be reviewed and edited in the interview, and built again with the same figures.
  */
-import type { Quantity } from '../case/quantity.js';
+import { spread, type Quantity } from '../case/quantity.js';
 import type { Case } from '../case/load.js';
 import type { DragV1 } from '../case/v1/schema.js';
 import type { Answers } from './types.js';
@@ -12,6 +12,7 @@ import { quantityText } from './read-quantity.js';
 import { signed } from './signed.js';
 import { surfaceRow, OTHER_SURFACE } from './drag-table.js';
 import { WHEELS } from './questions-vehicle.js';
+import { isSegment } from './questions-test-grade.js';
 import { DEFAULT_SAMPLES, DEFAULT_SEED } from '../extras/sampling.js';
 import { notesOf, NOTES_KEEP } from './kept-notes.js';
 import {
@@ -89,6 +90,31 @@ function slopeAnswers(
   const negative = val(q) < 0;
   put(`${id}.dir`, negative ? down : up);
   put(`${id}.pct`, quantityText(signed(q, negative)));
+}
+
+const same = (a: Quantity | undefined, b: Quantity | undefined) =>
+  JSON.stringify(spreadOf(a)) === JSON.stringify(spreadOf(b));
+const spreadOf = (q: Quantity | undefined) => {
+  const { note: _n, ...s } = spread(q ?? 0);
+  return s;
+};
+
+/**
+ * Where test skids ran, from their `testGrade`: the same stretch when it equals the segment's
+ * grade (a segment, `grade` given), elsewhere on that grade otherwise (level when absent).
+ */
+function testGradeAnswers(
+  put: (id: string, text: string) => void,
+  p: string,
+  d: DragV1,
+  grade?: Quantity,
+): void {
+  if (d.source !== 'test-skids') return;
+  const segment = isSegment(p);
+  if (segment && d.testGrade !== undefined && same(d.testGrade, grade))
+    return put(`${p}.drag.testWhere`, 'same');
+  if (segment) put(`${p}.drag.testWhere`, 'elsewhere');
+  slopeAnswers(put, `${p}.drag.testGrade`, d.testGrade, ['level', 'uphill', 'downhill']);
 }
 
 /**
@@ -173,6 +199,7 @@ export function answersFromCase(c: Case): Answers {
       if (a.chord !== undefined) put(`${p}.chord`, quantityText(a.chord));
       if (a.middleOrdinate !== undefined) put(`${p}.ordinate`, quantityText(a.middleOrdinate));
       dragAnswers(put, p, a.drag);
+      testGradeAnswers(put, p, a.drag);
       slopeAnswers(put, `${p}.bank`, a.superelevation, ['none', 'toward', 'away']);
       put(`${p}.path`, a.pathAdjustment ?? 'none');
       return;
@@ -192,6 +219,7 @@ export function answersFromCase(c: Case): Answers {
       if (!one && s.length !== undefined) put(`${sp}.length`, quantityText(s.length));
       dragAnswers(put, sp, s.drag);
       slopeAnswers(put, `${sp}.grade`, s.grade, ['level', 'uphill', 'downhill']);
+      testGradeAnswers(put, sp, s.drag, s.grade);
     });
     if (a.end?.mode === 'speed') {
       put(`${p}.end`, 'speed');

@@ -4,7 +4,13 @@
  */
 import type { Case } from '../case/load.js';
 import { APPEARANCE_NOTES } from '../engine/index.js';
-import type { AnalysisV1, BrakesV1, VehicleV1 } from '../case/v1/schema.js';
+import {
+  skidV1,
+  yawV1,
+  type AnalysisV1,
+  type BrakesV1,
+  type VehicleV1,
+} from '../case/v1/schema.js';
 import type { CaseMeta, InterviewState, SavedInterview } from './types.js';
 import { analysisCount, choiceOf, markLook, unitsOf } from './answers-read.js';
 import { readAnswers, type AnswerReader } from './answer-values.js';
@@ -12,63 +18,76 @@ import { WHEELS } from './questions-vehicle.js';
 import { analysisKeep, CASE_KEEP, kept, measuredByOffsets, VEHICLE_KEEP } from './kept-fields.js';
 import { dragOf, segmentsOf, slopeOf, text, type Q } from './build-parts.js';
 import { restoreNotes } from './kept-notes.js';
+import { testGradeNotes } from './test-grade-notes.js';
 
 export { segmentsLine } from './build-parts.js';
 
-function skidOf(r: AnswerReader, i: number, id: string): AnalysisV1 {
+/** Distance rules a slide's marks may take (the file's `distanceRule`). */
+const DISTANCE_RULES = ['average', 'longest', 'shortest', 'spread'];
+
+/** Slide `i` read with the file's schema; undefined when its answers do not make one. */
+function skidOf(r: AnswerReader, i: number, id: string): AnalysisV1 | undefined {
   const p = `a${i}`;
-  const segments = segmentsOf(r, i);
-  const out: AnalysisV1 = { ...kept(r.answers, analysisKeep(i)), id, kind: 'skid', segments };
   const label = text(r, `${p}.label`);
-  if (label) out.label = label;
   // The look of the marks goes into the file, so solve and the report carry its caveat too.
   const look = markLook(r.answers, i);
-  // Locked-wheel marks are the default and add nothing, so only the other looks are written.
-  if (look === 'abs' || look === 'skip' || look === 'gap') out.appearance = look;
   const marks = r.value(`${p}.marks`);
-  if (Array.isArray(marks)) out.marks = marks as Q[];
   const rule = r.value(`${p}.rule`);
-  if (rule === 'average' || rule === 'longest') out.distanceRule = rule;
   const end = r.value(`${p}.end`);
-  if (end === 'speed') {
-    const basis = text(r, `${p}.end.basis`);
-    out.end = { mode: 'speed', speed: r.value(`${p}.end.speed`) as Q, ...(basis ? { basis } : {}) };
-  } else out.end = { mode: 'stop' };
+  const basis = text(r, `${p}.end.basis`);
   const reaction = r.value(`${p}.reaction`);
   const conflict = r.value(`${p}.conflict`);
-  if (typeof reaction === 'number' || typeof conflict === 'number')
-    out.timeDistance = {
-      ...(typeof reaction === 'number' ? { reactionTime: reaction } : {}),
-      ...(typeof conflict === 'number' ? { conflictAt: conflict } : {}),
-    };
-  return out;
+  const parsed = skidV1.safeParse({
+    ...kept(r.answers, analysisKeep(i)),
+    id,
+    kind: 'skid',
+    segments: segmentsOf(r, i),
+    ...(label ? { label } : {}),
+    // Locked-wheel marks are the default and add nothing, so only the other looks are written.
+    ...(look === 'abs' || look === 'skip' || look === 'gap' ? { appearance: look } : {}),
+    ...(Array.isArray(marks) ? { marks } : {}),
+    ...(typeof rule === 'string' && DISTANCE_RULES.includes(rule) ? { distanceRule: rule } : {}),
+    end:
+      end === 'speed'
+        ? { mode: 'speed', speed: r.value(`${p}.end.speed`), ...(basis ? { basis } : {}) }
+        : { mode: 'stop' },
+    ...(typeof reaction === 'number' || typeof conflict === 'number'
+      ? {
+          timeDistance: {
+            ...(typeof reaction === 'number' ? { reactionTime: reaction } : {}),
+            ...(typeof conflict === 'number' ? { conflictAt: conflict } : {}),
+          },
+        }
+      : {}),
+  });
+  return parsed.success ? parsed.data : undefined;
 }
 
-function yawOf(r: AnswerReader, i: number, id: string): AnalysisV1 {
+/** Yaw `i` read with the file's schema; undefined when its answers do not make one. */
+function yawOf(r: AnswerReader, i: number, id: string): AnalysisV1 | undefined {
   const p = `a${i}`;
-  const out: AnalysisV1 = {
-    ...kept(r.answers, analysisKeep(i)),
+  const { offsets: _o, ...keep } = kept(r.answers, analysisKeep(i));
+  const label = text(r, `${p}.label`);
+  const e = slopeOf(r, `${p}.bank`, 'away', 'none');
+  const parsed = yawV1.safeParse({
+    ...keep,
     id,
     kind: 'yaw',
     drag: dragOf(r, p),
     pathAdjustment: r.value(`${p}.path`) === 'half-track' ? 'half-track' : 'none',
-  };
-  // One way of measuring the radius only: the file refuses both.
-  if (measuredByOffsets(r.answers, i))
-    out.offsets = {
-      chord: r.value(`${p}.offsets.chord`) as Q,
-      stations: r.value(`${p}.offsets.stations`) as { at: number; offset: number }[],
-    };
-  else {
-    delete out.offsets;
-    out.chord = r.value(`${p}.chord`) as Q;
-    out.middleOrdinate = r.value(`${p}.ordinate`) as Q;
-  }
-  const label = text(r, `${p}.label`);
-  if (label) out.label = label;
-  const e = slopeOf(r, `${p}.bank`, 'away', 'none');
-  if (e !== undefined) out.superelevation = e;
-  return out;
+    // One way of measuring the radius only: the file refuses both.
+    ...(measuredByOffsets(r.answers, i)
+      ? {
+          offsets: {
+            chord: r.value(`${p}.offsets.chord`),
+            stations: r.value(`${p}.offsets.stations`),
+          },
+        }
+      : { chord: r.value(`${p}.chord`), middleOrdinate: r.value(`${p}.ordinate`) }),
+    ...(label ? { label } : {}),
+    ...(e !== undefined ? { superelevation: e } : {}),
+  });
+  return parsed.success ? parsed.data : undefined;
 }
 
 /** The brakes as answered so far, or undefined while they are not (also read by grade-check.ts). */
@@ -175,8 +194,13 @@ export function lookNotes(state: InterviewState): Record<string, string[]> {
   const out: Record<string, string[]> = {};
   const brakes = brakesOf(r) !== undefined;
   const track = r.value('vehicle.trackWidth') !== undefined;
-  for (const a of included(state, state.answers, r, brakes, track))
-    if (markLook(state.answers, a.i) === 'abs') out[a.id] = [ABS_NOTE];
+  for (const a of included(state, state.answers, r, brakes, track)) {
+    const notes = [
+      ...(markLook(state.answers, a.i) === 'abs' ? [ABS_NOTE] : []),
+      ...testGradeNotes(r, a.i),
+    ];
+    if (notes.length) out[a.id] = notes;
+  }
   return out;
 }
 
@@ -209,8 +233,8 @@ export function buildCase(state: InterviewState, meta: CaseMeta): Case {
   if (brakes?.mode === 'wheels' && share !== undefined) vehicle.frontAxleShare = share as Q;
   const track = r.value('vehicle.trackWidth');
   if (track !== undefined) vehicle.trackWidth = track as Q;
-  const analyses = included(state, answers, r, !!brakes, track !== undefined).map(
-    ({ i, id, kind }) => (kind === 'skid' ? skidOf(r, i, id) : yawOf(r, i, id)),
+  const analyses = included(state, answers, r, !!brakes, track !== undefined).flatMap(
+    ({ i, id, kind }) => (kind === 'skid' ? skidOf(r, i, id) : yawOf(r, i, id)) ?? [],
   );
   const interview: SavedInterview = {
     version: 1,

@@ -1,43 +1,78 @@
-/** The parts of a case built from answers: drag factors, slopes, segments, and texts. */
-import type { Quantity } from '../case/quantity.js';
-import type { DragV1, SegmentV1 } from '../case/v1/schema.js';
+/**
+ * The parts of a case built from answers: drag factors, slopes, segments, and texts. Each part is
+ * read through the case file's own schema (src/case/v1/schema.ts), so nothing half-answered or
+ * mistyped reaches the engine: a part the answers do not make yet is undefined.
+ */
+import { quantity, RULES, type Quantity, type QuantityRule } from '../case/quantity.js';
+import { dragV1, segmentV1, type DragV1, type SegmentV1 } from '../case/v1/schema.js';
 import type { Answers } from './types.js';
 import { formatSegmentLine } from '../input/index.js';
 import { segmentCount, surfaceMode } from './answers-read.js';
 import { readAnswers, type AnswerReader } from './answer-values.js';
 import { OTHER_SURFACE } from './drag-table.js';
 import { signed } from './signed.js';
+import { isSegment, testWhere } from './questions-test-grade.js';
 export type Q = Quantity;
 
-/** `{ value, low, high }` of a Quantity, for the drag shapes that take the fields flat. */
-function flat(q: Q): { value: number; low?: number; high?: number } {
-  return typeof q === 'number'
-    ? { value: q }
-    : {
-        value: q.value,
-        ...(q.low !== undefined ? { low: q.low } : {}),
-        ...(q.high !== undefined ? { high: q.high } : {}),
-      };
+/** The answer `id` as a Quantity under `rule`, read with the file's schema; undefined otherwise. */
+export function quantityOf(r: AnswerReader, id: string, rule: QuantityRule): Q | undefined {
+  const v = r.value(id);
+  if (v === undefined) return undefined;
+  const p = quantity(rule).safeParse(v);
+  return p.success ? p.data : undefined;
 }
 
-export function dragOf(r: AnswerReader, p: string): DragV1 {
+/** `{ value, low, high }` of a Quantity, for the drag shapes that take the fields flat. */
+function flat(q: unknown): Record<string, unknown> {
+  if (typeof q !== 'object' || q === null) return { value: q };
+  return Object.fromEntries(Object.entries(q).filter(([k]) => k !== 'note'));
+}
+
+/** The drag answers under `p` as the file would hold them, before the schema reads them. */
+function rawDrag(r: AnswerReader, p: string, withTestGrade: boolean): Record<string, unknown> {
   const source = r.value(`${p}.drag.source`);
-  if (source === 'test-skids')
-    return { source, tests: r.value(`${p}.drag.tests`) as { speed: Q; distance: Q }[] };
-  if (source === 'sled')
+  if (source === 'test-skids') {
+    const testGrade = withTestGrade ? testGradeOf(r, p) : undefined;
     return {
       source,
-      weight: r.value(`${p}.drag.weight`) as Q,
-      pulls: r.value(`${p}.drag.pulls`) as Q[],
+      tests: r.value(`${p}.drag.tests`),
+      ...(testGrade !== undefined ? { testGrade } : {}),
     };
-  if (source === 'decelerometer') return { source, readings: r.value(`${p}.drag.readings`) as Q[] };
-  const v = flat(r.value(`${p}.drag.value`) as Q);
+  }
+  if (source === 'sled')
+    return { source, weight: r.value(`${p}.drag.weight`), pulls: r.value(`${p}.drag.pulls`) };
+  if (source === 'decelerometer') return { source, readings: r.value(`${p}.drag.readings`) };
+  const v = flat(r.value(`${p}.drag.value`));
   if (source === 'table') {
-    const key = r.value(`${p}.drag.surface`) as string;
-    const surface = key === OTHER_SURFACE ? (r.value(`${p}.drag.surfaceName`) as string) : key;
+    const key = r.value(`${p}.drag.surface`);
+    const surface = key === OTHER_SURFACE ? r.value(`${p}.drag.surfaceName`) : key;
     return { source, surface, ...v };
   }
-  return { source: 'entered', ...v };
+  return { source, ...v };
+}
+
+/**
+ * The drag factor answered under `p` (`a0.seg1`, `a2`), or undefined while the answers make none.
+ * `withTestGrade: false` leaves the tests' grade out (read as level): the grade question's own
+ * check uses it, since with tests on the same stretch the tests' grade is that very answer.
+ */
+export function dragOf(r: AnswerReader, p: string, withTestGrade = true): DragV1 | undefined {
+  const parsed = dragV1.safeParse(rawDrag(r, p, withTestGrade));
+  return parsed.success ? parsed.data : undefined;
+}
+
+/**
+ * The grade the test skids under `p` were run on (signed percent): the segment's own grade when
+ * they ran on its stretch in its direction (0 when it is level), else the grade answered for them.
+ * Undefined while it is not answered.
+ */
+export function testGradeOf(r: AnswerReader, p: string): Q | undefined {
+  if (isSegment(p) && testWhere(r.answers, p) === 'same')
+    return r.status(`${p}.grade.dir`) === 'answered'
+      ? (slopeOf(r, `${p}.grade`, 'downhill', 'level') ?? 0)
+      : undefined;
+  if (r.status(`${p}.drag.testGrade.dir`) !== 'answered') return undefined;
+  return slopeOf(r, `${p}.drag.testGrade`, 'downhill', 'level') ?? 0;
 }
 
 export function slopeOf(
@@ -48,7 +83,8 @@ export function slopeOf(
 ): Q | undefined {
   const dir = r.value(`${id}.dir`);
   if (dir === noneWord || dir === undefined) return undefined;
-  return signed(r.value(`${id}.pct`) as Q, dir === negativeWord);
+  const pct = quantityOf(r, `${id}.pct`, RULES.grade);
+  return pct === undefined ? undefined : signed(pct, dir === negativeWord);
 }
 
 export const text = (r: AnswerReader, id: string) => {
@@ -56,19 +92,25 @@ export const text = (r: AnswerReader, id: string) => {
   return typeof v === 'string' && v !== '' ? v : undefined;
 };
 
-/** The segments of slide `i` as the case stores them; read only when their questions are complete. */
-export function segmentsOf(r: AnswerReader, i: number): SegmentV1[] {
+/**
+ * The segments of slide `i` as the case stores them, read with the file's schema; undefined when
+ * one of them is not complete and valid.
+ */
+export function segmentsOf(r: AnswerReader, i: number): SegmentV1[] | undefined {
   const several = surfaceMode(r.answers, i) !== 'one';
   const segments: SegmentV1[] = [];
   for (let j = 0; j < segmentCount(r.answers, i); j++) {
     const sp = `a${i}.seg${j}`;
-    const s: SegmentV1 = { drag: dragOf(r, sp) };
     const label = text(r, `${sp}.label`);
-    if (label) s.label = label;
-    if (several) s.length = r.value(`${sp}.length`) as Q;
-    const g = slopeOf(r, `${sp}.grade`, 'downhill', 'level');
-    if (g !== undefined) s.grade = g;
-    segments.push(s);
+    const grade = slopeOf(r, `${sp}.grade`, 'downhill', 'level');
+    const parsed = segmentV1.safeParse({
+      ...(label ? { label } : {}),
+      ...(several ? { length: r.value(`${sp}.length`) } : {}),
+      drag: dragOf(r, sp),
+      ...(grade !== undefined ? { grade } : {}),
+    });
+    if (!parsed.success) return undefined;
+    segments.push(parsed.data);
   }
   return segments;
 }
@@ -81,5 +123,6 @@ export function segmentsLine(answers: Answers, i: number): string | undefined {
   const r = readAnswers(answers);
   const own = new RegExp(`^a${i}\\.seg\\d+\\.`);
   if (segmentCount(answers, i) === 0 || !r.complete((id) => own.test(id))) return undefined;
-  return formatSegmentLine(segmentsOf(r, i));
+  const segments = segmentsOf(r, i);
+  return segments && formatSegmentLine(segments);
 }

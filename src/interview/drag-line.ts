@@ -24,23 +24,16 @@ export function measuredDragLine(a: Answers, prefix: string): string | undefined
   const r = readAnswers(a);
   const source = r.value(`${prefix}.drag.source`);
   if (typeof source !== 'string' || !(source in WHAT)) return undefined;
+  // Read with the file's schema: undefined until the source's figures are all in.
   const drag = dragOf(r, prefix);
-  const list: unknown =
-    'tests' in drag
-      ? drag.tests
-      : 'pulls' in drag
-        ? drag.pulls
-        : 'readings' in drag
-          ? drag.readings
-          : undefined;
-  const count = Array.isArray(list) ? list.length : 0;
-  if (!count || ('weight' in drag && drag.weight === undefined)) return undefined;
-  let out;
-  try {
-    out = dragFactor(drag, unitsOf(a));
-  } catch {
-    return undefined; // figures not all in yet: nothing to show
-  }
+  if (!drag || drag.source === 'entered' || drag.source === 'table') return undefined;
+  const count =
+    drag.source === 'test-skids'
+      ? drag.tests.length
+      : drag.source === 'sled'
+        ? drag.pulls.length
+        : drag.readings.length;
+  const out = dragFactor(drag, unitsOf(a));
   if (!out.ok) return undefined;
   const { value, low, high } = out.value.f;
   const d = (x: number) => formatNumber(x, 'drag');

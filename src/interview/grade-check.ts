@@ -4,12 +4,12 @@
  * the review; this says so at the grade question itself, while the investigator is still on scene
  * or at the measurement, so the grade or the drag factor can be checked at once.
  */
-import { spread, type Quantity } from '../case/quantity.js';
+import { quantity, RULES, spread } from '../case/quantity.js';
 import { brakingEfficiency, dragFactor, effectiveDrag } from '../engine/index.js';
 import type { AnswerContext } from './types.js';
 import { choiceOf } from './answers-read.js';
 import { readAnswers } from './answer-values.js';
-import { dragOf } from './build-parts.js';
+import { dragOf, quantityOf } from './build-parts.js';
 import { brakesOf } from './build-case.js';
 
 /** The note for a too-steep downhill on segment `prefix` (`a0.seg1`), or undefined. */
@@ -22,21 +22,22 @@ export function steepDownhillNote(
     return undefined;
   const r = readAnswers(ctx.answers);
   if (r.status(`${prefix}.drag.source`) !== 'answered') return undefined;
-  let f;
-  try {
-    const d = dragFactor(dragOf(r, prefix), ctx.units);
-    if (!d.ok) return undefined;
-    f = d.value.f;
-  } catch {
-    return undefined; // the drag answers are not complete yet: nothing to compare with
-  }
+  // Read with the file's schema: undefined until the drag answers make a drag factor. The tests'
+  // grade is asked after this one, so test skids are read as run level here.
+  const drag = dragOf(r, prefix, false);
+  if (!drag) return undefined;
+  const d = dragFactor(drag, ctx.units);
+  if (!d.ok) return undefined;
+  const f = d.value.f;
   const brakes = brakesOf(r);
-  const share = r.value('vehicle.share') as Quantity | undefined;
+  const share = quantityOf(r, 'vehicle.share', RULES.share);
   const n = brakes
     ? brakingEfficiency({ brakes, ...(share !== undefined ? { frontAxleShare: share } : {}) })
     : undefined;
   const nLow = n?.ok ? n.value.n.low : 1;
-  const steepest = spread(value as Quantity).high; // the most downhill end of the range
+  const grade = quantity(RULES.grade).safeParse(value);
+  if (!grade.success) return undefined;
+  const steepest = spread(grade.data).high; // the most downhill end of the range
   if (effectiveDrag(f.low, nLow, -steepest) > 0) return undefined;
   const nText = n?.ok ? ` × braking efficiency ${nLow.toFixed(2)}` : '';
   return `A ${steepest}% downhill is steeper than the drag factor ${f.low.toFixed(2)}${nText} can hold (f × n − G ≤ 0 at the low end): the vehicle could not have slowed by sliding here, so no speed can be computed. Check the grade and the drag factor.`;

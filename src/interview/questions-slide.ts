@@ -1,6 +1,6 @@
 /** Questions of a slide (skid) analysis: marks, surfaces, segments, and how the slide ended. */
 import { RULES } from '../case/quantity.js';
-import type { Answers, Question } from './types.js';
+import type { Answers, Choice, Question } from './types.js';
 import {
   choiceQuestion,
   countQuestion,
@@ -19,6 +19,7 @@ import {
 } from './answers-read.js';
 import { dragQuestions } from './questions-drag.js';
 import { gradeQuestions } from './questions-grade.js';
+import { testGradeQuestions } from './questions-test-grade.js';
 import { quickFills } from './quick-fills.js';
 import { endQuestions } from './questions-end.js';
 import { timeDistanceQuestions } from './questions-extras.js';
@@ -26,6 +27,44 @@ import { timeDistanceQuestions } from './questions-extras.js';
 import { segmentsLine } from './build-parts.js';
 
 const LENGTH = { kind: 'length' as const, rule: RULES.length, range: true };
+
+/** The distance rules offered where there are several marks, each with a one-line why. */
+export const DISTANCE_RULE_CHOICES: Choice[] = [
+  {
+    value: 'average',
+    key: 'a',
+    label: 'the average',
+    hint: 'common practice: the mean of the marks, its range from their tolerances',
+  },
+  {
+    value: 'longest',
+    key: 'l',
+    label: 'the longest mark',
+    hint: 'some investigators prefer it; gives the highest distance',
+  },
+  {
+    value: 'shortest',
+    key: 's',
+    label: 'the shortest mark',
+    hint: 'the cautious choice for a minimum speed',
+  },
+  {
+    value: 'spread',
+    key: 'p',
+    label: 'the spread of the marks',
+    hint: "the average, its range from the shortest mark's low end to the longest mark's high end",
+  },
+];
+
+/** What each rule will do, said after it is chosen. */
+const DISTANCE_RULE_NOTES: Record<string, string> = {
+  average: 'The average of the marks will be used (common practice).',
+  longest:
+    'The longest mark will be used; the report records that the average is the common practice.',
+  shortest: 'The shortest mark will be used: the cautious choice for a minimum speed.',
+  spread:
+    "The average of the marks will be the distance, and its range will run from the shortest mark's low end to the longest mark's high end, so the marks' disagreement shows in the result.",
+};
 
 /** Slide questions of analysis `i`, with segments expanded up to `segments` (the superset). */
 export function slideQuestions(
@@ -112,19 +151,13 @@ export function slideQuestions(
         title: 'Distance rule',
         prompt: 'Which slide distance should the marks give?',
         help: {
-          why: 'Common practice takes the average of the measured lengths; some investigators prefer the longest. The choice is recorded in the report.',
+          why: 'Common practice takes the average of the measured lengths. The shortest mark is the cautious choice for a minimum; the spread lets the marks disagreeing show in the range. The choice is recorded in the report.',
         },
         appliesWhen: (a) => marksAsked(a) && (count(a) ?? 0) > 1,
         defaultText: () => 'average',
-        explainChoice: (a) =>
-          choiceOf(a, `${p}.rule`) === 'longest'
-            ? 'The longest mark will be used; the report records that the average is the common practice.'
-            : 'The average of the marks will be used (common practice).',
+        explainChoice: (a) => DISTANCE_RULE_NOTES[choiceOf(a, `${p}.rule`) ?? 'average'],
       },
-      [
-        { value: 'average', key: 'a', label: 'the average (common practice)' },
-        { value: 'longest', key: 'l', label: 'the longest mark' },
-      ],
+      DISTANCE_RULE_CHOICES,
     ),
     countQuestion(
       {
@@ -198,6 +231,13 @@ export function slideQuestions(
       }),
       ...dragQuestions(sp, section, what, here),
       ...gradeQuestions(sp, section, what, here),
+      // After the segment's grade, so "the same stretch" can name the grade it shares.
+      ...testGradeQuestions(
+        sp,
+        section,
+        what,
+        (a) => here(a) && choiceOf(a, `${sp}.drag.source`) === 'test-skids',
+      ),
     );
   }
   out.push(...endQuestions(p, section, applies), ...timeDistanceQuestions(p, section, applies));

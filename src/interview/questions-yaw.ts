@@ -13,6 +13,7 @@ import { radiusFromOffsets } from '../engine/radius-offsets.js';
 import { readStations, STATIONS_SYNTAX, type StationValue } from './read-stations.js';
 import { readQuantity } from './read-quantity.js';
 import { dragQuestions } from './questions-drag.js';
+import { testGradeQuestions } from './questions-test-grade.js';
 import { bankQuestions } from './questions-grade.js';
 
 const LENGTH = { kind: 'length' as const, rule: RULES.length, range: true };
@@ -185,6 +186,12 @@ function yawQuestionsOf(
       ordinateCheck(`${p}.chord`),
     ),
     ...dragQuestions(p, section, 'the yaw marks', applies),
+    ...testGradeQuestions(
+      p,
+      section,
+      'the yaw marks',
+      (a) => applies(a) && choiceOf(a, `${p}.drag.source`) === 'test-skids',
+    ),
     ...bankQuestions(p, section, applies),
     choiceQuestion(
       {

@@ -8,7 +8,8 @@ import { parseList, parseMarksLine } from '../input/index.js';
 import { readQuantity, type QuantitySpec } from './read-quantity.js';
 
 export type ListRead =
-  { ok: true; value: Quantity[]; notice?: string } | { ok: false; message: string };
+  | { ok: true; value: Quantity[]; notice?: string; confirm?: string }
+  | { ok: false; message: string };
 
 const withNote = (value: Quantity[], converted?: string, extra?: string): ListRead => {
   const notes = [extra, converted && `converted: ${converted}`].filter((s): s is string => !!s);
@@ -34,7 +35,8 @@ export function readMarks(text: string, units: UnitSystem, count?: number): List
       ok: false,
       message: `${count} mark${count === 1 ? ' was' : 's were'} counted, ${marks.length} length${marks.length === 1 ? '' : 's'} typed; give one length per mark, or change the number of marks`,
     };
-  return withNote(marks, r.converted, extra);
+  const read = withNote(marks, r.converted, [r.shared, extra].filter(Boolean).join('; '));
+  return r.mixed && read.ok ? { ...read, confirm: `Check the marks: ${r.mixed}.` } : read;
 }
 
 /** Reads several values of one kind (sled pulls, decelerometer readings). */

@@ -7,6 +7,8 @@ import { allQuestions, questionsFor } from './questions.js';
 import { contextOf } from './answer-values.js';
 import { matchChoice } from './question-kinds.js';
 import { nextOf, nextOpenAfter, previousOf, REVIEW, validCursor } from './navigate.js';
+import { fillChanges, syncQuickLines } from './quick-sync.js';
+import { holdBack } from './hold-back.js';
 
 /** Undo keeps this many earlier states. */
 export const UNDO_LIMIT = 100;
@@ -54,6 +56,11 @@ function submit(state: InterviewState, q: Question, typed: string): InterviewSta
   const stored = q.choices && typeof r.value === 'string' ? r.value : text.trim();
   let answers: Answers = { ...state.answers, [q.id]: { text: stored, value: r.value } };
   if (r.fills) answers = withFills(answers, r.fills);
+  const changes = r.fills ? fillChanges(state.answers, answers, Object.keys(r.fills)) : [];
+  const held = holdBack(state, q.id, typed, r, changes);
+  if (held)
+    return { ...quiet(state), error: { id: q.id, text: typed, message: held, confirm: true } };
+  answers = syncQuickLines(answers, q.id);
   const next: InterviewState = {
     ...quiet(state),
     answers,
@@ -62,7 +69,10 @@ function submit(state: InterviewState, q: Question, typed: string): InterviewSta
   };
   const unitsChanged =
     q.id === 'units' && state.answers.units && state.answers.units.value !== r.value;
-  const notice = unitsChanged ? UNITS_NOTE : (r.notice ?? q.explainChoice?.(answers));
+  const applied = changes.length ? `Changed: ${changes.join('; ')}.` : undefined;
+  const notice = unitsChanged
+    ? UNITS_NOTE
+    : [r.notice, applied].filter(Boolean).join(' ') || q.explainChoice?.(answers);
   return notice ? { ...next, notice } : next;
 }
 

@@ -42,7 +42,18 @@ export interface Choice {
 
 /** Result of parsing a typed answer: the value, or the message the user sees. */
 export type ParseResult =
-  { ok: true; value: unknown; notice?: string; fills?: Answers } | { ok: false; message: string };
+  | {
+      ok: true;
+      value: unknown;
+      notice?: string;
+      fills?: Answers;
+      /**
+       * Something that looks like a slip (a list mixing feet and metres): the answer is taken only
+       * when the same text is entered again after this message was shown.
+       */
+      confirm?: string;
+    }
+  | { ok: false; message: string };
 
 /**
  * A question as data. The concrete list of questions that apply is `questionsFor(answers)`;
@@ -108,8 +119,11 @@ export interface UndoEntry {
 export interface InterviewState {
   answers: Answers;
   cursor: Cursor;
-  /** Set when the last answer was rejected; the answers are then unchanged. */
-  error?: { id: string; text: string; message: string };
+  /**
+   * Set when the last answer was rejected; the answers are then unchanged. With `confirm`, the
+   * answer was held back for a check: the same text entered again is taken.
+   */
+  error?: { id: string; text: string; message: string; confirm?: true };
   /** A one-line note for the user (a unit conversion, why a chain was picked, ...). */
   notice?: string;
   /** Most recent last; bounded in length. */

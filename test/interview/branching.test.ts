@@ -133,7 +133,7 @@ describe('branching inside an analysis', () => {
 
   it.each([
     ['t', ['a0.seg0.drag.surface', 'a0.seg0.drag.value']],
-    ['k', ['a0.seg0.drag.tests']],
+    ['k', ['a0.seg0.drag.tests', 'a0.seg0.drag.testWhere']],
     ['s', ['a0.seg0.drag.weight', 'a0.seg0.drag.pulls']],
     ['d', ['a0.seg0.drag.readings']],
     ['e', ['a0.seg0.drag.value']],

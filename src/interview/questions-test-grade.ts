@@ -1,0 +1,112 @@
+/**
+ * Where the test skids were run. A test skid with every wheel locked on a grade G_t gives
+ * S²/(C d) = f + G_t/100 (the work of friction and of gravity along the slope), so the grade of
+ * the tests is recorded (`testGrade`) and taken off to give the level drag factor; the slide's own
+ * grade is applied after it. Tests on the slide's own stretch, in its direction, have the
+ * segment's grade: with every wheel braking the two cancel, and the effective drag is the test
+ * ratio itself.
+ */
+import type { Answers, Question } from './types.js';
+import { choiceQuestion, quantityQuestion } from './question-kinds.js';
+import { choiceOf } from './answers-read.js';
+
+/** True for a slide segment's prefix (`a0.seg1`); a yaw's drag (`a2`) has no grade of its own. */
+export const isSegment = (prefix: string): boolean => /^a\d+\.seg\d+$/.test(prefix);
+
+/** Where the tests were run, for segment `prefix`: `same` stretch and direction, or `elsewhere`. */
+export const testWhere = (a: Answers, prefix: string): string | undefined =>
+  choiceOf(a, `${prefix}.drag.testWhere`);
+
+/** The segment's grade as answered, in words: "level", "3% downhill". */
+function gradeWords(a: Answers, prefix: string): string {
+  const dir = choiceOf(a, `${prefix}.grade.dir`);
+  const pct = a[`${prefix}.grade.pct`]?.text;
+  return dir === 'uphill' || dir === 'downhill' ? `${pct ?? '?'}% ${dir}` : 'level';
+}
+
+/** What "same stretch" does with the grade, for the notice after the answer. */
+function sameNote(a: Answers, prefix: string): string {
+  const g = gradeWords(a, prefix);
+  return g === 'level'
+    ? 'The tests ran on this level stretch: the test ratio is the level drag factor.'
+    : `The test ratio S²/(C d) already holds this stretch's ${g} grade: it is recorded as the tests' grade and taken off to give the level drag factor, and the segment's grade is applied once after it (with every wheel braking the two cancel).`;
+}
+
+/**
+ * The questions under test skids for drag prefix `prefix`, applying when `tests` does (the source
+ * is test skids). `what` names the surface ("segment 2", "the yaw marks").
+ */
+export function testGradeQuestions(
+  prefix: string,
+  section: string,
+  what: string,
+  tests: (a: Answers) => boolean,
+): Question[] {
+  const p = `${prefix}.drag`;
+  const segment = isSegment(prefix);
+  const elsewhere = (a: Answers) => tests(a) && (!segment || testWhere(a, prefix) === 'elsewhere');
+  const dir = `${p}.testGrade.dir`;
+  return [
+    choiceQuestion(
+      {
+        id: `${p}.testWhere`,
+        section,
+        title: `Where the tests ran, ${what}`,
+        prompt: `Were the test skids run on the same stretch as ${what}, in the direction the vehicle slid?`,
+        help: {
+          why: "A test skid on a slope gives f + G/100, not f: on the slide's own stretch and direction the grade is already in the test, and taking it off again would count it twice.",
+          how: 'Elsewhere (another stretch, or the other direction) the grade of the test stretch is asked next; level when none.',
+        },
+        appliesWhen: (a) => segment && tests(a),
+        explainChoice: (a) =>
+          testWhere(a, prefix) === 'same'
+            ? sameNote(a, prefix)
+            : "The tests' own grade is asked next and taken off the test ratio to give the level drag factor.",
+      },
+      [
+        { value: 'same', key: 's', label: 'yes: same stretch, same direction' },
+        { value: 'elsewhere', key: 'e', label: 'no: elsewhere, or the other direction' },
+      ],
+    ),
+    choiceQuestion(
+      {
+        id: dir,
+        section,
+        title: `Grade of the tests, ${what}`,
+        prompt: 'Where the test skids were run, in the direction they were run, the road goes:',
+        help: {
+          why: "The test ratio S²/(C d) is f + G/100 on a grade G: the tests' grade is taken off to give the level drag factor.",
+          how: 'Measure the slope of the test stretch along the test skids, in percent (rise over run × 100).',
+        },
+        appliesWhen: elsewhere,
+        defaultText: () => 'level',
+      },
+      [
+        { value: 'level', key: 'l', label: 'level' },
+        { value: 'uphill', key: 'u', label: 'uphill' },
+        { value: 'downhill', key: 'd', label: 'downhill' },
+      ],
+    ),
+    quantityQuestion(
+      {
+        id: `${p}.testGrade.pct`,
+        section,
+        title: `Grade percent of the tests, ${what}`,
+        prompt: 'How steep was the test stretch, in percent? (a positive number)',
+        help: {
+          why: 'Stored signed in the case as testGrade: + uphill, - downhill in the direction of the tests.',
+          how: 'e.g. 3, or 2.5-3.5 when the slope varies.',
+        },
+        appliesWhen: (a) =>
+          elsewhere(a) && (choiceOf(a, dir) === 'uphill' || choiceOf(a, dir) === 'downhill'),
+        example: '3',
+      },
+      {
+        kind: 'percent',
+        rule: { what: 'test grade', gt: 0, lt: 100 },
+        range: true,
+        noMinus: 'choose uphill or downhill above instead of typing a sign',
+      },
+    ),
+  ];
+}
