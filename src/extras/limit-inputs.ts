@@ -49,7 +49,9 @@ export function segmentLabels(c: Case, analysisId: string): string[] {
   const a = c.analyses.find((x) => x.id === analysisId);
   if (!a || a.kind !== 'skid') return [];
   return a.segments.map(
-    (s, j) => s.label ?? (s.drag.source === 'table' && s.drag.surface ? s.drag.surface : `segment ${j + 1}`),
+    (s, j) =>
+      s.label ??
+      (s.drag.source === 'table' && s.drag.surface ? s.drag.surface : `segment ${j + 1}`),
   );
 }
 
