@@ -18,7 +18,12 @@ const START_OF = {
  */
 export function phaseEnd(next: AnalysisSolution) {
   const basis = `analysis "${next.id}" (${START_OF[next.kind]}), the phase the marks ran into`;
-  const end: SlideEnd = { mode: 'speed', speed: next.speed, basis };
+  const end: SlideEnd = {
+    mode: 'speed',
+    speed: next.speed,
+    basis,
+    from: `S of analysis "${next.id}"`,
+  };
   const assumption = `The marks ran straight on into the next phase, analysis "${next.id}": ${START_OF[next.kind]} is the speed at the end of these marks, with its whole range, so that analysis’s assumptions hold for this figure too.`;
   const warnings = next.warnings.map((w) => `From "${next.id}": ${w}`);
   const first = (s: AnalysisSolution): Phase => ({

@@ -174,7 +174,7 @@ describe('the extras fields in the v1 schema', () => {
         yaw(d).chord = 36;
       }),
     ).toEqual([
-      'analyses[1].middleOrdinate: middle ordinate is required with chord (or give offsets instead)',
+      'analyses[1].middleOrdinate: middle ordinate is required with chord (or give offsets or points instead)',
     ]);
     expect(
       issuesOf((d) => {
@@ -182,7 +182,7 @@ describe('the extras fields in the v1 schema', () => {
         yaw(d).middleOrdinate = 1.6;
       }),
     ).toEqual([
-      'analyses[1].chord: chord is required with middleOrdinate (or give offsets instead)',
+      'analyses[1].chord: chord is required with middleOrdinate (or give offsets or points instead)',
     ]);
   });
 
