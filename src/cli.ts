@@ -30,7 +30,11 @@ async function sessions(flag: string | undefined) {
   return { ...resolveSessionsDir({ flag, env: process.env, prefs, cwd: process.cwd() }), prefs };
 }
 
-type Start = { kind: 'home' } | { kind: 'resume'; id?: string } | { kind: 'new' } | { kind: 'open'; path: string };
+type Start =
+  | { kind: 'home' }
+  | { kind: 'resume'; id?: string }
+  | { kind: 'new' }
+  | { kind: 'open'; path: string };
 
 async function interactive(flag: string | undefined, start: Start): Promise<number> {
   if (!process.stdin.isTTY || !process.stdout.isTTY) {
@@ -44,9 +48,14 @@ async function interactive(flag: string | undefined, start: Start): Promise<numb
 
 function program(): Command {
   const p = new Command('skidcase')
-    .description('Guided speed-from-tire-marks reconstruction: skid and yaw marks to a minimum speed with its range.')
+    .description(
+      'Guided speed-from-tire-marks reconstruction: skid and yaw marks to a minimum speed with its range.',
+    )
     .version(VERSION, '-V, --version')
-    .option('--sessions <dir>', 'folder that holds the case files (default ./sessions, or SKIDCASE_SESSIONS)')
+    .option(
+      '--sessions <dir>',
+      'folder that holds the case files (default ./sessions, or SKIDCASE_SESSIONS)',
+    )
     .showHelpAfterError()
     .action(async () => setExit(await interactive(p.opts().sessions, { kind: 'home' })));
   p.command('new')
@@ -54,12 +63,20 @@ function program(): Command {
     .action(async () => setExit(await interactive(p.opts().sessions, { kind: 'new' })));
   p.command('resume [id]')
     .description('carry on with a case (without ID: the most recently saved unfinished one)')
-    .action(async (id?: string) => setExit(await interactive(p.opts().sessions, id ? { kind: 'resume', id } : { kind: 'resume' })));
+    .action(async (id?: string) =>
+      setExit(
+        await interactive(p.opts().sessions, id ? { kind: 'resume', id } : { kind: 'resume' }),
+      ),
+    );
   p.command('open <file>')
     .description('open a case file (for example a hand-written one) in the tool')
-    .action(async (file: string) => setExit(await interactive(p.opts().sessions, { kind: 'open', path: file })));
+    .action(async (file: string) =>
+      setExit(await interactive(p.opts().sessions, { kind: 'open', path: file })),
+    );
   p.command('solve <file>')
-    .description('print the formula chain for a case file (exit 0 solved, 2 invalid file, 3 not computable)')
+    .description(
+      'print the formula chain for a case file (exit 0 solved, 2 invalid file, 3 not computable)',
+    )
     .option('--json', 'print the result as JSON')
     .action(async (file: string, o: { json?: boolean }) => {
       const { solveCommand } = await import('./commands/solve.js');
@@ -67,21 +84,33 @@ function program(): Command {
     });
   p.command('report <case>')
     .description('write the case report for a case file or a case id in the sessions folder')
-    .addOption(new Option('--format <format>', 'report format').choices(['md', 'txt', 'html', 'json']).default('md'))
-    .option('--out <path>', 'write to this file (never overwrites without --force) instead of standard output')
+    .addOption(
+      new Option('--format <format>', 'report format')
+        .choices(['md', 'txt', 'html', 'json'])
+        .default('md'),
+    )
+    .option(
+      '--out <path>',
+      'write to this file (never overwrites without --force) instead of standard output',
+    )
     .option('--force', 'overwrite --out if it exists')
-    .action(async (target: string, o: { format: 'md' | 'txt' | 'html' | 'json'; out?: string; force?: boolean }) => {
-      const where = await sessions(p.opts().sessions);
-      const { reportCommand } = await import('./commands/report.js');
-      const opts = {
-        format: o.format,
-        force: Boolean(o.force),
-        sessionsDir: where.dir,
-        reactionTime: where.prefs.reactionTime,
-        ...(o.out ? { out: o.out } : {}),
-      };
-      setExit(await reportCommand(target, opts, io));
-    });
+    .action(
+      async (
+        target: string,
+        o: { format: 'md' | 'txt' | 'html' | 'json'; out?: string; force?: boolean },
+      ) => {
+        const where = await sessions(p.opts().sessions);
+        const { reportCommand } = await import('./commands/report.js');
+        const opts = {
+          format: o.format,
+          force: Boolean(o.force),
+          sessionsDir: where.dir,
+          reactionTime: where.prefs.reactionTime,
+          ...(o.out ? { out: o.out } : {}),
+        };
+        setExit(await reportCommand(target, opts, io));
+      },
+    );
   return p;
 }
 

@@ -121,4 +121,8 @@ export const RULES = {
   sledWeight: { what: 'sled weight', gt: 0 },
   sledPull: { what: 'sled pull', gt: 0 },
   decel: { what: 'decelerometer reading', gt: 0, max: 2 },
+  /** Height of take-off above landing; negative when the vehicle landed higher. */
+  drop: { what: 'drop', min: -100_000, max: 100_000 },
+  /** Take-off path as a signed percent grade (+ upward); ±100% is ±45°. */
+  takeoffGrade: { what: 'take-off grade', gt: -100, lt: 100 },
 } satisfies Record<string, QuantityRule>;

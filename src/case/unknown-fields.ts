@@ -53,12 +53,14 @@ export const KNOWN = {
     'chord',
     'middleOrdinate',
     'offsets',
+    'points',
     'drag',
     'superelevation',
     'pathAdjustment',
   ],
+  airborne: ['id', 'kind', 'label', 'distance', 'drop', 'takeoffGrade'],
   segment: ['label', 'length', 'drag', 'grade'],
-  end: { stop: ['mode'], speed: ['mode', 'speed', 'basis'] },
+  end: { stop: ['mode'], speed: ['mode', 'speed', 'basis'], analysis: ['mode', 'analysis'] },
   quantity: ['value', 'low', 'high', 'note'],
   sampling: ['shape', 'samples', 'seed'],
   timeDistance: ['reactionTime', 'conflictAt'],
@@ -125,6 +127,9 @@ export function unknownFields(c: CaseV1): string[] {
         if (a.end.mode === 'speed') qty(a.end.speed, `${p}.end.speed`, out);
       }
       if (a.timeDistance) extra(a.timeDistance, KNOWN.timeDistance, `${p}.timeDistance`, out);
+    } else if (a.kind === 'airborne') {
+      extra(a, KNOWN.airborne, p, out);
+      for (const k of ['distance', 'drop', 'takeoffGrade'] as const) qty(a[k], `${p}.${k}`, out);
     } else {
       extra(a, KNOWN.yaw, p, out);
       qty(a.chord, `${p}.chord`, out);

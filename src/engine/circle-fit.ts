@@ -150,3 +150,22 @@ export function geometricFit(pts: readonly Point[], maxIterations = 100): Geomet
   // units, so (JᵀJ)⁻¹ needs no rescaling.
   return { circle: back(c), iterations: it, inverseNormal: inverse3(normalSystem(u, c).jtj) };
 }
+
+/**
+ * Runs of residuals of one sign along a mark, in order (zeros join the run they are in). A
+ * least-squares circle leaves at least four runs; as few as that with many points and a scatter
+ * above the reading tolerance is the smooth wave of a curvature that changes along the mark.
+ * @example signRuns([1, -1, -2, 1]) // 3
+ */
+export function signRuns(res: readonly number[]): number {
+  let runs = 0;
+  let last = 0;
+  for (const r of res) {
+    const s = Math.sign(r);
+    if (s !== 0 && s !== last) {
+      runs++;
+      last = s;
+    }
+  }
+  return runs;
+}

@@ -1,4 +1,4 @@
-import { geometricFit, geometricSsr, type Point } from './circle-fit.js';
+import { geometricFit, geometricSsr, signRuns, type Point } from './circle-fit.js';
 import { fail, ok, type Outcome, type Step } from './types.js';
 
 /** Fixed decimals for the step's text ("—" for a number that is not finite). */
@@ -66,20 +66,6 @@ function validate(chord: number, stations: readonly OffsetStation[]): Outcome<tr
       return fail(`station ${i + 1}: offset must be greater than 0`, `stations[${i}].offset`);
   }
   return ok(true);
-}
-
-/** Runs of residuals of one sign along the chord (zeros join the run they are in). */
-function signRuns(res: readonly number[]): number {
-  let runs = 0;
-  let last = 0;
-  for (const r of res) {
-    const s = Math.sign(r);
-    if (s !== 0 && s !== last) {
-      runs++;
-      last = s;
-    }
-  }
-  return runs;
 }
 
 /**

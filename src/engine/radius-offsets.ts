@@ -6,6 +6,9 @@ import type { Step } from './types.js';
 /** How closely an offset is read by default: 1/8 inch (DOMAIN.md, practitioner guidance) or 3 mm. */
 export const OFFSET_READING = { imperial: 0.125 / 12, metric: 0.003 } as const;
 
+/** How many standard errors of a fitted radius either side of it make its range (about 95%). */
+export const RADIUS_RANGE_SE = 2;
+
 export interface OffsetsRadius {
   /** The fit at the chord's value. */
   fit: OffsetsFit;
@@ -38,8 +41,8 @@ export function radiusFromOffsets(
   if (!main.ok) return main;
   const fit = main.value;
   const se = fit.radiusStdError ?? 0;
-  let low = fit.radius - 2 * se;
-  let high = fit.radius + 2 * se;
+  let low = fit.radius - RADIUS_RANGE_SE * se;
+  let high = fit.radius + RADIUS_RANGE_SE * se;
   for (const [end, c] of [
     ['low', chord.low],
     ['high', chord.high],
@@ -48,8 +51,8 @@ export function radiusFromOffsets(
     const f = fitCircleToOffsets(c, stations, opts);
     if (!f.ok)
       return fail(`with the chord at its ${end} end (${c}): ${f.reason}`, f.path ?? 'chord');
-    low = Math.min(low, f.value.radius - 2 * se);
-    high = Math.max(high, f.value.radius + 2 * se);
+    low = Math.min(low, f.value.radius - RADIUS_RANGE_SE * se);
+    high = Math.max(high, f.value.radius + RADIUS_RANGE_SE * se);
   }
   if (!(low > 0)) return fail('the offsets scatter too much to give a radius', 'stations');
   const L = units.length;
@@ -59,7 +62,7 @@ export function radiusFromOffsets(
     ...fit.step,
     low,
     high,
-    why: `${fit.step.why} The range is ± 2 standard errors of the fit (${formatNumber(se, 'length')} ${L})${spreadWords}; with few stations it understates the doubt.`,
+    why: `${fit.step.why} The range is ± ${RADIUS_RANGE_SE} standard errors of the fit (${formatNumber(se, 'length')} ${L})${spreadWords}; with few stations it understates the doubt.`,
   };
   if (chord.low !== chord.value || chord.high !== chord.value)
     step.inputs = {

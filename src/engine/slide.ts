@@ -21,7 +21,10 @@ export interface SlideSegment {
 }
 
 /** How the slide ended: at rest, or still moving at a speed found elsewhere (with its basis). */
-export type SlideEnd = { mode: 'stop' } | { mode: 'speed'; speed: Range; basis?: string };
+export type SlideEnd =
+  | { mode: 'stop' }
+  /** `from` names where the speed was taken, for the step's formula (default "given"). */
+  | { mode: 'speed'; speed: Range; basis?: string; from?: string };
 
 export interface Slide {
   /** Speed where the marks begin. */
@@ -100,7 +103,7 @@ export function slideSpeed(
     steps.push(
       makeStep({
         name: 'Speed at the end of the marks',
-        formula: 'S_end = given',
+        formula: `S_end = ${end.from ?? 'given'}`,
         substituted: `S_end = ${formatNumber(endSpeed.value, 'speed')} ${u.speed}`,
         inputs: { S_end: input(endSpeed, u.speed, end.basis) },
         result: endSpeed,

@@ -2,20 +2,25 @@ import { spread } from '../case/quantity.js';
 import type { Case } from '../case/load.js';
 import { unknownFields } from '../case/unknown-fields.js';
 import { unitsOf } from './constants.js';
+import { solveAirborne } from './solve-airborne.js';
 import { solveSkid } from './solve-skid.js';
 import { isAboveLimit } from './solution.js';
 import { solveYaw } from './solve-yaw.js';
 import type { AnalysisOutcome, CaseSolution } from './types.js';
 
 /**
- * Solves analysis i of a case: its start speed with range, the "at least" minimum (low end
- * rounded down), every step, assumptions, warnings and the model for sensitivity. A figure that
- * cannot be computed is `{ ok: false, reason, path }`, never a NaN.
- * @example
- * const r = solveAnalysis(c, 0);
- * if (r.ok) console.log(r.solution.minimum); else console.error(r.reason);
+ * Solves analysis i, first solving the analysis its marks run into (a slide's
+ * `end.analysis`), each once: `memo` keeps what is solved, `visiting` the chain so far (a loop,
+ * which the schema already refuses, fails here rather than recursing).
  */
-export function solveAnalysis(c: Case, i: number): AnalysisOutcome {
+function solveInChain(
+  c: Case,
+  i: number,
+  memo: Map<number, AnalysisOutcome>,
+  visiting: readonly number[],
+): AnalysisOutcome {
+  const known = memo.get(i);
+  if (known) return known;
   const a = c.analyses[i];
   if (!a)
     return {
@@ -25,19 +30,60 @@ export function solveAnalysis(c: Case, i: number): AnalysisOutcome {
       reason: `there is no analysis ${i + 1}`,
       path: 'analyses',
     };
-  return a.kind === 'skid' ? solveSkid(c, i, a) : solveYaw(c, i, a);
+  let r: AnalysisOutcome;
+  if (a.kind === 'skid' && a.end?.mode === 'analysis') {
+    const path = `analyses[${i}].end.analysis`;
+    const target = a.end.analysis;
+    const j = c.analyses.findIndex((x) => x.id === target);
+    const fails = (reason: string): AnalysisOutcome => ({
+      ok: false,
+      id: a.id,
+      kind: 'skid',
+      reason,
+      path,
+    });
+    if (j < 0) r = fails(`there is no analysis "${target}" in this case`);
+    else if (j === i || visiting.includes(j)) r = fails('the phases loop back on themselves');
+    else {
+      const next = solveInChain(c, j, memo, [...visiting, i]);
+      r = next.ok
+        ? solveSkid(c, i, a, next.solution)
+        : fails(
+            `the marks run into analysis "${target}", which cannot be computed: ${next.reason}`,
+          );
+    }
+  } else if (a.kind === 'skid') r = solveSkid(c, i, a);
+  else if (a.kind === 'yaw') r = solveYaw(c, i, a);
+  else r = solveAirborne(c, i, a);
+  memo.set(i, r);
+  return r;
 }
 
 /**
- * Solves every analysis of a validated case and compares with the posted limit:
- * `exceededAtMinimum` is true when some analysis's low end is above the limit. The file's unknown
- * fields become warnings naming their paths.
+ * Solves analysis i of a case: its start speed with range, the "at least" minimum (low end
+ * rounded down), every step, assumptions, warnings and the model for sensitivity. A slide that
+ * runs into another analysis takes that analysis's speed (value, low, high) as its end speed. A
+ * figure that cannot be computed is `{ ok: false, reason, path }`, never a NaN.
+ * @example
+ * const r = solveAnalysis(c, 0);
+ * if (r.ok) console.log(r.solution.minimum); else console.error(r.reason);
+ */
+export function solveAnalysis(c: Case, i: number): AnalysisOutcome {
+  return solveInChain(c, i, new Map(), []);
+}
+
+/**
+ * Solves every analysis of a validated case, each phase of a chain once and before the phase
+ * that runs into it, and compares with the posted limit: `exceededAtMinimum` is true when some
+ * analysis's low end is above the limit. The file's unknown fields become warnings naming their
+ * paths.
  * @example
  * const loaded = loadCaseText(text);
  * if (loaded.ok) solveCase(loaded.case).analyses.forEach((r) => r.ok && r.solution.speed);
  */
 export function solveCase(c: Case): CaseSolution {
-  const analyses = c.analyses.map((_, i) => solveAnalysis(c, i));
+  const memo = new Map<number, AnalysisOutcome>();
+  const analyses = c.analyses.map((_, i) => solveInChain(c, i, memo, []));
   const warnings = unknownFields(c).map(
     (path) => `${path}: not a field of the case format; kept, but not used (misspelt?)`,
   );

@@ -8,7 +8,8 @@ import { brakingEfficiency } from './efficiency.js';
 import { skidModel } from './skid-model.js';
 import { slideSpeed, type SlideEnd, type SlideSegment } from './slide.js';
 import { input, makeStep } from './step.js';
-import type { AnalysisOutcome, Range, Step } from './types.js';
+import { phaseEnd } from './phase-end.js';
+import type { AnalysisOutcome, AnalysisSolution, Range, Step } from './types.js';
 import { solvedAnalysis } from './solution.js';
 
 /** Marks and segment lengths further apart than this (relative) draw a warning. */
@@ -29,8 +30,16 @@ export const APPEARANCE_NOTES: Record<'locked' | 'abs' | 'skip' | 'gap', string 
   gap: 'Gap skid: the brakes were released and reapplied, so the gaps are not braking; only the marked parts count, each as its own segment (common practice).',
 };
 
-/** Solves one skid analysis of a case (index i) into its speed, steps, assumptions and model. */
-export function solveSkid(c: CaseV1, i: number, a: SkidV1): AnalysisOutcome {
+/**
+ * Solves one skid analysis of a case (index i) into its speed, steps, assumptions and model.
+ * `next` is the solved analysis its marks ran into, when its end is `{ mode: "analysis" }`.
+ */
+export function solveSkid(
+  c: CaseV1,
+  i: number,
+  a: SkidV1,
+  next?: AnalysisSolution,
+): AnalysisOutcome {
   const system = c.units;
   const u = unitsOf(system);
   const p = `analyses[${i}]`;
@@ -102,15 +111,22 @@ export function solveSkid(c: CaseV1, i: number, a: SkidV1): AnalysisOutcome {
   steps.push(eff.value.step);
 
   const endV = a.end ?? { mode: 'stop' as const };
-  const end: SlideEnd =
-    endV.mode === 'speed'
+  if (endV.mode === 'analysis' && !next)
+    return failed(`the analysis "${endV.analysis}" was not solved first`, `${p}.end.analysis`);
+  const chain = endV.mode === 'analysis' && next ? phaseEnd(next) : undefined;
+  const end: SlideEnd = chain
+    ? chain.end
+    : endV.mode === 'speed'
       ? { mode: 'speed', speed: spread(endV.speed), ...(endV.basis ? { basis: endV.basis } : {}) }
       : { mode: 'stop' };
   const slide = slideSpeed(segments, n, end, system);
   if (!slide.ok) return failed(slide.reason, slide.path ? `${p}.${slide.path}` : p);
   steps.push(...slide.value.steps);
 
-  if (end.mode === 'stop')
+  if (chain) {
+    assumptions.push(chain.assumption);
+    warnings.push(...chain.warnings);
+  } else if (end.mode === 'stop')
     assumptions.push(
       'The vehicle came to rest at the end of the marks. If the marks end at an impact, the figure is a minimum: energy taken by the impact is not counted.',
     );
@@ -128,7 +144,7 @@ export function solveSkid(c: CaseV1, i: number, a: SkidV1): AnalysisOutcome {
       'Grade enters as f × n + G/100 (trade approximation of f n cos θ + sin θ, under 0.5% apart below a 10% grade).',
     );
 
-  const model = skidModel(a, lengths, segments, n, end, system);
+  const own = skidModel(a, lengths, segments, n, end, system);
   const speed = slide.value.speed;
   return solvedAnalysis(a, 'skid', speed, {
     steps,
@@ -136,6 +152,16 @@ export function solveSkid(c: CaseV1, i: number, a: SkidV1): AnalysisOutcome {
     warnings,
     boundaries: slide.value.boundaries,
     distance: sumRanges(lengths),
-    model,
+    ...(chain
+      ? {
+          phases: chain.phases({
+            id: a.id,
+            kind: 'skid',
+            ...(a.label !== undefined ? { label: a.label } : {}),
+            speed,
+          }),
+        }
+      : {}),
+    model: chain ? chain.model(own) : own,
   });
 }

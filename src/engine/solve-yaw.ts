@@ -6,6 +6,7 @@ import { dragFactor } from './drag.js';
 import { solvedAnalysis } from './solution.js';
 import { exact } from './step.js';
 import { radiusFromOffsets } from './radius-offsets.js';
+import { radiusFromPoints } from './radius-points.js';
 import {
   fail,
   ok,
@@ -13,6 +14,7 @@ import {
   type AnalysisOutcome,
   type ModelInput,
   type Outcome,
+  type PointsFitSummary,
   type Range,
   type Step,
   type Units,
@@ -69,7 +71,9 @@ export function solveYaw(c: CaseV1, i: number, a: YawV1): AnalysisOutcome {
     'The full drag factor of the surface is used, not reduced by braking efficiency; if the driver braked hard during the yaw, the result is less certain.',
     C && M
       ? 'The chord and middle ordinate were taken on the first part of the outside front tire’s mark, where the vehicle first yawed, and that part is a circular arc.'
-      : 'The offsets were taken along a chord on the first part of the outside front tire’s mark, where the vehicle first yawed; the fit’s residuals check that this part is a circular arc.',
+      : a.points
+        ? 'The points were surveyed along the first part of the outside front tire’s mark, where the vehicle first yawed; the fit’s residuals check that this part is a circular arc.'
+        : 'The offsets were taken along a chord on the first part of the outside front tire’s mark, where the vehicle first yawed; the fit’s residuals check that this part is a circular arc.',
     'The critical speed is a minimum estimate for the speed where the yaw mark begins.',
   );
   if (!halfTrack)
@@ -90,10 +94,11 @@ export function solveYaw(c: CaseV1, i: number, a: YawV1): AnalysisOutcome {
     warnings,
     radius: R,
     ...(sens ? { sensitivity: sens } : {}),
+    ...(measured.value.fit ? { pointsFit: measured.value.fit } : {}),
     model:
       C && M
         ? yawModel(a, C, M, f, e, T, halfTrack, system)
-        : offsetsYawModel(a, measured.value.radius, f, e, T, halfTrack, system),
+        : fittedYawModel(a, measured.value.radius, f, e, T, halfTrack, system),
   });
 }
 
@@ -105,7 +110,19 @@ function yawRadius(
   a: YawV1,
   system: CaseV1['units'],
   u: Units,
-): Outcome<{ radius: Range; step: Step; warnings: string[]; C?: Range; M?: Range }> {
+): Outcome<{
+  radius: Range;
+  step: Step;
+  warnings: string[];
+  C?: Range;
+  M?: Range;
+  fit?: PointsFitSummary;
+}> {
+  if (a.points) {
+    const r = radiusFromPoints(a.points, system, u);
+    if (!r.ok) return fail(r.reason, r.path ?? 'points');
+    return ok(r.value);
+  }
   if (a.offsets) {
     const r = radiusFromOffsets(spread(a.offsets.chord), a.offsets.stations, system, u);
     if (!r.ok) return fail(r.reason, `offsets.${r.path ?? 'stations'}`);
@@ -113,7 +130,7 @@ function yawRadius(
   }
   // The schema guarantees chord and middleOrdinate when there are no offsets.
   if (a.chord === undefined || a.middleOrdinate === undefined)
-    return fail('give chord and middleOrdinate, or offsets', 'chord');
+    return fail('give exactly one of: chord and middleOrdinate, offsets, or points', 'chord');
   const C = spread(a.chord);
   const M = spread(a.middleOrdinate);
   const r = radiusFromChord(C, M, u);
@@ -136,8 +153,8 @@ function frictionInputs(
   return inputs;
 }
 
-/** The model of a yaw analysis measured by offsets: the fitted radius R is one input. */
-function offsetsYawModel(
+/** The model of a yaw analysis measured by offsets or points: the fitted radius R is one input. */
+function fittedYawModel(
   a: YawV1,
   R: Range,
   f: Range,
@@ -148,7 +165,7 @@ function offsetsYawModel(
 ): AnalysisModel {
   const L = unitsOf(system).length;
   const inputs: ModelInput[] = [
-    modelInput('R', 'radius from offsets', L, R),
+    modelInput('R', a.points ? 'radius from points' : 'radius from offsets', L, R),
     ...frictionInputs(a, f, e, T, halfTrack, L),
   ];
   const base = { R: R.value, f: f.value, e: e.value, T: T.value };

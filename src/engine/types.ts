@@ -95,9 +95,34 @@ export interface OrdinateSensitivity {
   text: string;
 }
 
+/** The kinds of analysis a case holds. */
+export type AnalysisKind = 'skid' | 'yaw' | 'airborne';
+
+/** One phase of a chain: the analysis and the speed where its marks (or its flight) begin. */
+export interface Phase {
+  id: string;
+  kind: AnalysisKind;
+  label?: string;
+  speed: Range;
+}
+
+/** The least-squares circle through a yaw mark's surveyed points, as the step reports it. */
+export interface PointsFitSummary {
+  radius: number;
+  /** Standard error of the radius from the scatter; undefined with exactly three points. */
+  stdError: number | undefined;
+  centre: { x: number; y: number };
+  /** Root mean square and largest (by size, signed) of the distances from the points to the circle. */
+  rms: number;
+  largest: { index: number; residual: number };
+  /** Signed distance of each point from the circle, in the order given (+ outside). */
+  residuals: number[];
+  count: number;
+}
+
 export interface AnalysisSolution {
   id: string;
-  kind: 'skid' | 'yaw';
+  kind: AnalysisKind;
   label?: string;
   speed: Range;
   /** The low end rounded down to a whole speed unit: the "at least" figure. */
@@ -112,12 +137,19 @@ export interface AnalysisSolution {
   radius?: Range;
   /** Yaw: what a 1 in / 1 cm reading error in the middle ordinate does to R and S. */
   sensitivity?: OrdinateSensitivity;
+  /** Yaw measured by surveyed points: the circle fit. */
+  pointsFit?: PointsFitSummary;
+  /**
+   * A slide whose end is another analysis: this analysis and every one it runs into, in order of
+   * travel, each with its start speed (the speed at each junction).
+   */
+  phases?: Phase[];
   model: AnalysisModel;
 }
 
 export type AnalysisOutcome =
   | { ok: true; solution: AnalysisSolution }
-  | { ok: false; id: string; kind: 'skid' | 'yaw'; reason: string; path?: string };
+  | { ok: false; id: string; kind: AnalysisKind; reason: string; path?: string };
 
 export interface CaseSolution {
   id: string;

@@ -10,14 +10,16 @@ import { isAboveLimit } from '../engine/solution.js';
 import { CAUTIONS } from './cautions.js';
 import { extrasTextLines } from './extras-text.js';
 import { solveExtras } from './solve-extras.js';
+import { KIND_NAMES } from './kind-names.js';
 import { formatRange, withUnit, type NumberKind } from './numbers.js';
+import { phasesLine } from './phases-text.js';
 
 /** The kind of number a step's result is, from its unit. */
 export function kindOfUnit(unit: string): NumberKind {
   if (unit === 'mph' || unit === 'km/h') return 'speed';
   if (unit === 'ft' || unit === 'm') return 'length';
   if (unit === 's') return 'seconds';
-  if (unit === '%') return 'percent';
+  if (unit === '%' || unit === '°') return 'percent';
   return 'drag';
 }
 
@@ -36,8 +38,6 @@ export function formatStepLines(step: Step, index: number): string[] {
     `   why: ${step.why}`,
   ];
 }
-
-const KIND_NAME = { skid: 'skid marks', yaw: 'yaw marks' } as const;
 
 /** "at least 40 mph" with the range beside it. */
 export function formatAtLeast(s: AnalysisSolution, units: Units): string {
@@ -59,7 +59,7 @@ function analysisLines(r: AnalysisOutcome, i: number, units: Units, c: Case): st
   const label = c.analyses[i]?.label;
   const id = r.ok ? r.solution.id : r.id;
   const kind = r.ok ? r.solution.kind : r.kind;
-  const head = `Analysis ${i + 1}: ${id} (${KIND_NAME[kind]})${label ? `, ${label}` : ''}`;
+  const head = `Analysis ${i + 1}: ${id} (${KIND_NAMES[kind].marks})${label ? `, ${label}` : ''}`;
   if (!r.ok) return [head, `  cannot be computed: ${r.reason}${r.path ? ` [${r.path}]` : ''}`];
   const s = r.solution;
   const out = [head];
@@ -76,6 +76,7 @@ function analysisLines(r: AnalysisOutcome, i: number, units: Units, c: Case): st
         `    ${withUnit(b.at, 'length', units.length)} ${b.label}: ${formatRange(b.speed, 'speed', units.speed)}`,
       );
   }
+  if (s.phases) out.push(`  Phases in order of travel: ${phasesLine(s.phases, units)}`);
   out.push(`  Result: ${formatAtLeast(s, units)}`);
   append(out, extrasTextLines(solveExtras(c, i, s), units));
   append(

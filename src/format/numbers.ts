@@ -68,7 +68,7 @@ export function formatNumber(n: number, kind: NumberKind): string {
 export function withUnit(n: number, kind: NumberKind, unit: string): string {
   const s = formatNumber(n, kind);
   if (!unit) return s;
-  return unit === '%' ? `${s}%` : `${s} ${unit}`;
+  return unit === '%' || unit === '°' ? `${s}${unit}` : `${s} ${unit}`;
 }
 
 /**

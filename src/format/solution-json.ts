@@ -5,7 +5,8 @@ import { extrasToJson, solveExtras } from './solve-extras.js';
 /**
  * One analysis as `solve --json` prints it: the contract's fields first, then extras. With the
  * case and the analysis's index, also `sensitivity`, `timeDistance` and `distribution`
- * (solveExtras). The yaw middle-ordinate reading check is `ordinateSensitivity`.
+ * (solveExtras). The yaw middle-ordinate reading check is `ordinateSensitivity`; a yaw from
+ * surveyed points has `pointsFit`; a slide that runs into another analysis has `phases`.
  */
 export function analysisToJson(
   s: AnalysisSolution,
@@ -25,6 +26,8 @@ export function analysisToJson(
   if (s.radius) out.radius = s.radius;
   if (s.boundaries) out.boundaries = s.boundaries;
   if (s.sensitivity) out.ordinateSensitivity = s.sensitivity;
+  if (s.pointsFit) out.pointsFit = s.pointsFit;
+  if (s.phases) out.phases = s.phases;
   if (from) Object.assign(out, extrasToJson(solveExtras(from.c, from.index, s)));
   return out;
 }

@@ -2,6 +2,7 @@
  * Answers derived from a case's fields, for a hand-written case (or one edited by hand): so it
  * can be reviewed and edited in the interview, and built again with the same figures.
  */
+import { airborneAnswers } from './airborne-answers.js';
 import { spread, type Quantity } from '../case/quantity.js';
 import type { Case } from '../case/load.js';
 import type { DragV1 } from '../case/v1/schema.js';
@@ -202,6 +203,10 @@ export function answersFromCase(c: Case): Answers {
       testGradeAnswers(put, p, a.drag);
       slopeAnswers(put, `${p}.bank`, a.superelevation, ['none', 'toward', 'away']);
       put(`${p}.path`, a.pathAdjustment ?? 'none');
+      return;
+    }
+    if (a.kind === 'airborne') {
+      airborneAnswers(put, p, a);
       return;
     }
     put(`${p}.look`, a.appearance && a.appearance !== 'locked' ? a.appearance : 'dark');

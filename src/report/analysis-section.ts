@@ -1,15 +1,21 @@
 import type { AnalysisV1 } from '../case/v1/schema.js';
-import type { AnalysisOutcome, AnalysisSolution, Step, Units } from '../engine/types.js';
+import type {
+  AnalysisKind,
+  AnalysisOutcome,
+  AnalysisSolution,
+  Step,
+  Units,
+} from '../engine/types.js';
+import { KIND_NAMES } from '../format/kind-names.js';
+import { phasesLines } from '../format/phases-text.js';
 import { formatNumber, formatRange } from '../format/numbers.js';
 import { para, list, section, table, type Block, type Section, type StepBlock } from './doc.js';
 import { dragSourceLines } from './drag-source.js';
 import { atLeastText, stepResultText } from './figures-text.js';
 
-const KIND_TITLE = { skid: 'slide (skid marks)', yaw: 'critical speed (yaw marks)' } as const;
-
 /** The analysis's heading: number, id, label and which chain it uses. */
-export function analysisTitle(i: number, a: { id: string; kind: 'skid' | 'yaw'; label?: string }) {
-  return `Analysis ${i + 1}: ${a.id}${a.label ? `, ${a.label}` : ''} — ${KIND_TITLE[a.kind]}`;
+export function analysisTitle(i: number, a: { id: string; kind: AnalysisKind; label?: string }) {
+  return `Analysis ${i + 1}: ${a.id}${a.label ? `, ${a.label}` : ''} — ${KIND_NAMES[a.kind].title}`;
 }
 
 /** Steps, one block each, numbered in the order the chain runs. */
@@ -28,6 +34,7 @@ export function stepBlocks(steps: readonly Step[]): StepBlock[] {
 /** Where each drag factor of the analysis came from. */
 function dragLines(a: AnalysisV1): string[] {
   if (a.kind === 'yaw') return dragSourceLines(a.drag, 'Lateral drag factor');
+  if (a.kind === 'airborne') return [];
   return a.segments.flatMap((s, j) =>
     dragSourceLines(
       s.drag,
@@ -71,7 +78,7 @@ export function analysisSection(
   if (!o.ok)
     return section(id, analysisTitle(i, a), [
       para(`Not computed: ${o.reason}${o.path ? ` (field ${o.path})` : ''}.`, 'strong'),
-      list(dragLines(a)),
+      ...(a.kind === 'airborne' ? [] : [list(dragLines(a))]),
     ]);
   const s = o.solution;
   const blocks: Block[] = [
@@ -82,14 +89,32 @@ export function analysisSection(
     ),
   ];
   if (s.distance)
-    blocks.push(para(`Slide distance used: ${formatRange(s.distance, 'length', units.length)}.`));
+    blocks.push(
+      para(
+        `${s.kind === 'airborne' ? 'Horizontal distance, take-off to landing' : 'Slide distance used'}: ${formatRange(s.distance, 'length', units.length)}.`,
+      ),
+    );
   if (s.radius) blocks.push(para(`Radius used: ${formatRange(s.radius, 'length', units.length)}.`));
+  const drag = dragLines(a);
   return section(id, analysisTitle(i, a), blocks, [
+    ...(s.phases
+      ? [
+          section(`${id}-phases`, 'Phases in order of travel', [
+            para(
+              'Each phase begins at the speed shown; the speed where a phase begins is the speed at the end of the one before it.',
+              'note',
+            ),
+            list(phasesLines(s.phases, units)),
+          ]),
+        ]
+      : []),
     section(`${id}-chain`, 'The chain, step by step', stepBlocks(s.steps)),
     ...(s.boundaries?.length
       ? [section(`${id}-along`, 'Speed along the slide', boundaryTable(s, units))]
       : []),
-    section(`${id}-drag`, 'Where the drag factor comes from', [list(dragLines(a))]),
+    ...(drag.length
+      ? [section(`${id}-drag`, 'Where the drag factor comes from', [list(drag)])]
+      : []),
     ...more,
     section(`${id}-assumptions`, 'Assumptions', [
       s.assumptions.length ? list(s.assumptions) : para('None recorded beyond the method itself.'),

@@ -1,6 +1,6 @@
 import type { Quantity } from '../case/quantity.js';
 import type { Case } from '../case/load.js';
-import type { DragV1, SkidV1, VehicleV1, YawV1 } from '../case/v1/schema.js';
+import type { AirborneV1, DragV1, SkidV1, VehicleV1, YawV1 } from '../case/v1/schema.js';
 import { table, type Table } from './doc.js';
 
 /** One row of the measurements table: a number (or a choice) exactly as the case file holds it. */
@@ -99,6 +99,13 @@ function yawRows(a: YawV1, speed: string, length: string): Row[] {
     // A yaw measured by offsets along the chord has its own section (offsets-section.ts).
     ...(a.chord !== undefined ? [q('Chord', a.chord, length)] : []),
     ...(a.middleOrdinate !== undefined ? [q('Middle ordinate', a.middleOrdinate, length)] : []),
+    ...(a.points ?? []).map(([x, y], k): Row => [
+      `Point ${k + 1} (x, y)`,
+      `${x}, ${y}`,
+      NO_RANGE,
+      length,
+      '',
+    ]),
     ...(a.superelevation !== undefined ? [q('Superelevation', a.superelevation, '%')] : []),
     ...dragRows('', a.drag, speed, length),
     choice('Path adjustment', a.pathAdjustment === 'half-track' ? 'half-track' : 'none'),
@@ -115,11 +122,23 @@ function skidRows(a: SkidV1, speed: string, length: string): Row[] {
     rows.push(...dragRows(sp, s.drag, speed, length));
     if (s.grade !== undefined) rows.push(q(`${sp}grade (+ up)`, s.grade, '%'));
   });
-  if (a.end?.mode === 'speed') {
+  if (a.end?.mode === 'analysis')
+    rows.push(choice('End of marks', `ran on into analysis "${a.end.analysis}"`));
+  else if (a.end?.mode === 'speed') {
     rows.push(q('Speed at end of marks', a.end.speed, speed));
     if (a.end.basis) rows.push(choice('End speed basis', a.end.basis));
   } else rows.push(choice('End of marks', 'came to rest'));
   return rows;
+}
+
+function airborneRows(a: AirborneV1, length: string): Row[] {
+  return [
+    q('Distance, take-off to first landing', a.distance, length),
+    q('Drop, take-off to landing (+ landed lower)', a.drop, length),
+    a.takeoffGrade !== undefined
+      ? q('Take-off grade (+ up)', a.takeoffGrade, '%')
+      : choice('Take-off grade', 'not given: level'),
+  ];
 }
 
 const capital = (r: Row): Row => [
@@ -147,7 +166,9 @@ export function measurementTables(c: Case, units: { length: string; speed: strin
     const rows =
       a.kind === 'yaw'
         ? yawRows(a, units.speed, units.length)
-        : skidRows(a, units.speed, units.length);
+        : a.kind === 'airborne'
+          ? airborneRows(a, units.length)
+          : skidRows(a, units.speed, units.length);
     const segs =
       a.kind === 'skid' && a.segments.length > 1
         ? `; segments: ${a.segments.map((s, j) => `${j + 1} ${s.label ?? '(no label)'}`).join(', ')}`

@@ -8,7 +8,9 @@
 import type { AnalysisSolution, CaseSolution } from '../engine/types.js';
 import { isAboveLimit } from '../engine/index.js';
 import { CAUTIONS } from '../format/cautions.js';
+import { KIND_NAMES } from '../format/kind-names.js';
 import { formatNumber, formatRange } from '../format/numbers.js';
+import { phasesLine } from '../format/phases-text.js';
 import { sensitivity } from '../extras/sensitivity.js';
 import { sensitivityBars } from '../extras/sensitivity-bars.js';
 import { pushWrapped, stepLines, type ShownLine } from './review-step.js';
@@ -45,6 +47,10 @@ function analysisLines(
     tone: 'result',
     bold: true,
   });
+  if (s.phases)
+    pushWrapped(out, `Phases in order of travel: ${phasesLine(s.phases, sol.units)}`, width, '  ', {
+      tone: 'result',
+    });
   for (const n of ctx?.notes?.[s.id] ?? [])
     pushWrapped(out, `! ${n}`, width, '  ', { tone: 'warning', bold: true });
   if (sol.postedLimit) {
@@ -87,7 +93,7 @@ export function glanceLines(sol: CaseSolution, width: number): ShownLine[] {
   if (sol.analyses.length === 0) return [];
   const out: ShownLine[] = [{ text: 'At a glance', bold: true, tone: 'heading' }];
   sol.analyses.forEach((a, i) => {
-    const kind = (a.ok ? a.solution.kind : a.kind) === 'skid' ? 'slide' : 'critical speed';
+    const kind = KIND_NAMES[a.ok ? a.solution.kind : a.kind].short;
     const what = a.ok
       ? `${atLeast(a.solution, sol.units.speed)}; ${formatRange(a.solution.speed, 'speed', sol.units.speed)}`
       : 'cannot be computed, the reason is below';
@@ -116,7 +122,7 @@ export function reviewLines(sol: CaseSolution, width: number, ctx?: ReviewContex
   const out: ShownLine[] = glanceLines(sol, width);
   sol.analyses.forEach((a, i) => {
     const head = a.ok ? a.solution : a;
-    const kind = head.kind === 'skid' ? 'slide' : 'critical speed (yaw)';
+    const kind = KIND_NAMES[head.kind].heading;
     const label = a.ok && a.solution.label ? ` · ${a.solution.label}` : '';
     pushWrapped(out, `Analysis ${i + 1} · ${kind} · ${head.id}${label}`, width, '', {
       tone: 'heading',

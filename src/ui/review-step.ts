@@ -1,6 +1,7 @@
 /** Lines of one step of a chain and wrapped text, shared by the review's parts. */
 import type { Step } from '../engine/types.js';
-import { formatRange, type NumberKind } from '../format/numbers.js';
+import { kindOfUnit } from '../format/chain-text.js';
+import { formatRange } from '../format/numbers.js';
 import { wrap } from '../report/wrap.js';
 import type { TONE } from './theme.js';
 
@@ -11,15 +12,8 @@ export interface ShownLine {
   bold?: boolean;
 }
 
-/** Number style for a step's unit: speeds 1 dp, lengths by size, unitless factors 2 dp. */
-export function kindForUnit(unit: string): NumberKind {
-  if (unit === 'mph' || unit === 'km/h') return 'speed';
-  if (unit === 'ft' || unit === 'm') return 'length';
-  if (unit === '%') return 'percent';
-  if (unit === 's') return 'seconds';
-  // Unitless figures in a chain are drag factors and braking efficiencies: both 2 dp.
-  return 'drag';
-}
+/** Number style for a step's unit: the one rule `solve` and the report use too. */
+export const kindForUnit = kindOfUnit;
 
 /** Appends `text` wrapped to `width`, its first line after `indent`, the rest two further in. */
 export function pushWrapped(

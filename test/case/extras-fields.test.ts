@@ -163,10 +163,10 @@ describe('the extras fields in the v1 schema', () => {
 
   it('a yaw analysis needs exactly one way of measuring the arc', () => {
     expect(issuesOf((d) => Object.assign(yaw(d), { chord: 36, middleOrdinate: 1.6 }))).toEqual([
-      'analyses[1].offsets: give either chord and middleOrdinate, or offsets, not both',
+      'analyses[1].offsets: give exactly one of: chord and middleOrdinate, offsets, or points',
     ]);
     expect(issuesOf((d) => delete yaw(d).offsets)).toEqual([
-      'analyses[1].chord: give chord and middleOrdinate, or offsets',
+      'analyses[1].chord: give exactly one of: chord and middleOrdinate, offsets, or points',
     ]);
     expect(
       issuesOf((d) => {
@@ -174,7 +174,7 @@ describe('the extras fields in the v1 schema', () => {
         yaw(d).chord = 36;
       }),
     ).toEqual([
-      'analyses[1].middleOrdinate: middle ordinate is required with chord (or give offsets instead)',
+      'analyses[1].middleOrdinate: middle ordinate is required with chord (or give offsets or points instead)',
     ]);
     expect(
       issuesOf((d) => {
@@ -182,7 +182,7 @@ describe('the extras fields in the v1 schema', () => {
         yaw(d).middleOrdinate = 1.6;
       }),
     ).toEqual([
-      'analyses[1].chord: chord is required with middleOrdinate (or give offsets instead)',
+      'analyses[1].chord: chord is required with middleOrdinate (or give offsets or points instead)',
     ]);
   });
 
@@ -213,7 +213,7 @@ describe('solve on a file with both ways of measuring a yaw mark', () => {
       expect(r.code).toBe(2);
       expect(r.out).toBe('');
       expect(r.err).toContain(
-        'analyses[1].offsets: give either chord and middleOrdinate, or offsets, not both',
+        'analyses[1].offsets: give exactly one of: chord and middleOrdinate, offsets, or points',
       );
     }
   });

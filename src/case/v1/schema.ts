@@ -1,6 +1,13 @@
 import { z } from 'zod';
 import { quantity, RULES } from '../quantity.js';
 import { offsetsFieldV1, samplingFieldV1, timeDistanceFieldV1 } from './extras-fields.js';
+import {
+  airborneV1,
+  analysisId,
+  chainIssues,
+  endAnalysisV1,
+  pointsFieldV1,
+} from './phase-fields.js';
 
 /** Case file version 1: the contract in docs/case-file.md. Unknown fields are kept (loose objects). */
 
@@ -164,18 +171,10 @@ export const endV1 = z.discriminatedUnion(
       speed: q(RULES.speed),
       basis: text('basis').optional(),
     }),
+    endAnalysisV1,
   ],
-  { error: 'end.mode must be stop or speed' },
+  { error: 'end.mode must be stop, speed or analysis' },
 );
-
-// The contract leaves analysis ids free; they only need to tell analyses apart and print cleanly
-// (file names made from them are sanitised where they are written).
-const analysisId = z
-  .string(need('id', 'text'))
-  .min(1, 'id must not be empty')
-  .max(64, 'id must be at most 64 characters')
-  // eslint-disable-next-line no-control-regex
-  .regex(/^[^\u0000-\u001f\u007f]*$/, 'id must not contain control characters');
 
 export const skidV1 = z.looseObject({
   id: analysisId,
@@ -204,10 +203,11 @@ export const yawV1 = z.looseObject({
   id: analysisId,
   kind: z.literal('yaw'),
   label: text('label').optional(),
-  // Either chord + middleOrdinate, or offsets: exactly one way (checked in caseV1's refinement).
+  // Chord + middleOrdinate, offsets or points: exactly one way (checked in caseV1's refinement).
   chord: q(RULES.length).optional(),
   middleOrdinate: q({ ...RULES.length, what: 'middle ordinate' }).optional(),
   offsets: offsetsFieldV1.optional(),
+  points: pointsFieldV1.optional(),
   drag: dragV1,
   superelevation: q(RULES.superelevation).optional(),
   pathAdjustment: z
@@ -215,28 +215,30 @@ export const yawV1 = z.looseObject({
     .optional(),
 });
 
-export const analysisV1 = z.discriminatedUnion('kind', [skidV1, yawV1], {
-  error: 'kind must be skid or yaw',
+export const analysisV1 = z.discriminatedUnion('kind', [skidV1, yawV1, airborneV1], {
+  error: 'kind must be skid, yaw or airborne',
 });
 
 type Ctx = z.core.$RefinementCtx<unknown>;
 
+const ONE_WAY = 'give exactly one of: chord and middleOrdinate, offsets, or points';
+
 /**
- * A yaw analysis is measured one way: chord + middleOrdinate, or offsets. Neither, both, or half
- * of the first way is an issue naming the field; stations must lie inside the chord (its low end,
- * so that every corner of the chord's range is a valid fit).
+ * A yaw analysis is measured one way: chord + middleOrdinate, offsets, or points. None, more than
+ * one, or half of the first way is an issue naming the field; stations must lie inside the chord
+ * (its low end, so that every corner of the chord's range is a valid fit).
  */
 function yawMeasureIssues(a: z.infer<typeof yawV1>, i: number, ctx: Ctx) {
   const path = (...rest: (string | number)[]) => ['analyses', i, ...rest];
   const hasC = a.chord !== undefined;
   const hasM = a.middleOrdinate !== undefined;
+  if (a.points !== undefined) {
+    if (hasC || hasM || a.offsets !== undefined)
+      ctx.addIssue({ code: 'custom', path: path('points'), message: ONE_WAY });
+    return;
+  }
   if (a.offsets !== undefined) {
-    if (hasC || hasM)
-      ctx.addIssue({
-        code: 'custom',
-        path: path('offsets'),
-        message: 'give either chord and middleOrdinate, or offsets, not both',
-      });
+    if (hasC || hasM) ctx.addIssue({ code: 'custom', path: path('offsets'), message: ONE_WAY });
     // Only against a chord that passed its own checks (its issue is already reported).
     const C = endsOf(a.offsets.chord);
     if (C && C.low > 0 && C.low <= C.value)
@@ -254,19 +256,19 @@ function yawMeasureIssues(a: z.infer<typeof yawV1>, i: number, ctx: Ctx) {
     ctx.addIssue({
       code: 'custom',
       path: path('chord'),
-      message: 'give chord and middleOrdinate, or offsets',
+      message: ONE_WAY,
     });
   else if (!hasC)
     ctx.addIssue({
       code: 'custom',
       path: path('chord'),
-      message: 'chord is required with middleOrdinate (or give offsets instead)',
+      message: 'chord is required with middleOrdinate (or give offsets or points instead)',
     });
   else if (!hasM)
     ctx.addIssue({
       code: 'custom',
       path: path('middleOrdinate'),
-      message: 'middle ordinate is required with chord (or give offsets instead)',
+      message: 'middle ordinate is required with chord (or give offsets or points instead)',
     });
 }
 
@@ -335,7 +337,7 @@ export const caseV1 = z
                 message: 'length is required when there are several segments',
               });
           });
-      } else {
+      } else if (a.kind === 'yaw') {
         if (a.pathAdjustment === 'half-track' && c.vehicle.trackWidth === undefined)
           ctx.addIssue({
             code: 'custom',
@@ -366,6 +368,7 @@ export const caseV1 = z
         }
       }
     });
+    for (const issue of chainIssues(c.analyses)) ctx.addIssue({ code: 'custom', ...issue });
     if (c.vehicle.brakes?.mode === 'wheels' && c.vehicle.frontAxleShare === undefined)
       ctx.addIssue({
         code: 'custom',
@@ -388,3 +391,4 @@ export type {
   OffsetStationV1,
 } from './extras-fields.js';
 export type AnalysisV1 = z.infer<typeof analysisV1>;
+export type { AirborneV1, EndAnalysisV1 } from './phase-fields.js';
