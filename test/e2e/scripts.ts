@@ -161,6 +161,10 @@ export const OTHER_SOURCES: Script = {
   'a0.surfaces': 'one',
   'a0.seg0.drag.source': 'test-skids',
   'a0.seg0.drag.tests': '30/42, 32/47.5',
+  // Tests run elsewhere, on a 1% upgrade: the level drag factor takes that 1% off the test ratio.
+  'a0.seg0.drag.testWhere': 'elsewhere',
+  'a0.seg0.drag.testGrade.dir': 'uphill',
+  'a0.seg0.drag.testGrade.pct': '1',
   'a0.seg0.grade.dir': 'uphill',
   'a0.seg0.grade.pct': '2',
   'a0.end': 'speed',

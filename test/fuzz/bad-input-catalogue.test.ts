@@ -48,6 +48,7 @@ const TRAITS: Record<string, Traits> = {
   'drag.weight': { single: true },
   'drag.pulls': { single: true },
   'a#.seg#.grade.pct': { unsigned: true },
+  'drag.testGrade.pct': { unsigned: true },
   'a#.end.speed': { zeroOk: true },
   'a#.chord': {},
   'a#.ordinate': {},

@@ -120,7 +120,7 @@ describe('files written before testGrade solve to the same figures', () => {
     const before = await solve(c);
     const level = structuredClone(c);
     const drags: Json[] = level.analyses.flatMap((a: Json) =>
-      a.kind === 'skid' ? a.segments.map((s: Json) => s.drag) : [a.drag],
+      a.kind === 'skid' ? a.segments.map((s: Json) => s.drag) : a.kind === 'yaw' ? [a.drag] : [],
     );
     for (const d of drags) if (d.source === 'test-skids') d.testGrade = 0;
     const after = await solve(level);
@@ -128,6 +128,13 @@ describe('files written before testGrade solve to the same figures', () => {
     if (before.code !== 0) return;
     const [b, a] = [JSON.parse(before.out), JSON.parse(after.out)];
     expect(a.analyses.map((x: Json) => x.speed)).toEqual(b.analyses.map((x: Json) => x.speed));
+    // The contract oracle reads skids that end at rest or at a speed, and yaws by chord or offsets;
+    // chains, airborne analyses and surveyed points have their own checks (chain, airborne, points tests).
+    const oracleReads = c.analyses.every(
+      (x: Json) =>
+        (x.kind === 'skid' && x.end?.mode !== 'analysis') || (x.kind === 'yaw' && !x.points),
+    );
+    if (!oracleReads) return;
     const o = oracleCase(c);
     b.analyses.forEach((x: Json, i: number) => {
       if (o.analyses[i]?.speed) expect(x.speed.low).toBeCloseTo(o.analyses[i]!.speed!.low, 9);
