@@ -2,6 +2,7 @@ import { spread } from '../case/quantity.js';
 import type { CaseV1, SkidV1 } from '../case/v1/schema.js';
 import { formatNumber } from '../format/numbers.js';
 import { unitsOf } from './constants.js';
+import { dragAboveOne, marksDisagree } from './plausibility.js';
 import { slideDistanceFromMarks } from './distance.js';
 import { dragFactor } from './drag.js';
 import { brakingEfficiency } from './efficiency.js';
@@ -57,6 +58,8 @@ export function solveSkid(
   warnings.push(...eff.value.warnings);
 
   const marks = (a.marks ?? []).map(spread);
+  const disagree = marksDisagree(marks, u);
+  if (disagree) warnings.push(disagree);
   const rule = a.distanceRule ?? 'average';
   const fromMarks = marks.length > 0 ? slideDistanceFromMarks(marks, rule, u) : undefined;
   const singleFromMarks = a.segments.length === 1 && a.segments[0]!.length === undefined;
@@ -97,6 +100,11 @@ export function solveSkid(
     const d = dragFactor(s.drag, system);
     if (!d.ok) return failed(d.reason, `${p}.segments[${j}].drag`);
     const label = s.label ?? (s.drag.source === 'table' ? s.drag.surface : undefined);
+    const high = dragAboveOne(
+      d.value.f,
+      a.segments.length > 1 ? `segment ${j + 1}${label ? ` (${label})` : ''}` : 'the slide',
+    );
+    if (high) warnings.push(high);
     const step = d.value.step;
     steps.push(
       a.segments.length > 1

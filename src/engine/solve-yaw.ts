@@ -3,6 +3,7 @@ import { modelInput } from './model-input.js';
 import type { CaseV1, YawV1 } from '../case/v1/schema.js';
 import { unitsOf } from './constants.js';
 import { dragFactor } from './drag.js';
+import { dragAboveOne, radiusTooTight } from './plausibility.js';
 import { solvedAnalysis } from './solution.js';
 import { exact } from './step.js';
 import { radiusFromOffsets } from './radius-offsets.js';
@@ -41,6 +42,8 @@ export function solveYaw(c: CaseV1, i: number, a: YawV1): AnalysisOutcome {
   steps.push(measured.value.step);
   warnings.push(...measured.value.warnings);
   let R = measured.value.radius;
+  const tightMark = radiusTooTight(R, 'of the mark', u);
+  if (tightMark) warnings.push(tightMark);
 
   const halfTrack = a.pathAdjustment === 'half-track';
   let T: Range = exact(0);
@@ -55,6 +58,8 @@ export function solveYaw(c: CaseV1, i: number, a: YawV1): AnalysisOutcome {
     if (!pr.ok) return failed(pr.reason, pr.path);
     steps.push(pr.value.step);
     R = pr.value.radius;
+    const tightPath = tightMark ? undefined : radiusTooTight(R, 'of the path', u);
+    if (tightPath) warnings.push(tightPath);
   }
 
   const d = dragFactor(a.drag, system);
@@ -62,6 +67,8 @@ export function solveYaw(c: CaseV1, i: number, a: YawV1): AnalysisOutcome {
   steps.push(d.value.step);
   assumptions.push(...d.value.notes);
   const f = d.value.f;
+  const high = dragAboveOne(f, 'the yaw');
+  if (high) warnings.push(high);
   const e = spread(a.superelevation ?? 0);
   const s = criticalSpeed(R, f, e, system);
   if (!s.ok) return failed(s.reason, `${p}.superelevation`);
