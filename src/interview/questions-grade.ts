@@ -10,6 +10,17 @@ import { steepDownhillNote } from './grade-check.js';
 
 const PERCENT = { what: 'percent', gt: 0, lt: 100 };
 
+/** The direction of a grade, along the direction of travel (or of the tests). */
+export const SLOPE_CHOICES = [
+  { value: 'level', key: 'l', label: 'level' },
+  { value: 'uphill', key: 'u', label: 'uphill' },
+  { value: 'downhill', key: 'd', label: 'downhill' },
+];
+
+/** True when the direction question `dir` was answered uphill or downhill: its percent is asked. */
+export const sloped = (a: Answers, dir: string): boolean =>
+  choiceOf(a, dir) === 'uphill' || choiceOf(a, dir) === 'downhill';
+
 export function gradeQuestions(
   prefix: string,
   section: string,
@@ -31,11 +42,7 @@ export function gradeQuestions(
         appliesWhen: applies,
         defaultText: () => 'level',
       },
-      [
-        { value: 'level', key: 'l', label: 'level' },
-        { value: 'uphill', key: 'u', label: 'uphill' },
-        { value: 'downhill', key: 'd', label: 'downhill' },
-      ],
+      SLOPE_CHOICES,
     ),
     quantityQuestion(
       {
@@ -47,8 +54,7 @@ export function gradeQuestions(
           why: 'Stored signed in the case: + uphill, - downhill.',
           how: 'e.g. 3, or 2.5-3.5 when the slope varies.',
         },
-        appliesWhen: (a) =>
-          applies(a) && (choiceOf(a, dir) === 'uphill' || choiceOf(a, dir) === 'downhill'),
+        appliesWhen: (a) => applies(a) && sloped(a, dir),
         example: '3',
       },
       {

@@ -9,6 +9,7 @@
 import type { Answers, Question } from './types.js';
 import { choiceQuestion, quantityQuestion } from './question-kinds.js';
 import { choiceOf } from './answers-read.js';
+import { SLOPE_CHOICES, sloped } from './questions-grade.js';
 
 /** True for a slide segment's prefix (`a0.seg1`); a yaw's drag (`a2`) has no grade of its own. */
 export const isSegment = (prefix: string): boolean => /^a\d+\.seg\d+$/.test(prefix);
@@ -81,11 +82,7 @@ export function testGradeQuestions(
         appliesWhen: elsewhere,
         defaultText: () => 'level',
       },
-      [
-        { value: 'level', key: 'l', label: 'level' },
-        { value: 'uphill', key: 'u', label: 'uphill' },
-        { value: 'downhill', key: 'd', label: 'downhill' },
-      ],
+      SLOPE_CHOICES,
     ),
     quantityQuestion(
       {
@@ -97,8 +94,7 @@ export function testGradeQuestions(
           why: 'Stored signed in the case as testGrade: + uphill, - downhill in the direction of the tests.',
           how: 'e.g. 3, or 2.5-3.5 when the slope varies.',
         },
-        appliesWhen: (a) =>
-          elsewhere(a) && (choiceOf(a, dir) === 'uphill' || choiceOf(a, dir) === 'downhill'),
+        appliesWhen: (a) => elsewhere(a) && sloped(a, dir),
         example: '3',
       },
       {
