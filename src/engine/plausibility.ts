@@ -3,6 +3,7 @@
  * or undefined when the figure is within what the trade expects. The figure is still computed.
  */
 import { formatNumber } from '../format/numbers.js';
+import type { DistanceRule } from './distance.js';
 import type { Range, Units } from './types.js';
 
 /** Above this, a drag factor is beyond what ordinary tires reach on a road (common practice). */
@@ -26,14 +27,23 @@ export function dragAboveOne(f: Range, where: string): string | undefined {
  * Marks whose longest value is more than 1.25 times the shortest.
  * @example marksDisagree([{ value: 60, ... }, { value: 80, ... }], units) // "The marks …"
  */
-export function marksDisagree(marks: readonly Range[], units: Units): string | undefined {
+export function marksDisagree(
+  marks: readonly Range[],
+  units: Units,
+  rule?: DistanceRule,
+): string | undefined {
   if (marks.length < 2) return undefined;
   const values = marks.map((m) => m.value);
   const shortest = values.reduce((a, b) => Math.min(a, b));
   const longest = values.reduce((a, b) => Math.max(a, b));
   if (!(shortest > 0) || !(longest > MARKS_SPREAD_RATIO * shortest)) return undefined;
   const L = units.length;
-  return `The marks differ by more than a quarter of their length (shortest ${formatNumber(shortest, 'length')} ${L}, longest ${formatNumber(longest, 'length')} ${L}): check that each was measured to the same end point, and consider the distance rule "spread" so their disagreement shows in the range.`;
+  // With the spread rule already chosen, the disagreement is in the range: say so, not to choose it.
+  const range =
+    rule === 'spread'
+      ? 'the distance rule "spread" already carries their disagreement into the range'
+      : 'consider the distance rule "spread" so their disagreement shows in the range';
+  return `The marks differ by more than a quarter of their length (shortest ${formatNumber(shortest, 'length')} ${L}, longest ${formatNumber(longest, 'length')} ${L}): check that each was measured to the same end point; ${range}.`;
 }
 
 /**

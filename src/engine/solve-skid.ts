@@ -58,7 +58,7 @@ export function solveSkid(
   warnings.push(...eff.value.warnings);
 
   const marks = (a.marks ?? []).map(spread);
-  const disagree = marksDisagree(marks, u);
+  const disagree = marksDisagree(marks, u, a.distanceRule);
   if (disagree) warnings.push(disagree);
   const rule = a.distanceRule ?? 'average';
   const fromMarks = marks.length > 0 ? slideDistanceFromMarks(marks, rule, u) : undefined;

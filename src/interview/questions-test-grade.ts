@@ -59,10 +59,11 @@ export function testGradeQuestions(
           how: 'Elsewhere (another stretch, or the other direction) the grade of the test stretch is asked next; level when none.',
         },
         appliesWhen: (a) => segment && tests(a),
+        // Before an answer the highlighted choice (same stretch) is the one explained.
         explainChoice: (a) =>
-          testWhere(a, prefix) === 'same'
-            ? sameNote(a, prefix)
-            : "The tests' own grade is asked next and taken off the test ratio to give the level drag factor.",
+          testWhere(a, prefix) === 'elsewhere'
+            ? "The tests' own grade is asked next and taken off the test ratio to give the level drag factor."
+            : sameNote(a, prefix),
       },
       [
         { value: 'same', key: 's', label: 'yes: same stretch, same direction' },

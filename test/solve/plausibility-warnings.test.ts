@@ -89,6 +89,17 @@ describe.each(CASES)('%s', (name, c, warning) => {
   });
 });
 
+describe('marks apart under the spread rule', () => {
+  it('says the range already carries their disagreement, instead of suggesting the rule', async () => {
+    const file = join(dir, 'spread.json');
+    const a = { ...skid([60, 80], entered(0.7)), distanceRule: 'spread' };
+    writeFileSync(file, JSON.stringify(kase('spread', 'imperial', [a])));
+    const w = JSON.parse((await runSolve(file, true)).out).analyses[0].warnings.join(' ');
+    expect(w).toMatch(/marks differ.*"spread" already carries their disagreement/);
+    expect(w).not.toMatch(/consider the distance rule/);
+  });
+});
+
 describe('a plausible case', () => {
   it('draws none of these warnings', async () => {
     const file = join(dir, 'plain.json');
