@@ -83,7 +83,7 @@ export function App(props: AppProps) {
   // The footer is one line at any width; one more while leaving (the note).
   const footerRows = model.leaving ? 2 : 1;
   const banner = s?.open.readOnly ? 2 : 0;
-  const body = height - footerRows - banner - (s ? 2 : 0);
+  const body = height - footerRows - banner - (s ? 2 : 0) - (s?.saveNote ? 1 : 0);
 
   const review = useMemo((): ShownLine[] => {
     if (!s || question) return [];
@@ -198,6 +198,7 @@ export function App(props: AppProps) {
           savedAt={s.savedAt}
           lastSaved={s.open.isNew ? undefined : s.open.case.updated}
           saveError={s.saveError}
+          saveNote={s.saveNote}
           readOnly={!!s.open.readOnly}
         />
       ) : null}

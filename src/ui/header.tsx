@@ -13,6 +13,8 @@ export interface HeaderProps {
   /** When the case file was last written, before this session (ISO time), for a case reopened. */
   lastSaved?: string | undefined;
   saveError?: string | undefined;
+  /** What the last save did beside writing (a file moved aside, a copy made): one line. */
+  saveNote?: string | undefined;
   readOnly: boolean;
 }
 
@@ -53,6 +55,11 @@ export function Header(p: HeaderProps) {
       <Text wrap="truncate">
         {p.section} · {p.progress.answered} of {p.progress.applicable} answered · {p.mode} mode
       </Text>
+      {p.saveNote ? (
+        <Text color={TONE.warning} wrap="truncate-end">
+          {p.saveNote}
+        </Text>
+      ) : null}
     </Box>
   );
 }

@@ -6,12 +6,25 @@
 import type { Key } from 'ink';
 
 /** Where a binding is live. `question` is the interview screen; `choice` adds to it for choices. */
-export type KeyContext = 'home' | 'question' | 'choice' | 'review' | 'jump' | 'help' | 'path';
+export type KeyContext =
+  | 'home'
+  | 'question'
+  | 'choice'
+  | 'review'
+  | 'jump'
+  | 'help'
+  | 'path'
+  /** The case file was changed outside skidcase: the three ways on. */
+  | 'conflict';
 
 /** What a key asks for; the app maps each command to an action. */
 export type Command =
   | 'help'
   | 'save-leave'
+  | 'save-now'
+  | 'load-theirs'
+  | 'keep-mine'
+  | 'copy-mine'
   | 'quit'
   | 'submit'
   | 'back'
@@ -67,7 +80,15 @@ export interface KeyBinding {
 const ctrl = (name: string): KeySpec => ({ name, ctrl: true });
 const plain = (name: string): KeySpec => ({ name });
 
-const EVERYWHERE: KeyContext[] = ['home', 'question', 'choice', 'review', 'jump', 'path'];
+const EVERYWHERE: KeyContext[] = [
+  'home',
+  'question',
+  'choice',
+  'review',
+  'jump',
+  'path',
+  'conflict',
+];
 const CASE: KeyContext[] = ['question', 'choice', 'review'];
 
 export const KEY_TABLE: readonly KeyBinding[] = [
@@ -274,6 +295,46 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     label: 'case list',
     description: 'Save the case and go back to the list of cases',
     when: CASE,
+  },
+  {
+    command: 'save-now',
+    keys: [ctrl('s')],
+    label: 'save now',
+    description:
+      'Save now (again, after a save failed). In a read-only window it saves the answers as a new case under a new id',
+    when: CASE,
+    footer: CASE,
+    rank: 7,
+  },
+  {
+    command: 'load-theirs',
+    keys: [plain('l')],
+    label: 'load theirs',
+    description:
+      'Changed-file choice: load the version changed outside skidcase (answers given here since the last save are dropped)',
+    when: ['conflict'],
+    footer: ['conflict'],
+    rank: 1,
+  },
+  {
+    command: 'keep-mine',
+    keys: [plain('k')],
+    label: 'keep mine',
+    description:
+      'Changed-file choice: save these answers over it (the other version is kept beside it)',
+    when: ['conflict'],
+    footer: ['conflict'],
+    rank: 1,
+  },
+  {
+    command: 'copy-mine',
+    keys: [plain('c')],
+    label: 'mine as a copy',
+    description:
+      'Changed-file choice: save these answers as a new case under a new id, leaving that file as it is',
+    when: ['conflict'],
+    footer: ['conflict'],
+    rank: 1,
   },
 ];
 

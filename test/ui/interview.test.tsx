@@ -75,7 +75,7 @@ describe('interview screen', () => {
 
   it('keeps answers in memory and says so when a save fails', async () => {
     const app = renderApp({
-      services: (s) => ({ ...s, saveCase: async () => ({ ok: false, message: 'disk is full' }) }),
+      services: (s) => ({ ...s, saveCase: () => ({ ok: false, message: 'disk is full' }) }),
     });
     await app.waitText('No cases here yet');
     await app.press('n', 'Case or report reference');
@@ -86,7 +86,7 @@ describe('interview screen', () => {
 
   it('does not leave with unsaved answers until asked twice', async () => {
     const app = renderApp({
-      services: (s) => ({ ...s, saveCase: async () => ({ ok: false, message: 'disk is full' }) }),
+      services: (s) => ({ ...s, saveCase: () => ({ ok: false, message: 'disk is full' }) }),
     });
     await app.waitText('No cases here yet');
     await app.press('n', 'Case or report reference');
