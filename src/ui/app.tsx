@@ -207,7 +207,8 @@ export function App(props: AppProps) {
         context={ctx}
         width={width}
         omit={ctx === 'home' && model.home.rows?.length === 0 ? ['submit'] : []}
-        note={model.leaving ? 'Saving and leaving…' : undefined}
+        note={model.leaving ? (s?.open.readOnly ? 'Leaving…' : 'Saving and leaving…') : undefined}
+        readOnly={!!s?.open.readOnly}
       />
     </Box>
   );

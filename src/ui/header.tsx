@@ -34,10 +34,10 @@ export function localTime(iso: string): string {
 
 /** Top line of a case screen: which case, where in it, how far, and the save status. */
 export function Header(p: HeaderProps) {
-  const status = p.readOnly
-    ? 'not saved (read-only)'
-    : p.saveError
-      ? p.saveError
+  const status = p.saveError
+    ? p.saveError
+    : p.readOnly
+      ? 'not saved (read-only)'
       : p.savedAt
         ? savedText(p.savedAt)
         : p.lastSaved

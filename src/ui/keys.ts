@@ -73,6 +73,8 @@ export interface KeyBinding {
    * always kept). Table order breaks ties.
    */
   rank?: number;
+  /** The footer label in a read-only window, where the key cannot save (Ctrl+Q only leaves). */
+  labelReadOnly?: string;
   /** A footer label for one context where the key does something else (Enter opens a case). */
   labelIn?: Partial<Record<KeyContext, string>>;
 }
@@ -106,6 +108,7 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     command: 'save-leave',
     keys: [ctrl('q'), ctrl('c')],
     label: 'save & leave',
+    labelReadOnly: 'leave (not saved)',
     description: 'Save the case and leave skidcase',
     when: [...EVERYWHERE, 'help'],
     footer: CASE,
@@ -300,6 +303,7 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     command: 'save-now',
     keys: [ctrl('s')],
     label: 'save now',
+    labelReadOnly: 'save as new case',
     description:
       'Save now (again, after a save failed). In a read-only window it saves the answers as a new case under a new id',
     when: CASE,
@@ -395,8 +399,9 @@ export function footerBindings(ctx: KeyContext): KeyBinding[] {
 }
 
 /** One footer hint: the binding's first key and its label for the context, e.g. `Ctrl+B back`. */
-export function footerHint(b: KeyBinding, ctx: KeyContext): string {
-  return `${keyLabel(b.keys[0]!)} ${b.labelIn?.[ctx] ?? b.label}`;
+export function footerHint(b: KeyBinding, ctx: KeyContext, readOnly = false): string {
+  const label = (readOnly ? b.labelReadOnly : undefined) ?? b.labelIn?.[ctx] ?? b.label;
+  return `${keyLabel(b.keys[0]!)} ${label}`;
 }
 
 /** Columns between two footer hints. */
@@ -412,18 +417,19 @@ export function footerLine(
   ctx: KeyContext,
   width: number,
   omit: readonly Command[] = [],
+  readOnly = false,
 ): string[] {
   const all = footerBindings(ctx).filter((b) => !omit.includes(b.command));
   const byRank = [...all].sort((x, y) => (x.rank ?? 9) - (y.rank ?? 9));
   const kept = new Set<KeyBinding>();
   let used = 0;
   for (const b of byRank) {
-    const w = [...footerHint(b, ctx)].length + (kept.size ? FOOTER_GAP : 0);
+    const w = [...footerHint(b, ctx, readOnly)].length + (kept.size ? FOOTER_GAP : 0);
     if (kept.size && used + w > width) continue;
     kept.add(b);
     used += w;
   }
-  return byRank.filter((b) => kept.has(b)).map((b) => footerHint(b, ctx));
+  return byRank.filter((b) => kept.has(b)).map((b) => footerHint(b, ctx, readOnly));
 }
 
 /** The keys of a command as written for people, e.g. `keysFor('explain')` is `Ctrl+E`. */

@@ -114,6 +114,38 @@ describe('interview screen', () => {
     const f = await app.waitText('READ-ONLY');
     expect(f).toContain('pid 4242');
     expect(f).toContain('not saved (read-only)');
+    expect(f).toContain('Ctrl+Q leave (not saved)');
+    expect(f).not.toContain('save & leave');
+  });
+
+  it('a read-only window does not drop typed answers on Ctrl+Q: it offers them as a new case', async () => {
+    const app = renderApp({
+      files: { 'half-done.json': halfDone },
+      start: { kind: 'resume', id: 'half-done' },
+      services: (s) => ({
+        ...s,
+        openCase: async (ref) => {
+          const o = await s.openCase(ref);
+          if (o.ok) o.open.readOnly = 'this case is open in another skidcase (pid 4242).';
+          return o;
+        },
+      }),
+    });
+    await app.waitText('Which units were the measurements taken in?');
+    await app.press('m', 'Posted speed limit');
+    let f = await app.press(ctrl('q'), 'to save them as a new case');
+    expect(f.replace(/\s+/g, ' ')).toContain(
+      'these answers are not saved (read-only: this case is open in another skidcase (pid 4242)); press Ctrl+S to save them as a new case, or Ctrl+Q / Ctrl+C again to leave without saving',
+    );
+    expect(app.exits).toEqual([]);
+    f = await app.press(ctrl('s'), 'Saved as a new case half-done-copy');
+    expect(f).not.toContain('READ-ONLY');
+    const copy = JSON.parse(fs.readFileSync(path.join(app.dir, 'half-done-copy.json'), 'utf8'));
+    expect(copy.units).toBe('metric');
+    // The original was not touched by this window.
+    expect(fs.readFileSync(path.join(app.dir, 'half-done.json'), 'utf8')).toBe(
+      JSON.stringify(halfDone, null, 2),
+    );
   });
 
   it('stacks the panels at 60 columns and keeps every line inside them', async () => {
