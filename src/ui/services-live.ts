@@ -121,7 +121,11 @@ export function liveServices(o: LiveOptions): Services {
     async newCase() {
       const d = now();
       const stamp = d.toISOString().slice(0, 16).replace(/[-:]/g, '').replace('T', '-');
-      return createAndOpen(fresh(uniqueId(dir, `case-${stamp}`)), true);
+      // Written with its interview section from the start, so that a case left before its first
+      // answer resumes on its first question, with no answer made up from the empty fields.
+      const base = fresh(uniqueId(dir, `case-${stamp}`));
+      const built = o.port.build(o.port.fresh(prefs.mode), base);
+      return createAndOpen(built.ok ? built.case : base, true);
     },
     async openDemo() {
       const file = o.demoFile ?? (await findDemoFile());

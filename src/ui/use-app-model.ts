@@ -94,7 +94,9 @@ export function useAppModel(
       const state = opened.open.isNew ? port.fresh(mode) : port.fromCase(opened.open.case, mode);
       savedAnswers.current = state.answers;
       const session: Session = { open: opened.open, state, reviewTop: 0, ...inputFor(port, state) };
-      if (!opened.open.isNew) session.summary = port.summary(state);
+      // Nothing answered yet: no "already done" list, the first question and its why.
+      if (!opened.open.isNew && port.progress(state).answered > 0)
+        session.summary = port.summary(state);
       if (opened.open.migratedFrom !== undefined)
         session.summary = [
           `This file was written in case format version ${opened.open.migratedFrom}; it is saved in the current version once you change an answer, and the original is kept beside it.`,
@@ -280,9 +282,16 @@ export function useAppModel(
       if (start.kind === 'new') enter(await services.newCase());
       else if (start.kind === 'open') enter(await services.openCase({ path: start.path }));
       else if (start.kind === 'resume') {
-        const id = start.id ?? ref.current.home.rows?.find((r) => !r.problem)?.id;
+        // Without an id: the most recently saved case that is not finished (rows are newest first).
+        const rows = ref.current.home.rows ?? [];
+        const id = start.id ?? rows.find((r) => !r.problem && r.stoppedAt !== undefined)?.id;
         if (id) enter(await services.openCase({ id }));
-        else setHome({ error: 'There is no case to resume yet.' });
+        else
+          setHome({
+            error: rows.some((r) => !r.problem)
+              ? 'Every case here is finished: pick one from the list to open it.'
+              : 'There is no case to resume yet.',
+          });
       }
     })();
     // Runs once: the start is fixed for the life of the app.

@@ -7,7 +7,7 @@ import { loadCaseText } from '../../src/case/load.js';
 import { solveCase } from '../../src/engine/index.js';
 import { applyColorPolicy } from '../../src/ui/theme.js';
 import { DOWN, ENTER, ESC, ctrl, renderApp } from './render-app.js';
-import { halfDone } from './fixtures.js';
+import { finishedSlide, halfDone } from './fixtures.js';
 
 afterEach(() => cleanup());
 
@@ -71,6 +71,44 @@ describe('interview screen', () => {
     expect(f).toContain('Which units were the measurements taken in?');
     expect(f).toContain('Case UI-TEST-HALF');
     expect(f).toMatch(/5 of \d+ answered/);
+  });
+
+  it('a new case left before its first answer resumes on its first question, with nothing made up', async () => {
+    const first = renderApp();
+    await first.waitText('No cases here yet');
+    await first.press('n', 'Case or report reference');
+    first.stdin.write(ctrl('q'));
+    await first.waitFor(() => first.exits.length > 0, 'exit');
+    const name = fs.readdirSync(first.dir).find((n) => n.endsWith('.json'))!;
+    const text = fs.readFileSync(path.join(first.dir, name), 'utf8');
+    cleanup();
+    const again = renderApp({ files: { [name]: text }, start: { kind: 'resume' } });
+    const f = await again.waitText('Case or report reference');
+    expect(f).toMatch(/ 0 of \d+ answered/);
+    expect(f).not.toContain('Already done');
+    // On through the case questions: each is asked, none was filled in behind the user's back.
+    await again.press(ENTER, 'When did the crash happen?');
+  });
+
+  it('resume without an id opens the newest unfinished case, not a newer finished one', async () => {
+    const older = { ...halfDone, updated: '2026-11-01T10:00:00.000Z' };
+    const newer = { ...finishedSlide, updated: '2026-11-20T10:00:00.000Z' };
+    const app = renderApp({
+      files: { 'half-done.json': older, 'finished-slide.json': newer },
+      start: { kind: 'resume' },
+    });
+    const f = await app.waitText('Resumed. Already done:');
+    expect(f).toContain('half-done');
+    expect(f).toContain('Which units were the measurements taken in?');
+  });
+
+  it('resume without an id, when every case is finished, says so on the list', async () => {
+    const app = renderApp({
+      files: { 'finished-slide.json': finishedSlide },
+      start: { kind: 'resume' },
+    });
+    const f = await app.waitText('Every case here is finished');
+    expect(f).toContain('finished-slide');
   });
 
   it('keeps answers in memory and says so when a save fails', async () => {
