@@ -14,11 +14,14 @@ import { tolerancesForAll } from './list-tolerance.js';
 import { mixedUnitsMessage } from './mixed-units.js';
 import type { QuantitySpec } from './types.js';
 
+/** Most marks one analysis takes through the interview (a truck's axles leave many). */
+export const MAX_MARKS = 64;
+
 export interface MarksContext {
   units: UnitSystem;
   /** Ranges and tolerances on a mark (`80 ± 0.5`); default true. */
   allowRange?: boolean;
-  /** Most marks accepted; default 16. */
+  /** Most marks accepted; default MAX_MARKS. */
   maxMarks?: number;
 }
 
@@ -50,7 +53,7 @@ const isWhole = (t: Token | undefined) =>
  */
 export function parseMarksLine(text: string, ctx: MarksContext): MarksResult {
   const trimmed = text.trim();
-  const max = ctx.maxMarks ?? 16;
+  const max = ctx.maxMarks ?? MAX_MARKS;
   if (trimmed === '')
     return {
       ok: false,

@@ -16,6 +16,7 @@ import { WHEELS } from './questions-vehicle.js';
 import { isSegment } from './questions-test-grade.js';
 import { DEFAULT_SAMPLES, DEFAULT_SEED } from '../extras/sampling.js';
 import { notesOf, NOTES_KEEP } from './kept-notes.js';
+import { ANALYSES_KEEP, splitAnalyses } from './kept-analyses.js';
 import {
   analysisExtras,
   analysisKeep,
@@ -126,7 +127,9 @@ function keepFields(c: Case, put: (id: string, text: string, value?: unknown) =>
   const top = caseExtras(c);
   if (top) put(CASE_KEEP, '', top);
   const v = c.vehicle;
-  const halfTrack = c.analyses.some((a) => a.kind === 'yaw' && a.pathAdjustment === 'half-track');
+  const halfTrack = splitAnalyses(c.analyses).asked.some(
+    (a) => a.kind === 'yaw' && a.pathAdjustment === 'half-track',
+  );
   // Without a slide the brakes are not asked: brakes given in the file are kept as they are.
   const asked = hasSlide(c);
   const vehicle = {
@@ -140,7 +143,8 @@ function keepFields(c: Case, put: (id: string, text: string, value?: unknown) =>
   if (Object.keys(vehicle).length) put(VEHICLE_KEEP, '', vehicle);
 }
 
-const hasSlide = (c: Case) => c.analyses.some((a) => a.kind === 'skid');
+/** A slide the interview asks about (a kept one does not bring the brakes questions). */
+const hasSlide = (c: Case) => splitAnalyses(c.analyses).asked.some((a) => a.kind === 'skid');
 
 /** Answers that say what a hand-written case says. */
 export function answersFromCase(c: Case): Answers {
@@ -175,7 +179,9 @@ export function answersFromCase(c: Case): Answers {
   keepFields(c, put);
   const notes = notesOf(c);
   if (notes.length) put(NOTES_KEEP, '', notes);
-  c.analyses.forEach((a, i) => {
+  const { asked, kept: keptList } = splitAnalyses(c.analyses);
+  if (keptList.length) put(ANALYSES_KEEP, '', keptList);
+  asked.forEach((a, i) => {
     const p = `a${i}`;
     put(`${p}.id`, a.id);
     // Without a limit the time-distance questions are not asked: the field is kept as it is.
@@ -186,7 +192,7 @@ export function answersFromCase(c: Case): Answers {
     const extra = { ...analysisExtras(a), ...timeKept };
     if (Object.keys(extra).length) put(analysisKeep(i), '', extra);
     put(`${p}.label`, a.label ?? '');
-    put(`${p}.more`, i < c.analyses.length - 1 ? 'yes' : 'no');
+    put(`${p}.more`, i < asked.length - 1 ? 'yes' : 'no');
     if (a.kind === 'yaw') {
       put(`${p}.look`, 'yaw');
       put(`${p}.measure`, a.offsets ? 'offsets' : 'ordinate');

@@ -21,8 +21,8 @@ export function unitsOf(answers: Answers): UnitSystem {
 
 /** Most analyses a case may hold through the interview. */
 export const MAX_ANALYSES = 9;
-/** Most segments in one slide. */
-export const MAX_SEGMENTS = 20;
+/** Most segments in one slide through the interview; a file may hold more (kept-analyses.ts). */
+export const MAX_SEGMENTS = 64;
 
 /** Analyses in play: the first, and one more for each "add another" answered yes in a row. */
 export function analysisCount(answers: Answers): number {

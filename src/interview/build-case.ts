@@ -19,6 +19,7 @@ import { analysisKeep, CASE_KEEP, kept, measuredByOffsets, VEHICLE_KEEP } from '
 import { dragOf, segmentsOf, slopeOf, text, type Q } from './build-parts.js';
 import { restoreNotes } from './kept-notes.js';
 import { testGradeNotes } from './test-grade-notes.js';
+import { withKept } from './kept-analyses.js';
 
 export { segmentsLine } from './build-parts.js';
 
@@ -233,9 +234,12 @@ export function buildCase(state: InterviewState, meta: CaseMeta): Case {
   if (brakes?.mode === 'wheels' && share !== undefined) vehicle.frontAxleShare = share as Q;
   const track = r.value('vehicle.trackWidth');
   if (track !== undefined) vehicle.trackWidth = track as Q;
-  const analyses = included(state, answers, r, !!brakes, track !== undefined).flatMap(
-    ({ i, id, kind }) => (kind === 'skid' ? skidOf(r, i, id) : yawOf(r, i, id)) ?? [],
-  );
+  const analyses = withKept(
+    included(state, answers, r, !!brakes, track !== undefined).flatMap(
+      ({ i, id, kind }) => (kind === 'skid' ? skidOf(r, i, id) : yawOf(r, i, id)) ?? [],
+    ),
+    answers,
+  ) as Case['analyses'];
   const interview: SavedInterview = {
     version: 1,
     answers: state.answers,

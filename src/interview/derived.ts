@@ -1,4 +1,5 @@
 /** What the screens show, derived from the state: current question, progress, jump list, resume lines. */
+import { keptLines } from './kept-analyses.js';
 import type { InterviewState, Progress, Question, QuestionState } from './types.js';
 import { allQuestions } from './questions.js';
 import { readAnswers } from './answer-values.js';
@@ -82,6 +83,7 @@ export function summaryOfDone(state: InterviewState): string[] {
   lines.push(
     `Vehicle${a['vehicle.label']?.text ? ` ${a['vehicle.label'].text}` : ''}: ${brakeWords}`,
   );
+  lines.push(...keptLines(a));
   for (let i = 0; i < analysisCount(a); i++) {
     const look = markLook(a, i);
     const mine = r.questions.filter((q) => q.id.startsWith(`a${i}.`) && q.id !== `a${i}.more`);

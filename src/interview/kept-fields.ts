@@ -45,4 +45,8 @@ export const measuredByOffsets = (answers: Answers, i: number): boolean =>
 
 /** Answers that are not questions (kept ids and fields). */
 export const isMetaAnswer = (id: string): boolean =>
-  /^a\d+\.(id|keep)$/.test(id) || id === CASE_KEEP || id === VEHICLE_KEEP || id === 'case.notes';
+  /^a\d+\.(id|keep)$/.test(id) ||
+  id === CASE_KEEP ||
+  id === VEHICLE_KEEP ||
+  id === 'case.notes' ||
+  id === 'case.keptAnalyses';

@@ -1,4 +1,5 @@
 /** Questions of a slide (skid) analysis: marks, surfaces, segments, and how the slide ended. */
+import { MAX_MARKS } from '../input/marks-line.js';
 import { RULES } from '../case/quantity.js';
 import type { Answers, Choice, Question } from './types.js';
 import {
@@ -126,7 +127,7 @@ export function slideQuestions(
       },
       'marks',
       1,
-      16,
+      MAX_MARKS,
     ),
     marksQuestion(
       {

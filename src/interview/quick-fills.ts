@@ -3,6 +3,7 @@
  * the line becomes the answers of each segment's own questions, so that every figure can be
  * checked and changed afterwards, one question at a time.
  */
+import { MAX_SEGMENTS } from './answers-read.js';
 import { parseSegmentLine } from '../input/index.js';
 import type { DragV1, SegmentV1 } from '../case/v1/schema.js';
 import type { Answers, AnswerContext, ParseResult } from './types.js';
@@ -50,8 +51,8 @@ function segmentFills(fills: Answers, sp: string, s: SegmentV1, answers: Answers
 export function quickFills(text: string, ctx: AnswerContext, p: string): ParseResult {
   const r = parseSegmentLine(text, { units: ctx.units });
   if (!r.ok) return r;
-  if (r.segments.length > 20)
-    return { ok: false, message: `at most 20 segments (${r.segments.length} typed)` };
+  if (r.segments.length > MAX_SEGMENTS)
+    return { ok: false, message: `at most ${MAX_SEGMENTS} segments (${r.segments.length} typed)` };
   const fills: Answers = {};
   r.segments.forEach((s, j) => segmentFills(fills, `${p}.seg${j}`, s, ctx.answers));
   const n = r.segments.length;

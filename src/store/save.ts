@@ -41,6 +41,11 @@ export type SaveResult =
 
 export interface SaveOptions {
   /**
+   * The file to write (absolute): the file the case was opened from, whatever its name. Without
+   * it the case is written as `<dir>/<id>.json`.
+   */
+  file?: string;
+  /**
    * Write over a file changed outside skidcase (the user chose "keep mine"): theirs is kept as
    * `<id>.outside-<time>.json` and as the backup.
    */
@@ -59,7 +64,7 @@ export interface SaveOptions {
  * if (!r.ok) show(r.message);
  */
 export async function saveCase(dir: string, c: Case, opts: SaveOptions = {}): Promise<SaveResult> {
-  const prepared = prepare(dir, c);
+  const prepared = prepare(dir, c, opts.file);
   if ('ok' in prepared) return prepared;
   const { file } = prepared;
   return serial(file, async () => {
@@ -83,7 +88,7 @@ export async function saveCase(dir: string, c: Case, opts: SaveOptions = {}): Pr
  * once the answer is on disk. The case must be open here with its write lock (openCase took it).
  */
 export function saveCaseSync(dir: string, c: Case, opts: SaveOptions = {}): SaveResult {
-  const prepared = prepare(dir, c);
+  const prepared = prepare(dir, c, opts.file);
   if ('ok' in prepared) return prepared;
   const { file } = prepared;
   const known = getKnown(file);
@@ -103,10 +108,10 @@ interface Prepared {
   bytes: Buffer;
 }
 
-function prepare(dir: string, c: Case): Prepared | (SaveResult & { ok: false }) {
+function prepare(dir: string, c: Case, exact?: string): Prepared | (SaveResult & { ok: false }) {
   const where = caseFilePath(dir, (c as { id: string }).id);
   if (!where.ok) return { ok: false, kind: 'path', message: where.message };
-  const file = where.path;
+  const file = exact ? path.resolve(exact) : where.path;
   const next = stamp(c, new Date().toISOString(), getKnown(file).created);
   const parsed = caseV1.safeParse(next);
   if (!parsed.success) {

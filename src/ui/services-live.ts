@@ -144,7 +144,8 @@ export function liveServices(o: LiveOptions): Services {
       return createAndOpen({ ...loaded.case, id: uniqueId(dir, 'demo-copy') }, false);
     },
     saveCase(open, c, opts = {}) {
-      const r = saveCaseSync(path.dirname(open.file), c, opts);
+      // Back to the file it was opened from (its lock and backup), whatever the file is called.
+      const r = saveCaseSync(path.dirname(open.file), c, { ...opts, file: open.file });
       if (!r.ok) {
         const failed: Saved = { ok: false, message: r.message };
         if (r.problem) failed.problem = r.problem;

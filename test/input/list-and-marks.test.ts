@@ -131,13 +131,13 @@ describe('parseMarksLine', () => {
     ['80 x 4', 'marks: the count comes first; write 4 x 80'],
     ['4 x', 'marks: give the length after 4 x, e.g. 4 x 80.5'],
     ['2.5 x 80', 'marks: write the number of marks, x, then the length, e.g. 4 x 80.5'],
-    ['0 x 80', 'the number of marks before x must be from 1 to 16'],
-    ['17 x 80', 'the number of marks before x must be from 1 to 16'],
+    ['0 x 80', 'the number of marks before x must be from 1 to 64'],
+    ['65 x 80', 'the number of marks before x must be from 1 to 64'],
     ['4 x 80 81', "after 4 x give one length; cannot read '81'"],
     ['4 x 0', 'marks: length must be greater than 0'],
     ['4 x 80,5', "the length '80,5' uses a comma; write 80.5"],
     ['94 92 0', 'mark 3: length must be greater than 0'],
-    ['1 2 3 4 5 6 7 8 9 10 11 12 13 14 15 16 17', 'give at most 16 marks (17 typed)'],
+    [Array.from({ length: 65 }, (_, i) => 60 + i).join(' '), 'give at most 64 marks (65 typed)'],
   ])('rejects %j', (text, fragment) => {
     const r = parseMarksLine(text, ctx);
     expect(r.ok).toBe(false);

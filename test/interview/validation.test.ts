@@ -27,9 +27,9 @@ describe('messages for bad input', () => {
     [
       'a0.count',
       'four',
-      "number of marks: 'four' is not a whole number; type a whole number from 1 to 16",
+      "number of marks: 'four' is not a whole number; type a whole number from 1 to 64",
     ],
-    ['a0.count', '0', 'number of marks must be a whole number from 1 to 16'],
+    ['a0.count', '0', 'number of marks must be a whole number from 1 to 64'],
     [
       'a0.marks',
       '64 66 65 65 63',
