@@ -1,0 +1,115 @@
+/**
+ * Frictions a new user and an expert met in the interview, each typed as they typed it. Every
+ * scenario and number here is invented.
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import { afterEach, describe, expect, it } from 'vitest';
+import { cleanup } from 'ink-testing-library';
+import { BACKSPACE, ENTER, ctrl, renderApp } from './render-app.js';
+
+afterEach(() => cleanup());
+
+type App = ReturnType<typeof renderApp>;
+
+/** A new case, through the case questions (imperial, posted 45 mph), to the look of the marks. */
+async function toLook(o: Parameters<typeof renderApp>[0] = {}): Promise<App> {
+  const app = renderApp({ rows: 40, ...o });
+  await app.waitText('No cases here yet');
+  await app.press('n', 'Case or report reference');
+  for (let i = 0; i < 5; i++) await app.press(ENTER);
+  await app.waitText('Which units');
+  await app.press('f', 'Posted speed limit');
+  await app.answer('45', 'Which vehicle');
+  await app.press(ENTER, 'What do the marks look like?');
+  return app;
+}
+
+/** On to the first segment's drag factor source of a one-surface slide of 4 marks of 60 ft. */
+async function toDragSource(app: App) {
+  await app.press('d', 'Were all four brakes working?');
+  await app.press('a', 'A short label');
+  await app.press(ENTER, 'Did the vehicle slide over one surface');
+  await app.press('o', 'How many tire marks');
+  await app.answer('4', 'Length of each mark');
+  await app.answer('4 x 60', 'Which slide distance');
+  await app.press(ENTER, 'A name for the surface');
+  await app.press(ENTER, 'Where does the drag factor');
+}
+
+/** The interview answers in the saved case file (none before the first save). */
+function savedAnswers(app: App): Record<string, { text: string } | undefined> {
+  const file = fs.readdirSync(app.dir).find((n) => n.endsWith('.json'));
+  if (!file) return {};
+  const body = JSON.parse(fs.readFileSync(path.join(app.dir, file), 'utf8'));
+  return body.interview?.answers ?? {};
+}
+
+describe('typing at a choice question', () => {
+  it('picks the choice whose words were typed', async () => {
+    const app = await toLook();
+    // "l" is no key here, so the word goes on the choice's line, read on Enter.
+    let f = await app.press('l', '> l');
+    expect(f).toContain('Enter reads what is typed');
+    for (const ch of 'ocked') app.stdin.write(ch);
+    await app.waitText('> locked');
+    f = await app.press(ENTER, 'Were all four brakes working?');
+    expect(f).toContain('Analysis 1 - slide');
+  });
+
+  it('refuses words that are no choice, listing the choices', async () => {
+    const app = await toLook();
+    for (const ch of 'zebra') app.stdin.write(ch);
+    await app.waitText('> zebra');
+    const f = await app.press(ENTER, '✗');
+    expect(f).toContain('"zebra" is not one of the choices: press d (straight,');
+    expect(f).toContain('y (curved, sideways, striated (yaw))');
+    expect(f).toContain('What do the marks look like?');
+    // Backspace edits the typed words; emptied, a letter picks again.
+    for (let i = 0; i < 5; i++) app.stdin.write(BACKSPACE);
+    await app.waitFor((t) => !t.includes('> zebra') && !t.includes('> z'), 'the line emptied');
+    await app.press('d', 'Were all four brakes working?');
+  });
+
+  it('takes a signed percent at the grade: -3 is downhill 3%', async () => {
+    const app = await toLook();
+    await toDragSource(app);
+    await app.press('e', 'Drag factor');
+    await app.answer('0.70', 'Grade, the slide');
+    expect(app.frame()).toContain('e.g. -3 for downhill 3%');
+    const f = await app.answer('-3', 'How did the slide end?');
+    expect(f).toContain('Read as downhill 3%.');
+    // Saved as if typed at each question: the direction, then the percent.
+    const answers = () => savedAnswers(app);
+    await app.waitFor(() => answers()['a0.seg0.grade.pct'] !== undefined, 'the grade saved');
+    expect(answers()['a0.seg0.grade.dir']?.text).toBe('downhill');
+    expect(answers()['a0.seg0.grade.pct']?.text).toBe('3');
+  });
+
+  it('asks for the sign when a grade is typed without one', async () => {
+    const app = await toLook();
+    await toDragSource(app);
+    await app.press('e', 'Drag factor');
+    await app.answer('0.70', 'Grade, the slide');
+    const f = await app.answer('3', '✗');
+    expect(f).toContain('give the sign with the number (+3 uphill, -3');
+    expect(f).toContain('Grade, the slide');
+  });
+});
+
+describe('choice letters', () => {
+  it('f picks feet and mph, m metres and km/h', async () => {
+    const app = renderApp({ rows: 40 });
+    await app.waitText('No cases here yet');
+    await app.press('n', 'Case or report reference');
+    for (let i = 0; i < 5; i++) await app.press(ENTER);
+    let f = await app.waitText('Which units');
+    expect(f).toContain('[f] feet and mph');
+    expect(f).toContain('[m] metres and km/h');
+    f = await app.press('f', 'Posted speed limit');
+    expect(f).toContain('in mph');
+    f = await app.press(ctrl('p'), 'Which units');
+    f = await app.press('m', 'Posted speed limit');
+    expect(f).toContain('in km/h');
+  });
+});
