@@ -12,6 +12,14 @@ afterEach(() => cleanup());
 
 type App = ReturnType<typeof renderApp>;
 
+/** The question column of a frame as one line of text (the chain panel beside it cut off). */
+const said = (f: string): string =>
+  f
+    .split('\n')
+    .map((l) => l.split(/[│┌└]/)[0]!.trim())
+    .join(' ')
+    .replace(/\s+/g, ' ');
+
 /** A new case, through the case questions (imperial, posted 45 mph), to the look of the marks. */
 async function toLook(o: Parameters<typeof renderApp>[0] = {}): Promise<App> {
   const app = renderApp({ rows: 40, ...o });
@@ -111,5 +119,24 @@ describe('choice letters', () => {
     f = await app.press(ctrl('p'), 'Which units');
     f = await app.press('m', 'Posted speed limit');
     expect(f).toContain('in km/h');
+  });
+});
+
+describe('a negative mark', () => {
+  it('says that lengths cannot be negative and how a range is written', async () => {
+    const app = await toLook();
+    await app.press('d', 'Were all four brakes working?');
+    await app.press('a', 'A short label');
+    await app.press(ENTER, 'Did the vehicle slide over one surface');
+    await app.press('o', 'How many tire marks');
+    await app.answer('4', 'Length of each mark');
+    const f = said(await app.answer('61 -63 58 60', '✗'));
+    expect(f).toContain(
+      "✗ mark 1: '61 -63': a length cannot be negative; a range is written 61-63 or 61 to 63",
+    );
+    expect(f).not.toContain('lengths typed');
+    // Written as a range, the same marks are taken.
+    for (let i = 0; i < 12; i++) app.stdin.write(BACKSPACE);
+    await app.answer('61-63 58 60 59', 'Which slide distance');
   });
 });
