@@ -140,3 +140,18 @@ describe('a negative mark', () => {
     await app.answer('61-63 58 60 59', 'Which slide distance');
   });
 });
+
+describe('a drag factor typed as a whole number', () => {
+  it('3 is told what a drag factor is, not that it is 0.03', async () => {
+    const app = await toLook();
+    await toDragSource(app);
+    await app.press('e', 'Drag factor');
+    let f = said(await app.answer('3', '✗'));
+    expect(f).toContain('a drag factor is a decimal, usually near 0.7 (e.g. 0.70)');
+    expect(f).not.toContain('0.03');
+    // 72 still reads as a percent written without its sign.
+    for (let i = 0; i < 2; i++) app.stdin.write(BACKSPACE);
+    f = said(await app.answer('72', 'for 72%'));
+    expect(f).toContain('write it as a decimal, e.g. 0.72 for 72%');
+  });
+});
