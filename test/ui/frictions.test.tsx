@@ -155,3 +155,20 @@ describe('a drag factor typed as a whole number', () => {
     expect(f).toContain('write it as a decimal, e.g. 0.72 for 72%');
   });
 });
+
+describe('a chord outside the usual lengths', () => {
+  it('140 ft is taken with a remark naming the usual 30-50 ft; 45 ft gets none', async () => {
+    const app = await toLook();
+    await app.press('y', 'A short label');
+    await app.press(ENTER, 'How was the radius');
+    await app.press('c', 'Chord length');
+    let f = said(await app.answer('140', 'Middle ordinate'));
+    expect(f).toContain(
+      'A 140 ft chord is longer than the chords usually taken: check it spans only the first part of the yaw mark (about 30-50 ft).',
+    );
+    await app.press(ctrl('p'), 'Chord length');
+    for (let i = 0; i < 3; i++) app.stdin.write(BACKSPACE);
+    f = said(await app.answer('45', 'Middle ordinate'));
+    expect(f).not.toContain('chords usually taken');
+  });
+});
