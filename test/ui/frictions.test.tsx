@@ -172,3 +172,23 @@ describe('a chord outside the usual lengths', () => {
     expect(f).not.toContain('chords usually taken');
   });
 });
+
+describe('a result with no tolerance on any input', () => {
+  it('says the range is zero because no tolerance was entered, and how to enter one', async () => {
+    const app = await toLook({ rows: 90 });
+    await toDragSource(app);
+    await app.press('e', 'Drag factor');
+    await app.answer('0.70', 'Grade, the slide');
+    await app.press('l', 'How did the slide end?');
+    await app.press('r', 'Where was the conflict point');
+    await app.press(ENTER, 'Perception-reaction time');
+    await app.press(ENTER, 'Another analysis?');
+    await app.press('n', 'Also show a distribution');
+    const f = said(await app.press('n', 'Speed when the marks began'));
+    // 60 ft at 0.70, level, all brakes: S = sqrt(30 × 60 × 0.70) = 35.5 mph, one figure.
+    expect(f).toContain('Speed when the marks began: 35.5 mph');
+    expect(f).toContain(
+      'The range is zero because no tolerance was entered: give the measurements one (e.g. 94 ± 1 on a mark, 0.70 ± 0.05 on a drag factor) to see how far the figure could move.',
+    );
+  });
+});
