@@ -28,7 +28,10 @@ function chordLow(id: string, ctx: AnswerContext): number | undefined {
 }
 
 /** The chord lengths the help calls usual, in the case's units. */
-const USUAL_CHORD = { imperial: { lo: 30, hi: 50, unit: 'ft' }, metric: { lo: 10, hi: 15, unit: 'm' } };
+const USUAL_CHORD = {
+  imperial: { lo: 30, hi: 50, unit: 'ft' },
+  metric: { lo: 10, hi: 15, unit: 'm' },
+};
 
 /**
  * A remark on a chord outside the usual 30-50 ft (10-15 m) the help gives: the answer is taken,

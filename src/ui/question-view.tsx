@@ -107,14 +107,6 @@ function ChoiceList({
 /** The question: prompt, the input (or the choices), the default, and the message in place. */
 export function QuestionView(p: QuestionViewProps) {
   const q = p.question;
-  const hint = [
-    // A drag factor or share has no unit: say what form it takes instead.
-    q.unitHint ? (q.unitHint === 'decimal' ? 'a decimal' : `in ${q.unitHint}`) : '',
-    q.example ? `e.g. ${q.example}` : '',
-    q.optional ? 'Enter skips' : '',
-  ]
-    .filter(Boolean)
-    .join(' · ');
   // What Enter would give now: the highlighted choice, or the default while nothing is typed
   // (a line filled with an earlier answer submits that answer, not the default).
   const typedAtChoice = isChoice(q) && p.line.value !== '';
@@ -125,6 +117,15 @@ export function QuestionView(p: QuestionViewProps) {
       : p.line.value.trim() === ''
         ? p.defaultText
         : undefined;
+  const hint = [
+    // A drag factor or share has no unit: say what form it takes instead.
+    q.unitHint ? (q.unitHint === 'decimal' ? 'a decimal' : `in ${q.unitHint}`) : '',
+    q.example ? `e.g. ${q.example}` : '',
+    // One meaning per key: when Enter gives something (a preference, a default) it does not skip.
+    q.optional && !p.defaultText ? 'Enter skips' : '',
+  ]
+    .filter(Boolean)
+    .join(' · ');
   return (
     <Box flexDirection="column" width={p.width}>
       <Para text={q.prompt} width={p.width} bold />

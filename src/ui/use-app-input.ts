@@ -66,6 +66,9 @@ export function useAppInput(deps: InputDeps) {
   );
 }
 
+/** Ctrl+U, which empties the line being typed (line-edit.ts). */
+const clearsLine = (input: string, key: Key): boolean => key.ctrl && input === 'u';
+
 /** A key that is not a binding: a choice letter, or text for the field on screen. */
 function typed(ctx: KeyContext, input: string, key: Key, d: InputDeps) {
   const { app, port } = d;
@@ -83,12 +86,15 @@ function typed(ctx: KeyContext, input: string, key: Key, d: InputDeps) {
     const line = editLine(m.session.line, input, key);
     if (line !== m.session.line)
       app.update((x) => (x.session ? { ...x, session: { ...x.session, line } } : x));
+    if (clearsLine(input, key) && m.session.state.error) app.act({ type: 'clear-error' });
     return;
   }
   if (ctx === 'question' && m.session) {
     const line = editLine(m.session.line, input, key);
     if (line !== m.session.line)
       app.update((x) => (x.session ? { ...x, session: { ...x.session, line } } : x));
+    // Ctrl+U empties the line: the message about what was on it goes with it.
+    if (clearsLine(input, key) && m.session.state.error) app.act({ type: 'clear-error' });
     return;
   }
   if (ctx === 'jump' && m.overlay?.kind === 'jump') {

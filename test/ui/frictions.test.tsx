@@ -192,3 +192,46 @@ describe('a result with no tolerance on any input', () => {
     );
   });
 });
+
+describe('Ctrl+U', () => {
+  it('empties the line and takes the message about it away', async () => {
+    const app = renderApp({ rows: 40 });
+    await app.waitText('No cases here yet');
+    await app.press('n', 'Case or report reference');
+    for (let i = 0; i < 5; i++) await app.press(ENTER);
+    await app.waitText('Which units');
+    await app.press('f', 'Posted speed limit');
+    let f = await app.answer('fast', '✗');
+    expect(f).toMatch(/✗ .*not a number/);
+    f = await app.press(ctrl('u'));
+    await app.waitFor((t) => !t.includes('✗'), 'the message gone');
+    f = app.frame();
+    expect(f).not.toContain('fast');
+    expect(f).toContain('Posted speed limit');
+    // On a choice's typed line too.
+    await app.answer('45', 'Which vehicle');
+    await app.press(ENTER, 'What do the marks look like?');
+    for (const ch of 'zebra') app.stdin.write(ch);
+    await app.waitText('> zebra');
+    await app.press(ENTER, '✗');
+    app.stdin.write(ctrl('u'));
+    f = await app.waitFor((t) => !t.includes('✗') && !t.includes('zebra'), 'line and message gone');
+    expect(f).toContain('What do the marks look like?');
+  });
+});
+
+describe('one meaning per key', () => {
+  it('the reaction time says what Enter accepts, not also that it skips', async () => {
+    const app = await toLook();
+    await toDragSource(app);
+    await app.press('e', 'Drag factor');
+    await app.answer('0.70', 'Grade, the slide');
+    await app.press('l', 'How did the slide end?');
+    // The conflict point has no default: Enter skips it.
+    let f = await app.press('r', 'Where was the conflict point');
+    expect(said(f)).toContain('Enter skips');
+    f = said(await app.press(ENTER, 'Perception-reaction time'));
+    expect(f).toContain('Enter accepts: your preference, 1.5 s');
+    expect(f).not.toContain('Enter skips');
+  });
+});
