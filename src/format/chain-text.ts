@@ -80,7 +80,7 @@ function analysisLines(r: AnalysisOutcome, i: number, units: Units, c: Case): st
   out.push(`  Result: ${formatAtLeast(s, units)}`);
   const zero = zeroRangeNote(s.speed);
   if (zero) out.push(`  ${zero}`);
-  append(out, extrasTextLines(solveExtras(c, i, s), units));
+  append(out, extrasTextLines(solveExtras(c, i, s), units, s.speed));
   append(
     out,
     list('  Assumptions', s.assumptions).map((l, k) => (k === 0 ? l : `  ${l}`)),

@@ -82,8 +82,11 @@ describe('solve', () => {
     expect(r.code).toBe(0);
     expect(r.out).toContain('Result: at least 35 mph: 35.5 mph');
     expect(r.out).toContain('The range is zero because no tolerance was entered');
+    // The comparison at the 45 mph limit starts by saying the vehicle was below it.
+    expect(r.out).toContain('This vehicle was below the posted limit: 35.5 mph');
     const rep = await run(['report', file, '--format', 'txt']);
     const flat = rep.out.replace(/\s+/g, ' ');
+    expect(flat).toContain('This vehicle was below the posted limit: 35.5 mph');
     expect(flat).toContain(
       '(computed 35.5 mph). The range is zero because no tolerance was entered',
     );

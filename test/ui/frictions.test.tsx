@@ -21,14 +21,14 @@ const said = (f: string): string =>
     .replace(/\s+/g, ' ');
 
 /** A new case, through the case questions (imperial, posted 45 mph), to the look of the marks. */
-async function toLook(o: Parameters<typeof renderApp>[0] = {}): Promise<App> {
+async function toLook(o: Parameters<typeof renderApp>[0] = {}, limit = '45'): Promise<App> {
   const app = renderApp({ rows: 40, ...o });
   await app.waitText('No cases here yet');
   await app.press('n', 'Case or report reference');
   for (let i = 0; i < 5; i++) await app.press(ENTER);
   await app.waitText('Which units');
   await app.press('f', 'Posted speed limit');
-  await app.answer('45', 'Which vehicle');
+  await app.answer(limit, 'Which vehicle');
   await app.press(ENTER, 'What do the marks look like?');
   return app;
 }
@@ -233,5 +233,48 @@ describe('one meaning per key', () => {
     f = said(await app.press(ENTER, 'Perception-reaction time'));
     expect(f).toContain('Enter accepts: your preference, 1.5 s');
     expect(f).not.toContain('Enter skips');
+  });
+});
+
+describe('the comparison at the posted limit', () => {
+  /** The slide of 4 marks of 60 ft at 0.70, level, to rest: 35.5 mph; then the review, paged. */
+  async function review(limit: string, conflict: string) {
+    const app = await toLook({ rows: 200 }, limit);
+    await toDragSource(app);
+    await app.press('e', 'Drag factor');
+    await app.answer('0.70', 'Grade, the slide');
+    await app.press('l', 'How did the slide end?');
+    await app.press('r', 'Where was the conflict point');
+    if (conflict) await app.answer(conflict, 'Perception-reaction time');
+    else await app.press(ENTER, 'Perception-reaction time');
+    await app.press(ENTER, 'Another analysis?');
+    await app.press('n', 'Also show a distribution');
+    return said(await app.press('n', 'Time and distance at the posted limit'));
+  }
+
+  it('below the limit, says so first, then what is compared, and that no conflict point was given', async () => {
+    const f = await review('45', '');
+    const below = f.indexOf(
+      "This vehicle was below the posted limit: 35.5 mph when the marks began, under 45.0 mph. A vehicle at the limit would have been going faster, so what follows says nothing against this vehicle's speed.",
+    );
+    const what = f.indexOf(
+      'What is compared: where a vehicle at 45.0 mph would have come to rest had it perceived the hazard at the same point as this one and braked on the same road.',
+    );
+    const none = f.indexOf('No conflict point was given, so only the end of the marks is compared');
+    const verdict = f.indexOf('Would have stopped before the end of the marks');
+    expect(below).toBeGreaterThan(0);
+    expect(what).toBeGreaterThan(below);
+    expect(none).toBeGreaterThan(what);
+    expect(verdict).toBeGreaterThan(none);
+  });
+
+  it('above the limit with a conflict point, says the vehicle was above it and compares at the point', async () => {
+    const f = await review('30', '50');
+    expect(f).toContain(
+      'This vehicle was above the posted limit: 35.5 mph when the marks began, over 30.0 mph even at the low end.',
+    );
+    expect(f).toContain('would have stopped short of the conflict point.');
+    expect(f).not.toContain('No conflict point was given');
+    expect(f).not.toContain('was below the posted limit');
   });
 });
