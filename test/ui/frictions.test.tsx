@@ -7,6 +7,7 @@ import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup } from 'ink-testing-library';
 import { BACKSPACE, ENTER, ctrl, renderApp } from './render-app.js';
+import { finishedSlide } from './fixtures.js';
 
 afterEach(() => cleanup());
 
@@ -276,5 +277,32 @@ describe('the comparison at the posted limit', () => {
     expect(f).toContain('would have stopped short of the conflict point.');
     expect(f).not.toContain('No conflict point was given');
     expect(f).not.toContain('was below the posted limit');
+  });
+});
+
+describe('what the review and the written report say', () => {
+  it('names sensitivity inputs plainly, and the report keeps "Tester #412" as typed', async () => {
+    const app = renderApp({
+      rows: 200,
+      files: {
+        'finished-slide.json': {
+          ...finishedSlide,
+          details: { reference: 'UI-TEST-FINISHED', investigator: 'Tester #412' },
+        },
+      },
+    });
+    await app.waitText('UI-TEST-FINISHED');
+    await app.press(ENTER, 'Review');
+    const f = await app.waitText('Change in speed, each input at its ends');
+    // f 0.60-0.80 is the only input with a range: its line is named, not keyed f[0].
+    expect(f).toMatch(/\n\s*drag factor\s+[▐█]/);
+    expect(f).not.toContain('f[0]');
+    await app.press('w', 'Writing the report');
+    await app.waitText('Report written to', 30_000);
+    const md = fs.readdirSync(app.dir).find((n) => n.endsWith('.md'))!;
+    const text = fs.readFileSync(path.join(app.dir, md), 'utf8');
+    expect(text).toContain('Tester #412');
+    expect(text).not.toContain('\\#');
+    expect(text).not.toContain('f[0]');
   });
 });
