@@ -105,9 +105,7 @@ describe('report sections from the extras', () => {
       const hi = s.solution.model.evaluate({ [inp.key]: inp.high })!;
       // Each row is named by the input's plain name; the model's key (C, M, f[0]) is not shown.
       const name = inp.label.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
-      const row = new RegExp(
-        `\\| ${name} \\| [^|]+ \\| ([\\d.]+) \\| ([\\d.]+) \\|`,
-      ).exec(text);
+      const row = new RegExp(`\\| ${name} \\| [^|]+ \\| ([\\d.]+) \\| ([\\d.]+) \\|`).exec(text);
       expect(row, inp.label).not.toBeNull();
       expect(text).not.toContain(`| ${inp.key}:`);
       expect([row![1], row![2]]).toEqual([shownAs(lo, 1), shownAs(hi, 1)]);
