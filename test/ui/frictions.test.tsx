@@ -306,3 +306,28 @@ describe('what the review and the written report say', () => {
     expect(text).not.toContain('f[0]');
   });
 });
+
+describe('the test skids question', () => {
+  it('points drag factors typed at it to the way to enter them', async () => {
+    const app = await toLook();
+    await toDragSource(app);
+    await app.press('k', 'Test skids for the slide');
+    const f = said(await app.answer('0.68, 0.71, 0.70', '✗'));
+    expect(f).toContain(
+      '0.68, 0.71, 0.70 read as drag factors, not tests: this question takes each test as speed/distance (e.g. 30/42).',
+    );
+    expect(f).toContain('choose "a value I enter, with its range", e.g. 0.70 (0.68-0.71)');
+  });
+
+  it('gives the entered value its own "how", not the table’s', async () => {
+    const app = await toLook();
+    await toDragSource(app);
+    let f = said(await app.press('e', 'Drag factor for the slide: a range'));
+    expect(f).toContain('How: Type the figure you have with the range it carries');
+    expect(f).not.toContain('From the table');
+    await app.press(ctrl('p'), 'Where does the drag factor');
+    f = said(await app.press('t', 'Which surface'));
+    f = said(await app.press(ENTER, 'Drag factor for the slide: a range'));
+    expect(f).toContain('How: From the table, choose the band');
+  });
+});
