@@ -60,20 +60,25 @@ const FILLER = new Set(['a', 'an', 'and', 'the', 'of', 'at', 'by', 'on', 'one', 
  * @example matchChoice(units, 'feet') // the "feet and mph" choice
  */
 export function matchChoice(choices: readonly Choice[], text: string): Choice | undefined {
+  const fits = choicesFitting(choices, text);
+  return fits.length === 1 ? fits[0] : undefined;
+}
+
+/** Every choice the typed text could name (one when it names a choice; several when unclear). */
+function choicesFitting(choices: readonly Choice[], text: string): Choice[] {
   const t = text.trim().toLowerCase();
-  if (!t) return undefined;
+  if (!t) return [];
   const exact = choices.find(
     (c) => c.key.toLowerCase() === t || c.value.toLowerCase() === t || c.label.toLowerCase() === t,
   );
-  if (exact) return exact;
+  if (exact) return [exact];
   const typed = wordsOf(t);
   // At least one word that says something, and of two letters or more (one letter is a key).
-  if (!typed.some((w) => w.length > 1 && !FILLER.has(w))) return undefined;
-  const fits = choices.filter((c) => {
+  if (!typed.some((w) => w.length > 1 && !FILLER.has(w))) return [];
+  return choices.filter((c) => {
     const words = [...wordsOf(c.label), ...wordsOf(c.value)];
     return typed.every((w) => words.some((x) => x.startsWith(w)));
   });
-  return fits.length === 1 ? fits[0] : undefined;
 }
 
 /** "o (one surface), s (several ...)": the choices with their keys, for a refusal. */
@@ -92,10 +97,15 @@ export function choiceQuestion(
   other?: (text: string, ctx: AnswerContext) => ParseResult | undefined,
 ): Question {
   const parse = (text: string, ctx: AnswerContext): ParseResult => {
-    const c = matchChoice(choices, text);
-    if (c) return { ok: true, value: c.value };
+    const fits = choicesFitting(choices, text);
+    if (fits.length === 1) return { ok: true, value: fits[0]!.value };
     const read = other?.(text, ctx);
     if (read) return read;
+    if (fits.length > 1)
+      return {
+        ok: false,
+        message: `"${text.trim()}" fits more than one choice: ${choicesList(fits)}; type more of its words, or press its letter`,
+      };
     return {
       ok: false,
       message: `"${text.trim()}" is not one of the choices: press ${choicesList(choices)}`,

@@ -83,6 +83,8 @@ function typed(ctx: KeyContext, input: string, key: Key, d: InputDeps) {
         ? q.choices!.find((c) => c.key.toLowerCase() === input.toLowerCase())
         : undefined;
     if (c) return app.act({ type: 'choose', value: c.value });
+    // A space before anything is typed starts nothing (Space is no choice).
+    if (!typing && input.trim() === '') return;
     const line = editLine(m.session.line, input, key);
     if (line !== m.session.line)
       app.update((x) => (x.session ? { ...x, session: { ...x.session, line } } : x));

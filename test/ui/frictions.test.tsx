@@ -331,3 +331,21 @@ describe('the test skids question', () => {
     expect(f).toContain('How: From the table, choose the band');
   });
 });
+
+describe('words that fit more than one choice', () => {
+  it('lists only the choices they fit, and more words pick one; a surface name is never taken as a key', async () => {
+    const app = await toLook();
+    await toDragSource(app);
+    await app.press('t', 'Which surface');
+    for (const ch of 'gravel') app.stdin.write(ch);
+    await app.waitText('> gravel');
+    let f = said(await app.press(ENTER, '✗'));
+    expect(f).toContain(
+      '"gravel" fits more than one choice: 6 (gravel, loose), h (gravel or dirt (single value)); type more of its words, or press its letter',
+    );
+    for (const ch of ' loose') app.stdin.write(ch);
+    await app.waitText('> gravel loose');
+    f = said(await app.press(ENTER, 'Drag factor for the slide: a range'));
+    expect(f).toContain('Table range for gravel, loose');
+  });
+});
