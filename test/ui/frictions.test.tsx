@@ -6,7 +6,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup } from 'ink-testing-library';
-import { BACKSPACE, ENTER, ctrl, renderApp } from './render-app.js';
+import { BACKSPACE, ENTER, ESC, ctrl, renderApp } from './render-app.js';
 import { finishedSlide } from './fixtures.js';
 
 afterEach(() => cleanup());
@@ -74,6 +74,11 @@ describe('typing at a choice question', () => {
     expect(f).toContain('"zebra" is not one of the choices: press d (straight,');
     expect(f).toContain('y (curved, sideways, striated (yaw))');
     expect(f).toContain('What do the marks look like?');
+    // Esc clears the typed words and the message; typed again, Backspace edits them.
+    app.stdin.write(ESC);
+    await app.waitFor((t) => !t.includes('zebra') && !t.includes('✗'), 'line and message gone');
+    for (const ch of 'zebra') app.stdin.write(ch);
+    await app.waitText('> zebra');
     // Backspace edits the typed words; emptied, a letter picks again.
     for (let i = 0; i < 5; i++) app.stdin.write(BACKSPACE);
     await app.waitFor((t) => !t.includes('> zebra') && !t.includes('> z'), 'the line emptied');
