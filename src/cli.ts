@@ -57,7 +57,16 @@ function program(): Command {
       'folder that holds the case files (default ./sessions, or SKIDCASE_SESSIONS)',
     )
     .showHelpAfterError()
-    .action(async () => setExit(await interactive(p.opts().sessions, { kind: 'home' })));
+    // A word that is no command reaches the root action: say so and list the commands, rather
+    // than commander's "too many arguments".
+    .allowExcessArguments()
+    .action(async (_opts: unknown, cmd: Command) => {
+      if (cmd.args.length > 0) {
+        io.err(unknownCommand(cmd.args[0]!, p));
+        return setExit(1);
+      }
+      setExit(await interactive(p.opts().sessions, { kind: 'home' }));
+    });
   p.command('new')
     .description('start a new case')
     .action(async () => setExit(await interactive(p.opts().sessions, { kind: 'new' })));
@@ -112,6 +121,20 @@ function program(): Command {
       },
     );
   return p;
+}
+
+/** "unknown command 'frobnicate'" with each command and what it does, from the program itself. */
+function unknownCommand(word: string, p: Command): string {
+  const cmds = p.commands.map((c) => [
+    `${c.name()} ${c.usage().replace(/\[options\]\s*/, '')}`.trim(),
+    c.description(),
+  ]);
+  const w = Math.max(...cmds.map(([u]) => u!.length));
+  return [
+    `skidcase: unknown command '${word}'. The commands are:`,
+    ...cmds.map(([u, d]) => `  skidcase ${u!.padEnd(w)}  ${d}`),
+    'Without a command, skidcase opens the list of cases. skidcase --help says more.',
+  ].join('\n');
 }
 
 function setExit(code: number) {

@@ -164,7 +164,7 @@ export function sensitivitySvg(rows: readonly SensitivityRow[], opts: SvgOptions
     const y = 40 + i * rowH;
     const dn = (-r.down / scale) * half;
     const up = (r.up / scale) * half;
-    body.push(text(10, y + 20, `${r.key}  ${r.label}`));
+    body.push(text(10, y + 20, r.label));
     body.push(
       `<rect x="${px(axis - dn)}" y="${px(y + 8)}" width="${px(dn)}" height="18" fill="#888"/>`,
     );

@@ -39,8 +39,8 @@ export function changeText(r: SensitivityRow): string {
 }
 
 /**
- * The sensitivity rows as a horizontal bar chart in plain text: one line per input with its key,
- * its label, a bar left of the axis for how far the speed drops and right of it for how far it
+ * The sensitivity rows as a horizontal bar chart in plain text: one line per input with its
+ * plain name (the model's keys, such as `f[0]`, are internal and never shown), a bar left of the axis for how far the speed drops and right of it for how far it
  * rises, and the two changes in numbers (`-4.1 / +3.8 mph`). The first line says how to read it.
  * Readable without colour; every line is at most `width` characters (labels are cut to fit).
  * Bars share one scale: the largest change fills half the bar area.
@@ -48,7 +48,7 @@ export function changeText(r: SensitivityRow): string {
  * @example
  * sensitivityBars(sensitivity(solution), 60, { speedUnit: 'mph' })
  * // [ 'Change in speed, each input at its ends (◀ lower │ higher ▶)',
- * //   'M     middle ordinate     ████████▐│███████▌  -4.1 / +3.8 mph', ... ]
+ * //   'middle ordinate     ████████▐│███████▌  -4.1 / +3.8 mph', ... ]
  */
 export function sensitivityBars(
   rows: SensitivityRow[],
@@ -62,9 +62,8 @@ export function sensitivityBars(
 
   const figures = rows.map((r) => changeText(r) + unit);
   const figW = Math.max(...figures.map(textWidth));
-  const keyW = Math.min(8, Math.max(...rows.map((r) => textWidth(r.key))));
-  // Room left for the label and the bars, after key, figures and the gaps between columns.
-  const room = w - keyW - figW - 4;
+  // Room left for the label and the bars, after the figures and the gap before them.
+  const room = w - figW - 2;
   // Bars get 4 to 14 cells a side; the label gets what is left, up to 16 characters before the
   // bars grow and up to its full length after.
   const maxLabel = Math.max(...rows.map((r) => textWidth(r.label)));
@@ -79,7 +78,7 @@ export function sensitivityBars(
     const left = bar(toHalves(-r.down), barHalf, 'left', g);
     const right = bar(toHalves(r.up), barHalf, 'right', g);
     const label = labelW > 0 ? padEnd(r.label, labelW) + ' ' : '';
-    const line = `${padEnd(r.key, keyW)}  ${label}${left}${g.axis}${right}  ${figures[i]}`;
+    const line = `${label}${left}${g.axis}${right}  ${figures[i]}`;
     return clip(line.replace(/\s+$/, ''), w);
   });
   return [header, ...lines];

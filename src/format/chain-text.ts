@@ -11,7 +11,7 @@ import { CAUTIONS } from './cautions.js';
 import { extrasTextLines } from './extras-text.js';
 import { solveExtras } from './solve-extras.js';
 import { KIND_NAMES } from './kind-names.js';
-import { formatRange, withUnit, type NumberKind } from './numbers.js';
+import { formatRange, withUnit, zeroRangeNote, type NumberKind } from './numbers.js';
 import { phasesLine } from './phases-text.js';
 
 /** The kind of number a step's result is, from its unit. */
@@ -78,7 +78,9 @@ function analysisLines(r: AnalysisOutcome, i: number, units: Units, c: Case): st
   }
   if (s.phases) out.push(`  Phases in order of travel: ${phasesLine(s.phases, units)}`);
   out.push(`  Result: ${formatAtLeast(s, units)}`);
-  append(out, extrasTextLines(solveExtras(c, i, s), units));
+  const zero = zeroRangeNote(s.speed);
+  if (zero) out.push(`  ${zero}`);
+  append(out, extrasTextLines(solveExtras(c, i, s), units, s.speed));
   append(
     out,
     list('  Assumptions', s.assumptions).map((l, k) => (k === 0 ? l : `  ${l}`)),
@@ -95,15 +97,18 @@ export function formatPostedLimit(solution: CaseSolution): string | undefined {
   const p = solution.postedLimit;
   if (!p) return undefined;
   const u = solution.units.speed;
-  const above = solution.analyses.filter(
-    (r) => r.ok && isAboveLimit(r.solution.speed.low, p.value),
-  );
+  // Nothing can be said about the limit without a figure to compare with it.
+  const computed = solution.analyses.flatMap((r) => (r.ok ? [r.solution] : []));
+  if (computed.length === 0) return undefined;
+  const above = computed.filter((s) => isAboveLimit(s.speed.low, p.value));
   const limit = withUnit(p.value, 'speed', u);
-  if (above.length === 0) return `Posted limit ${limit}: no analysis’s low end is above it.`;
-  const names = above.map((r) =>
-    r.ok ? `${r.solution.id} (${withUnit(r.solution.speed.low, 'speed', u)})` : r.id,
-  );
-  return `Posted limit ${limit}: the low end of ${names.join(', ')} is above it.`;
+  const some =
+    computed.length < solution.analyses.length
+      ? ' (only the analyses that could be computed are compared)'
+      : '';
+  if (above.length === 0) return `Posted limit ${limit}: no analysis’s low end is above it${some}.`;
+  const names = above.map((s) => `${s.id} (${withUnit(s.speed.low, 'speed', u)})`);
+  return `Posted limit ${limit}: the low end of ${names.join(', ')} is above it${some}.`;
 }
 
 /**

@@ -1,7 +1,8 @@
-import type { Units } from '../engine/types.js';
+import type { Range, Units } from '../engine/types.js';
 import type { Verdict } from '../extras/limit-steps.js';
 import { formatStepLines, kindOfUnit } from './chain-text.js';
 import { formatNumber, formatRange, withUnit } from './numbers.js';
+import { limitFraming } from './limit-framing.js';
 import type { SolveExtras } from './solve-extras.js';
 
 const speedOr = (s: number | undefined, u: Units) =>
@@ -22,7 +23,7 @@ function verdictLine(v: Verdict, u: Units): string {
  * rows (largest swing first), the time and distance at the posted limit with its steps, and the
  * sampled percentiles. A part that cannot be computed says why, in one line.
  */
-export function extrasTextLines(x: SolveExtras, u: Units): string[] {
+export function extrasTextLines(x: SolveExtras, u: Units, speed: Range): string[] {
   const out: string[] = [];
   if (x.sensitivity.length > 0) {
     out.push('  Sensitivity (each input at the ends of its range, the others at their value):');
@@ -43,6 +44,7 @@ export function extrasTextLines(x: SolveExtras, u: Units): string[] {
     out.push(
       `  Time and distance at the posted limit (${withUnit(t.postedLimit, 'speed', u.speed)}):`,
     );
+    for (const l of limitFraming(t, speed, u)) out.push(`    ${l}`);
     t.steps.forEach((st, j) => out.push(...formatStepLines(st, j + 1).map((l) => `    ${l}`)));
     out.push(`    ${verdictLine(t.endOfMarks, u)}`);
     if (t.conflict) out.push(`    ${verdictLine(t.conflict, u)}`);

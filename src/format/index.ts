@@ -1,5 +1,12 @@
 /** Number, range and chain formatting shared by `solve`, the report and the screens. */
-export { formatNumber, formatRange, withUnit, NOT_A_NUMBER, type NumberKind } from './numbers.js';
+export {
+  formatNumber,
+  formatRange,
+  withUnit,
+  zeroRangeNote,
+  NOT_A_NUMBER,
+  type NumberKind,
+} from './numbers.js';
 export {
   formatChainText,
   formatStepLines,

@@ -83,3 +83,12 @@ export function formatRange(r: Range, kind: NumberKind, unit = ''): string {
   if (lo === mid && hi === mid) return v;
   return `${v} (${lo} to ${hi})`;
 }
+
+/**
+ * The sentence shown beside a result whose range is zero: every input was typed as one figure,
+ * so nothing says how far the result could move. Undefined when the range has a spread.
+ */
+export function zeroRangeNote(r: Range): string | undefined {
+  if (r.low !== r.high) return undefined;
+  return 'The range is zero because no tolerance was entered: give the measurements one (e.g. 94 ± 1 on a mark, 0.70 ± 0.05 on a drag factor) to see how far the figure could move.';
+}

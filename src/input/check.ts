@@ -76,14 +76,18 @@ export function checkItem(raw: RawItem, spec: QuantitySpec, ctx: ReadContext): R
     if (n === undefined) continue;
     const msg = ruleViolation({ ...spec.rule, what }, n);
     if (!msg) continue;
-    const decimalHint =
+    const tooBig =
       spec.kind === 'factor' &&
       raw.form === 'single' &&
       spec.rule.max !== undefined &&
       n > spec.rule.max &&
-      n <= 100
-        ? `; write it as a decimal, e.g. ${showNumber(n / 100)} for ${showNumber(n)}%`
-        : '';
+      n <= 100;
+    // A small whole number is no percent anyone meant (3 is not 0.03): say what the figure is.
+    const decimalHint = !tooBig
+      ? ''
+      : n < 10 && /drag factor/.test(`${spec.rule.what} ${field}`)
+        ? '; a drag factor is a decimal, usually near 0.7 (e.g. 0.70)'
+        : `; write it as a decimal, e.g. ${showNumber(n / 100)} for ${showNumber(n)}%`;
     return new ReadError(`${msg}${after}${decimalHint}`);
   }
   return converted ? { value, converted } : { value };

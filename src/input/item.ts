@@ -41,6 +41,18 @@ export function gradeAhead(cur: Cursor): boolean {
   return cur.peek(i)?.t === 'num' && pct(i + 1);
 }
 
+/**
+ * `-63` when the cursor stands on a minus with a space before it and a number right after it
+ * (`61 -63`): in a list that reads as a negative value more than as a range. Else undefined.
+ */
+function looseMinus(cur: Cursor): string | undefined {
+  const before = cur.tokens[cur.pos - 1];
+  const sep = cur.peek();
+  const after = cur.peek(1);
+  if (!before || !isOp(sep, 'minus') || after?.t !== 'num') return undefined;
+  return before.end < sep!.at && after.at === sep!.end ? `${sep!.text}${after.text}` : undefined;
+}
+
 /** Reads one value with its spread at the cursor. */
 export function readItem(cur: Cursor, ctx: ReadContext, opts: ItemOptions): Read<RawItem> {
   const start = cur.pos;
@@ -80,6 +92,11 @@ export function readItem(cur: Cursor, ctx: ReadContext, opts: ItemOptions): Read
     return { form: 'paren', v, lo, hi, text: cur.text(start) };
   }
   if (isRangeSep(cur) && !(opts.stopBeforeGrade && gradeAhead(cur))) {
+    const loose = looseMinus(cur);
+    if (ctx.inList && loose)
+      return new ReadError(
+        `'${v.text} ${loose}': a ${ctx.field} cannot be negative; a range is written ${v.text}-${loose.slice(1)} or ${v.text} to ${loose.slice(1)}`,
+      );
     if (!opts.allowRange) return noRange();
     cur.take();
     const hi = readMeasure(cur, ctx);

@@ -8,8 +8,18 @@ import type { Choice } from './types.js';
 /** Free-text surface not in the table. */
 export const OTHER_SURFACE = 'other';
 
-// Single keys for the rows in table order; 'o' stays free for "another surface".
-const KEYS = '123456789abcdefghijklmnpqrstuvwxyz';
+/** Every word of the surfaces' names ("asphalt", "dry", "gravel", ...), lower case. */
+const SURFACE_WORDS = [...DRAG_TABLE.map((r) => r.surface), 'another single value']
+  .flatMap((t) => t.toLowerCase().split(/[^a-z]+/))
+  .filter(Boolean);
+
+// Single keys for the rows in table order: digits, then letters that begin no word of a surface's
+// name, so a name typed at the question ("gravel") is read as words rather than picking by its
+// first letter. 'o' stays free for "another surface".
+const KEYS = [
+  ...'123456789',
+  ...[...'abcdefghijklmnpqrstuvwxyz'].filter((ch) => !SURFACE_WORDS.some((w) => w[0] === ch)),
+];
 
 const fmt = (r: DragBand) =>
   r.low === r.high ? r.low.toFixed(2) : `${r.low.toFixed(2)}-${r.high.toFixed(2)}`;

@@ -43,25 +43,73 @@ function finish(
   };
 }
 
-/** The choice's value for a typed text: its key, its value or its label (any case). */
+/** The words of a text, lower case: `"feet and mph"` → `['feet', 'and', 'mph']`. */
+const wordsOf = (text: string): string[] =>
+  text
+    .toLowerCase()
+    .split(/[^a-z0-9]+/)
+    .filter(Boolean);
+
+/** Words too common to tell one choice from another. */
+const FILLER = new Set(['a', 'an', 'and', 'the', 'of', 'at', 'by', 'on', 'one', 'i', 'no', 'yes']);
+
+/**
+ * The choice a typed text names: its key, its value or its label (any case), else the one choice
+ * whose label and value hold every typed word (a word may be the start of one: `feet`, `down`,
+ * `locked`). Undefined when no choice, or more than one, fits.
+ * @example matchChoice(units, 'feet') // the "feet and mph" choice
+ */
 export function matchChoice(choices: readonly Choice[], text: string): Choice | undefined {
-  const t = text.trim().toLowerCase();
-  return choices.find(
-    (c) => c.key.toLowerCase() === t || c.value.toLowerCase() === t || c.label.toLowerCase() === t,
-  );
+  const fits = choicesFitting(choices, text);
+  return fits.length === 1 ? fits[0] : undefined;
 }
 
-/** A choice among `choices`; the answer is a key, a value or a label, stored as the value. */
+/** Every choice the typed text could name (one when it names a choice; several when unclear). */
+function choicesFitting(choices: readonly Choice[], text: string): Choice[] {
+  const t = text.trim().toLowerCase();
+  if (!t) return [];
+  const exact = choices.find(
+    (c) => c.key.toLowerCase() === t || c.value.toLowerCase() === t || c.label.toLowerCase() === t,
+  );
+  if (exact) return [exact];
+  const typed = wordsOf(t);
+  // At least one word that says something, and of two letters or more (one letter is a key).
+  if (!typed.some((w) => w.length > 1 && !FILLER.has(w))) return [];
+  return choices.filter((c) => {
+    const words = [...wordsOf(c.label), ...wordsOf(c.value)];
+    return typed.every((w) => words.some((x) => x.startsWith(w)));
+  });
+}
+
+/** "o (one surface), s (several ...)": the choices with their keys, for a refusal. */
+export function choicesList(choices: readonly Choice[]): string {
+  return choices.map((x) => `${x.key} (${x.label})`).join(', ');
+}
+
+/**
+ * A choice among `choices`; the answer is a key, a value or a label (or words of it), stored as
+ * the value. `other` reads a typed text that is no choice (the grade's signed percent) first.
+ */
 export function choiceQuestion(
   base: QuestionBase,
   choices: Choice[],
   kind: 'choice' | 'confirm' = 'choice',
+  other?: (text: string, ctx: AnswerContext) => ParseResult | undefined,
 ): Question {
-  const parse = (text: string): ParseResult => {
-    const c = matchChoice(choices, text);
-    if (c) return { ok: true, value: c.value };
-    const keys = choices.map((x) => `${x.key} (${x.label})`).join(', ');
-    return { ok: false, message: `"${text.trim()}" is not one of the choices: press ${keys}` };
+  const parse = (text: string, ctx: AnswerContext): ParseResult => {
+    const fits = choicesFitting(choices, text);
+    if (fits.length === 1) return { ok: true, value: fits[0]!.value };
+    const read = other?.(text, ctx);
+    if (read) return read;
+    if (fits.length > 1)
+      return {
+        ok: false,
+        message: `"${text.trim()}" fits more than one choice: ${choicesList(fits)}; type more of its words, or press its letter`,
+      };
+    return {
+      ok: false,
+      message: `"${text.trim()}" is not one of the choices: press ${choicesList(choices)}`,
+    };
   };
   return finish(base, kind, parse, { choices });
 }

@@ -65,7 +65,7 @@ export function caseQuestions(): Question[] {
         defaultText: () => 'imperial',
       },
       [
-        { value: 'imperial', key: 'i', label: 'feet and mph' },
+        { value: 'imperial', key: 'f', label: 'feet and mph' },
         { value: 'metric', key: 'm', label: 'metres and km/h' },
       ],
     ),

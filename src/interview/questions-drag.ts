@@ -27,6 +27,14 @@ export const DRAG_SOURCES: Choice[] = [
   { value: 'entered', key: 'e', label: 'a value I enter, with its range' },
 ];
 
+/** How to give the drag factor's value, for each source that asks it. */
+const VALUE_HOW = {
+  table:
+    'From the table, choose the band for the speed in question and narrow the range only with a reason you can state.',
+  entered:
+    'Type the figure you have with the range it carries, e.g. 0.72 (0.65-0.80) or 0.70 ± 0.05: from tests worked out elsewhere, or a figure your agency uses. Say where it comes from in the case notes, since the report names the source as entered.',
+} as const;
+
 /**
  * The drag questions under `prefix` (`a0.seg1` or `a2`), applying when `applies` does.
  * `what` names the surface in prompts ("segment 2", "the yaw marks").
@@ -85,31 +93,35 @@ export function dragQuestions(
       help: { why: 'Without a table row, the report still needs to say what the vehicle slid on.' },
       appliesWhen: (a) => when('table')(a) && choiceOf(a, `${p}.surface`) === OTHER_SURFACE,
     }),
-    quantityQuestion(
-      {
-        ...base(
-          'value',
-          'Drag factor',
-          `Drag factor for ${what}: a range, or a value with its range such as 0.72 (0.65-0.80)`,
-        ),
-        help: {
-          why: 'The low and high ends of the range give the low and high ends of the speed.',
-          how: 'From the table, choose the band for the speed in question and narrow the range only with a reason you can state.',
+    // One value question per source, so each has its own "how" (the list keeps the one that
+    // applies: a question id appears once).
+    ...(['table', 'entered'] as const).map((src) =>
+      quantityQuestion(
+        {
+          ...base(
+            'value',
+            'Drag factor',
+            `Drag factor for ${what}: a range, or a value with its range such as 0.72 (0.65-0.80)`,
+          ),
+          help: {
+            why: 'The low and high ends of the range give the low and high ends of the speed.',
+            how: VALUE_HOW[src],
+          },
+          appliesWhen: when(src),
+          defaultText: (a) => {
+            const row = surfaceRow(choiceOf(a, `${p}.surface`));
+            return src === 'table' && row ? defaultDragText(row) : undefined;
+          },
+          explainChoice: (a) => {
+            const row = surfaceRow(choiceOf(a, `${p}.surface`));
+            return src === 'table' && row
+              ? `Table range for ${row.surface}: ${rangesLine(row)}; a guide, not a measurement (${row.source}).`
+              : undefined;
+          },
+          example: '0.65-0.80',
         },
-        appliesWhen: when('table', 'entered'),
-        defaultText: (a) => {
-          const row = surfaceRow(choiceOf(a, `${p}.surface`));
-          return source(a) === 'table' && row ? defaultDragText(row) : undefined;
-        },
-        explainChoice: (a) => {
-          const row = surfaceRow(choiceOf(a, `${p}.surface`));
-          return source(a) === 'table' && row
-            ? `Table range for ${row.surface}: ${rangesLine(row)}; a guide, not a measurement (${row.source}).`
-            : undefined;
-        },
-        example: '0.65-0.80',
-      },
-      { kind: 'factor', rule: RULES.drag, range: true },
+        { kind: 'factor', rule: RULES.drag, range: true },
+      ),
     ),
     customQuestion(
       {

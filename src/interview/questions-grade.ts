@@ -3,7 +3,7 @@
  * case stores them signed (grade + uphill in the direction of travel; bank + toward the centre).
  */
 import { RULES } from '../case/quantity.js';
-import type { Answers, Question } from './types.js';
+import type { AnswerContext, Answers, ParseResult, Question } from './types.js';
 import { choiceQuestion, quantityQuestion } from './question-kinds.js';
 import { choiceOf } from './answers-read.js';
 import { steepDownhillNote } from './grade-check.js';
@@ -28,6 +28,28 @@ export function gradeQuestions(
   applies: (a: Answers) => boolean,
 ): Question[] {
   const dir = `${prefix}.grade.dir`;
+  const pct = quantityQuestion(
+    {
+      id: `${prefix}.grade.pct`,
+      section,
+      title: `Grade percent, ${what}`,
+      prompt: `How steep, in percent? (a positive number; the direction was given above)`,
+      help: {
+        why: 'Stored signed in the case: + uphill, - downhill.',
+        how: 'e.g. 3, or 2.5-3.5 when the slope varies.',
+      },
+      appliesWhen: (a) => applies(a) && sloped(a, dir),
+      example: '3',
+    },
+    {
+      kind: 'percent',
+      rule: { ...PERCENT, what: 'grade' },
+      range: true,
+      noMinus: 'choose uphill or downhill above instead of typing a sign',
+    },
+    undefined,
+    (value, ctx) => steepDownhillNote(prefix, value, ctx),
+  );
   return [
     choiceQuestion(
       {
@@ -37,36 +59,45 @@ export function gradeQuestions(
         prompt: `Along ${what}, in the direction the vehicle travelled, the road goes:`,
         help: {
           why: 'Sliding uphill, gravity helps slow the vehicle; downhill it works against the brakes. The grade is added to the braking friction: f·n + G.',
-          how: 'Measure the slope along the marks with a level or an inclinometer, in percent (rise over run × 100).',
+          how: 'Measure the slope along the marks with a level or an inclinometer, in percent (rise over run × 100). The percent may be typed here with its sign: -3 is downhill 3%, +2 uphill 2%.',
         },
         appliesWhen: applies,
         defaultText: () => 'level',
+        example: '-3 for downhill 3%',
       },
       SLOPE_CHOICES,
+      'choice',
+      (text, ctx) => signedGrade(text, pct, ctx),
     ),
-    quantityQuestion(
-      {
-        id: `${prefix}.grade.pct`,
-        section,
-        title: `Grade percent, ${what}`,
-        prompt: `How steep, in percent? (a positive number; the direction was given above)`,
-        help: {
-          why: 'Stored signed in the case: + uphill, - downhill.',
-          how: 'e.g. 3, or 2.5-3.5 when the slope varies.',
-        },
-        appliesWhen: (a) => applies(a) && sloped(a, dir),
-        example: '3',
-      },
-      {
-        kind: 'percent',
-        rule: { ...PERCENT, what: 'grade' },
-        range: true,
-        noMinus: 'choose uphill or downhill above instead of typing a sign',
-      },
-      undefined,
-      (value, ctx) => steepDownhillNote(prefix, value, ctx),
-    ),
+    pct,
   ];
+}
+
+/**
+ * A grade typed with its sign at the direction question: `-3` is downhill 3%, `+2.5` uphill
+ * 2.5%, `0` level. The percent is read by the percent question itself (a fill), so it is checked
+ * and stored exactly as if it were typed there. Undefined when the text is no number.
+ */
+function signedGrade(text: string, pct: Question, ctx: AnswerContext): ParseResult | undefined {
+  const m = /^\s*([+\-−]?)\s*(\d.*)$/.exec(text);
+  if (!m) return undefined;
+  const sign = m[1]!;
+  const rest = m[2]!.trim();
+  if (/^0+(?:[.,]0*)?\s*%?$/.test(rest)) return { ok: true, value: 'level' };
+  if (!sign)
+    return {
+      ok: false,
+      message: `grade: give the sign with the number (+${rest} uphill, -${rest} downhill), or pick a direction`,
+    };
+  const r = pct.parse(rest, ctx);
+  if (!r.ok) return r;
+  const value = sign === '+' ? 'uphill' : 'downhill';
+  return {
+    ok: true,
+    value,
+    fills: { [pct.id]: { text: rest, value: r.value } },
+    notice: [`Read as ${value} ${rest.replace(/\s*%$/, '')}%.`, r.notice].filter(Boolean).join(' '),
+  };
 }
 
 export function bankQuestions(

@@ -27,6 +27,29 @@ function chordLow(id: string, ctx: AnswerContext): number | undefined {
   return typeof r.value === 'number' ? r.value : (r.value.low ?? r.value.value);
 }
 
+/** The chord lengths the help calls usual, in the case's units. */
+const USUAL_CHORD = {
+  imperial: { lo: 30, hi: 50, unit: 'ft' },
+  metric: { lo: 10, hi: 15, unit: 'm' },
+};
+
+/**
+ * A remark on a chord outside the usual 30-50 ft (10-15 m) the help gives: the answer is taken,
+ * the investigator is asked to check it.
+ */
+export function chordRemark(value: unknown, ctx: AnswerContext): string | undefined {
+  if (value === undefined) return undefined;
+  const q = value as number | { value: number };
+  const c = typeof q === 'number' ? q : q.value;
+  const u = USUAL_CHORD[ctx.units];
+  if (c >= u.lo && c <= u.hi) return undefined;
+  const side =
+    c > u.hi
+      ? 'longer than the chords usually taken: check it spans only the first part of the yaw mark'
+      : 'shorter than the chords usually taken: on a short chord the middle ordinate is small, and an error in it moves the radius more';
+  return `A ${c} ${u.unit} chord is ${side} (about ${u.lo}-${u.hi} ${u.unit}).`;
+}
+
 /** The middle ordinate must stay under half the chord at every end of both ranges (an arc under a half circle). */
 function ordinateCheck(chordId: string) {
   return (value: unknown, ctx: AnswerContext): string | undefined => {
@@ -119,6 +142,8 @@ export function yawQuestions(...args: Parameters<typeof yawQuestionsOf>): Questi
         metricExample: '14',
       },
       { ...LENGTH, rule: { ...RULES.length, what: 'chord' } },
+      undefined,
+      chordRemark,
     ),
     customQuestion(
       {
@@ -166,6 +191,8 @@ function yawQuestionsOf(
         metricExample: '14',
       },
       LENGTH,
+      undefined,
+      chordRemark,
     ),
     quantityQuestion(
       {

@@ -75,6 +75,13 @@ export function readTestSkids(
   const items = text.split(/\s*[,;]\s*/).filter((s) => s.trim() !== '');
   if (items.length === 0)
     return { ok: false, message: 'give at least one test as speed/distance, e.g. 30/42' };
+  // Drag factors already worked out from the tests (`0.68, 0.71, 0.70`) are no speed/distance
+  // pairs: say where such figures go instead of asking for a slash.
+  if (items.every((t) => /^\s*(?:0?\.\d+|[01](?:\.\d*)?)\s*$/.test(t)))
+    return {
+      ok: false,
+      message: `${items.join(', ')} read as drag factors, not tests: this question takes each test as speed/distance (e.g. 30/42). For drag factors already worked out from the tests, go back to the drag factor source and choose "a value I enter, with its range", e.g. 0.70 (0.68-0.71)`,
+    };
   const out: TestSkid[] = [];
   const notes: string[] = [];
   for (const [i, item] of items.entries()) {

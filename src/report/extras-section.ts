@@ -51,7 +51,7 @@ function sensitivityTable(rows: SensitivityRow[], u: Units): Block {
       'Change',
     ],
     rows.map((r) => [
-      `${r.key}: ${r.label}`,
+      r.label,
       inputRange(r),
       at(r.atLow),
       at(r.atHigh),

@@ -1,6 +1,6 @@
 import type { Range, Step } from '../engine/types.js';
 import { kindOfUnit } from '../format/chain-text.js';
-import { formatNumber, formatRange, withUnit } from '../format/numbers.js';
+import { formatNumber, formatRange, withUnit, zeroRangeNote } from '../format/numbers.js';
 
 /** A step's result with its range, as the chain shows it: `43.3 mph (40.2 to 46.1)`. */
 export function stepResultText(s: Step): string {
@@ -18,5 +18,8 @@ export function speedText(n: number, unit: string): string {
  * // 'At least 40 mph at the start of the marks (computed 43.3 mph, range 40.2 to 46.1 mph).'
  */
 export function atLeastText(minimum: number, speed: Range, unit: string): string {
+  const zero = zeroRangeNote(speed);
+  if (zero)
+    return `At least ${minimum} ${unit} at the start of the marks (computed ${speedText(speed.value, unit)}). ${zero}`;
   return `At least ${minimum} ${unit} at the start of the marks (computed ${speedText(speed.value, unit)}, range ${formatNumber(speed.low, 'speed')} to ${speedText(speed.high, unit)}).`;
 }

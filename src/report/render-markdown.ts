@@ -6,9 +6,19 @@ export interface MarkdownOptions {
   figureHref?: (f: Figure) => string | undefined;
 }
 
-/** Escapes characters Markdown would read as markup in free text (notes, labels, why lines). */
+/**
+ * Escapes what Markdown would read as markup in free text (notes, labels, why lines), and only
+ * that, so the file still reads as typed: `Tester #412` stays as it is (a `#` starts a heading
+ * only at the start of a line, as `>` starts a quote), and an `_` inside a word (`R_1`) is no
+ * emphasis. Backslashes, backticks, `*`, brackets and `<` (an HTML tag) are escaped anywhere.
+ * @example escapeMd('Tester #412, *not* bold') // 'Tester #412, \\*not\\* bold'
+ */
 export function escapeMd(s: string): string {
-  return s.replace(/([\\`*_[\]<>|#])/g, '\\$1').replace(/\n/g, ' ');
+  return s
+    .replace(/\n/g, ' ')
+    .replace(/[\\`*[\]<]/g, '\\$&')
+    .replace(/(?<![\p{L}\p{N}])_|_(?![\p{L}\p{N}])/gu, '\\_')
+    .replace(/^(\s*)(#{1,6}(?=\s|$)|>|[-+](?=\s))/, '$1\\$2');
 }
 
 /** Inline code that survives backticks inside it. */
@@ -18,8 +28,9 @@ function code(s: string): string {
   return longest ? `${fence} ${s} ${fence}` : `${fence}${s}${fence}`;
 }
 
+/** A table cell: a `|` would end it, so it is escaped too. */
 function cell(s: string): string {
-  return escapeMd(s) || ' ';
+  return escapeMd(s).replace(/\|/g, '\\|') || ' ';
 }
 
 function blockMd(b: Block, opts: MarkdownOptions): string {

@@ -4,6 +4,7 @@ import { timeDistanceFromCase } from '../extras/case-fields.js';
 import { limitComparison, type LimitComparison } from '../extras/limit-comparison.js';
 import type { Verdict } from '../extras/limit-steps.js';
 import { formatNumber, formatRange } from '../format/numbers.js';
+import { limitFraming } from '../format/limit-framing.js';
 import { stepBlocks } from './analysis-section.js';
 import { list, para, section, table, type Section } from './doc.js';
 
@@ -88,6 +89,7 @@ export function timeDistanceSection(
   const limit = `${t.postedLimit} ${u.speed}`;
   return section(`${id}-time`, title, [
     // The time as chosen (1.25 s stays 1.25 s), not rounded like a computed time.
+    ...limitFraming(t, s.speed, u).map((l) => para(l)),
     para(`Perception-reaction time ${asChosen(t.reactionTime)} s (${t.reactionSource}).`),
     para(verdictText(t.endOfMarks, limit, u), 'strong'),
     ...(t.conflict ? [para(verdictText(t.conflict, limit, u), 'strong')] : []),

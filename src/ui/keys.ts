@@ -138,7 +138,8 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     command: 'pick',
     keys: [plain('choice')],
     label: 'pick',
-    description: 'Pick a choice by its letter (shown in brackets beside it)',
+    description:
+      'Pick a choice by its letter (shown in brackets beside it); or type its words (or, at a grade, a signed percent such as -3) and press Enter',
     when: ['choice'],
   },
   {

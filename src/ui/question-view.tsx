@@ -107,28 +107,46 @@ function ChoiceList({
 /** The question: prompt, the input (or the choices), the default, and the message in place. */
 export function QuestionView(p: QuestionViewProps) {
   const q = p.question;
+  // What Enter would give now: the highlighted choice, or the default while nothing is typed
+  // (a line filled with an earlier answer submits that answer, not the default).
+  const typedAtChoice = isChoice(q) && p.line.value !== '';
+  const enterGives = typedAtChoice
+    ? undefined
+    : isChoice(q)
+      ? q.choices![p.highlight]?.label
+      : p.line.value.trim() === ''
+        ? p.defaultText
+        : undefined;
   const hint = [
     // A drag factor or share has no unit: say what form it takes instead.
     q.unitHint ? (q.unitHint === 'decimal' ? 'a decimal' : `in ${q.unitHint}`) : '',
     q.example ? `e.g. ${q.example}` : '',
-    q.optional ? 'Enter skips' : '',
+    // One meaning per key: when Enter gives something (a preference, a default) it does not skip.
+    q.optional && !p.defaultText ? 'Enter skips' : '',
   ]
     .filter(Boolean)
     .join(' · ');
-  // What Enter would give now: the highlighted choice, or the default while nothing is typed
-  // (a line filled with an earlier answer submits that answer, not the default).
-  const enterGives = isChoice(q)
-    ? q.choices![p.highlight]?.label
-    : p.line.value.trim() === ''
-      ? p.defaultText
-      : undefined;
   return (
     <Box flexDirection="column" width={p.width}>
       <Para text={q.prompt} width={p.width} bold />
       {hint ? <Para text={`(${hint})`} width={p.width} color={TONE.muted} /> : null}
       {isChoice(q) ? (
         <ChoiceList question={q} highlight={p.highlight} rows={p.choiceRows} width={p.width} />
-      ) : (
+      ) : null}
+      {typedAtChoice ? (
+        <Box flexDirection="column">
+          <Box>
+            <Text color={TONE.key}>{'> '}</Text>
+            <TextField line={p.line} color={p.color} />
+          </Box>
+          <Para
+            text="Enter reads what is typed; Esc clears it"
+            width={p.width}
+            color={TONE.muted}
+            indent="  "
+          />
+        </Box>
+      ) : isChoice(q) ? null : (
         <Box>
           <Text color={TONE.key}>{'> '}</Text>
           <TextField line={p.line} color={p.color} />

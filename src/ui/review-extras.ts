@@ -5,7 +5,7 @@
  */
 import { spread } from '../case/quantity.js';
 import type { Case } from '../case/load.js';
-import type { AnalysisSolution, Outcome, Units } from '../engine/types.js';
+import type { AnalysisSolution, Outcome, Range, Units } from '../engine/types.js';
 import { analysisExtras, type AnalysisExtras } from '../extras/analysis-extras.js';
 import type { Verdict } from '../extras/limit-steps.js';
 import type { LimitComparison } from '../extras/limit-comparison.js';
@@ -14,6 +14,7 @@ import type { YawFromOffsets } from '../extras/yaw-offsets.js';
 import { speedAlongSlideChart } from '../extras/slide-chart.js';
 import { yawArcSketch } from '../extras/yaw-sketch.js';
 import { formatNumber, formatRange, withUnit } from '../format/numbers.js';
+import { limitFraming } from '../format/limit-framing.js';
 import type { ShownLine } from './review-lines.js';
 import { pushWrapped, stepLines } from './review-step.js';
 
@@ -60,9 +61,10 @@ function verdictLines(out: ShownLine[], v: Verdict, u: Units, width: number, wha
   pushWrapped(out, detail, width, '      ');
 }
 
-function limitLines(out: ShownLine[], t: LimitComparison, u: Units, width: number) {
+function limitLines(out: ShownLine[], t: LimitComparison, speed: Range, u: Units, width: number) {
   const limit = withUnit(t.postedLimit, 'speed', u.speed);
   out.push({ text: `  Time and distance at the posted limit (${limit})`, bold: true });
+  for (const l of limitFraming(t, speed, u)) pushWrapped(out, l, width, '    ');
   pushWrapped(
     out,
     `reaction time ${formatNumber(t.reactionTime, 'seconds')} s: ${t.reactionSource}`,
@@ -195,7 +197,7 @@ export function extrasLines(
     ctx.reactionTime !== undefined ? { reactionTime: ctx.reactionTime } : {},
   );
   part(out, 'Time and distance at the posted limit', x.limit, width, (v) =>
-    limitLines(out, v, u, width),
+    limitLines(out, v, s.speed, u, width),
   );
   part(out, 'Distribution of the speed', x.sampling, width, (v) => samplingLines(out, v, u, width));
   part(out, 'Circle fitted to the offsets', x.offsets, width, (v) =>

@@ -9,7 +9,7 @@ import type { AnalysisSolution, CaseSolution } from '../engine/types.js';
 import { isAboveLimit } from '../engine/index.js';
 import { CAUTIONS } from '../format/cautions.js';
 import { KIND_NAMES } from '../format/kind-names.js';
-import { formatNumber, formatRange } from '../format/numbers.js';
+import { formatNumber, formatRange, zeroRangeNote } from '../format/numbers.js';
 import { phasesLine } from '../format/phases-text.js';
 import { sensitivity } from '../extras/sensitivity.js';
 import { sensitivityBars } from '../extras/sensitivity-bars.js';
@@ -82,6 +82,8 @@ function analysisLines(
     for (const l of sensitivityBars(rows, width - 2, { speedUnit: unit }))
       out.push({ text: '  ' + l });
   }
+  const zero = zeroRangeNote(s.speed);
+  if (zero) pushWrapped(out, zero, width, '  ', { tone: 'muted' });
   if (ctx) out.push(...extrasLines(s, sol.units, ctx, width));
 }
 

@@ -64,10 +64,16 @@ export function applyAction(port: InterviewPort, s: Session, action: Action): Se
   };
 }
 
-/** The action Enter makes: the typed text, or the default when nothing is typed. */
+/**
+ * The action Enter makes: the typed text, or the default when nothing is typed. On a choice, the
+ * text typed on its line (words of a choice, a signed grade), else the highlighted choice.
+ */
 export function submitAction(port: InterviewPort, s: Session): Action {
   const q = port.current(s.state);
-  if (q && isChoice(q)) return { type: 'choose', value: q.choices![s.highlight]!.value };
+  if (q && isChoice(q))
+    return s.line.value.trim() !== ''
+      ? { type: 'answer', text: s.line.value }
+      : { type: 'choose', value: q.choices![s.highlight]!.value };
   return s.line.value.trim() === ''
     ? { type: 'accept-default' }
     : { type: 'answer', text: s.line.value };

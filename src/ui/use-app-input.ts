@@ -56,7 +56,7 @@ export function useAppInput(deps: InputDeps) {
         const [input, key] = keys.shift()!;
         const d = latest.current;
         const ctx = contextOf(d.app, d.port);
-        // On a choice each letter is a key of its own: "i56" typed ahead picks [i], then types 56.
+        // On a choice each letter is a key of its own: "f56" typed ahead picks [f], then types 56.
         if (ctx === 'choice' && input.length > 1 && !key.ctrl && !key.meta) {
           keys.unshift(...[...input].map((ch): [string, Key] => [ch, key]));
           continue;
@@ -70,22 +70,37 @@ export function useAppInput(deps: InputDeps) {
   );
 }
 
+/** Ctrl+U, which empties the line being typed (line-edit.ts). */
+const clearsLine = (input: string, key: Key): boolean => key.ctrl && input === 'u';
+
 /** A key that is not a binding: a choice letter, or text for the field on screen. */
 function typed(ctx: KeyContext, input: string, key: Key, d: InputDeps) {
   const { app, port } = d;
   const m = app.current();
-  if (ctx === 'choice' && m.session && !key.ctrl && !key.meta) {
+  if (ctx === 'choice' && m.session) {
     const q = port.current(m.session.state)!;
-    const c = q.choices!.find((c) => c.key.toLowerCase() === input.toLowerCase());
-    // Any other printable key is a miss the investigator should hear about, not silence.
-    if (c || (input.length === 1 && input > ' '))
-      app.act({ type: 'choose', value: c ? c.value : input });
+    const typing = m.session.line.value !== '';
+    // A choice's letter on an empty line picks it; anything else is typed on the choice's line
+    // (words of a choice, or a number the question takes), read when Enter is pressed.
+    const c =
+      !typing && !key.ctrl && !key.meta
+        ? q.choices!.find((c) => c.key.toLowerCase() === input.toLowerCase())
+        : undefined;
+    if (c) return app.act({ type: 'choose', value: c.value });
+    // A space before anything is typed starts nothing (Space is no choice).
+    if (!typing && input.trim() === '') return;
+    const line = editLine(m.session.line, input, key);
+    if (line !== m.session.line)
+      app.update((x) => (x.session ? { ...x, session: { ...x.session, line } } : x));
+    if (clearsLine(input, key) && m.session.state.error) app.act({ type: 'clear-error' });
     return;
   }
   if (ctx === 'question' && m.session) {
     const line = editLine(m.session.line, input, key);
     if (line !== m.session.line)
       app.update((x) => (x.session ? { ...x, session: { ...x.session, line } } : x));
+    // Ctrl+U empties the line: the message about what was on it goes with it.
+    if (clearsLine(input, key) && m.session.state.error) app.act({ type: 'clear-error' });
     return;
   }
   if (ctx === 'jump' && m.overlay?.kind === 'jump') {

@@ -172,7 +172,8 @@ describe('SVG pictures: self-contained, no broken numbers', () => {
     expect(svgs.speed).toContain('17.3 mph');
     expect(svgs.speed).toContain('asphalt');
     expect(svgs.yaw).toContain('M 3.20 ft');
-    expect(svgs.sensitivity).toContain('f[0]');
+    expect(svgs.sensitivity).toContain('drag factor (segment 1)');
+    expect(svgs.sensitivity).not.toContain('f[0]');
   });
   it('escapes text', () => {
     expect(speedAlongSlideSvg(s, { segmentLabels: ['<wet> & "cold"', 'b'] })).toContain(

@@ -82,10 +82,12 @@ describe('sensitivityBars', () => {
     }
   });
 
-  it('shows each change as the user reads it: key, label, bar, -drop / +rise with unit', () => {
+  it('shows each change as the user reads it: plain name, bar, -drop / +rise with unit', () => {
     const lines = sensitivityBars(rows, 80, { speedUnit: 'mph' });
     const f = rows[0]!;
-    const fLine = lines.find((l) => l.startsWith('f[0]'))!;
+    const fLine = lines.find((l) => l.startsWith('drag factor'))!;
+    // The model's internal keys are never shown.
+    for (const l of lines) expect(l).not.toMatch(/\b[dfG]\[\d\]|^n /);
     // f 0.6 and 0.8 against 0.7 (d 100, n 0.9): sqrt(30*100*0.6*0.9) - sqrt(30*100*0.7*0.9) = -3.22, +3.00
     expect(fLine).toContain(
       `-${Math.abs(S(100, 0.6, 0.9) - S(100, 0.7, 0.9)).toFixed(1)} / +${(S(100, 0.8, 0.9) - S(100, 0.7, 0.9)).toFixed(1)} mph`,
@@ -94,7 +96,9 @@ describe('sensitivityBars', () => {
     expect(fLine).toMatch(/█+│█+/);
     // The largest change fills the most cells.
     const cells = (l: string) => (l.match(/[█▌▐]/g) ?? []).length;
-    expect(cells(fLine)).toBeGreaterThan(cells(lines.find((l) => l.startsWith('n'))!));
+    expect(cells(fLine)).toBeGreaterThan(
+      cells(lines.find((l) => l.startsWith('braking efficiency'))!),
+    );
     expect(f.key).toBe('f[0]');
   });
 

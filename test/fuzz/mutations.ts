@@ -142,7 +142,9 @@ export function applyMutation(doc: Json, m: Mutation): string {
     (parent as Record<PathPart, Json>)[key] = tweak(before, m.how);
     return `changed ${pathText(p)} from ${before} to ${tweak(before, m.how)}`;
   }
-  (parent as Record<PathPart, Json>)[key] = m.value as Json;
+  // A copy: the pool's objects are shared by every run, and a later mutation inside one set
+  // here would otherwise change the pool (or make the document refer to itself).
+  (parent as Record<PathPart, Json>)[key] = structuredClone(m.value) as Json;
   return `set ${pathText(p)} to ${m.op === 'set' ? m.label : JSON.stringify(m.value)}`;
 }
 

@@ -13,7 +13,7 @@ import { fill, fillUntil, ids, start, type } from './drive.js';
 
 // Invented answers: a yaw mark and a slide of one car, feet and mph, no posted limit.
 const YAW = {
-  units: 'i',
+  units: 'f',
   'a0.chord': '45',
   'a0.ordinate': '3.5',
   'a0.drag.source': 'e',
@@ -45,7 +45,7 @@ describe('the brakes are asked only when a slide needs them', () => {
   });
 
   it('slide first: the brakes come right after the look of its marks, with why they matter', () => {
-    let s = fillUntil(start(), { units: 'i' }, 'a0.look');
+    let s = fillUntil(start(), { units: 'f' }, 'a0.look');
     s = type(s, 'd');
     const q = currentQuestion(s)!;
     expect(q.id).toBe('vehicle.brakes');
@@ -84,7 +84,7 @@ describe('the brakes are asked only when a slide needs them', () => {
   });
 
   it('turning the only slide into a yaw drops the brakes from the questions but keeps the answer', () => {
-    let s = fill(start(), { ...SLIDE_AT(0), units: 'i', 'a0.look': 'd', 'vehicle.brakes': 'a' });
+    let s = fill(start(), { ...SLIDE_AT(0), units: 'f', 'a0.look': 'd', 'vehicle.brakes': 'a' });
     expect(buildCase(s, { id: 'x' }).vehicle.brakes).toEqual({ mode: 'all' });
     s = fill({ ...s, cursor: 'a0.look' }, { ...YAW, 'a0.look': 'y' });
     expect(brakeIds(s)).toEqual([]);

@@ -3,7 +3,7 @@ import { currentQuestion, questionsFor, buildCase } from '../../src/interview/in
 import { fillUntil, ids, start, type } from './drive.js';
 
 // Invented scenario answers: a case started at the roadside, feet and mph, all brakes working.
-const BASE = { units: 'i' };
+const BASE = { units: 'f' };
 const atLook = () => fillUntil(start(), BASE, 'a0.look');
 
 describe('branching on the look of the marks', () => {
@@ -78,7 +78,7 @@ describe('branching on the look of the marks', () => {
 });
 
 describe('branching on the brakes', () => {
-  const atBrakes = () => fillUntil(start(), { units: 'i', 'a0.look': 'd' }, 'vehicle.brakes');
+  const atBrakes = () => fillUntil(start(), { units: 'f', 'a0.look': 'd' }, 'vehicle.brakes');
   const vehicleIds = (s: ReturnType<typeof start>) =>
     ids(s).filter((id) => id.startsWith('vehicle.'));
 

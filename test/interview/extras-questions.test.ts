@@ -21,7 +21,7 @@ const loaded = (c: Case): Case => {
 // ordinate is 101 - sqrt(101² - 20²) = 2.000 ft, and the offset at 10 ft (and 30 ft) from the
 // chord's start is sqrt(101² - 10²) - sqrt(101² - 20²) = 100.504 - 99.000 = 1.504 ft.
 const ARC = {
-  units: 'i',
+  units: 'f',
   'a0.look': 'y',
   'a0.measure': 'o',
   'a0.offsets.chord': '40',
@@ -33,7 +33,7 @@ const ARC = {
 
 describe('a yaw radius measured by offsets', () => {
   it('offers one chord and its middle ordinate by default, or offsets', () => {
-    const s = fillUntil(start(), { units: 'i', 'a0.look': 'y' }, 'a0.measure');
+    const s = fillUntil(start(), { units: 'f', 'a0.look': 'y' }, 'a0.measure');
     const q = currentQuestion(s)!;
     expect(q.choices!.map((c) => c.label)).toEqual([
       'one chord and its middle ordinate',
@@ -96,7 +96,7 @@ describe('a yaw radius measured by offsets', () => {
 });
 
 const SLIDE = {
-  units: 'i',
+  units: 'f',
   'a0.look': 'd',
   'vehicle.brakes': 'a',
   'a0.surfaces': 'o',

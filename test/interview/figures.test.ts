@@ -8,7 +8,7 @@ import { fill, start } from './drive.js';
 // banked yaw. Typed as an investigator would, with a unit on one answer.
 const TYPED: Record<string, string> = {
   'details.reference': 'INV-2291',
-  units: 'i',
+  units: 'f',
   limit: '40',
   'vehicle.label': 'Unit 2, grey van',
   'vehicle.brakes': 'w',

@@ -8,7 +8,7 @@ import { currentQuestion, questionsFor } from '../../src/interview/index.js';
 import { act, fillUntil, start, type } from './drive.js';
 
 const IMPERIAL = {
-  units: 'i',
+  units: 'f',
   'a0.look': 'd',
   'vehicle.brakes': 'a',
   'a0.surfaces': 'o',
@@ -55,7 +55,7 @@ describe('a measured drag factor is shown as soon as its figures are in', () => 
 });
 
 describe('examples follow the case units', () => {
-  const example = (units: 'i' | 'm', id: string) => {
+  const example = (units: 'f' | 'm', id: string) => {
     const s = fillUntil(start(), { units, 'a0.look': 'y', 'a0.method': 'c' }, 'a0.chord');
     return questionsFor(s.answers).find((q) => q.id === id)?.example;
   };
@@ -64,14 +64,14 @@ describe('examples follow the case units', () => {
     // Chords of about 10-15 m are usual (the question's own how-to).
     expect(Number(example('m', 'a0.chord'))).toBeGreaterThanOrEqual(10);
     expect(Number(example('m', 'a0.chord'))).toBeLessThanOrEqual(15);
-    expect(Number(example('i', 'a0.chord'))).toBeGreaterThanOrEqual(30);
+    expect(Number(example('f', 'a0.chord'))).toBeGreaterThanOrEqual(30);
   });
 
   it('the middle ordinate example is less than half the chord example in both systems', () => {
     expect(Number(example('m', 'a0.ordinate'))).toBeLessThan(Number(example('m', 'a0.chord')) / 2);
     const s = fillUntil(
       start(),
-      { units: 'i', 'a0.look': 'y', 'a0.method': 'c', 'a0.chord': example('i', 'a0.chord')! },
+      { units: 'f', 'a0.look': 'y', 'a0.method': 'c', 'a0.chord': example('f', 'a0.chord')! },
       'a0.ordinate',
     );
     // The imperial example is typed as feet and inches; the reducer must accept it.
@@ -106,7 +106,7 @@ describe('an empty answer says what is expected', () => {
 
 describe('wheel by wheel brakes come to a braking efficiency on screen', () => {
   it('one rear wheel at half, share 0.55-0.65: n = 0.75 + 0.25 × share', () => {
-    const s = fillUntil(start(), { units: 'i', 'a0.look': 'd' }, 'vehicle.brakes');
+    const s = fillUntil(start(), { units: 'f', 'a0.look': 'd' }, 'vehicle.brakes');
     // Front wheels full, rear 0.5 and 1: n = share/2 × 2 + (1 − share)/2 × 1.5 = 0.75 + 0.25 share,
     // so 0.8875 at 0.55, 0.9 at 0.6 and 0.9125 at 0.65 (worked by hand from DOMAIN.md's formula).
     const partway = type(s, 'w', '0.55-0.65', 'w', 'w', 'p', '0.5');
@@ -128,7 +128,7 @@ describe('section names', () => {
     expect(currentQuestion(s)?.section).toBe('Analysis 1 - slide, several surfaces');
     const gap = fillUntil(
       start(),
-      { units: 'i', 'a0.look': 'g', 'vehicle.brakes': 'a' },
+      { units: 'f', 'a0.look': 'g', 'vehicle.brakes': 'a' },
       'a0.label',
     );
     expect(currentQuestion(gap)?.section).toBe('Analysis 1 - slide in parts');

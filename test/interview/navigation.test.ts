@@ -11,7 +11,7 @@ import { act, fill, fillUntil, start, type } from './drive.js';
 
 // An invented single-surface slide: four marks, one drag factor, level road.
 const SLIDE: Record<string, string> = {
-  units: 'i',
+  units: 'f',
   'vehicle.brakes': 'a',
   'a0.look': 'd',
   'a0.surfaces': 'o',
@@ -63,7 +63,7 @@ describe('back, forward, jump and edits', () => {
   });
 
   it('answers of a branch that no longer applies are kept and listed as unused, then used again', () => {
-    let s = fillUntil(start(), { units: 'i', 'a0.look': 'd' }, 'vehicle.brakes');
+    let s = fillUntil(start(), { units: 'f', 'a0.look': 'd' }, 'vehicle.brakes');
     s = type(s, 'w', '0.6', 'w', 'w', 'n', 'n');
     s = type(act(s, { type: 'jump', id: 'vehicle.brakes' }), 'a');
     const unused = questionStates(s)
@@ -89,14 +89,14 @@ describe('back, forward, jump and edits', () => {
   });
 
   it('a jump to a question that does not apply is refused with a notice', () => {
-    const s = fillUntil(start(), { units: 'i', 'a0.look': 'd' }, 'vehicle.brakes');
+    const s = fillUntil(start(), { units: 'f', 'a0.look': 'd' }, 'vehicle.brakes');
     const t = act(s, { type: 'jump', id: 'a0.chord' });
     expect(t.cursor).toBe('vehicle.brakes');
     expect(t.notice).toBe('That question does not apply with the answers given so far.');
   });
 
   it('undo restores the answers and the cursor before the last answer', () => {
-    let s = fillUntil(start(), { units: 'i', 'a0.look': 'd' }, 'vehicle.brakes');
+    let s = fillUntil(start(), { units: 'f', 'a0.look': 'd' }, 'vehicle.brakes');
     const before = s;
     s = type(s, 'e');
     s = act(s, { type: 'undo' });
@@ -107,7 +107,7 @@ describe('back, forward, jump and edits', () => {
   });
 
   it('the review opens from anywhere; back from it goes to the last question', () => {
-    let s = fillUntil(start(), { units: 'i' }, 'vehicle.label');
+    let s = fillUntil(start(), { units: 'f' }, 'vehicle.label');
     s = act(s, { type: 'open-review' });
     expect(s.cursor).toBe(REVIEW);
     expect(currentQuestion(s)).toBeUndefined();
@@ -129,7 +129,7 @@ describe('back, forward, jump and edits', () => {
 describe('answers that an earlier change makes invalid', () => {
   it('are marked invalid, keep their text, leave the case, and are where the cursor goes next', () => {
     const YAW = {
-      units: 'i',
+      units: 'f',
       'vehicle.brakes': 'a',
       'a0.look': 'y',
       'a0.chord': '40',

@@ -17,7 +17,7 @@ import { loadCase } from '../../src/case/load.js';
 const TYPED = [
   '',
   ' ',
-  'i',
+  'f',
   'm',
   'a',
   'e',

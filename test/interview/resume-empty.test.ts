@@ -33,7 +33,7 @@ describe('resume lands on the first open question', () => {
   it('after a required answer saved with an empty text: it is open again, not skipped', () => {
     let s = fillUntil(
       start(),
-      { units: 'i', 'a0.look': 'd', 'vehicle.brakes': 'a', 'a0.surfaces': 'o' },
+      { units: 'f', 'a0.look': 'd', 'vehicle.brakes': 'a', 'a0.surfaces': 'o' },
       'a0.count',
     );
     // As a half-typed answer is kept on save: the text without a parsed value.

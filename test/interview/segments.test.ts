@@ -3,7 +3,7 @@ import { buildCase, currentQuestion, questionStates } from '../../src/interview/
 import type { SkidV1 } from '../../src/case/v1/schema.js';
 import { act, fill, fillUntil, ids, start, type } from './drive.js';
 
-const BASE = { units: 'i', 'vehicle.brakes': 'a', 'a0.look': 'd' };
+const BASE = { units: 'f', 'vehicle.brakes': 'a', 'a0.look': 'd' };
 const skid = (s: ReturnType<typeof start>) => buildCase(s, { id: 'x' }).analyses[0] as SkidV1;
 
 describe('several segments, one at a time', () => {

@@ -12,7 +12,7 @@ const skid = (s: ReturnType<typeof start>) => savedCase(s).analyses[0] as SkidV1
 
 // Invented: a 4% downhill slide of 90 ft, all wheels braking; two tests at 30 mph over 40 and 42 ft.
 const DOWNHILL = {
-  units: 'i',
+  units: 'f',
   'vehicle.brakes': 'a',
   'a0.look': 'd',
   'a0.surfaces': 'o',
@@ -62,7 +62,7 @@ describe('test skids on a slope', () => {
 describe('distance rules', () => {
   const typed = (rule: string) =>
     fill(start(), {
-      units: 'i',
+      units: 'f',
       'vehicle.brakes': 'a',
       'a0.look': 'd',
       'a0.surfaces': 'o',
@@ -77,7 +77,7 @@ describe('distance rules', () => {
     const s = fillUntil(
       start(),
       {
-        units: 'i',
+        units: 'f',
         'vehicle.brakes': 'a',
         'a0.look': 'd',
         'a0.surfaces': 'o',

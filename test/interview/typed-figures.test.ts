@@ -8,7 +8,7 @@ import type { SkidV1 } from '../../src/case/v1/schema.js';
 import { act, fill, fillUntil, start, type } from './drive.js';
 import { reviewText, savedCase, shownLine } from './review-of.js';
 
-const BASE = { units: 'i', 'vehicle.brakes': 'a', 'a0.look': 'd' };
+const BASE = { units: 'f', 'vehicle.brakes': 'a', 'a0.look': 'd' };
 const skid = (s: ReturnType<typeof start>) => savedCase(s).analyses[0] as SkidV1;
 
 describe('a tolerance typed after the list of marks', () => {

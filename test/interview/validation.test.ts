@@ -14,13 +14,13 @@ function rejection(before: Record<string, string>, id: string, text: string): st
 }
 
 const SLIDE = {
-  units: 'i',
+  units: 'f',
   'vehicle.brakes': 'a',
   'a0.look': 'd',
   'a0.surfaces': 'o',
   'a0.count': '4',
 };
-const YAW = { units: 'i', 'vehicle.brakes': 'a', 'a0.look': 'y', 'a0.chord': '40' };
+const YAW = { units: 'f', 'vehicle.brakes': 'a', 'a0.look': 'y', 'a0.chord': '40' };
 
 describe('messages for bad input', () => {
   it.each([
@@ -81,7 +81,7 @@ describe('messages for bad input', () => {
   });
 
   it('a braking efficiency above 1 names the bound and says it is a decimal from 0 to 1', () => {
-    const before = { units: 'i', 'a0.look': 'd', 'vehicle.brakes': 'e' };
+    const before = { units: 'f', 'a0.look': 'd', 'vehicle.brakes': 'e' };
     const m = rejection(before, 'vehicle.brakes.efficiency', '1.2');
     expect(m).toBe(
       'braking efficiency must be at most 1; braking efficiency is a decimal from 0 to 1, e.g. 0.85',
@@ -125,7 +125,7 @@ describe('units typed on an answer', () => {
   });
 
   it('a plain number is read in the units of the case, even after the units change', () => {
-    let s = fillUntil(start(), { units: 'i' }, 'limit');
+    let s = fillUntil(start(), { units: 'f' }, 'limit');
     s = type(s, '50');
     s = type(act(s, { type: 'jump', id: 'units' }), 'm');
     expect(s.notice).toContain('Units changed');

@@ -54,9 +54,12 @@ describe('user text is shown as text, not markup', () => {
   const note = 'tape | <b>bold</b> *star* _under_ `tick` #1';
   const doc = docWith(para(note), table('Notes', ['Note'], [[note]]));
 
-  it('markdown escapes it, so a table keeps its columns', () => {
+  it('markdown escapes only what it would read as markup, so a table keeps its columns', () => {
     const md = renderMarkdown(doc);
-    expect(md).toContain('tape \\| \\<b\\>bold\\</b\\> \\*star\\* \\_under\\_ \\`tick\\` \\#1');
+    // A paragraph: the tag, emphasis and code are escaped; the pipe and a mid-line # are text.
+    expect(md).toContain('tape | \\<b>bold\\</b> \\*star\\* \\_under\\_ \\`tick\\` #1');
+    // A cell: the pipe too, or it would end the cell.
+    expect(md).toContain('| tape \\| \\<b>bold\\</b> \\*star\\* \\_under\\_ \\`tick\\` #1 |');
     // The table row stays one cell: only its two outer pipes are unescaped.
     const row = md.split('\n').find((l) => l.startsWith('| tape'))!;
     expect(row.replace(/\\\|/g, '').split('|')).toHaveLength(3);
@@ -71,5 +74,12 @@ describe('user text is shown as text, not markup', () => {
 
   it('plain text keeps it as typed', () => {
     expect(renderText(doc)).toContain(note);
+  });
+
+  it('markdown leaves a number sign and an underscore inside a word as typed', () => {
+    const md = renderMarkdown(docWith(para('Tester #412 measured R_1'), para('# not a heading')));
+    expect(md).toContain('Tester #412 measured R_1');
+    expect(md).not.toContain('\\#412');
+    expect(md).toContain('\\# not a heading');
   });
 });

@@ -118,7 +118,7 @@ describe('a plausible case', () => {
 describe('typed into the interview', () => {
   it('marks typed more than a quarter apart are warned about in the review', () => {
     const s = fill(start(), {
-      units: 'i',
+      units: 'f',
       'vehicle.brakes': 'a',
       'a0.look': 'd',
       'a0.surfaces': 'o',

@@ -200,9 +200,9 @@ const CHECKS: Record<Command, (keys: string) => Promise<void>> = {
   async up(k) {
     const app = await fresh();
     for (let i = 0; i < 5; i++) await app.press(ENTER);
-    await app.waitText('> [i]');
+    await app.waitText('> [f]');
     await app.press(DOWN, '> [m]');
-    await app.press(k, '> [i]');
+    await app.press(k, '> [f]');
   },
   async down(k) {
     const app = await home({

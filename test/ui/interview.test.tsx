@@ -24,7 +24,7 @@ async function toLimit(app: Awaited<ReturnType<typeof newCase>>) {
   await app.answer('UI-7', 'When did the crash happen?');
   for (let i = 0; i < 4; i++) await app.press(ENTER);
   await app.waitText('Which units');
-  await app.press('i', 'Posted speed limit');
+  await app.press('f', 'Posted speed limit');
 }
 
 describe('interview screen', () => {
@@ -298,7 +298,7 @@ describe('go-to list', () => {
 describe('choices', () => {
   it('takes keys typed ahead in one read through a choice and on into the next answer', async () => {
     const app = await newCase();
-    app.stdin.write('REF-9\r\r\r\r\ri56\r');
+    app.stdin.write('REF-9\r\r\r\r\rf56\r');
     await app.waitText('Which vehicle left the marks?');
     await app.waitText(/saved \d/);
     await app.waitFor(() => {
@@ -311,7 +311,7 @@ describe('choices', () => {
   it('Enter picks the highlighted choice after moving with the arrows', async () => {
     const app = await newCase();
     for (let i = 0; i < 5; i++) await app.press(ENTER);
-    await app.waitText('> [i]');
+    await app.waitText('> [f]');
     await app.press(DOWN, '> [m]');
     const f = await app.press(ENTER, 'Posted speed limit');
     expect(f).toContain('in km/h');
@@ -351,8 +351,10 @@ describe('keys pressed by mistake', () => {
     const app = await newCase();
     for (let i = 0; i < 5; i++) await app.press(ENTER);
     await app.waitText('Which units');
-    const f = await app.press('x', 'is not one of the choices');
-    expect(f).toContain('"x" is not one of the choices here: press i or m');
+    // The letter is typed on the choice's line and read on Enter.
+    await app.press('x', '> x');
+    const f = await app.press(ENTER, 'is not one of the choices');
+    expect(f).toContain('"x" is not one of the choices: press f (feet and mph), m');
     // Esc takes the message away and the question is as it was.
     app.stdin.write(ESC);
     const g = await app.waitFor(

@@ -123,7 +123,7 @@ describe('the review shows the extras', () => {
 
   it('says the slide figure is an estimate from anti-lock marks when the marks were faint and dashed', () => {
     const answers = {
-      units: 'i',
+      units: 'f',
       'a0.look': 'a',
       'vehicle.brakes': 'a',
       'a0.surfaces': 'o',

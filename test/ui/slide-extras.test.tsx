@@ -11,7 +11,7 @@ async function toReaction(o: Parameters<typeof renderApp>[0] = {}) {
   await app.press('n', 'Case or report reference');
   for (let i = 0; i < 5; i++) await app.press(ENTER);
   await app.waitText('Which units');
-  await app.press('i', 'Posted speed limit');
+  await app.press('f', 'Posted speed limit');
   await app.answer('40', 'Which vehicle');
   await app.press(ENTER, 'What do the marks look like?');
   // Anti-lock marks are a slide: the brakes come next, saying why they matter.
