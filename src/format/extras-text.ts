@@ -1,6 +1,6 @@
 import type { Units } from '../engine/types.js';
 import type { Verdict } from '../extras/limit-steps.js';
-import { formatStepLines, kindOfUnit } from './chain-text.js';
+import { formatStepLines, kindOfUnit } from './step-text.js';
 import { formatNumber, formatRange, withUnit } from './numbers.js';
 import type { SolveExtras } from './solve-extras.js';
 

@@ -12,8 +12,8 @@ import { contextOf } from './answer-values.js';
 import { quantityText } from './read-quantity.js';
 import { signed } from './signed.js';
 import { surfaceRow, OTHER_SURFACE } from './drag-table.js';
-import { WHEELS } from './questions-vehicle.js';
-import { isSegment } from './questions-test-grade.js';
+import { WHEELS } from './wheels.js';
+import { isSegment } from './answers-read.js';
 import { DEFAULT_SAMPLES, DEFAULT_SEED } from '../extras/sampling.js';
 import { notesOf, NOTES_KEEP } from './kept-notes.js';
 import {

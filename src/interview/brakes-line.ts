@@ -5,18 +5,16 @@
 import type { Quantity } from '../case/quantity.js';
 import { brakingEfficiency } from '../engine/index.js';
 import { formatNumber } from '../format/numbers.js';
-import type { Answers } from './types.js';
-import { readAnswers } from './answer-values.js';
-import { brakesOf } from './build-case.js';
+import type { AnswerReader } from './types.js';
+import { brakesOf } from './build-parts.js';
 
 /**
  * "Braking efficiency n = 0.90 (0.89 to 0.91), from the four wheels and the front axle share."
  * Undefined until every wheel (and the share) is answered.
  * n = share/2 × (front left + front right) + (1 − share)/2 × (rear left + rear right).
- * @example wheelsLine(answers)
+ * @example wheelsLine(readAnswers(answers))
  */
-export function wheelsLine(a: Answers): string | undefined {
-  const r = readAnswers(a);
+export function wheelsLine(r: AnswerReader): string | undefined {
   if (r.value('vehicle.brakes') !== 'wheels') return undefined;
   const brakes = brakesOf(r);
   const share = r.value('vehicle.share') as Quantity | undefined;

@@ -4,23 +4,14 @@
  */
 import type { Case } from '../case/load.js';
 import { APPEARANCE_NOTES } from '../engine/index.js';
-import {
-  skidV1,
-  yawV1,
-  type AnalysisV1,
-  type BrakesV1,
-  type VehicleV1,
-} from '../case/v1/schema.js';
-import type { CaseMeta, InterviewState, SavedInterview } from './types.js';
+import { skidV1, yawV1, type AnalysisV1, type VehicleV1 } from '../case/v1/schema.js';
+import type { AnswerReader, CaseMeta, InterviewState, SavedInterview } from './types.js';
 import { analysisCount, choiceOf, markLook, unitsOf } from './answers-read.js';
-import { readAnswers, type AnswerReader } from './answer-values.js';
-import { WHEELS } from './questions-vehicle.js';
+import { readAnswers } from './answer-values.js';
 import { analysisKeep, CASE_KEEP, kept, measuredByOffsets, VEHICLE_KEEP } from './kept-fields.js';
-import { dragOf, segmentsOf, slopeOf, text, type Q } from './build-parts.js';
+import { brakesOf, dragOf, segmentsOf, slopeOf, text, type Q } from './build-parts.js';
 import { restoreNotes } from './kept-notes.js';
 import { testGradeNotes } from './test-grade-notes.js';
-
-export { segmentsLine } from './build-parts.js';
 
 /** Distance rules a slide's marks may take (the file's `distanceRule`). */
 const DISTANCE_RULES = ['average', 'longest', 'shortest', 'spread'];
@@ -88,46 +79,6 @@ function yawOf(r: AnswerReader, i: number, id: string): AnalysisV1 | undefined {
     ...(e !== undefined ? { superelevation: e } : {}),
   });
   return parsed.success ? parsed.data : undefined;
-}
-
-/** The brakes as answered so far, or undefined while they are not (also read by grade-check.ts). */
-export function brakesOf(r: AnswerReader): BrakesV1 | undefined {
-  // Not asked (no slide in the case) or not yet answered: no brakes to write.
-  if (r.status('vehicle.brakes') !== 'answered') return undefined;
-  if (
-    !r.complete(
-      (id) =>
-        id.startsWith('vehicle.brakes') ||
-        id === 'vehicle.share' ||
-        id.startsWith('vehicle.wheel.'),
-    )
-  )
-    return undefined;
-  const mode = r.value('vehicle.brakes');
-  if (mode === 'all') return { mode };
-  if (mode === 'estimate') {
-    const basis = text(r, 'vehicle.brakes.basis');
-    return {
-      mode,
-      efficiency: r.value('vehicle.brakes.efficiency') as Q,
-      ...(basis ? { basis } : {}),
-    };
-  }
-  const wheel = (w: (typeof WHEELS)[number]): Q => {
-    const v = r.value(`vehicle.wheel.${w.id}`);
-    return v === 'working'
-      ? 1
-      : v === 'none'
-        ? 0
-        : (r.value(`vehicle.wheel.${w.id}.fraction`) as Q);
-  };
-  return {
-    mode: 'wheels',
-    frontLeft: wheel(WHEELS[0]),
-    frontRight: wheel(WHEELS[1]),
-    rearLeft: wheel(WHEELS[2]),
-    rearRight: wheel(WHEELS[3]),
-  };
 }
 
 /** The distribution asked at the end of the case, when one was chosen and its questions are answered. */

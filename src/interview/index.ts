@@ -16,7 +16,7 @@ export {
 export { buildCase, analysisId } from './build-case.js';
 export { stateFromCase, answersFromCase, EDITED_NOTICE } from './from-case.js';
 export { solveDraft } from './draft.js';
-export { contextOf } from './answer-values.js';
+export { contextOf, defaultTextOf, explainOf } from './answer-values.js';
 export { matchChoice } from './question-kinds.js';
 export { REVIEW } from './navigate.js';
 export { SURFACE_CHOICES, OTHER_SURFACE, rangesLine } from './drag-table.js';

@@ -5,10 +5,16 @@
  */
 import { formatNumber } from '../format/numbers.js';
 import { spread } from '../case/quantity.js';
-import type { AnswerReader } from './answer-values.js';
-import { choiceOf, markLook, segmentCount, surfaceMode } from './answers-read.js';
+import type { AnswerReader } from './types.js';
+import {
+  choiceOf,
+  isSegment,
+  markLook,
+  segmentCount,
+  surfaceMode,
+  testWhere,
+} from './answers-read.js';
 import { testGradeOf } from './build-parts.js';
-import { isSegment, testWhere } from './questions-test-grade.js';
 
 const pct = (n: number) => `${n > 0 ? '+' : ''}${formatNumber(n, 'percent')}%`;
 

@@ -1,5 +1,5 @@
 import type { Range, Step } from '../engine/types.js';
-import { kindOfUnit } from '../format/chain-text.js';
+import { kindOfUnit } from '../format/step-text.js';
 import { formatNumber, formatRange, withUnit } from '../format/numbers.js';
 
 /** A step's result with its range, as the chain shows it: `43.3 mph (40.2 to 46.1)`. */

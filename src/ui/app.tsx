@@ -161,7 +161,7 @@ export function App(props: AppProps) {
         session={s}
         question={question}
         defaultText={shownDefault(question, port.defaultText(s.state), props.services.reactionTime)}
-        explain={question.explainChoice?.(s.state.answers)}
+        explain={port.explain(s.state)}
         draft={draft!}
         width={width}
         height={body - 1}

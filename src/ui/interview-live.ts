@@ -15,6 +15,7 @@ import {
 } from '../interview/derived.js';
 import { buildCase, lookNotes } from '../interview/build-case.js';
 import { solveDraft } from '../interview/draft.js';
+import { defaultTextOf, explainOf } from '../interview/answer-values.js';
 import { stateFromCase } from '../interview/from-case.js';
 import type { InterviewState } from '../interview/types.js';
 import type { DraftView } from './draft-panel.js';
@@ -69,7 +70,11 @@ export const liveInterview: InterviewPort = {
   states: questionStates,
   defaultText(state: InterviewState) {
     const q = currentQuestion(state);
-    return q?.defaultText?.(state.answers);
+    return q && defaultTextOf(q, state.answers);
+  },
+  explain(state: InterviewState) {
+    const q = currentQuestion(state);
+    return q && explainOf(q, state.answers);
   },
   build(state, base) {
     const meta = { id: base.id, ...(base.created ? { created: base.created } : {}) };

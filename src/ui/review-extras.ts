@@ -14,7 +14,7 @@ import type { YawFromOffsets } from '../extras/yaw-offsets.js';
 import { speedAlongSlideChart } from '../extras/slide-chart.js';
 import { yawArcSketch } from '../extras/yaw-sketch.js';
 import { formatNumber, formatRange, withUnit } from '../format/numbers.js';
-import type { ShownLine } from './review-lines.js';
+import type { ShownLine } from './review-step.js';
 import { pushWrapped, stepLines } from './review-step.js';
 
 /** What the review needs beside the solution to show the extras. */

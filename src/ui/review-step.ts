@@ -1,6 +1,6 @@
 /** Lines of one step of a chain and wrapped text, shared by the review's parts. */
 import type { Step } from '../engine/types.js';
-import { kindOfUnit } from '../format/chain-text.js';
+import { kindOfUnit } from '../format/step-text.js';
 import { formatRange } from '../format/numbers.js';
 import { wrap } from '../report/wrap.js';
 import type { TONE } from './theme.js';
