@@ -1,7 +1,8 @@
 import type { Units } from '../engine/types.js';
 import type { Verdict } from '../extras/limit-steps.js';
 import { formatStepLines, kindOfUnit } from './step-text.js';
-import { formatNumber, formatRange, withUnit } from './numbers.js';
+import { formatRange, withUnit } from './numbers.js';
+import { formatNumber } from '../engine/number-text.js';
 import type { SolveExtras } from './solve-extras.js';
 
 const speedOr = (s: number | undefined, u: Units) =>

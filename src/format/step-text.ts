@@ -1,6 +1,7 @@
 /** One step of a chain as text, and the kind of number a unit shows: shared by every text output. */
 import type { Step } from '../engine/types.js';
-import { formatRange, type NumberKind } from './numbers.js';
+import { formatRange } from './numbers.js';
+import { type NumberKind } from '../engine/number-text.js';
 
 /** The kind of number a step's result is, from its unit. */
 export function kindOfUnit(unit: string): NumberKind {

@@ -3,7 +3,8 @@
  * can be reviewed and edited in the interview, and built again with the same figures.
  */
 import { airborneAnswers } from './airborne-answers.js';
-import { spread, type Quantity } from '../case/quantity.js';
+import { type Quantity } from '../case/quantity.js';
+import { spread } from '../engine/spread.js';
 import type { Case } from '../case/load.js';
 import type { DragV1 } from '../case/v1/schema.js';
 import type { Answers } from './types.js';

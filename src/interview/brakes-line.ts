@@ -4,7 +4,7 @@
  */
 import type { Quantity } from '../case/quantity.js';
 import { brakingEfficiency } from '../engine/index.js';
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from '../engine/number-text.js';
 import type { AnswerReader } from './types.js';
 import { brakesOf } from './build-parts.js';
 

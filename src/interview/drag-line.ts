@@ -3,7 +3,7 @@
  * going on: the mean and the smallest to largest of the tests, pulls or readings.
  */
 import { dragFactor } from '../engine/index.js';
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from '../engine/number-text.js';
 import type { AnswerReader } from './types.js';
 import { unitsOf } from './answers-read.js';
 import { dragOf } from './build-parts.js';

@@ -4,7 +4,8 @@
  * the review; this says so at the grade question itself, while the investigator is still on scene
  * or at the measurement, so the grade or the drag factor can be checked at once.
  */
-import { quantity, RULES, spread } from '../case/quantity.js';
+import { quantity, RULES } from '../case/quantity.js';
+import { spread } from '../engine/spread.js';
 import { brakingEfficiency, dragFactor, effectiveDrag } from '../engine/index.js';
 import type { AnswerContext } from './types.js';
 import { choiceOf } from './answers-read.js';

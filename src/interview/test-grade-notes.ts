@@ -3,8 +3,8 @@
  * were run, and so what was done with their grade. The file holds only the grade (`testGrade`);
  * whether it is the slide's own stretch is the investigator's answer, read here.
  */
-import { formatNumber } from '../format/numbers.js';
-import { spread } from '../case/quantity.js';
+import { formatNumber } from '../engine/number-text.js';
+import { spread } from '../engine/spread.js';
 import type { AnswerReader } from './types.js';
 import {
   choiceOf,

@@ -15,7 +15,7 @@ import {
 } from './doc.js';
 import { extrasSections, type ReportExtrasOptions } from './extras-section.js';
 import { speedText } from './figures-text.js';
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from '../engine/number-text.js';
 import { measurementTables } from './measurements.js';
 
 /** What the report says about itself, and settings of its further sections. */

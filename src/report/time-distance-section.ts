@@ -3,7 +3,8 @@ import type { AnalysisSolution, Range, Units } from '../engine/types.js';
 import { timeDistanceFromCase } from '../extras/case-fields.js';
 import { limitComparison, type LimitComparison } from '../extras/limit-comparison.js';
 import type { Verdict } from '../extras/limit-steps.js';
-import { formatNumber, formatRange } from '../format/numbers.js';
+import { formatRange } from '../format/numbers.js';
+import { formatNumber } from '../engine/number-text.js';
 import { stepBlocks } from './analysis-section.js';
 import { list, para, section, table, type Section } from './doc.js';
 

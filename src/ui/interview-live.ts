@@ -32,7 +32,7 @@ export function solveAsFile(c: Case): CaseSolution {
       analyses: [],
       warnings: loaded.issues.map((i) => `${i.path}: ${i.message}`),
     };
-  return solveCase(loaded.case);
+  return solveCase(loaded.case, loaded.unknownFields);
 }
 
 /** The side panel's view of the running solution. */

@@ -3,7 +3,7 @@
  * at the posted limit, the distribution of speeds, the offsets fit, and the pictures as text.
  * Every figure is read from src/extras (analysisExtras); nothing is computed here.
  */
-import { spread } from '../case/quantity.js';
+import { spread } from '../engine/spread.js';
 import type { Case } from '../case/load.js';
 import type { AnalysisSolution, Outcome, Units } from '../engine/types.js';
 import { analysisExtras, type AnalysisExtras } from '../extras/analysis-extras.js';
@@ -13,7 +13,8 @@ import type { SampleSummary } from '../extras/sampling.js';
 import type { YawFromOffsets } from '../extras/yaw-offsets.js';
 import { speedAlongSlideChart } from '../extras/slide-chart.js';
 import { yawArcSketch } from '../extras/yaw-sketch.js';
-import { formatNumber, formatRange, withUnit } from '../format/numbers.js';
+import { formatRange, withUnit } from '../format/numbers.js';
+import { formatNumber } from '../engine/number-text.js';
 import type { ShownLine } from './review-step.js';
 import { pushWrapped, stepLines } from './review-step.js';
 
