@@ -1,5 +1,6 @@
 import { spread } from '../engine/spread.js';
 import type { Case } from '../case/load.js';
+import { DEFAULT_REACTION_TIME } from '../engine/constants.js';
 import { unitsOf } from '../engine/index.js';
 import type { AnalysisSolution, Outcome } from '../engine/types.js';
 import { samplingFromCase, timeDistanceFromCase } from './case-fields.js';
@@ -9,9 +10,6 @@ import { sensitivitySvg, speedAlongSlideSvg, yawArcSvg } from './pictures-svg.js
 import { sampleSpeeds, type SampleSummary } from './sampling.js';
 import { sensitivity, type SensitivityRow } from './sensitivity.js';
 import { yawFromOffsets, type YawFromOffsets } from './yaw-offsets.js';
-
-/** Default perception-reaction time when neither the case nor the preferences give one. */
-export const DEFAULT_REACTION_TIME = 1.5;
 
 export interface ExtrasOptions {
   /** The user's preferred perception-reaction time, s (the case's own `timeDistance` wins). */

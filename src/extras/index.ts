@@ -43,9 +43,4 @@ export {
   type OffsetsFieldV1,
 } from './case-fields.js';
 export { yawFromOffsets, OFFSET_READING, type YawFromOffsets } from './yaw-offsets.js';
-export {
-  analysisExtras,
-  DEFAULT_REACTION_TIME,
-  type AnalysisExtras,
-  type ExtrasOptions,
-} from './analysis-extras.js';
+export { analysisExtras, type AnalysisExtras, type ExtrasOptions } from './analysis-extras.js';

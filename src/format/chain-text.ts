@@ -1,11 +1,5 @@
 import type { Case } from '../case/load.js';
-import type {
-  AnalysisOutcome,
-  AnalysisSolution,
-  CaseSolution,
-  Step,
-  Units,
-} from '../engine/types.js';
+import type { AnalysisOutcome, AnalysisSolution, CaseSolution, Units } from '../engine/types.js';
 import { isAboveLimit } from '../engine/solution.js';
 import { CAUTIONS } from './cautions.js';
 import { formatStepLines } from './step-text.js';

@@ -24,4 +24,3 @@ export { renderReport, REPORT_FORMATS, type ReportFormat } from './render.js';
 export { writeReport, reportFiles, figurePath } from './write-report.js';
 export type { WriteResult, OutFile } from './write-files.js';
 export { toolVersion } from './version.js';
-export { DEFAULT_REACTION_TIME } from './time-distance-section.js';

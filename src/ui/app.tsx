@@ -17,7 +17,7 @@ import { reviewLines, type ShownLine } from './review-lines.js';
 import { isChoice } from './question-view.js';
 import type { Question } from '../interview/types.js';
 import type { ReviewContext } from './review-extras.js';
-import { DEFAULT_REACTION_TIME } from '../extras/analysis-extras.js';
+import { DEFAULT_REACTION_TIME, REACTION_TIMES } from '../engine/constants.js';
 
 export interface AppProps {
   services: Services;
@@ -60,7 +60,7 @@ function shownDefault(
 ): string | undefined {
   if (q.usesPreference === 'reactionTime') {
     const t = reactionTime ?? DEFAULT_REACTION_TIME;
-    return `your preference, ${t} s (1.5 s: surprise event, M. Green 2000; 2.5 s: AASHTO design)`;
+    return `your preference, ${t} s (${REACTION_TIMES.surprise} s: surprise event, M. Green 2000; ${REACTION_TIMES.design} s: AASHTO design)`;
   }
   if (text === undefined || !isChoice(q)) return text;
   return q.choices!.find((c) => c.value === text)?.label ?? text;

@@ -14,6 +14,7 @@ import type { YawFromOffsets } from '../extras/yaw-offsets.js';
 import { speedAlongSlideChart } from '../extras/slide-chart.js';
 import { yawArcSketch } from '../extras/yaw-sketch.js';
 import { formatRange, withUnit } from '../format/numbers.js';
+import { verdictWords } from '../format/verdict.js';
 import { formatNumber } from '../engine/number-text.js';
 import type { ShownLine } from './review-step.js';
 import { pushWrapped, stepLines } from './review-step.js';
@@ -27,38 +28,13 @@ export interface ReviewContext {
   notes?: Record<string, string[]>;
 }
 
-const WORD = { yes: 'yes', no: 'no', depends: 'depends on the inputs' } as const;
-
-/** A distance from the point, named by its side: "12.0 ft short of it" or "3.1 ft beyond it". */
-function side(margin: number, u: Units): string {
-  const d = withUnit(Math.abs(margin), 'length', u.length);
-  return margin >= 0 ? `${d} short of it` : `${d} beyond it`;
-}
-
-function verdictLines(out: ShownLine[], v: Verdict, u: Units, width: number, what: string) {
-  const at = withUnit(v.at, 'length', u.length);
-  pushWrapped(
-    out,
-    `Would have stopped before ${what} (${at} from the start of the marks): ${WORD[v.stops]}`,
-    width,
-    '    ',
-    { bold: true, tone: v.stops === 'no' ? 'warning' : 'result' },
-  );
-  const margin = formatRange(v.margin, 'length', u.length);
-  const beyond = formatRange(
-    { value: -v.margin.value, low: -v.margin.high, high: -v.margin.low },
-    'length',
-    u.length,
-  );
-  const there = formatRange(v.speedThere, 'speed', u.speed);
-  // Said in the direction it goes, so no distance is read as a negative "short of it".
-  const detail =
-    v.stops === 'yes'
-      ? `it comes to rest ${margin} short of it`
-      : v.stops === 'no'
-        ? `it reaches it still moving at ${there} and comes to rest ${beyond} beyond it`
-        : `over the input ranges it comes to rest anywhere from ${side(v.margin.low, u)} to ${side(v.margin.high, u)} (at the values: ${side(v.margin.value, u)}); speed there ${there}`;
-  pushWrapped(out, detail, width, '      ');
+function verdictLines(out: ShownLine[], v: Verdict, u: Units, width: number) {
+  const w = verdictWords(v, u);
+  pushWrapped(out, w.headline, width, '    ', {
+    bold: true,
+    tone: v.stops === 'no' ? 'warning' : 'result',
+  });
+  pushWrapped(out, w.detail, width, '      ');
 }
 
 function limitLines(out: ShownLine[], t: LimitComparison, u: Units, width: number) {
@@ -81,8 +57,8 @@ function limitLines(out: ShownLine[], t: LimitComparison, u: Units, width: numbe
     ],
   ];
   for (const [k, v] of rows) pushWrapped(out, `${k}: ${v}`, width, '    ');
-  verdictLines(out, t.endOfMarks, u, width, 'the end of the marks');
-  if (t.conflict) verdictLines(out, t.conflict, u, width, 'the conflict point');
+  verdictLines(out, t.endOfMarks, u, width);
+  if (t.conflict) verdictLines(out, t.conflict, u, width);
   t.steps.forEach((s, j) => stepLines(out, s, j + 1, width, '    '));
   for (const a of t.assumptions) pushWrapped(out, `- ${a}`, width, '    ');
 }

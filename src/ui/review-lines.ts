@@ -6,12 +6,12 @@
  * and the tests read the same lines the user reads.
  */
 import type { AnalysisSolution, CaseSolution } from '../engine/types.js';
-import { isAboveLimit } from '../engine/index.js';
 import { CAUTIONS } from '../format/cautions.js';
 import { KIND_NAMES } from '../format/kind-names.js';
 import { formatRange } from '../format/numbers.js';
 import { formatNumber } from '../engine/number-text.js';
 import { phasesLine } from '../format/phases-text.js';
+import { limitWord } from '../format/verdict.js';
 import { sensitivity } from '../extras/sensitivity.js';
 import { sensitivityBars } from '../extras/sensitivity-bars.js';
 import { pushWrapped, stepLines, type ShownLine } from './review-step.js';
@@ -58,14 +58,10 @@ function analysisLines(
     const v = sol.postedLimit.value;
     // A limit converted from the other unit is not whole: show it as converted, not rounded.
     const limit = `${formatNumber(v, Number.isInteger(v) ? 'integer' : 'speed')} ${unit}`;
-    const above = isAboveLimit(s.speed.low, sol.postedLimit.value);
-    pushWrapped(
-      out,
-      `Posted limit ${limit}: the low end is ${above ? 'above' : 'not above'} the limit.`,
-      width,
-      '  ',
-      { tone: above ? 'warning' : undefined },
-    );
+    const word = limitWord(s.speed.low, sol.postedLimit.value);
+    pushWrapped(out, `Posted limit ${limit}: the low end is ${word} the limit.`, width, '  ', {
+      tone: word === 'above' ? 'warning' : undefined,
+    });
   }
   if (s.assumptions.length) {
     out.push({ text: '  Assumptions', bold: true });
