@@ -9,7 +9,9 @@ import type { AnswerReader, CaseMeta, InterviewState, SavedInterview } from './t
 import { analysisCount, choiceOf, markLook, unitsOf } from './answers-read.js';
 import { readAnswers } from './answer-values.js';
 import { analysisKeep, CASE_KEEP, kept, measuredByOffsets, VEHICLE_KEEP } from './kept-fields.js';
-import { brakesOf, dragOf, segmentsOf, slopeOf, text, type Q } from './build-parts.js';
+import { brakesOf, dragOf, quantityOf, segmentsOf, slopeOf, text } from './build-parts.js';
+import { RULES } from '../case/quantity.js';
+import { samplingFieldV1 } from '../case/v1/extras-fields.js';
 import { restoreNotes } from './kept-notes.js';
 import { testGradeNotes } from './test-grade-notes.js';
 
@@ -86,11 +88,12 @@ function samplingOf(r: AnswerReader): Case['sampling'] {
   const shape = r.value('sampling.shape');
   if (shape !== 'uniform' && shape !== 'normal') return undefined;
   if (!r.complete((id) => id.startsWith('sampling.'))) return undefined;
-  return {
+  const parsed = samplingFieldV1.safeParse({
     shape,
-    samples: r.value('sampling.samples') as number,
-    seed: r.value('sampling.seed') as number,
-  };
+    samples: r.value('sampling.samples'),
+    seed: r.value('sampling.seed'),
+  });
+  return parsed.success ? parsed.data : undefined;
 }
 
 /** Stored id of analysis i (kept from a hand-written case), or `skid-1`, `yaw-2`, ... */
@@ -180,10 +183,10 @@ export function buildCase(state: InterviewState, meta: CaseMeta): Case {
   if (label) vehicle.label = label;
   const brakes = brakesOf(r);
   if (brakes) vehicle.brakes = brakes;
-  const share = r.value('vehicle.share');
-  if (brakes?.mode === 'wheels' && share !== undefined) vehicle.frontAxleShare = share as Q;
-  const track = r.value('vehicle.trackWidth');
-  if (track !== undefined) vehicle.trackWidth = track as Q;
+  const share = quantityOf(r, 'vehicle.share', RULES.share);
+  if (brakes?.mode === 'wheels' && share !== undefined) vehicle.frontAxleShare = share;
+  const track = quantityOf(r, 'vehicle.trackWidth', RULES.trackWidth);
+  if (track !== undefined) vehicle.trackWidth = track;
   const analyses = included(state, answers, r, !!brakes, track !== undefined).flatMap(
     ({ i, id, kind }) => (kind === 'skid' ? skidOf(r, i, id) : yawOf(r, i, id)) ?? [],
   );
@@ -206,8 +209,8 @@ export function buildCase(state: InterviewState, meta: CaseMeta): Case {
   if (meta.created) c.created = meta.created;
   if (meta.updated) c.updated = meta.updated;
   if (Object.keys(details).length) c.details = details;
-  const limit = r.value('limit');
-  if (limit !== undefined) c.postedLimit = limit as Q;
+  const limit = quantityOf(r, 'limit', RULES.postedLimit);
+  if (limit !== undefined) c.postedLimit = limit;
   const sampling = samplingOf(r);
   if (sampling) c.sampling = sampling;
   restoreNotes(c, answers);

@@ -5,6 +5,7 @@
  */
 import { quantity, RULES, type Quantity, type QuantityRule } from '../case/quantity.js';
 import {
+  brakesV1,
   dragV1,
   segmentV1,
   type BrakesV1,
@@ -145,28 +146,18 @@ export function brakesOf(r: AnswerReader): BrakesV1 | undefined {
   )
     return undefined;
   const mode = r.value('vehicle.brakes');
-  if (mode === 'all') return { mode };
-  if (mode === 'estimate') {
-    const basis = text(r, 'vehicle.brakes.basis');
-    return {
-      mode,
-      efficiency: r.value('vehicle.brakes.efficiency') as Q,
-      ...(basis ? { basis } : {}),
-    };
-  }
-  const wheel = (w: (typeof WHEELS)[number]): Q => {
+  const basis = text(r, 'vehicle.brakes.basis');
+  const wheel = (w: (typeof WHEELS)[number]): unknown => {
     const v = r.value(`vehicle.wheel.${w.id}`);
-    return v === 'working'
-      ? 1
-      : v === 'none'
-        ? 0
-        : (r.value(`vehicle.wheel.${w.id}.fraction`) as Q);
+    return v === 'working' ? 1 : v === 'none' ? 0 : r.value(`vehicle.wheel.${w.id}.fraction`);
   };
-  return {
-    mode: 'wheels',
-    frontLeft: wheel(WHEELS[0]),
-    frontRight: wheel(WHEELS[1]),
-    rearLeft: wheel(WHEELS[2]),
-    rearRight: wheel(WHEELS[3]),
-  };
+  const raw =
+    mode === 'estimate'
+      ? { mode, efficiency: r.value('vehicle.brakes.efficiency'), ...(basis ? { basis } : {}) }
+      : mode === 'wheels'
+        ? { mode, ...Object.fromEntries(WHEELS.map((w) => [w.key, wheel(w)])) }
+        : { mode };
+  // Read with the file's schema: a wheel or an efficiency not (validly) answered makes no brakes.
+  const parsed = brakesV1.safeParse(raw);
+  return parsed.success ? parsed.data : undefined;
 }

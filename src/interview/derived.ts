@@ -49,6 +49,18 @@ export function questionStates(state: InterviewState): QuestionState[] {
   return out;
 }
 
+/**
+ * The questions that apply and still need an answer (not answered yet, or answered with text
+ * that no longer reads), by title, in the order asked: what stands between the answers and a
+ * figure. Optional questions are left out.
+ */
+export function stillToAnswer(state: InterviewState): string[] {
+  const r = readAnswers(state.answers);
+  return r.questions
+    .filter((q) => !q.optional && r.status(q.id) !== 'answered')
+    .map((q) => (r.status(q.id) === 'invalid' ? `${q.title} (does not read)` : q.title));
+}
+
 /** Where a resumed interview lands: the first open or invalid question, or the review. */
 export function firstOpenQuestion(state: InterviewState): string {
   return firstOpenIn(state.answers);

@@ -11,6 +11,7 @@ import {
   firstOpenQuestion,
   progress,
   questionStates,
+  stillToAnswer,
   summaryOfDone,
 } from '../interview/derived.js';
 import { buildCase, lookNotes } from '../interview/build-case.js';
@@ -35,8 +36,11 @@ export function solveAsFile(c: Case): CaseSolution {
   return solveCase(loaded.case, loaded.unknownFields);
 }
 
-/** The side panel's view of the running solution. */
-export function draftView(sol: CaseSolution): DraftView {
+/**
+ * The side panel's view of the running solution. `open` names the questions still to answer,
+ * so that before the first figure the panel says what it waits for.
+ */
+export function draftView(sol: CaseSolution, open: readonly string[] = []): DraftView {
   const steps: DraftView['steps'] = [];
   const results: string[] = [];
   const problems: string[] = [];
@@ -58,7 +62,10 @@ export function draftView(sol: CaseSolution): DraftView {
   const view: DraftView = { steps };
   if (results.length) view.result = results.join('; ');
   if (problems.length) view.note = problems.join('; ');
-  else if (!results.length)
+  else if (!results.length && open.length) {
+    const more = open.length > 3 ? `, and ${open.length - 3} more` : '';
+    view.note = `No figure yet: still to answer: ${open.slice(0, 3).join('; ')}${more}.`;
+  } else if (!results.length)
     view.note = 'No figure yet: the chain fills in once an analysis is complete.';
   return view;
 }
@@ -87,7 +94,7 @@ export const liveInterview: InterviewPort = {
     return { ...st, cursor: firstOpenQuestion(st), mode, explain: mode === 'guided' };
   },
   summary: summaryOfDone,
-  draft: (state, base) => draftView(solveDraft(state, base.id)),
+  draft: (state, base) => draftView(solveDraft(state, base.id), stillToAnswer(state)),
   solve: solveAsFile,
   notes: lookNotes,
 };
