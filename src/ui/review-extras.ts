@@ -5,12 +5,13 @@
  */
 import { spread } from '../engine/spread.js';
 import type { Case } from '../case/load.js';
-import type { AnalysisSolution, Outcome, Units } from '../engine/types.js';
+import type { AnalysisSolution, CaseSolution, Outcome, Units } from '../engine/types.js';
 import { analysisExtras, type AnalysisExtras } from '../extras/analysis-extras.js';
 import type { Verdict } from '../extras/limit-steps.js';
 import type { LimitComparison } from '../extras/limit-comparison.js';
 import type { SampleSummary } from '../extras/sampling.js';
 import type { YawFromOffsets } from '../extras/yaw-offsets.js';
+import { sensitivity, type SensitivityRow } from '../extras/sensitivity.js';
 import { speedAlongSlideChart } from '../extras/slide-chart.js';
 import { yawArcSketch } from '../extras/yaw-sketch.js';
 import { formatRange, withUnit } from '../format/numbers.js';
@@ -156,21 +157,52 @@ function pictures(
 }
 
 /**
- * The extras' lines for one solved analysis of `ctx.case`, at most `width` columns each.
- * @example extrasLines(solution, units, { case: c, reactionTime: 1.5 }, 80)
+ * Everything the review shows that takes work: the solution's extras (sampling, the limit
+ * comparison, the offsets fit, sensitivity) for each solved analysis. Computed once per case and
+ * answers; laying the lines out for a width (`reviewLines`) reads them and computes nothing.
+ */
+export interface ReviewFigures {
+  solution: CaseSolution;
+  ctx?: ReviewContext;
+  /** By analysis id, for each solved analysis. */
+  sensitivity: Record<string, SensitivityRow[]>;
+  /** By analysis id, for each solved analysis, when the case is given. */
+  extras: Record<string, AnalysisExtras>;
+}
+
+/**
+ * @example const figures = reviewFigures(solveCase(c), { case: c }); reviewLinesOf(figures, 80)
+ */
+export function reviewFigures(solution: CaseSolution, ctx?: ReviewContext): ReviewFigures {
+  const fig: ReviewFigures = { solution, sensitivity: {}, extras: {}, ...(ctx ? { ctx } : {}) };
+  for (const a of solution.analyses) {
+    if (!a.ok) continue;
+    const s = a.solution;
+    if (ctx) {
+      const x = analysisExtras(
+        ctx.case,
+        s,
+        ctx.reactionTime !== undefined ? { reactionTime: ctx.reactionTime } : {},
+      );
+      fig.extras[s.id] = x;
+      fig.sensitivity[s.id] = x.sensitivity;
+    } else fig.sensitivity[s.id] = sensitivity(s);
+  }
+  return fig;
+}
+
+/**
+ * The extras' lines for one solved analysis of case `c`, at most `width` columns each, from its
+ * extras as `reviewFigures` computed them.
  */
 export function extrasLines(
   s: AnalysisSolution,
   u: Units,
-  ctx: ReviewContext,
+  c: Case,
+  x: AnalysisExtras,
   width: number,
 ): ShownLine[] {
   const out: ShownLine[] = [];
-  const x = analysisExtras(
-    ctx.case,
-    s,
-    ctx.reactionTime !== undefined ? { reactionTime: ctx.reactionTime } : {},
-  );
   part(out, 'Time and distance at the posted limit', x.limit, width, (v) =>
     limitLines(out, v, u, width),
   );
@@ -178,6 +210,6 @@ export function extrasLines(
   part(out, 'Circle fitted to the offsets', x.offsets, width, (v) =>
     offsetsLines(out, v, u, width, s.warnings),
   );
-  pictures(out, s, ctx.case, x, u, width);
+  pictures(out, s, c, x, u, width);
   return out;
 }

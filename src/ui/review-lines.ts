@@ -12,10 +12,14 @@ import { formatRange } from '../format/numbers.js';
 import { formatNumber } from '../engine/number-text.js';
 import { phasesLine } from '../format/phases-text.js';
 import { limitWord } from '../format/verdict.js';
-import { sensitivity } from '../extras/sensitivity.js';
 import { sensitivityBars } from '../extras/sensitivity-bars.js';
 import { pushWrapped, stepLines, type ShownLine } from './review-step.js';
-import { extrasLines, type ReviewContext } from './review-extras.js';
+import {
+  extrasLines,
+  reviewFigures,
+  type ReviewContext,
+  type ReviewFigures,
+} from './review-extras.js';
 
 export { kindForUnit, type ShownLine } from './review-step.js';
 
@@ -29,9 +33,12 @@ function analysisLines(
   s: AnalysisSolution,
   sol: CaseSolution,
   width: number,
-  ctx: ReviewContext | undefined,
+  fig: ReviewFigures,
 ) {
   const unit = sol.units.speed;
+  const ctx = fig.ctx;
+  const x = fig.extras[s.id];
+  const rows = fig.sensitivity[s.id] ?? [];
   s.steps.forEach((step, i) => stepLines(out, step, i + 1, width, '  '));
   out.push({ text: '' });
   pushWrapped(
@@ -73,13 +80,12 @@ function analysisLines(
     out.push({ text: '  Warnings', bold: true, tone: 'warning' });
     for (const w of s.warnings) pushWrapped(out, `! ${w}`, width, '   ', { tone: 'warning' });
   }
-  const rows = sensitivity(s);
   if (rows.length) {
     out.push({ text: '  What moves the result', bold: true });
     for (const l of sensitivityBars(rows, width - 2, { speedUnit: unit }))
       out.push({ text: '  ' + l });
   }
-  if (ctx) out.push(...extrasLines(s, sol.units, ctx, width));
+  if (ctx && x) out.push(...extrasLines(s, sol.units, ctx.case, x, width));
 }
 
 /**
@@ -116,6 +122,12 @@ export function glanceLines(sol: CaseSolution, width: number): ShownLine[] {
  * @example reviewLines(solveCase(c), 80)[0] // { text: 'At a glance', ... }
  */
 export function reviewLines(sol: CaseSolution, width: number, ctx?: ReviewContext): ShownLine[] {
+  return reviewLinesOf(reviewFigures(sol, ctx), width);
+}
+
+/** The review's lines laid out for `width` from figures already computed: nothing is computed here. */
+export function reviewLinesOf(fig: ReviewFigures, width: number): ShownLine[] {
+  const sol = fig.solution;
   const out: ShownLine[] = glanceLines(sol, width);
   sol.analyses.forEach((a, i) => {
     const head = a.ok ? a.solution : a;
@@ -125,7 +137,7 @@ export function reviewLines(sol: CaseSolution, width: number, ctx?: ReviewContex
       tone: 'heading',
       bold: true,
     });
-    if (a.ok) analysisLines(out, a.solution, sol, width, ctx);
+    if (a.ok) analysisLines(out, a.solution, sol, width, fig);
     else
       pushWrapped(
         out,
