@@ -8,8 +8,6 @@ import { showNumber } from '../input/index.js';
 import { analysisSection } from './questions.js';
 import { isMetaAnswer } from './kept-fields.js';
 
-export { isMetaAnswer } from './kept-fields.js';
-
 /** The question the cursor is on, or undefined on the review. */
 export function currentQuestion(state: InterviewState): Question | undefined {
   const r = readAnswers(state.answers);

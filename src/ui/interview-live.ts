@@ -21,7 +21,8 @@ import { stateFromCase } from '../interview/from-case.js';
 import type { InterviewState } from '../interview/types.js';
 import type { DraftView } from './draft-panel.js';
 import type { InterviewPort } from './interview-port.js';
-import { atLeast, kindForUnit } from './review-lines.js';
+import { atLeast } from './review-lines.js';
+import { kindOfUnit } from '../format/step-text.js';
 
 /** Solves a case exactly as `solve` would read it from its file: through the loader first. */
 export function solveAsFile(c: Case): CaseSolution {
@@ -51,7 +52,7 @@ export function draftView(sol: CaseSolution, open: readonly string[] = []): Draf
         name: s.name,
         result: formatRange(
           { value: s.result, low: s.low, high: s.high },
-          kindForUnit(s.unit),
+          kindOfUnit(s.unit),
           s.unit,
         ),
       });

@@ -33,10 +33,14 @@ export type Command =
   | 'report'
   | 'to-question'
   | 'to-list'
-  | 'pick';
+  | 'pick'
+  | 'line-start'
+  | 'line-end'
+  | 'line-clear';
 
 /**
- * One key: a named key (`return`, `escape`, `up`, `down`, `pageup`, `pagedown`, `tab`), a
+ * One key: a named key (`return`, `escape`, `up`, `down`, `pageup`, `pagedown`, `home`, `end`,
+ * `tab`), a
  * printable character, or `digit` (any of 1-9). `ctrl` binds the chord; without it the key
  * fires only when no modifier is held.
  */
@@ -68,6 +72,8 @@ const ctrl = (name: string): KeySpec => ({ name, ctrl: true });
 const plain = (name: string): KeySpec => ({ name });
 
 const EVERYWHERE: KeyContext[] = ['home', 'question', 'choice', 'review', 'jump', 'path'];
+/** Where a line of text is being typed: an answer, the go-to filter, a file's path. */
+const TEXT: KeyContext[] = ['question', 'jump', 'path'];
 const CASE: KeyContext[] = ['question', 'choice', 'review'];
 
 export const KEY_TABLE: readonly KeyBinding[] = [
@@ -275,6 +281,27 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     description: 'Save the case and go back to the list of cases',
     when: CASE,
   },
+  {
+    command: 'line-start',
+    keys: [ctrl('a'), plain('home')],
+    label: 'line start',
+    description: 'Move the cursor to the start of the text being typed',
+    when: TEXT,
+  },
+  {
+    command: 'line-end',
+    keys: [plain('end')],
+    label: 'line end',
+    description: 'Move the cursor to the end of the text being typed',
+    when: TEXT,
+  },
+  {
+    command: 'line-clear',
+    keys: [ctrl('u')],
+    label: 'clear line',
+    description: 'Clear the text being typed',
+    when: TEXT,
+  },
 ];
 
 /** How a key is written for people: `Ctrl+G`, `Enter`, `Esc`, `q`. */
@@ -286,6 +313,8 @@ export function keyLabel(k: KeySpec): string {
     down: '↓',
     pageup: 'PgUp',
     pagedown: 'PgDn',
+    home: 'Home',
+    end: 'End',
     tab: 'Tab',
     ' ': 'Space',
     choice: 'letter',
@@ -306,6 +335,8 @@ const NAMED: Record<string, (k: Key) => boolean> = {
   down: (k) => k.downArrow,
   pageup: (k) => k.pageUp,
   pagedown: (k) => k.pageDown,
+  home: (k) => k.home,
+  end: (k) => k.end,
   tab: (k) => k.tab,
 };
 

@@ -21,8 +21,6 @@ import {
   type ReviewFigures,
 } from './review-extras.js';
 
-export { kindForUnit, type ShownLine } from './review-step.js';
-
 /** "at least 41 mph": the low end rounded down, as the engine gives it in `minimum`. */
 export function atLeast(s: AnalysisSolution, speedUnit: string): string {
   return `at least ${formatNumber(s.minimum, 'integer')} ${speedUnit}`;

@@ -12,9 +12,6 @@ export interface ShownLine {
   bold?: boolean;
 }
 
-/** Number style for a step's unit: the one rule `solve` and the report use too. */
-export const kindForUnit = kindOfUnit;
-
 /** Appends `text` wrapped to `width`, its first line after `indent`, the rest two further in. */
 export function pushWrapped(
   out: ShownLine[],
@@ -40,7 +37,7 @@ export function stepLines(
   pushWrapped(out, `formula  ${step.formula}`, width, inner);
   pushWrapped(out, `numbers  ${step.substituted}`, width, inner);
   const r = { value: step.result, low: step.low, high: step.high };
-  pushWrapped(out, `result   ${formatRange(r, kindForUnit(step.unit), step.unit)}`, width, inner, {
+  pushWrapped(out, `result   ${formatRange(r, kindOfUnit(step.unit), step.unit)}`, width, inner, {
     tone: 'result',
   });
   if (step.why) pushWrapped(out, `why      ${step.why}`, width, inner, { tone: 'muted' });
