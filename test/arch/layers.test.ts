@@ -129,3 +129,79 @@ describe('the engine imports only the engine', () => {
     expect(reached.filter((f) => !f.startsWith('engine/'))).toEqual([]);
   });
 });
+
+/**
+ * The layer table of DEVELOPERS.md: what each folder of src/ may import at run time, and what it
+ * may import for types only. The engine's own rule is checked above, file by file.
+ */
+const LAYERS: Record<string, { imports: string[]; types?: string[] }> = {
+  engine: { imports: [], types: ['case'] },
+  case: { imports: [] },
+  prefs: { imports: ['engine'] },
+  store: { imports: ['case'] },
+  input: { imports: ['case', 'engine'] },
+  extras: { imports: ['case', 'engine'] },
+  format: { imports: ['engine', 'extras'], types: ['case'] },
+  interview: { imports: ['case', 'engine', 'extras', 'input', 'prefs'] },
+  report: { imports: ['engine', 'extras', 'format'], types: ['case'] },
+  commands: { imports: ['case', 'engine', 'format', 'report', 'store'] },
+  ui: {
+    imports: [
+      'case',
+      'engine',
+      'extras',
+      'format',
+      'input',
+      'interview',
+      'prefs',
+      'report',
+      'store',
+    ],
+  },
+};
+
+/** Each import across folders that the table does not allow, as `from -> to`. */
+function layerViolations(graph: ImportGraph): string[] {
+  const folder = (f: string) => (f.includes('/') ? f.split('/')[0]! : f);
+  const out = new Set<string>();
+  for (const [from, edges] of graph) {
+    const a = folder(from);
+    const rule = LAYERS[a];
+    if (!rule) continue; // cli.ts, the entry point, sits above every layer
+    for (const e of edges) {
+      const b = folder(e.to);
+      if (b === a || rule.imports.includes(b)) continue;
+      if (e.typeOnly && rule.types?.includes(b)) continue;
+      out.add(`${from} -> ${e.to}${e.typeOnly ? ' (type-only)' : ''}`);
+    }
+  }
+  return [...out].sort();
+}
+
+describe('the layers of DEVELOPERS.md', () => {
+  const graph = readGraph(SRC);
+
+  it('the check catches an upward import and a run-time import allowed for types only', () => {
+    const g: ImportGraph = new Map([
+      ['extras/a.ts', [{ to: 'format/numbers.ts', typeOnly: false, spec: '../format/numbers.js' }]],
+      ['report/b.ts', [{ to: 'case/load.ts', typeOnly: false, spec: '../case/load.js' }]],
+      ['report/c.ts', [{ to: 'case/load.ts', typeOnly: true, spec: '../case/load.js' }]],
+      ['ui/d.ts', [{ to: 'store/index.ts', typeOnly: false, spec: '../store/index.js' }]],
+    ]);
+    expect(layerViolations(g)).toEqual([
+      'extras/a.ts -> format/numbers.ts',
+      'report/b.ts -> case/load.ts',
+    ]);
+  });
+
+  it('every folder imports only what the table says', () => {
+    expect(layerViolations(graph)).toEqual([]);
+  });
+
+  it('the table names every folder of src/', () => {
+    const folders = new Set(
+      [...graph.keys()].filter((f) => f.includes('/')).map((f) => f.split('/')[0]!),
+    );
+    expect([...folders].sort()).toEqual(Object.keys(LAYERS).sort());
+  });
+});
