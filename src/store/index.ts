@@ -16,7 +16,7 @@ export {
   CASE_ID,
   type PathResult,
 } from './case-path.js';
-export { saveCase, type SaveResult } from './save.js';
+export { saveCase, saveCaseSync, type SaveResult, type SaveOptions } from './save.js';
 export {
   openCase,
   checkBackup,

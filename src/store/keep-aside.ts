@@ -38,6 +38,25 @@ export async function linkUnderFreeName(
   throw new Error(`no free name to keep ${file}`);
 }
 
+/** The same, synchronous, for the save path. */
+export function linkUnderFreeNameSync(file: string, names: (n: number) => string): string {
+  for (let n = 1; n < 1000; n++) {
+    const target = names(n);
+    try {
+      try {
+        fsSync.linkSync(file, target);
+      } catch (e) {
+        if (!noLinks(e)) throw e;
+        fsSync.copyFileSync(file, target, fsConstants.COPYFILE_EXCL);
+      }
+      return target;
+    } catch (e) {
+      if (errCode(e) !== 'EEXIST') throw e;
+    }
+  }
+  throw new Error(`no free name to keep ${file}`);
+}
+
 /** Moves `file` to the first free name (link, then unlink the old name): the content is never copied. */
 export async function moveToFreeName(file: string, names: (n: number) => string): Promise<string> {
   const target = await linkUnderFreeName(file, names);

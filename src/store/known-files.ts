@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import type { Stats } from 'node:fs';
 
 /**
@@ -13,6 +14,8 @@ export interface FileSig {
 
 interface Known {
   sig?: FileSig;
+  /** SHA-256 of the bytes last read or written and checked: what "our" file holds. */
+  hash?: string;
   /** Set when the case was migrated on open and its original is not yet kept beside it. */
   migratedFrom?: number;
   /** The case's `created`, so a caller that drops it does not reset it. */
@@ -28,6 +31,8 @@ export const sigOf = (st: Stats): FileSig => ({ ino: st.ino, size: st.size, mtim
 export function sameSig(a: FileSig | undefined, st: Stats): boolean {
   return a !== undefined && a.ino === st.ino && a.size === st.size && a.mtimeMs === st.mtimeMs;
 }
+
+export const hashOf = (bytes: Buffer | string) => createHash('sha256').update(bytes).digest('hex');
 
 export function getKnown(file: string): Known {
   let k = known.get(file);

@@ -7,13 +7,15 @@ const MIN_AGE_MS = 60_000;
 const escape = (s: string) => s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 
 /**
- * Temp names a killed save or lock attempt can leave beside `<id>.json`: write-file-atomic's
- * `<id>.json.<number>`, the backup's `<id>.json.bak.<pid>.tmp`, the lock's
+ * Temp names a killed save or lock attempt can leave beside `<id>.json`: an older save's
+ * `<id>.json.<number>`, a save's `<id>.json.<pid>-<hex>.new`, the backup's `<id>.json.bak.<pid>.tmp`, the lock's
  * `<id>.json.lock.new|stale.<pid>.<hex>`. Nothing else matches (not the case, backup or lock).
  */
 export function leftoverPattern(caseFile: string): RegExp {
   const base = escape(path.basename(caseFile));
-  return new RegExp(`^${base}\\.(\\d+|bak\\.\\d+\\.tmp|lock\\.(new|stale)\\.\\d+\\.[0-9a-f]+)$`);
+  return new RegExp(
+    `^${base}\\.(\\d+|\\d+-[0-9a-f]+\\.new|bak\\.\\d+\\.tmp|lock\\.(new|stale)\\.\\d+\\.[0-9a-f]+)$`,
+  );
 }
 
 /**

@@ -115,6 +115,12 @@ export async function acquireLock(caseFile: string): Promise<LockOutcome> {
   return { kind: 'held', reason: 'open in another skidcase (the lock kept changing)' };
 }
 
+/** This process's lock on a case file, when it holds one (for the synchronous save). */
+export function heldLock(caseFile: string): LockHandle | undefined {
+  const mine = held.get(caseFile);
+  return mine && !mine.lost ? mine : undefined;
+}
+
 /** True while our lock file is still the one we made (nobody cleared it as stale). */
 export async function stillHeld(handle: LockHandle): Promise<boolean> {
   if (handle.lost) return false;

@@ -5,7 +5,7 @@ import { loadCaseText, type Case, type LoadResult } from '../case/load.js';
 import { caseFilePath } from './case-path.js';
 import { backupPath } from './side-files.js';
 import type { Stats } from 'node:fs';
-import { getKnown, sameSig, sigOf, type FileSig } from './known-files.js';
+import { getKnown, hashOf, sameSig, sigOf, type FileSig } from './known-files.js';
 import { acquireLock, releaseLock } from './lock.js';
 import { sweepLeftovers } from './leftovers.js';
 import { errCode } from './errno.js';
@@ -72,6 +72,7 @@ export async function openCase(dirOrPath: string, opts: OpenOptions = {}): Promi
   const read = await readWithSig(file);
   if ('kind' in read) return read;
   let sig = read.sig;
+  let hash = read.hash;
   let loaded = load(read.text);
   if (!loaded.ok) {
     const r = fail(loaded.kind, file, loaded.issues);
@@ -109,6 +110,7 @@ export async function openCase(dirOrPath: string, opts: OpenOptions = {}): Promi
           return openCase(dirOrPath, opts);
         }
         sig = again.sig;
+        hash = again.hash;
         loaded = fresh;
       }
       await sweepLeftovers(file);
@@ -118,6 +120,7 @@ export async function openCase(dirOrPath: string, opts: OpenOptions = {}): Promi
     else return fail('locked-error', file, [{ path: '(file)', message: lock.message }]);
   }
   known.sig = sig;
+  known.hash = hash;
   known.readOnly = readOnlyReason;
   known.created = loaded.case.created;
   if (loaded.migratedFrom !== undefined) known.migratedFrom = loaded.migratedFrom;
@@ -144,12 +147,15 @@ export async function openCase(dirOrPath: string, opts: OpenOptions = {}): Promi
 /** Reads a file with the identity of what was read (from the same open handle). */
 async function readWithSig(
   file: string,
-): Promise<{ text: string; sig: FileSig; stat: Stats } | (OpenResult & { ok: false })> {
+): Promise<
+  { text: string; hash: string; sig: FileSig; stat: Stats } | (OpenResult & { ok: false })
+> {
   try {
     const handle = await fs.open(file, 'r');
     try {
       const stat = await handle.stat();
-      return { text: await handle.readFile('utf8'), sig: sigOf(stat), stat };
+      const bytes = await handle.readFile();
+      return { text: bytes.toString('utf8'), hash: hashOf(bytes), sig: sigOf(stat), stat };
     } finally {
       await handle.close();
     }

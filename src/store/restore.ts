@@ -1,10 +1,11 @@
 import fs from 'node:fs/promises';
-import writeFileAtomic from 'write-file-atomic';
 import { describeIssue } from '../case/issues.js';
 import { loadCaseText, type Case } from '../case/load.js';
 import { caseFilePath } from './case-path.js';
 import { backupPath, brokenPath } from './side-files.js';
-import { getKnown, serial, sigOf } from './known-files.js';
+import { getKnown, hashOf, serial, sigOf } from './known-files.js';
+import { writeVerifiedSync } from './verified-write.js';
+import { describeWriteError } from './write-error.js';
 import { acquireLock } from './lock.js';
 import { moveToFreeName } from './keep-aside.js';
 
@@ -58,15 +59,17 @@ export async function restoreBackup(dir: string, id: string): Promise<RestoreRes
       } catch (e) {
         if ((e as NodeJS.ErrnoException).code !== 'ENOENT') throw e;
       }
-      await writeFileAtomic(file, text, { encoding: 'utf8' });
+      const bytes = Buffer.from(text, 'utf8');
+      writeVerifiedSync(file, bytes);
       const known = getKnown(file);
       known.sig = sigOf(await fs.stat(file));
+      known.hash = hashOf(bytes);
       delete known.readOnly;
       return result;
     } catch (e) {
       return {
         ok: false,
-        message: `not restored: ${file}: ${e instanceof Error ? e.message : String(e)}`,
+        message: `not restored: ${describeWriteError(e).text}`,
       };
     }
   });

@@ -1,16 +1,17 @@
-import fsSync from 'node:fs';
-import fs from 'node:fs/promises';
 import path from 'node:path';
-import writeFileAtomic from 'write-file-atomic';
+import fs from 'node:fs/promises';
 import { caseV1 } from '../case/v1/schema.js';
 import { fromZod, describeIssue, type FieldIssue } from '../case/issues.js';
 import { loadCaseText, type Case } from '../case/load.js';
 import { caseFilePath } from './case-path.js';
-import { backupPath, brokenPath, versionPath } from './side-files.js';
-import { getKnown, serial, sigOf, sameSig } from './known-files.js';
-import { acquireLock, stillHeldSync } from './lock.js';
-import { linkReplacingSync, linkUnderFreeName, moveToFreeName } from './keep-aside.js';
+import { backupPath, brokenPath, outsidePath, versionPath } from './side-files.js';
+import { getKnown, hashOf, serial, sigOf } from './known-files.js';
+import { acquireLock, heldLock, stillHeldSync } from './lock.js';
+import { linkReplacingSync, linkUnderFreeNameSync } from './keep-aside.js';
 import { errCode } from './errno.js';
+import { disk } from './disk.js';
+import { writeVerifiedSync } from './verified-write.js';
+import { describeWriteError, type WriteProblem } from './write-error.js';
 
 export type SaveResult =
   | {
@@ -24,28 +25,85 @@ export type SaveResult =
       keptOriginal?: string;
       /** Where a broken file found in the way was moved instead of being overwritten. */
       keptBroken?: string;
+      /** Where a version changed outside skidcase was kept when this save wrote over it. */
+      keptOutside?: string;
     }
   | {
       ok: false;
-      kind: 'invalid' | 'path' | 'exists' | 'locked' | 'read-only' | 'io';
+      kind: 'invalid' | 'path' | 'exists' | 'locked' | 'read-only' | 'io' | 'changed';
       message: string;
       issues?: FieldIssue[];
+      /** For `io`: what kind of trouble, so the screen can say what to do. */
+      problem?: WriteProblem;
+      /** For `changed`: the case now on disk, written by someone else since our last save. */
+      theirs?: Case;
     };
 
-const madeDirs = new Set<string>();
+export interface SaveOptions {
+  /**
+   * Write over a file changed outside skidcase (the user chose "keep mine"): theirs is kept as
+   * `<id>.outside-<time>.json` and as the backup.
+   */
+  overwriteChanged?: boolean;
+}
 
 /**
  * Saves a case as `<dir>/<id>.json`: validates it (an invalid case is never written), sets
- * `updated`, keeps the previous good version as `<id>.json.bak`, and writes the new one atomically
- * (write-file-atomic: temp file, fsync, rename), so a kill at any instant leaves the old or the new
- * file whole. Takes the case's write lock on first save; refuses while another skidcase holds it.
- * The input is not changed; the saved case is returned.
+ * `updated`, keeps the previous good version as `<id>.json.bak`, and writes the new one through a
+ * checked temp file (see verified-write.ts), so a kill, a full disk or a short write at any instant
+ * leaves the old or the new file whole. Takes the case's write lock on first save; refuses while
+ * another skidcase holds it. The input is not changed; the saved case is returned.
  *
  * @example
  * const r = await saveCase('/cases/sessions', myCase);
  * if (!r.ok) show(r.message);
  */
-export async function saveCase(dir: string, c: Case): Promise<SaveResult> {
+export async function saveCase(dir: string, c: Case, opts: SaveOptions = {}): Promise<SaveResult> {
+  const prepared = prepare(dir, c);
+  if ('ok' in prepared) return prepared;
+  const { file } = prepared;
+  return serial(file, async () => {
+    const known = getKnown(file);
+    if (known.readOnly) return readOnly(file, known.readOnly);
+    try {
+      await fs.mkdir(path.dirname(file), { recursive: true });
+    } catch (e) {
+      return ioFailure(e);
+    }
+    const lock = await acquireLock(file);
+    if (lock.kind === 'held')
+      return { ok: false, kind: 'locked', message: `not saved: ${file} is ${lock.reason}` };
+    if (lock.kind === 'error') return ioFailure(Object.assign(new Error(), { code: lock.code }));
+    return writeLocked(file, prepared, opts);
+  });
+}
+
+/**
+ * The same save, done before it returns: for the interview, which shows the next question only
+ * once the answer is on disk. The case must be open here with its write lock (openCase took it).
+ */
+export function saveCaseSync(dir: string, c: Case, opts: SaveOptions = {}): SaveResult {
+  const prepared = prepare(dir, c);
+  if ('ok' in prepared) return prepared;
+  const { file } = prepared;
+  const known = getKnown(file);
+  if (known.readOnly) return readOnly(file, known.readOnly);
+  if (!heldLock(file))
+    return {
+      ok: false,
+      kind: 'locked',
+      message: `not saved: ${file} is not open for writing here`,
+    };
+  return writeLocked(file, prepared, opts);
+}
+
+interface Prepared {
+  file: string;
+  next: Case;
+  bytes: Buffer;
+}
+
+function prepare(dir: string, c: Case): Prepared | (SaveResult & { ok: false }) {
   const where = caseFilePath(dir, (c as { id: string }).id);
   if (!where.ok) return { ok: false, kind: 'path', message: where.message };
   const file = where.path;
@@ -60,71 +118,64 @@ export async function saveCase(dir: string, c: Case): Promise<SaveResult> {
       message: `not saved, the case is not valid: ${issues.map(describeIssue).join('; ')}`,
     };
   }
-  const text = JSON.stringify(next, null, 2) + '\n';
-  return serial(file, () => write(file, next, text));
+  return { file, next, bytes: Buffer.from(JSON.stringify(next, null, 2) + '\n', 'utf8') };
+}
+
+const readOnly = (file: string, why: string): SaveResult & { ok: false } => ({
+  ok: false,
+  kind: 'read-only',
+  message: `not saved: ${file} was opened read-only (${why})`,
+});
+
+function ioFailure(e: unknown): SaveResult & { ok: false } {
+  const { problem, text } = describeWriteError(e);
+  return { ok: false, kind: 'io', problem, message: `not saved: ${text}` };
 }
 
 /*
- * The small metadata calls on the save path (lstat, link, rename, the lock check) are synchronous
- * on purpose: each takes microseconds, less than the thread-pool round trip of its async form,
- * and a save runs after every answer. The data write itself stays asynchronous.
+ * Every call on this path is synchronous: each takes microseconds to a few milliseconds (the
+ * fsync), and the interview waits for the whole save anyway before it shows the next question.
  */
-async function write(file: string, c: Case, text: string): Promise<SaveResult> {
+function writeLocked(file: string, p: Prepared, opts: SaveOptions): SaveResult {
   const known = getKnown(file);
-  if (known.readOnly)
+  const lock = heldLock(file);
+  if (!lock || !stillHeldSync(lock))
     return {
       ok: false,
-      kind: 'read-only',
-      message: `not saved: ${file} was opened read-only (${known.readOnly})`,
+      kind: 'locked',
+      message: `not saved: another skidcase took over ${file} while it was idle`,
     };
-  const dir = path.dirname(file);
   try {
-    if (!madeDirs.has(dir)) {
-      await fs.mkdir(dir, { recursive: true });
-      madeDirs.add(dir);
-    }
-    const lock = await acquireLock(file);
-    if (lock.kind === 'held')
-      return { ok: false, kind: 'locked', message: `not saved: ${file} is ${lock.reason}` };
-    if (lock.kind === 'error')
-      return { ok: false, kind: 'io', message: `not saved: ${lock.message}` };
-    if (!stillHeldSync(lock.handle))
-      return {
-        ok: false,
-        kind: 'locked',
-        message: `not saved: another skidcase took over ${file} while it was idle`,
-      };
-    const result: SaveResult = { ok: true, path: file, case: c };
-    const refused = await keepPrevious(file, known, result);
-    if (refused) return refused;
-    await writeFileAtomic(file, text, { encoding: 'utf8' });
-    known.sig = sigOf(fsSync.statSync(file));
-    known.created = c.created;
+    const result: SaveResult = { ok: true, path: file, case: p.next };
+    const onDisk = lookAtPrevious(file, known, result, opts);
+    if (onDisk && 'ok' in onDisk) return onDisk;
+    writeVerifiedSync(file, p.bytes, () => onDisk?.keep());
+    known.sig = sigOf(disk.lstatSync(file));
+    known.hash = hashOf(p.bytes);
+    known.created = p.next.created;
     return result;
   } catch (e) {
-    madeDirs.delete(dir); // the folder may have been removed: make it again next time
-    return {
-      ok: false,
-      kind: 'io',
-      message: `not saved: ${file}: ${e instanceof Error ? e.message : String(e)}`,
-    };
+    return ioFailure(e);
   }
 }
 
 /**
- * Before a write: keep the file now on disk as the backup if it is good; keep a migrated case's
- * original once; move a file broken while open aside rather than overwrite it. A file this
- * process never opened or wrote is not written over at all (an id already taken, or a broken
- * file the user was not shown): the save is refused.
+ * Before a write, looks at the file now on disk. The one this process last read or wrote (same
+ * bytes, by hash) becomes the backup; a migrated case's original is kept once. A file changed
+ * outside skidcase that is a good case is not written over: the save is refused as `changed`,
+ * with that case, so the user can choose. A file that does not parse is moved aside, never
+ * overwritten and never made the backup. A file this process never opened or wrote is not
+ * written over at all (an id already taken).
  */
-async function keepPrevious(
+function lookAtPrevious(
   file: string,
   known: ReturnType<typeof getKnown>,
   out: SaveResult & { ok: true },
-): Promise<(SaveResult & { ok: false }) | undefined> {
-  let st;
+  opts: SaveOptions,
+): (SaveResult & { ok: false }) | { keep(): void } | undefined {
+  let bytes: Buffer;
   try {
-    st = fsSync.lstatSync(file);
+    bytes = disk.readFileSync(file);
   } catch (e) {
     if (errCode(e) === 'ENOENT') return undefined;
     throw e;
@@ -135,23 +186,44 @@ async function keepPrevious(
       kind: 'exists',
       message: `not saved: ${file} already exists and was not opened here; open it first, or use another id`,
     };
-  // Known good (we wrote or validated exactly this file): no re-read. Otherwise look at it.
-  const good = sameSig(known.sig, st) || loadCaseText(await fs.readFile(file, 'utf8')).ok;
-  if (!good) {
-    out.keptBroken = await moveToFreeName(file, (n) =>
-      brokenPath(file).replace(/\.json$/, n > 1 ? `-${n}.json` : '.json'),
-    );
-    return undefined;
+  const ours = known.hash !== undefined && hashOf(bytes) === known.hash;
+  if (!ours) {
+    const theirs = loadCaseText(bytes.toString('utf8'));
+    if (!theirs.ok) return { keep: () => void (out.keptBroken = moveAsideSync(file)) };
+    if (!opts.overwriteChanged)
+      return {
+        ok: false,
+        kind: 'changed',
+        theirs: theirs.case,
+        message: `not saved: ${path.basename(file)} was changed outside skidcase since it was last saved here`,
+      };
   }
-  if (known.migratedFrom !== undefined) {
-    const v = known.migratedFrom;
-    out.keptOriginal = await linkUnderFreeName(file, (n) => versionPath(file, v, n));
-    delete known.migratedFrom;
-  }
-  const bak = backupPath(file);
-  linkReplacingSync(file, bak);
-  out.backup = bak;
-  return undefined;
+  // Run once the new copy is written and checked, just before it replaces this one.
+  return {
+    keep() {
+      if (!ours)
+        out.keptOutside = linkUnderFreeNameSync(file, (n) =>
+          outsidePath(file).replace(/\.json$/, n > 1 ? `-${n}.json` : '.json'),
+        );
+      if (known.migratedFrom !== undefined) {
+        const v = known.migratedFrom;
+        out.keptOriginal = linkUnderFreeNameSync(file, (n) => versionPath(file, v, n));
+        delete known.migratedFrom;
+      }
+      const bak = backupPath(file);
+      linkReplacingSync(file, bak);
+      out.backup = bak;
+    },
+  };
+}
+
+/** Moves a broken case file to `<id>.broken-<time>.json` (or -2, -3 ...) and returns where. */
+function moveAsideSync(file: string): string {
+  const target = linkUnderFreeNameSync(file, (n) =>
+    brokenPath(file).replace(/\.json$/, n > 1 ? `-${n}.json` : '.json'),
+  );
+  disk.unlinkSync(file);
+  return target;
 }
 
 /**

@@ -84,7 +84,7 @@ export function App(props: AppProps) {
   // The footer is one line at any width; one more while leaving (the note).
   const footerRows = model.leaving ? 2 : 1;
   const banner = s?.open.readOnly ? 2 : 0;
-  const body = height - footerRows - banner - (s ? 2 : 0);
+  const body = height - footerRows - banner - (s ? 2 : 0) - (s?.saveNote ? 1 : 0);
 
   // The heavy part (solve, sampling, the limit comparison, sensitivity) runs once per change of
   // the answers; a resize or any other render only lays the lines out again.
@@ -208,6 +208,7 @@ export function App(props: AppProps) {
           savedAt={s.savedAt}
           lastSaved={s.open.isNew ? undefined : s.open.case.updated}
           saveError={s.saveError}
+          saveNote={s.saveNote}
           readOnly={!!s.open.readOnly}
         />
       ) : null}
@@ -216,7 +217,8 @@ export function App(props: AppProps) {
         context={ctx}
         width={width}
         omit={ctx === 'home' && model.home.rows?.length === 0 ? ['submit'] : []}
-        note={model.leaving ? 'Saving and leaving…' : undefined}
+        note={model.leaving ? (s?.open.readOnly ? 'Leaving…' : 'Saving and leaving…') : undefined}
+        readOnly={!!s?.open.readOnly}
       />
     </Box>
   );

@@ -12,13 +12,16 @@ export function Footer({
   width,
   omit,
   note,
+  readOnly,
 }: {
   context: KeyContext;
   width: number;
   omit?: readonly Command[];
   note?: string | undefined;
+  /** A read-only window: keys that would save are labelled for what they do there. */
+  readOnly?: boolean;
 }) {
-  const hints = footerLine(context, width, omit);
+  const hints = footerLine(context, width, omit, readOnly);
   return (
     <Box flexDirection="column">
       <Text>

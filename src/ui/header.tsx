@@ -13,6 +13,8 @@ export interface HeaderProps {
   /** When the case file was last written, before this session (ISO time), for a case reopened. */
   lastSaved?: string | undefined;
   saveError?: string | undefined;
+  /** What the last save did beside writing (a file moved aside, a copy made): one line. */
+  saveNote?: string | undefined;
   readOnly: boolean;
 }
 
@@ -32,10 +34,10 @@ export function localTime(iso: string): string {
 
 /** Top line of a case screen: which case, where in it, how far, and the save status. */
 export function Header(p: HeaderProps) {
-  const status = p.readOnly
-    ? 'not saved (read-only)'
-    : p.saveError
-      ? p.saveError
+  const status = p.saveError
+    ? p.saveError
+    : p.readOnly
+      ? 'not saved (read-only)'
       : p.savedAt
         ? savedText(p.savedAt)
         : p.lastSaved
@@ -53,6 +55,11 @@ export function Header(p: HeaderProps) {
       <Text wrap="truncate">
         {p.section} · {p.progress.answered} of {p.progress.applicable} answered · {p.mode} mode
       </Text>
+      {p.saveNote ? (
+        <Text color={TONE.warning} wrap="truncate-end">
+          {p.saveNote}
+        </Text>
+      ) : null}
     </Box>
   );
 }

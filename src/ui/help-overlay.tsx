@@ -15,6 +15,7 @@ const PLACES: Record<KeyContext, string> = {
   jump: 'go-to list',
   help: 'this list',
   path: 'file name',
+  conflict: 'changed-file choice',
 };
 
 const ALL = Object.keys(PLACES).filter((k) => k !== 'help') as KeyContext[];

@@ -6,12 +6,25 @@
 import type { Key } from 'ink';
 
 /** Where a binding is live. `question` is the interview screen; `choice` adds to it for choices. */
-export type KeyContext = 'home' | 'question' | 'choice' | 'review' | 'jump' | 'help' | 'path';
+export type KeyContext =
+  | 'home'
+  | 'question'
+  | 'choice'
+  | 'review'
+  | 'jump'
+  | 'help'
+  | 'path'
+  /** The case file was changed outside skidcase: the three ways on. */
+  | 'conflict';
 
 /** What a key asks for; the app maps each command to an action. */
 export type Command =
   | 'help'
   | 'save-leave'
+  | 'save-now'
+  | 'load-theirs'
+  | 'keep-mine'
+  | 'copy-mine'
   | 'quit'
   | 'submit'
   | 'back'
@@ -64,6 +77,8 @@ export interface KeyBinding {
    * always kept). Table order breaks ties.
    */
   rank?: number;
+  /** The footer label in a read-only window, where the key cannot save (Ctrl+Q only leaves). */
+  labelReadOnly?: string;
   /** A footer label for one context where the key does something else (Enter opens a case). */
   labelIn?: Partial<Record<KeyContext, string>>;
 }
@@ -71,7 +86,15 @@ export interface KeyBinding {
 const ctrl = (name: string): KeySpec => ({ name, ctrl: true });
 const plain = (name: string): KeySpec => ({ name });
 
-const EVERYWHERE: KeyContext[] = ['home', 'question', 'choice', 'review', 'jump', 'path'];
+const EVERYWHERE: KeyContext[] = [
+  'home',
+  'question',
+  'choice',
+  'review',
+  'jump',
+  'path',
+  'conflict',
+];
 /** Where a line of text is being typed: an answer, the go-to filter, a file's path. */
 const TEXT: KeyContext[] = ['question', 'jump', 'path'];
 const CASE: KeyContext[] = ['question', 'choice', 'review'];
@@ -91,6 +114,7 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     command: 'save-leave',
     keys: [ctrl('q'), ctrl('c')],
     label: 'save & leave',
+    labelReadOnly: 'leave (not saved)',
     description: 'Save the case and leave skidcase',
     when: [...EVERYWHERE, 'help'],
     footer: CASE,
@@ -282,6 +306,47 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     when: CASE,
   },
   {
+    command: 'save-now',
+    keys: [ctrl('s')],
+    label: 'save now',
+    labelReadOnly: 'save as new case',
+    description:
+      'Save now (again, after a save failed). In a read-only window it saves the answers as a new case under a new id',
+    when: CASE,
+    footer: CASE,
+    rank: 7,
+  },
+  {
+    command: 'load-theirs',
+    keys: [plain('l')],
+    label: 'load theirs',
+    description:
+      'Changed-file choice: load the version changed outside skidcase (answers given here since the last save are dropped)',
+    when: ['conflict'],
+    footer: ['conflict'],
+    rank: 1,
+  },
+  {
+    command: 'keep-mine',
+    keys: [plain('k')],
+    label: 'keep mine',
+    description:
+      'Changed-file choice: save these answers over it (the other version is kept beside it)',
+    when: ['conflict'],
+    footer: ['conflict'],
+    rank: 1,
+  },
+  {
+    command: 'copy-mine',
+    keys: [plain('c')],
+    label: 'mine as a copy',
+    description:
+      'Changed-file choice: save these answers as a new case under a new id, leaving that file as it is',
+    when: ['conflict'],
+    footer: ['conflict'],
+    rank: 1,
+  },
+  {
     command: 'line-start',
     keys: [ctrl('a'), plain('home')],
     label: 'line start',
@@ -365,8 +430,9 @@ export function footerBindings(ctx: KeyContext): KeyBinding[] {
 }
 
 /** One footer hint: the binding's first key and its label for the context, e.g. `Ctrl+B back`. */
-export function footerHint(b: KeyBinding, ctx: KeyContext): string {
-  return `${keyLabel(b.keys[0]!)} ${b.labelIn?.[ctx] ?? b.label}`;
+export function footerHint(b: KeyBinding, ctx: KeyContext, readOnly = false): string {
+  const label = (readOnly ? b.labelReadOnly : undefined) ?? b.labelIn?.[ctx] ?? b.label;
+  return `${keyLabel(b.keys[0]!)} ${label}`;
 }
 
 /** Columns between two footer hints. */
@@ -382,18 +448,19 @@ export function footerLine(
   ctx: KeyContext,
   width: number,
   omit: readonly Command[] = [],
+  readOnly = false,
 ): string[] {
   const all = footerBindings(ctx).filter((b) => !omit.includes(b.command));
   const byRank = [...all].sort((x, y) => (x.rank ?? 9) - (y.rank ?? 9));
   const kept = new Set<KeyBinding>();
   let used = 0;
   for (const b of byRank) {
-    const w = [...footerHint(b, ctx)].length + (kept.size ? FOOTER_GAP : 0);
+    const w = [...footerHint(b, ctx, readOnly)].length + (kept.size ? FOOTER_GAP : 0);
     if (kept.size && used + w > width) continue;
     kept.add(b);
     used += w;
   }
-  return byRank.filter((b) => kept.has(b)).map((b) => footerHint(b, ctx));
+  return byRank.filter((b) => kept.has(b)).map((b) => footerHint(b, ctx, readOnly));
 }
 
 /** The keys of a command as written for people, e.g. `keysFor('explain')` is `Ctrl+E`. */

@@ -13,13 +13,14 @@ import {
   openCase,
   restoreBackup,
   saveCase,
+  saveCaseSync,
   uniqueId,
   type OpenResult,
 } from '../store/index.js';
 import { loadPrefs, savePref, type PrefsOptions } from '../prefs/index.js';
 import type { InterviewMode } from '../interview/types.js';
 import type { InterviewPort } from './interview-port.js';
-import type { CaseRow, Opened, OpenCase, Services } from './services.js';
+import type { CaseRow, Opened, OpenCase, Saved, Services } from './services.js';
 import { atLeast } from './review-lines.js';
 import { writeCaseReport } from './write-report.js';
 
@@ -120,7 +121,11 @@ export function liveServices(o: LiveOptions): Services {
     async newCase() {
       const d = now();
       const stamp = d.toISOString().slice(0, 16).replace(/[-:]/g, '').replace('T', '-');
-      return createAndOpen(fresh(uniqueId(dir, `case-${stamp}`)), true);
+      // Written with its interview section from the start, so that a case left before its first
+      // answer resumes on its first question, with no answer made up from the empty fields.
+      const base = fresh(uniqueId(dir, `case-${stamp}`));
+      const built = o.port.build(o.port.fresh(prefs.mode), base);
+      return createAndOpen(built.ok ? built.case : base, true);
     },
     async openDemo() {
       const file = o.demoFile ?? (await findDemoFile());
@@ -138,9 +143,30 @@ export function liveServices(o: LiveOptions): Services {
         };
       return createAndOpen({ ...loaded.case, id: uniqueId(dir, 'demo-copy') }, false);
     },
-    async saveCase(open, c) {
-      const r = await saveCase(path.dirname(open.file), c);
-      return r.ok ? { ok: true, at: now() } : { ok: false, message: r.message };
+    saveCase(open, c, opts = {}) {
+      const r = saveCaseSync(path.dirname(open.file), c, opts);
+      if (!r.ok) {
+        const failed: Saved = { ok: false, message: r.message };
+        if (r.problem) failed.problem = r.problem;
+        if (r.theirs) failed.theirs = r.theirs;
+        return failed;
+      }
+      const notes: string[] = [];
+      if (r.keptBroken)
+        notes.push(
+          `The case file on disk had been replaced by something that is not a case: it was moved to ${r.keptBroken}.`,
+        );
+      if (r.keptOutside)
+        notes.push(`The version changed outside skidcase was kept as ${r.keptOutside}.`);
+      if (r.keptOriginal)
+        notes.push(`The original of the older format was kept as ${r.keptOriginal}.`);
+      return { ok: true, at: now(), notes };
+    },
+    async saveCopy(c) {
+      const { created: _c, updated: _u, ...rest } = c;
+      const id = uniqueId(dir, `${c.id.replace(/-copy(-\d+)?$/, '')}-copy`);
+      const o = await createAndOpen({ ...rest, id } as Case, false);
+      return o.ok ? o : { ok: false, message: o.message };
     },
     async restoreBackup(id) {
       const r = await restoreBackup(dir, id);

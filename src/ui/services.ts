@@ -38,7 +38,22 @@ export interface OpenCase {
 export type Opened =
   { ok: true; open: OpenCase } | { ok: false; message: string; issues?: FieldIssue[] };
 
-export type Saved = { ok: true; at: Date } | { ok: false; message: string };
+export type Saved =
+  | {
+      ok: true;
+      /** When the write was done and checked. */
+      at: Date;
+      /** What else the save did, in sentences for the screen (a broken file moved aside ...). */
+      notes: string[];
+    }
+  | {
+      ok: false;
+      message: string;
+      /** full, short, denied, read-only, gone, io: what the user can do about it. */
+      problem?: string;
+      /** The file was changed outside skidcase: their version, for the user's choice. */
+      theirs?: Case;
+    };
 
 export interface Services {
   sessionsDir: string;
@@ -51,7 +66,13 @@ export interface Services {
   newCase(): Promise<Opened>;
   /** A fresh copy of the demo case, in the sessions folder. */
   openDemo(): Promise<Opened>;
-  saveCase(open: OpenCase, c: Case): Promise<Saved>;
+  /**
+   * Writes the case to its file before it returns (the interview moves on only after this).
+   * `overwriteChanged`: write over a version changed outside skidcase, keeping it beside.
+   */
+  saveCase(open: OpenCase, c: Case, opts?: { overwriteChanged?: boolean }): Saved;
+  /** The case saved under a new id in the sessions folder, and opened there for writing. */
+  saveCopy(c: Case): Promise<(Opened & { ok: true }) | { ok: false; message: string }>;
   restoreBackup(id: string): Promise<{ ok: true } | { ok: false; message: string }>;
   /** Writes the report for a case; the path written, or why not. */
   writeReport(

@@ -3,6 +3,7 @@
  * screen needs (the line being typed, the highlighted choice, save status, scroll position).
  * Pure helpers here; the hook in use-app-model.ts owns the state.
  */
+import type { Case } from '../case/load.js';
 import type { Action, InterviewState } from '../interview/types.js';
 import type { InterviewPort } from './interview-port.js';
 import { EMPTY_LINE, lineOf, type Line } from './line-edit.js';
@@ -14,8 +15,13 @@ export interface Session {
   state: InterviewState;
   line: Line;
   highlight: number;
+  /** When the answers were last written to disk and checked (the header's "saved" time). */
   savedAt?: Date;
   saveError?: string;
+  /** Something the last save did beside writing (a broken file moved aside, theirs kept). */
+  saveNote?: string;
+  /** The file was changed outside skidcase: the save waits for the user's choice. */
+  conflict?: { theirs: Case };
   reviewTop: number;
   reportMessage?: string;
   /** What was already done, shown on resume until the first key that changes something. */

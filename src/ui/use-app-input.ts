@@ -22,6 +22,7 @@ export function contextOf(app: AppModel, port: InterviewPort): KeyContext {
   if (model.overlay?.kind === 'jump') return 'jump';
   const s = model.session;
   if (!s) return model.home.path ? 'path' : 'home';
+  if (s.conflict) return 'conflict';
   const q = port.current(s.state);
   if (!q) return 'review';
   return isChoice(q) ? 'choice' : 'question';
@@ -47,6 +48,9 @@ export function useAppInput(deps: InputDeps) {
     (chunk, chunkKey) => {
       // One read can hold several keys (typing ahead, a paste); each is handled in turn against
       // the state the previous one left (the model's ref is updated synchronously).
+      // While leaving, keys are dropped here rather than by turning the handler off: turning it
+      // off leaves raw mode, and a second Ctrl+C would then reach the process as a signal.
+      if (latest.current.app.current().leaving) return;
       const keys = splitKeys(chunk, chunkKey);
       while (keys.length) {
         const [input, key] = keys.shift()!;
@@ -62,7 +66,7 @@ export function useAppInput(deps: InputDeps) {
         else typed(ctx, input, key, d);
       }
     },
-    { isActive: !deps.app.current().leaving },
+    { isActive: true },
   );
 }
 
@@ -149,6 +153,14 @@ function run(command: Command, ctx: KeyContext, d: InputDeps) {
     case 'save-leave':
     case 'quit':
       return void app.leave();
+    case 'save-now':
+      return void app.saveKey();
+    case 'load-theirs':
+      return void app.loadTheirs();
+    case 'keep-mine':
+      return app.keepMine();
+    case 'copy-mine':
+      return void app.saveAsCopy();
     case 'close':
       if (m.overlay) return app.update((x) => ({ ...x, overlay: undefined }));
       if (ctx === 'path') return app.setHome({ path: undefined });

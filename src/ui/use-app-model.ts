@@ -3,6 +3,7 @@
  * and its autosave, the overlays, and leaving. Keys are mapped to these commands elsewhere
  * (use-app-input.ts); this hook does not know about keys.
  */
+import path from 'node:path';
 import { useCallback, useEffect, useRef, useState } from 'react';
 import type { Action, InterviewMode } from '../interview/types.js';
 import type { InterviewPort } from './interview-port.js';
@@ -48,7 +49,6 @@ export function useAppModel(
     leaving: false,
   });
   const ref = useRef(model);
-  const saving = useRef<Promise<unknown>>(Promise.resolve());
   /** The answers last written (or loaded): a save is due when the session's differ. */
   const savedAnswers = useRef<unknown>(undefined);
 
@@ -94,7 +94,9 @@ export function useAppModel(
       const state = opened.open.isNew ? port.fresh(mode) : port.fromCase(opened.open.case, mode);
       savedAnswers.current = state.answers;
       const session: Session = { open: opened.open, state, reviewTop: 0, ...inputFor(port, state) };
-      if (!opened.open.isNew) session.summary = port.summary(state);
+      // Nothing answered yet: no "already done" list, the first question and its why.
+      if (!opened.open.isNew && port.progress(state).answered > 0)
+        session.summary = port.summary(state);
       if (opened.open.migratedFrom !== undefined)
         session.summary = [
           `This file was written in case format version ${opened.open.migratedFrom}; it is saved in the current version once you change an answer, and the original is kept beside it.`,
@@ -110,43 +112,53 @@ export function useAppModel(
     [port, update],
   );
 
-  /** Builds and writes the case when its answers changed; a failure keeps the answers in memory. */
-  const save = useCallback(async () => {
-    const s = ref.current.session;
-    if (!s || s.open.readOnly || s.state.answers === savedAnswers.current) return;
-    const answers = s.state.answers;
-    const built = port.build(s.state, s.open.case);
-    if (!built.ok) {
-      const message = `not saved yet: ${built.message}`;
-      update((m) => (m.session ? { ...m, session: { ...m.session, saveError: message } } : m));
-      return;
-    }
-    const result = await services.saveCase(s.open, built.case);
-    update((m) => {
-      if (!m.session) return m;
-      const { saveError: _e, ...rest } = m.session;
+  /**
+   * Writes the session's answers when they changed since the last write, before it returns: the
+   * caller shows the next question only after this, so what the screen moved past is on disk.
+   * A failure keeps the answers in memory and says why and what to do.
+   */
+  const persist = useCallback(
+    (s: Session, opts: { overwriteChanged?: boolean } = {}): Session => {
+      if (s.open.readOnly || s.state.answers === savedAnswers.current) return s;
+      const built = port.build(s.state, s.open.case);
+      if (!built.ok) return { ...s, saveError: `not saved yet: ${built.message}` };
+      const result = services.saveCase(s.open, built.case, opts);
+      const { saveError: _e, conflict: _c, saveNote: _n, ...rest } = s;
       if (result.ok) {
-        savedAnswers.current = answers;
-        return { ...m, session: { ...rest, savedAt: result.at } };
+        savedAnswers.current = s.state.answers;
+        const done: Session = { ...rest, savedAt: result.at };
+        if (result.notes.length) done.saveNote = result.notes.join(' ');
+        return done;
       }
-      return { ...m, session: { ...rest, saveError: result.message } };
-    });
-  }, [port, services, update]);
+      if (result.theirs)
+        return { ...rest, saveError: result.message, conflict: { theirs: result.theirs } };
+      return { ...rest, saveError: failureText(result.message, result.problem) };
+    },
+    [port, services],
+  );
 
-  const queueSave = useCallback(() => {
-    saving.current = saving.current.then(save, save);
-  }, [save]);
+  /** Saves now what is due (leaving, closing, or the save key after a failure). */
+  const saveNow = useCallback(
+    (opts: { overwriteChanged?: boolean } = {}) => {
+      const s = ref.current.session;
+      if (!s) return;
+      // A failed save keeps savedAnswers behind the answers, so this writes again.
+      const after = persist(s, opts);
+      if (after !== s) update((m) => ({ ...m, session: after }));
+    },
+    [persist, update],
+  );
 
   const act = useCallback(
     (action: Action) => {
       const before = ref.current.session;
       if (!before) return;
-      const after = applyAction(port, before, action);
+      let after = applyAction(port, before, action);
       if (after === before) return;
+      if (after.state.answers !== before.state.answers || after.saveError) after = persist(after);
       update((m) => ({ ...m, session: after }));
-      if (after.state.answers !== before.state.answers) queueSave();
     },
-    [port, queueSave, update],
+    [port, persist, update],
   );
 
   /** Set after a leave found unsaved answers: the next leave goes without them. */
@@ -154,29 +166,25 @@ export function useAppModel(
 
   const leave = useCallback(async () => {
     if (ref.current.leaving) return;
-    update((m) => ({ ...m, leaving: true }));
-    queueSave();
-    await saving.current.catch(() => undefined);
+    saveNow();
     const s = ref.current.session;
-    const unsaved = s && !s.open.readOnly && s.state.answers !== savedAnswers.current;
+    const unsaved = s && s.state.answers !== savedAnswers.current;
     if (unsaved && !leaveArmed.current) {
       // Never drop answers silently: say so, and leave only when asked again.
       leaveArmed.current = true;
-      const saveError = `${s.saveError ?? 'not saved'}; press ${keysFor('save-leave')} again to leave without saving`;
-      update((m) => ({
-        ...m,
-        leaving: false,
-        session: m.session ? { ...m.session, saveError } : m.session,
-      }));
+      const saveError = s.open.readOnly
+        ? `these answers are not saved (read-only: ${s.open.readOnly.replace(/\.$/, '')}); press ${keysFor('save-now')} to save them as a new case, or ${keysFor('save-leave')} again to leave without saving`
+        : `${s.saveError ?? 'not saved'}; press ${keysFor('save-leave')} again to leave without saving`;
+      update((m) => (m.session ? { ...m, session: { ...m.session, saveError } } : m));
       return;
     }
+    update((m) => ({ ...m, leaving: true }));
     await s?.open.release().catch(() => undefined);
     exit(0);
-  }, [exit, queueSave, update]);
+  }, [exit, saveNow, update]);
 
   const closeCase = useCallback(async () => {
-    queueSave();
-    await saving.current.catch(() => undefined);
+    saveNow();
     const s = ref.current.session;
     if (s && !s.open.readOnly && s.state.answers !== savedAnswers.current) {
       // The answers live only here until a save succeeds: keep the case open.
@@ -187,7 +195,76 @@ export function useAppModel(
     await s?.open.release().catch(() => undefined);
     update((m) => ({ ...m, session: undefined, overlay: undefined }));
     void refresh();
-  }, [queueSave, refresh, update]);
+  }, [saveNow, refresh, update]);
+
+  /** The answers as a new case (new id) in the sessions folder; the session goes on there. */
+  const saveAsCopy = useCallback(async () => {
+    const s = ref.current.session;
+    if (!s) return;
+    const built = port.build(s.state, s.open.case);
+    if (!built.ok) {
+      const saveError = `no copy saved: ${built.message}`;
+      update((m) => (m.session ? { ...m, session: { ...m.session, saveError } } : m));
+      return;
+    }
+    const copy = await services.saveCopy(built.case);
+    if (!copy.ok) {
+      const saveError = `no copy saved: ${copy.message}`;
+      update((m) => (m.session ? { ...m, session: { ...m.session, saveError } } : m));
+      return;
+    }
+    if (!s.open.readOnly) await s.open.release().catch(() => undefined);
+    leaveArmed.current = false;
+    const state = port.fromCase(copy.open.case, ref.current.mode);
+    savedAnswers.current = state.answers;
+    const session: Session = {
+      open: copy.open,
+      state,
+      reviewTop: 0,
+      ...inputFor(port, state),
+      savedAt: services.now(),
+      saveNote: `Saved as a new case ${copy.open.case.id} (${path.basename(copy.open.file)}); ${path.basename(s.open.file)} was left as it is.`,
+    };
+    update((m) => ({ ...m, session, overlay: undefined }));
+  }, [port, services, update]);
+
+  /**
+   * The save key: writes again after a failure; in a read-only window, or when the file was
+   * changed outside, saves the answers as a new case under a new id and goes on there.
+   */
+  const saveKey = useCallback(async () => {
+    const s = ref.current.session;
+    if (!s) return;
+    if (!s.open.readOnly && !s.conflict) {
+      saveNow();
+      return;
+    }
+    await saveAsCopy();
+  }, [saveAsCopy, saveNow]);
+
+  /** The file was changed outside: take their version into the interview (ours since is dropped). */
+  const loadTheirs = useCallback(async () => {
+    const s = ref.current.session;
+    if (!s) return;
+    const o = await services.openCase({ path: s.open.file });
+    if (!o.ok) {
+      const saveError = `cannot load the changed file: ${o.message}`;
+      update((m) => (m.session ? { ...m, session: { ...m.session, saveError } } : m));
+      return;
+    }
+    enter(o);
+    update((m) =>
+      m.session
+        ? {
+            ...m,
+            session: { ...m.session, saveNote: `Loaded the version changed outside skidcase.` },
+          }
+        : m,
+    );
+  }, [enter, services, update]);
+
+  /** The file was changed outside: write ours over it; theirs is kept beside it. */
+  const keepMine = useCallback(() => saveNow({ overwriteChanged: true }), [saveNow]);
 
   const setMode = useCallback(
     (mode: InterviewMode) => {
@@ -205,9 +282,16 @@ export function useAppModel(
       if (start.kind === 'new') enter(await services.newCase());
       else if (start.kind === 'open') enter(await services.openCase({ path: start.path }));
       else if (start.kind === 'resume') {
-        const id = start.id ?? ref.current.home.rows?.find((r) => !r.problem)?.id;
+        // Without an id: the most recently saved case that is not finished (rows are newest first).
+        const rows = ref.current.home.rows ?? [];
+        const id = start.id ?? rows.find((r) => !r.problem && r.stoppedAt !== undefined)?.id;
         if (id) enter(await services.openCase({ id }));
-        else setHome({ error: 'There is no case to resume yet.' });
+        else
+          setHome({
+            error: rows.some((r) => !r.problem)
+              ? 'Every case here is finished: pick one from the list to open it.'
+              : 'There is no case to resume yet.',
+          });
       }
     })();
     // Runs once: the start is fixed for the life of the app.
@@ -225,9 +309,29 @@ export function useAppModel(
     leave,
     closeCase,
     setMode,
-    queueSave,
+    saveNow,
+    saveKey,
+    saveAsCopy,
+    loadTheirs,
+    keepMine,
     emptyLine: EMPTY_LINE,
   };
 }
 
 export type AppModel = ReturnType<typeof useAppModel>;
+
+/** A failed save in words the user can act on; the answers are still in memory. */
+export function failureText(message: string, problem?: string): string {
+  const retry = `press ${keysFor('save-now')} to save again`;
+  switch (problem) {
+    case 'full':
+    case 'short':
+      return `${message}: the answers are kept in memory; free space, then ${retry}`;
+    case 'denied':
+    case 'read-only':
+    case 'gone':
+      return `${message}: the answers are kept in memory; ${retry} once it can be written`;
+    default:
+      return `${message}: the answers are kept in memory; ${retry}`;
+  }
+}

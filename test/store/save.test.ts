@@ -124,16 +124,42 @@ describe('saveCase', () => {
     expect(r.backup).toBeUndefined();
   });
 
-  it('notices a file changed by hand behind its back and keeps that as the backup', async () => {
+  it('does not write over a file changed by hand behind its back: refuses, naming it, and keeps theirs on disk', async () => {
     const dir = tempDir('save');
     const file = path.join(dir, 'elm-8.json');
     await saveCase(dir, sampleCase('elm-8', [20]));
     const edited = { ...readJson(file), details: { reference: 'edited by hand' } };
     fs.writeFileSync(file, JSON.stringify(edited));
-    await saveCase(dir, sampleCase('elm-8', [20, 21]));
+    const r = await saveCase(dir, sampleCase('elm-8', [20, 21]));
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(r.kind).toBe('changed');
+    expect(r.message).toBe(
+      'not saved: elm-8.json was changed outside skidcase since it was last saved here',
+    );
+    expect(r.theirs?.details?.reference).toBe('edited by hand');
+    expect((readJson(file).details as { reference: string }).reference).toBe('edited by hand');
+  });
+
+  it('keep mine over an outside change: theirs is kept beside the case and as the backup', async () => {
+    const dir = tempDir('save');
+    const file = path.join(dir, 'elm-8b.json');
+    await saveCase(dir, sampleCase('elm-8b', [20]));
+    const edited = { ...readJson(file), details: { reference: 'edited by hand' } };
+    fs.writeFileSync(file, JSON.stringify(edited));
+    const r = await saveCase(dir, sampleCase('elm-8b', [20, 21]), { overwriteChanged: true });
+    if (!r.ok) throw new Error(r.message);
+    expect(r.keptOutside).toMatch(/elm-8b\.outside-\d{8}T\d{6}Z\.json$/);
+    expect((readJson(r.keptOutside!).details as { reference: string }).reference).toBe(
+      'edited by hand',
+    );
     expect((readJson(`${file}.bak`).details as { reference: string }).reference).toBe(
       'edited by hand',
     );
+    expect((readJson(file).analyses as { marks: number[] }[])[0]!.marks).toEqual([20, 21]);
+    // A later save is ours again: no second refusal.
+    const again = await saveCase(dir, sampleCase('elm-8b', [20, 21, 22]));
+    expect(again.ok).toBe(true);
   });
 
   it('serialises overlapping saves: the last one started is the one on disk', async () => {

@@ -34,6 +34,34 @@ async function exited(app: App) {
   return app.exits;
 }
 
+/**
+ * The half-done case opened, then changed outside skidcase (a new reference typed in an editor),
+ * then an answer given here: the save finds the outside change and waits for a choice.
+ */
+async function conflicted(): Promise<
+  App & { file: string; read(name?: string): Record<string, any> }
+> {
+  const app = await home({
+    files: { 'half-done.json': halfDone },
+    start: { kind: 'resume', id: 'half-done' },
+  });
+  await app.waitText('Which units were the measurements taken in?');
+  const file = path.join(app.dir, 'half-done.json');
+  const theirs = JSON.parse(fs.readFileSync(file, 'utf8'));
+  theirs.details.reference = 'CHANGED-IN-EDITOR';
+  fs.writeFileSync(file, JSON.stringify(theirs, null, 2));
+  const f = await app.press('m', 'was changed outside skidcase');
+  expect(f).toContain(
+    'not saved: half-done.json was changed outside skidcase since it was last saved here',
+  );
+  expect(f).toMatch(/l load theirs/);
+  // Nothing was written over their version.
+  expect(JSON.parse(fs.readFileSync(file, 'utf8')).details.reference).toBe('CHANGED-IN-EDITOR');
+  const read = (name = 'half-done.json') =>
+    JSON.parse(fs.readFileSync(path.join(app.dir, name), 'utf8'));
+  return Object.assign(app, { file, read });
+}
+
 /** What each command must do, checked through the keys the table gives it. */
 const CHECKS: Record<Command, (keys: string) => Promise<void>> = {
   async help(k) {
@@ -55,6 +83,58 @@ const CHECKS: Record<Command, (keys: string) => Promise<void>> = {
     expect(JSON.parse(fs.readFileSync(path.join(app.dir, file), 'utf8')).details.reference).toBe(
       'LEAVE-1',
     );
+  },
+  async 'save-now'(k) {
+    // The first save meets a full disk; after space is freed the save key writes the answer.
+    let full = true;
+    const app = await fresh({
+      services: (s) => ({
+        ...s,
+        saveCase: (open, c, o) =>
+          full
+            ? { ok: false, message: 'not saved: the disk is full', problem: 'full' }
+            : s.saveCase(open, c, o),
+      }),
+    });
+    let f = await app.answer('SAVE-NOW-1', 'the disk is full');
+    expect(flat(f)).toContain(
+      'the answers are kept in memory; free space, then press Ctrl+S to save again',
+    );
+    full = false;
+    f = await app.press(k, /saved \d\d:\d\d:\d\d/);
+    const file = fs.readdirSync(app.dir).find((n) => n.endsWith('.json'))!;
+    expect(JSON.parse(fs.readFileSync(path.join(app.dir, file), 'utf8')).details.reference).toBe(
+      'SAVE-NOW-1',
+    );
+  },
+  async 'load-theirs'(k) {
+    const app = await conflicted();
+    const f = await app.press(k, 'Loaded the version changed outside skidcase');
+    expect(f).toContain('CHANGED-IN-EDITOR');
+    expect(app.read().details.reference).toBe('CHANGED-IN-EDITOR');
+    expect(app.read().units).not.toBe('metric'); // the answer given here was dropped, as offered
+  },
+  async 'keep-mine'(k) {
+    const app = await conflicted();
+    const f = await app.press(
+      k,
+      /The version changed outside skidcase was kept as .*half-done\.outside-/,
+    );
+    expect(f).toMatch(/saved \d\d:\d\d:\d\d/);
+    expect(app.read().units).toBe('metric');
+    const kept = fs.readdirSync(app.dir).find((n) => n.startsWith('half-done.outside-'))!;
+    expect(app.read(kept).details.reference).toBe('CHANGED-IN-EDITOR');
+  },
+  async 'copy-mine'(k) {
+    const app = await conflicted();
+    const f = await app.press(k, 'Saved as a new case half-done-copy');
+    expect(f).toContain('was left as it is');
+    expect(app.read('half-done-copy.json').units).toBe('metric');
+    expect(app.read().details.reference).toBe('CHANGED-IN-EDITOR');
+    expect(app.read().units).not.toBe('metric');
+    // The work goes on in the copy: the next answer lands there.
+    expect(fs.existsSync(path.join(app.dir, 'half-done-copy.json.lock'))).toBe(true);
+    expect(fs.existsSync(path.join(app.dir, 'half-done.json.lock'))).toBe(false);
   },
   async quit(k) {
     const app = await home();

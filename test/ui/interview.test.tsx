@@ -7,7 +7,7 @@ import { loadCaseText } from '../../src/case/load.js';
 import { solveCase } from '../../src/engine/index.js';
 import { applyColorPolicy } from '../../src/ui/theme.js';
 import { DOWN, ENTER, ESC, ctrl, renderApp } from './render-app.js';
-import { halfDone } from './fixtures.js';
+import { finishedSlide, halfDone } from './fixtures.js';
 
 afterEach(() => cleanup());
 
@@ -73,9 +73,47 @@ describe('interview screen', () => {
     expect(f).toMatch(/5 of \d+ answered/);
   });
 
+  it('a new case left before its first answer resumes on its first question, with nothing made up', async () => {
+    const first = renderApp();
+    await first.waitText('No cases here yet');
+    await first.press('n', 'Case or report reference');
+    first.stdin.write(ctrl('q'));
+    await first.waitFor(() => first.exits.length > 0, 'exit');
+    const name = fs.readdirSync(first.dir).find((n) => n.endsWith('.json'))!;
+    const text = fs.readFileSync(path.join(first.dir, name), 'utf8');
+    cleanup();
+    const again = renderApp({ files: { [name]: text }, start: { kind: 'resume' } });
+    const f = await again.waitText('Case or report reference');
+    expect(f).toMatch(/ 0 of \d+ answered/);
+    expect(f).not.toContain('Already done');
+    // On through the case questions: each is asked, none was filled in behind the user's back.
+    await again.press(ENTER, 'When did the crash happen?');
+  });
+
+  it('resume without an id opens the newest unfinished case, not a newer finished one', async () => {
+    const older = { ...halfDone, updated: '2026-11-01T10:00:00.000Z' };
+    const newer = { ...finishedSlide, updated: '2026-11-20T10:00:00.000Z' };
+    const app = renderApp({
+      files: { 'half-done.json': older, 'finished-slide.json': newer },
+      start: { kind: 'resume' },
+    });
+    const f = await app.waitText('Resumed. Already done:');
+    expect(f).toContain('half-done');
+    expect(f).toContain('Which units were the measurements taken in?');
+  });
+
+  it('resume without an id, when every case is finished, says so on the list', async () => {
+    const app = renderApp({
+      files: { 'finished-slide.json': finishedSlide },
+      start: { kind: 'resume' },
+    });
+    const f = await app.waitText('Every case here is finished');
+    expect(f).toContain('finished-slide');
+  });
+
   it('keeps answers in memory and says so when a save fails', async () => {
     const app = renderApp({
-      services: (s) => ({ ...s, saveCase: async () => ({ ok: false, message: 'disk is full' }) }),
+      services: (s) => ({ ...s, saveCase: () => ({ ok: false, message: 'disk is full' }) }),
     });
     await app.waitText('No cases here yet');
     await app.press('n', 'Case or report reference');
@@ -86,7 +124,7 @@ describe('interview screen', () => {
 
   it('does not leave with unsaved answers until asked twice', async () => {
     const app = renderApp({
-      services: (s) => ({ ...s, saveCase: async () => ({ ok: false, message: 'disk is full' }) }),
+      services: (s) => ({ ...s, saveCase: () => ({ ok: false, message: 'disk is full' }) }),
     });
     await app.waitText('No cases here yet');
     await app.press('n', 'Case or report reference');
@@ -114,6 +152,38 @@ describe('interview screen', () => {
     const f = await app.waitText('READ-ONLY');
     expect(f).toContain('pid 4242');
     expect(f).toContain('not saved (read-only)');
+    expect(f).toContain('Ctrl+Q leave (not saved)');
+    expect(f).not.toContain('save & leave');
+  });
+
+  it('a read-only window does not drop typed answers on Ctrl+Q: it offers them as a new case', async () => {
+    const app = renderApp({
+      files: { 'half-done.json': halfDone },
+      start: { kind: 'resume', id: 'half-done' },
+      services: (s) => ({
+        ...s,
+        openCase: async (ref) => {
+          const o = await s.openCase(ref);
+          if (o.ok) o.open.readOnly = 'this case is open in another skidcase (pid 4242).';
+          return o;
+        },
+      }),
+    });
+    await app.waitText('Which units were the measurements taken in?');
+    await app.press('m', 'Posted speed limit');
+    let f = await app.press(ctrl('q'), 'to save them as a new case');
+    expect(f.replace(/\s+/g, ' ')).toContain(
+      'these answers are not saved (read-only: this case is open in another skidcase (pid 4242)); press Ctrl+S to save them as a new case, or Ctrl+Q / Ctrl+C again to leave without saving',
+    );
+    expect(app.exits).toEqual([]);
+    f = await app.press(ctrl('s'), 'Saved as a new case half-done-copy');
+    expect(f).not.toContain('READ-ONLY');
+    const copy = JSON.parse(fs.readFileSync(path.join(app.dir, 'half-done-copy.json'), 'utf8'));
+    expect(copy.units).toBe('metric');
+    // The original was not touched by this window.
+    expect(fs.readFileSync(path.join(app.dir, 'half-done.json'), 'utf8')).toBe(
+      JSON.stringify(halfDone, null, 2),
+    );
   });
 
   it('stacks the panels at 60 columns and keeps every line inside them', async () => {
