@@ -82,7 +82,7 @@ async function loadAndSolve(target: string, sessionsDir: string, io: ReportIo): 
     io.err(`skidcase: ${where.file} is not a valid case file\n`);
     return { ok: false, code: REPORT_EXIT.invalid };
   }
-  const solution = solveCase(loaded.case);
+  const solution = solveCase(loaded.case, loaded.unknownFields);
   const failures = solution.analyses.flatMap((r, i) =>
     r.ok ? [] : [`analyses[${i}] (${r.id}): cannot be computed: ${r.reason}`],
   );

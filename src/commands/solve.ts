@@ -48,7 +48,7 @@ export async function solveCommand(
     io.err(`skidcase: ${file} is not a valid case file\n`);
     return EXIT.invalid;
   }
-  const solution = solveCase(loaded.case);
+  const solution = solveCase(loaded.case, loaded.unknownFields);
   const failures = solution.analyses.flatMap((r, i) =>
     r.ok ? [] : [`analyses[${i}] (${r.id}): cannot be computed: ${r.reason}`],
   );

@@ -1,4 +1,4 @@
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from './number-text.js';
 import { gravityOf, speedUnitToLengthPerSecond, unitsOf } from './constants.js';
 import { input, makeStep } from './step.js';
 import { fail, ok, type Outcome, type Range, type Step, type UnitSystem } from './types.js';

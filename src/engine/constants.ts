@@ -55,3 +55,23 @@ export function gravityOf(system: UnitSystem): number {
 export function ordinateReadingStep(system: UnitSystem): { size: number; label: string } {
   return system === 'imperial' ? { size: 1 / 12, label: '1 in' } : { size: 0.01, label: '1 cm' };
 }
+
+/**
+ * Published perception-reaction times, s: M. Green, "How long does it take to stop?",
+ * Transportation Human Factors 2(3), 2000 (about 0.7 to 0.75 s for a fully expected event,
+ * 1.25 s for an unexpected but common one, 1.5 s for a surprise); AASHTO, A Policy on Geometric
+ * Design of Highways and Streets (2.5 s, the design value).
+ */
+export const REACTION_TIMES = Object.freeze({
+  expected: { low: 0.7, high: 0.75 },
+  unexpected: 1.25,
+  surprise: 1.5,
+  design: 2.5,
+});
+
+/**
+ * The perception-reaction time used when neither the case nor the user's preference sets one:
+ * the surprise value (common practice). The one definition: the preferences' default, the review,
+ * `solve` and the report read it from here.
+ */
+export const DEFAULT_REACTION_TIME: number = REACTION_TIMES.surprise;

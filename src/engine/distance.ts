@@ -1,5 +1,5 @@
-import type { Spread } from '../case/quantity.js';
-import { formatNumber } from '../format/numbers.js';
+import type { Spread } from './spread.js';
+import { formatNumber } from './number-text.js';
 import type { Range, Step, Units } from './types.js';
 import { input, makeStep } from './step.js';
 

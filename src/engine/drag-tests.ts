@@ -1,6 +1,6 @@
-import { spread } from '../case/quantity.js';
+import { spread } from './spread.js';
 import type { DragV1 } from '../case/v1/schema.js';
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from './number-text.js';
 import { tradeConstants, unitsOf } from './constants.js';
 import { testSkidDrag } from './formulas.js';
 import { reduceRepeated } from './reduce.js';

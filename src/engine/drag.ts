@@ -1,6 +1,6 @@
-import { spread } from '../case/quantity.js';
+import { spread } from './spread.js';
 import type { DragV1 } from '../case/v1/schema.js';
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from './number-text.js';
 import { dragTableRow } from './drag-table.js';
 import { testSkidsDrag } from './drag-tests.js';
 import { reduceRepeated } from './reduce.js';

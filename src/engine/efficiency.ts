@@ -1,6 +1,6 @@
-import { spread } from '../case/quantity.js';
+import { spread } from './spread.js';
 import type { VehicleV1 } from '../case/v1/schema.js';
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from './number-text.js';
 import { wheelsBraking } from './formulas.js';
 import { fail, ok, type Outcome, type Range, type Step } from './types.js';
 import { exact, input, makeStep } from './step.js';

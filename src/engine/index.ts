@@ -4,25 +4,18 @@ export {
   unitsOf,
   tradeConstants,
   speedUnitToLengthPerSecond,
-  gravityOf,
-  ordinateReadingStep,
-  STANDARD_GRAVITY_SI,
   STANDARD_GRAVITY_FT,
-  type TradeConstants,
 } from './constants.js';
-export { slideDistanceFromMarks, type DistanceRule } from './distance.js';
-export { brakingEfficiency, wheelsEfficiency, type Efficiency } from './efficiency.js';
-export { dragFactor, type Drag } from './drag.js';
-export { testSkidsDrag } from './drag-tests.js';
-export { reduceRepeated } from './reduce.js';
+export { slideDistanceFromMarks } from './distance.js';
+export { brakingEfficiency, wheelsEfficiency } from './efficiency.js';
+export { dragFactor } from './drag.js';
+
 export {
   DRAG_TABLE,
-  DRAG_TABLE_NOTE,
   dragTableRow,
   dragTableBand,
   type DragTableRow,
   type DragBand,
-  type RowKnown,
 } from './drag-table.js';
 export {
   effectiveDrag,
@@ -35,31 +28,10 @@ export {
   wheelsBraking,
   testSkidDrag,
 } from './formulas.js';
-export {
-  slideSpeed,
-  effectiveDragRange,
-  type Slide,
-  type SlideSegment,
-  type SlideEnd,
-} from './slide.js';
-export {
-  radiusFromChord,
-  pathRadius,
-  criticalSpeed,
-  ordinateSensitivity,
-  NEAR_STRAIGHT_RATIO,
-} from './yaw.js';
+export { slideSpeed, type SlideSegment } from './slide.js';
+export { radiusFromChord, pathRadius, criticalSpeed, ordinateSensitivity } from './yaw.js';
 export { reactionDistance, brakingDistance, slideDuration } from './time-distance.js';
 export { solveCase, solveAnalysis } from './solve-case.js';
-export { MARKS_MISMATCH, APPEARANCE_NOTES } from './solve-skid.js';
-export { minimumOf, isAboveLimit, solvedAnalysis } from './solution.js';
+export { APPEARANCE_NOTES } from './solve-skid.js';
+
 export { exact } from './step.js';
-export {
-  fitCircleToOffsets,
-  type OffsetStation,
-  type OffsetsFit,
-  type OffsetsFitOptions,
-  type OffsetResidual,
-} from './offsets-fit.js';
-export { radiusFromOffsets, OFFSET_READING, type OffsetsRadius } from './radius-offsets.js';
-export { skidModel } from './skid-model.js';

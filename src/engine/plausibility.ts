@@ -2,7 +2,7 @@
  * Plausibility checks (common practice: warn, never refuse). Each returns the warning sentence,
  * or undefined when the figure is within what the trade expects. The figure is still computed.
  */
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from './number-text.js';
 import type { DistanceRule } from './distance.js';
 import type { Range, Units } from './types.js';
 

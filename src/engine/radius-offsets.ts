@@ -1,4 +1,4 @@
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from './number-text.js';
 import { fitCircleToOffsets, type OffsetStation, type OffsetsFit } from './offsets-fit.js';
 import { fail, ok, type Outcome, type Range, type Units, type UnitSystem } from './types.js';
 import type { Step } from './types.js';

@@ -1,4 +1,4 @@
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from './number-text.js';
 import { geometricFit, geometricSsr, signRuns, type Point } from './circle-fit.js';
 import { RADIUS_RANGE_SE } from './radius-offsets.js';
 import {

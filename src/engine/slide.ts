@@ -1,4 +1,4 @@
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from './number-text.js';
 import { tradeConstants, unitsOf } from './constants.js';
 import { effectiveDrag, slideSquaredSpeed } from './formulas.js';
 import {

@@ -1,6 +1,6 @@
-import { spread } from '../case/quantity.js';
+import { spread } from './spread.js';
 import type { AirborneV1, CaseV1 } from '../case/v1/schema.js';
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from './number-text.js';
 import { airborneSpeed, airborneSpeedOf } from './airborne.js';
 import { unitsOf } from './constants.js';
 import { modelInput } from './model-input.js';

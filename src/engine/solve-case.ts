@@ -1,6 +1,5 @@
-import { spread } from '../case/quantity.js';
+import { spread } from './spread.js';
 import type { Case } from '../case/load.js';
-import { unknownFields } from '../case/unknown-fields.js';
 import { unitsOf } from './constants.js';
 import { solveAirborne } from './solve-airborne.js';
 import { solveSkid } from './solve-skid.js';
@@ -75,16 +74,16 @@ export function solveAnalysis(c: Case, i: number): AnalysisOutcome {
 /**
  * Solves every analysis of a validated case, each phase of a chain once and before the phase
  * that runs into it, and compares with the posted limit: `exceededAtMinimum` is true when some
- * analysis's low end is above the limit. The file's unknown fields become warnings naming their
- * paths.
+ * analysis's low end is above the limit. `unknownFields`, the paths of fields the file holds
+ * that its format does not define (as `loadCase` reports them), become warnings naming them.
  * @example
  * const loaded = loadCaseText(text);
- * if (loaded.ok) solveCase(loaded.case).analyses.forEach((r) => r.ok && r.solution.speed);
+ * if (loaded.ok) solveCase(loaded.case, loaded.unknownFields).analyses.forEach((r) => r.ok && r.solution.speed);
  */
-export function solveCase(c: Case): CaseSolution {
+export function solveCase(c: Case, unknownFields: readonly string[] = []): CaseSolution {
   const memo = new Map<number, AnalysisOutcome>();
   const analyses = c.analyses.map((_, i) => solveInChain(c, i, memo, []));
-  const warnings = unknownFields(c).map(
+  const warnings = unknownFields.map(
     (path) => `${path}: not a field of the case format; kept, but not used (misspelt?)`,
   );
   if (c.analyses.length === 0) warnings.push('The case has no analyses yet: nothing to solve.');

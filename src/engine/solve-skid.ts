@@ -1,6 +1,6 @@
-import { spread } from '../case/quantity.js';
+import { spread } from './spread.js';
 import type { CaseV1, SkidV1 } from '../case/v1/schema.js';
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from './number-text.js';
 import { unitsOf } from './constants.js';
 import { dragAboveOne, marksDisagree } from './plausibility.js';
 import { slideDistanceFromMarks } from './distance.js';

@@ -1,4 +1,4 @@
-import { spread } from '../case/quantity.js';
+import { spread } from './spread.js';
 import { modelInput } from './model-input.js';
 import type { CaseV1, YawV1 } from '../case/v1/schema.js';
 import { unitsOf } from './constants.js';

@@ -1,4 +1,4 @@
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from './number-text.js';
 import { gravityOf, speedUnitToLengthPerSecond, tradeConstants, unitsOf } from './constants.js';
 import { effectiveDrag, slideDistanceFor } from './formulas.js';
 import { fail, ok, type Outcome, type Step, type UnitSystem } from './types.js';

@@ -1,4 +1,4 @@
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from './number-text.js';
 import { ordinateReadingStep, tradeConstants, unitsOf } from './constants.js';
 import { arcRadius, centreRadius, criticalSpeedOf } from './formulas.js';
 import {

@@ -1,24 +1,19 @@
-import { spread } from '../case/quantity.js';
 import type { Case } from '../case/load.js';
-import { unitsOf } from '../engine/index.js';
+import { DEFAULT_REACTION_TIME } from '../engine/constants.js';
 import type { AnalysisSolution, Outcome } from '../engine/types.js';
 import { samplingFromCase, timeDistanceFromCase } from './case-fields.js';
 import { limitComparison, type LimitComparison } from './limit-comparison.js';
 import { segmentLabels } from './limit-inputs.js';
-import { sensitivitySvg, speedAlongSlideSvg, yawArcSvg } from './pictures-svg.js';
 import { sampleSpeeds, type SampleSummary } from './sampling.js';
 import { sensitivity, type SensitivityRow } from './sensitivity.js';
 import { yawFromOffsets, type YawFromOffsets } from './yaw-offsets.js';
-
-/** Default perception-reaction time when neither the case nor the preferences give one. */
-export const DEFAULT_REACTION_TIME = 1.5;
 
 export interface ExtrasOptions {
   /** The user's preferred perception-reaction time, s (the case's own `timeDistance` wins). */
   reactionTime?: number;
 }
 
-/** Everything the extras add to one solved analysis, for the review screen and the report. */
+/** What the extras add to one solved analysis, for the review screen (its pictures are drawn as text there). */
 export interface AnalysisExtras {
   sensitivity: SensitivityRow[];
   /** Present when the case asks for it (top-level `sampling`). */
@@ -29,15 +24,13 @@ export interface AnalysisExtras {
   offsets?: Outcome<YawFromOffsets>;
   /** Surfaces of a skid analysis's segments, as the case names them (for the text chart). */
   segmentLabels: string[];
-  /** Self-contained SVG pictures, ready to write beside a report. */
-  svg: { speed?: string; yaw?: string; sensitivity: string };
 }
 
 /**
  * Runs every extra that applies to one solved analysis of a case: sensitivity always; sampling if
  * the case has a `sampling` field; time and distance at the posted limit for a skid analysis when
  * the case has a posted limit (reaction time from the analysis's `timeDistance`, else the
- * preference, else 1.5 s); the offsets fit for a yaw analysis with `offsets`; and the pictures.
+ * preference, else the default); the offsets fit for a yaw analysis with `offsets`.
  * Each part that can fail is an Outcome of its own, so one failing part never hides the others.
  * @example analysisExtras(c, solution, { reactionTime: prefs.reactionTime }).limit
  */
@@ -46,13 +39,11 @@ export function analysisExtras(
   solution: AnalysisSolution,
   opts: ExtrasOptions = {},
 ): AnalysisExtras {
-  const u = unitsOf(c.units);
   const rows = sensitivity(solution);
   const labels = segmentLabels(c, solution.id);
   const out: AnalysisExtras = {
     sensitivity: rows,
     segmentLabels: labels,
-    svg: { sensitivity: sensitivitySvg(rows, { speedUnit: u.speed }) },
   };
   const sampling = samplingFromCase(c);
   if (!sampling.ok) out.sampling = sampling;
@@ -60,11 +51,6 @@ export function analysisExtras(
 
   const a = c.analyses.find((x) => x.id === solution.id);
   if (solution.kind === 'skid') {
-    out.svg.speed = speedAlongSlideSvg(solution, {
-      segmentLabels: labels,
-      speedUnit: u.speed,
-      lengthUnit: u.length,
-    });
     if (c.postedLimit !== undefined) {
       const td = timeDistanceFromCase(c, solution.id);
       if (!td.ok) out.limit = td;
@@ -89,16 +75,6 @@ export function analysisExtras(
     const fit = yawFromOffsets(c, solution.id);
     if (!fit.ok) out.offsets = fit;
     else if (fit.value) out.offsets = { ok: true, value: fit.value };
-    // Measured by offsets, the sketch shows the fitted arc's chord and middle ordinate.
-    const chord = a.chord ?? a.offsets?.chord;
-    const ordinate =
-      a.middleOrdinate !== undefined
-        ? spread(a.middleOrdinate).value
-        : fit.ok
-          ? fit.value?.fit.middleOrdinate
-          : undefined;
-    if (chord !== undefined && ordinate !== undefined)
-      out.svg.yaw = yawArcSvg(spread(chord).value, ordinate, { lengthUnit: u.length });
   }
   return out;
 }

@@ -1,4 +1,4 @@
-import { spread } from '../case/quantity.js';
+import { spread } from '../engine/spread.js';
 import type { Case } from '../case/load.js';
 import { effectiveDrag, reactionDistance, tradeConstants, unitsOf } from '../engine/index.js';
 import {
@@ -9,7 +9,7 @@ import {
   type Range,
   type Step,
 } from '../engine/types.js';
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from '../engine/number-text.js';
 import {
   reactionTimeSource,
   segmentLabels,

@@ -1,5 +1,6 @@
 import type { Case } from '../case/load.js';
 import type { AnalysisSolution } from '../engine/types.js';
+import { REACTION_TIMES } from '../engine/constants.js';
 
 /** Which end of every input: `low` sets each input at its low end (the engine's low corner). */
 export type Corner = 'value' | 'low' | 'high';
@@ -62,10 +63,12 @@ export function segmentLabels(c: Case, analysisId: string): string[] {
  */
 export function reactionTimeSource(t: number): string {
   const green = 'M. Green, Transportation Human Factors 2(3), 2000';
-  if (t === 1.5) return `usual value for a surprise event (${green})`;
-  if (t === 1.25) return `about the time for an unexpected but common event (${green})`;
-  if (t >= 0.7 && t <= 0.75) return `about the time for a fully expected event (${green})`;
-  if (t === 2.5)
+  const T = REACTION_TIMES;
+  if (t === T.surprise) return `usual value for a surprise event (${green})`;
+  if (t === T.unexpected) return `about the time for an unexpected but common event (${green})`;
+  if (t >= T.expected.low && t <= T.expected.high)
+    return `about the time for a fully expected event (${green})`;
+  if (t === T.design)
     return 'AASHTO design value covering about 90% of drivers (A Policy on Geometric Design of Highways and Streets)';
-  return `chosen by the investigator (for comparison: 1.5 s for a surprise event, ${green}; 2.5 s AASHTO design value)`;
+  return `chosen by the investigator (for comparison: ${T.surprise} s for a surprise event, ${green}; ${T.design} s AASHTO design value)`;
 }

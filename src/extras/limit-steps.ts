@@ -8,7 +8,7 @@ import {
   type UnitSystem,
   type Units,
 } from '../engine/types.js';
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from '../engine/number-text.js';
 import type { SlideCorner } from './limit-inputs.js';
 import type { Walk } from './limit-walk.js';
 

@@ -1,4 +1,5 @@
-import { spread, type Quantity } from '../case/quantity.js';
+import { type Quantity } from '../case/quantity.js';
+import { spread } from '../engine/spread.js';
 import {
   fitCircleToOffsets as fitInEngine,
   type OffsetStation,

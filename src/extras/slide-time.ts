@@ -1,7 +1,7 @@
 import type { Case } from '../case/load.js';
 import { slideDuration } from '../engine/index.js';
 import { fail, ok, type Outcome, type Step } from '../engine/types.js';
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from '../engine/number-text.js';
 import type { SlideCorner } from './limit-inputs.js';
 
 /**

@@ -1,4 +1,4 @@
-import { spread } from '../case/quantity.js';
+import { spread } from '../engine/spread.js';
 import type { Case } from '../case/load.js';
 import { criticalSpeed, dragFactor, pathRadius, unitsOf } from '../engine/index.js';
 import type { OffsetsFit } from '../engine/offsets-fit.js';

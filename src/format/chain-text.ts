@@ -1,43 +1,13 @@
 import type { Case } from '../case/load.js';
-import type {
-  AnalysisOutcome,
-  AnalysisSolution,
-  CaseSolution,
-  Step,
-  Units,
-} from '../engine/types.js';
+import type { AnalysisOutcome, AnalysisSolution, CaseSolution, Units } from '../engine/types.js';
 import { isAboveLimit } from '../engine/solution.js';
 import { CAUTIONS } from './cautions.js';
+import { formatStepLines } from './step-text.js';
 import { extrasTextLines } from './extras-text.js';
 import { solveExtras } from './solve-extras.js';
 import { KIND_NAMES } from './kind-names.js';
-import { formatRange, withUnit, zeroRangeNote, type NumberKind } from './numbers.js';
+import { formatRange, withUnit, zeroRangeNote } from './numbers.js';
 import { phasesLine } from './phases-text.js';
-
-/** The kind of number a step's result is, from its unit. */
-export function kindOfUnit(unit: string): NumberKind {
-  if (unit === 'mph' || unit === 'km/h') return 'speed';
-  if (unit === 'ft' || unit === 'm') return 'length';
-  if (unit === 's') return 'seconds';
-  if (unit === '%' || unit === '°') return 'percent';
-  return 'drag';
-}
-
-/** One step as lines: name, formula, the numbers substituted, the result with its range, why. */
-export function formatStepLines(step: Step, index: number): string[] {
-  const r = formatRange(
-    { value: step.result, low: step.low, high: step.high },
-    kindOfUnit(step.unit),
-    step.unit,
-  );
-  return [
-    `${index}. ${step.name}`,
-    `   ${step.formula}`,
-    `   ${step.substituted}`,
-    `   result: ${r}`,
-    `   why: ${step.why}`,
-  ];
-}
 
 /** "at least 40 mph" with the range beside it. */
 export function formatAtLeast(s: AnalysisSolution, units: Units): string {

@@ -1,22 +1,13 @@
 import type { Range, Units } from '../engine/types.js';
 import type { Verdict } from '../extras/limit-steps.js';
-import { formatStepLines, kindOfUnit } from './chain-text.js';
-import { formatNumber, formatRange, withUnit } from './numbers.js';
-import { limitFraming } from './limit-framing.js';
+import { formatStepLines, kindOfUnit } from './step-text.js';
+import { formatRange, withUnit } from './numbers.js';
+import { formatNumber } from '../engine/number-text.js';
 import type { SolveExtras } from './solve-extras.js';
+import { limitFraming, verdictSentence } from './verdict.js';
 
 const speedOr = (s: number | undefined, u: Units) =>
   s === undefined ? 'not computable' : withUnit(s, 'speed', u.speed);
-
-function verdictLine(v: Verdict, u: Units): string {
-  const stops =
-    v.stops === 'yes'
-      ? 'stops short of it'
-      : v.stops === 'no'
-        ? `does not stop before it, passing at ${formatRange(v.speedThere, 'speed', u.speed)}`
-        : `stops short of it or not, depending on the inputs (speed there ${formatRange(v.speedThere, 'speed', u.speed)})`;
-  return `${v.what} (${withUnit(v.at, 'length', u.length)} from the start of the marks): a vehicle at the posted limit ${stops}`;
-}
 
 /**
  * The extras as lines of `solve`'s text chain, indented under the analysis: the sensitivity
@@ -46,8 +37,8 @@ export function extrasTextLines(x: SolveExtras, u: Units, speed: Range): string[
     );
     for (const l of limitFraming(t, speed, u)) out.push(`    ${l}`);
     t.steps.forEach((st, j) => out.push(...formatStepLines(st, j + 1).map((l) => `    ${l}`)));
-    out.push(`    ${verdictLine(t.endOfMarks, u)}`);
-    if (t.conflict) out.push(`    ${verdictLine(t.conflict, u)}`);
+    out.push(`    ${verdictSentence(t.endOfMarks, u)}`);
+    if (t.conflict) out.push(`    ${verdictSentence(t.conflict, u)}`);
     for (const a of t.assumptions) out.push(`    - ${a}`);
   }
   const d = x.distribution;

@@ -1,15 +1,12 @@
 import type { Case } from '../case/load.js';
+import { DEFAULT_REACTION_TIME } from '../engine/constants.js';
 import type { AnalysisSolution, Outcome } from '../engine/types.js';
 import { limitComparison, type LimitComparison } from '../extras/limit-comparison.js';
 import { sampleSpeeds, type SampleSummary } from '../extras/sampling.js';
 import { sensitivity, type SensitivityRow } from '../extras/sensitivity.js';
 
-/** Reaction time `solve` uses when the analysis gives none (DOMAIN.md: usual surprise value). */
-export const SOLVE_REACTION_TIME = 1.5;
-
-/** Where that default comes from, as the output says it: solve reads no preferences. */
-export const SOLVE_REACTION_ORIGIN =
-  'default 1.5 s (solve does not read the preferences; set timeDistance.reactionTime in the case to change it)';
+/** Where the default reaction time comes from, as `solve` says it: solve reads no preferences. */
+export const SOLVE_REACTION_ORIGIN = `default ${DEFAULT_REACTION_TIME} s (solve does not read the preferences; set timeDistance.reactionTime in the case to change it)`;
 
 /** What `solve` adds to one solved analysis beyond the contract's fields. */
 export interface SolveExtras {
@@ -23,7 +20,7 @@ export interface SolveExtras {
 /**
  * Runs the extras `solve` shows for one solved analysis: one-at-a-time sensitivity always; time
  * and distance at the posted limit for a skid (reaction time: the analysis's own
- * `timeDistance.reactionTime`, else 1.5 s); the seeded sampling when the case asks for it.
+ * `timeDistance.reactionTime`, else the default); the seeded sampling when the case asks for it.
  * Pure, and free of any UI import (solve's path must not load Ink).
  * @example solveExtras(c, solution).sensitivity[0]?.key // the input that moves the speed most
  */
@@ -35,7 +32,7 @@ export function solveExtras(c: Case, i: number, solution: AnalysisSolution): Sol
     if (c.postedLimit !== undefined || td?.conflictAt !== undefined) {
       const own = td?.reactionTime;
       out.timeDistance = limitComparison(c, solution, {
-        reactionTime: own ?? SOLVE_REACTION_TIME,
+        reactionTime: own ?? DEFAULT_REACTION_TIME,
         reactionOrigin: own !== undefined ? 'set in the case file' : SOLVE_REACTION_ORIGIN,
         ...(td?.conflictAt !== undefined ? { conflictAt: td.conflictAt } : {}),
       });

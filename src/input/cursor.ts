@@ -47,5 +47,3 @@ export class ReadError {
 }
 
 export type Read<T> = T | ReadError;
-
-export const isError = (x: unknown): x is ReadError => x instanceof ReadError;

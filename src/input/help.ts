@@ -44,11 +44,6 @@ const NOTES: Partial<Record<QuantityKind, string>> = {
   weight: ' (N read as kg-force, ÷ 9.80665)',
 };
 
-/** Lines written out where the suffix list alone would mislead. */
-const WHOLE_LINE: Partial<Record<QuantityKind, string>> = {
-  factor: 'Drag factors: a plain decimal such as 0.72, not 72%; a reading may end in g',
-};
-
 /** Accepted suffixes for each kind, one line per kind. */
 export const UNIT_SUFFIX_HELP: readonly string[] = (
   ['length', 'speed', 'percent', 'factor', 'time', 'weight'] as const

@@ -5,20 +5,11 @@
  */
 export { parseQuantity } from './parse-quantity.js';
 export { parseList, parseCount } from './parse-list.js';
-export { parseMarksLine, type MarksContext, type MarksResult } from './marks-line.js';
-export { parseSegmentLine, type SegmentContext, type SegmentsResult } from './segment-line.js';
-export { formatSegmentLine, formatRangeText } from './format-segment-line.js';
+export { parseMarksLine } from './marks-line.js';
+export { parseSegmentLine } from './segment-line.js';
+export { formatSegmentLine } from './format-segment-line.js';
 export { QUICK_ENTRY_HELP, UNIT_SUFFIX_HELP, unitSuffixes } from './help.js';
-export { caseUnitOf, KIND_EXAMPLE } from './units.js';
+export { caseUnitOf } from './units.js';
 export { showNumber } from './show.js';
-export { DEFAULT_NEGATIVE_HINT } from './check.js';
-export type { SpeedBand } from './table-drag.js';
-export type {
-  QuantityKind,
-  QuantitySpec,
-  QuantityResult,
-  ListSpec,
-  ListResult,
-  CountSpec,
-  CountResult,
-} from './types.js';
+
+export type { QuantityKind, QuantitySpec, ListSpec } from './types.js';

@@ -2,24 +2,18 @@
  * Parsed values of the answers that apply now, read fresh from the typed text with the current
  * units, so that a change to an earlier answer (the units, a chord) is always taken into account.
  */
-import type { Answers, AnswerContext, Question, QuestionStatus } from './types.js';
+import type { Answers, AnswerContext, AnswerReader, Question } from './types.js';
 import { unitsOf } from './answers-read.js';
 import { questionsFor } from './questions.js';
 
 export function contextOf(answers: Answers): AnswerContext {
-  return { units: unitsOf(answers), answers };
-}
-
-export interface AnswerReader {
-  answers: Answers;
-  /** Applicable questions in order. */
-  questions: Question[];
-  /** 'answered', 'open' or 'invalid' for an applicable question id; undefined if it does not apply. */
-  status(id: string): Exclude<QuestionStatus, 'unused'> | undefined;
-  /** Parsed value of an applicable, valid answer; undefined otherwise. */
-  value(id: string): unknown;
-  /** Every applicable question whose id passes `pick` is answered and valid. */
-  complete(pick: (id: string) => boolean): boolean;
+  return {
+    units: unitsOf(answers),
+    answers,
+    get read() {
+      return readAnswers(answers);
+    },
+  };
 }
 
 const READERS = new WeakMap<Answers, AnswerReader>();
@@ -36,7 +30,7 @@ export function readAnswers(answers: Answers): AnswerReader {
 
 function makeReader(answers: Answers): AnswerReader {
   const questions = questionsFor(answers);
-  const ctx = contextOf(answers);
+  const ctx: AnswerContext = { units: unitsOf(answers), answers, read: undefined! };
   const byId = new Map(questions.map((q) => [q.id, q]));
   const cache = new Map<string, { ok: boolean; value: unknown }>();
   const parsed = (id: string) => {
@@ -57,11 +51,23 @@ function makeReader(answers: Answers): AnswerReader {
     if (!answers[id]) return 'open' as const;
     return parsed(id).ok ? ('answered' as const) : ('invalid' as const);
   };
-  return {
+  const reader: AnswerReader = {
     answers,
     questions,
     status,
     value: (id) => parsed(id).value,
     complete: (pick) => questions.every((q) => !pick(q.id) || status(q.id) === 'answered'),
   };
+  ctx.read = reader;
+  return reader;
+}
+
+/** The text Enter would give question `q` with these answers, if any. */
+export function defaultTextOf(q: Question, answers: Answers): string | undefined {
+  return q.defaultText?.(answers, readAnswers(answers));
+}
+
+/** What the current answer of `q` implies, in a sentence, if it says anything. */
+export function explainOf(q: Question, answers: Answers): string | undefined {
+  return q.explainChoice?.(answers, readAnswers(answers));
 }

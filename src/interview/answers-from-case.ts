@@ -3,7 +3,8 @@
  * can be reviewed and edited in the interview, and built again with the same figures.
  */
 import { airborneAnswers } from './airborne-answers.js';
-import { spread, type Quantity } from '../case/quantity.js';
+import { type Quantity } from '../case/quantity.js';
+import { spread } from '../engine/spread.js';
 import type { Case } from '../case/load.js';
 import type { DragV1 } from '../case/v1/schema.js';
 import type { Answers } from './types.js';
@@ -12,8 +13,8 @@ import { contextOf } from './answer-values.js';
 import { quantityText } from './read-quantity.js';
 import { signed } from './signed.js';
 import { surfaceRow, OTHER_SURFACE } from './drag-table.js';
-import { WHEELS } from './questions-vehicle.js';
-import { isSegment } from './questions-test-grade.js';
+import { WHEELS } from './wheels.js';
+import { isSegment } from './answers-read.js';
 import { DEFAULT_SAMPLES, DEFAULT_SEED } from '../extras/sampling.js';
 import { notesOf, NOTES_KEEP } from './kept-notes.js';
 import { ANALYSES_KEEP, splitAnalyses } from './kept-analyses.js';

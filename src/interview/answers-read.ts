@@ -68,3 +68,10 @@ export function maxIndexIn(answers: Answers, re: RegExp): number {
   }
   return max;
 }
+
+/** True for a slide segment's prefix (`a0.seg1`); a yaw's drag (`a2`) has no grade of its own. */
+export const isSegment = (prefix: string): boolean => /^a\d+\.seg\d+$/.test(prefix);
+
+/** Where the tests were run, for segment `prefix`: `same` stretch and direction, or `elsewhere`. */
+export const testWhere = (a: Answers, prefix: string): string | undefined =>
+  choiceOf(a, `${prefix}.drag.testWhere`);

@@ -2,31 +2,25 @@
  * The braking efficiency worked out from the wheel-by-wheel answers, in one line, shown as soon
  * as the last wheel is answered: the investigator sees what the inspection findings come to.
  */
-import type { Quantity } from '../case/quantity.js';
+import { RULES } from '../case/quantity.js';
 import { brakingEfficiency } from '../engine/index.js';
-import { formatNumber } from '../format/numbers.js';
-import type { Answers } from './types.js';
-import { readAnswers } from './answer-values.js';
-import { brakesOf } from './build-case.js';
+import { formatNumber } from '../engine/number-text.js';
+import type { AnswerReader } from './types.js';
+import { brakesOf, quantityOf } from './build-parts.js';
 
 /**
  * "Braking efficiency n = 0.90 (0.89 to 0.91), from the four wheels and the front axle share."
  * Undefined until every wheel (and the share) is answered.
  * n = share/2 × (front left + front right) + (1 − share)/2 × (rear left + rear right).
- * @example wheelsLine(answers)
+ * @example wheelsLine(readAnswers(answers))
  */
-export function wheelsLine(a: Answers): string | undefined {
-  const r = readAnswers(a);
+export function wheelsLine(r: AnswerReader): string | undefined {
   if (r.value('vehicle.brakes') !== 'wheels') return undefined;
   const brakes = brakesOf(r);
-  const share = r.value('vehicle.share') as Quantity | undefined;
+  const share = quantityOf(r, 'vehicle.share', RULES.share);
+  // Both read with the file's schema: undefined until every wheel and the share are validly in.
   if (!brakes || share === undefined) return undefined;
-  let n;
-  try {
-    n = brakingEfficiency({ brakes, frontAxleShare: share });
-  } catch {
-    return undefined; // answers not all in yet
-  }
+  const n = brakingEfficiency({ brakes, frontAxleShare: share });
   if (!n.ok) return undefined;
   const { value, low, high } = n.value.n;
   const d = (x: number) => formatNumber(x, 'drag');

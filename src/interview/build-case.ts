@@ -4,24 +4,17 @@
  */
 import type { Case } from '../case/load.js';
 import { APPEARANCE_NOTES } from '../engine/index.js';
-import {
-  skidV1,
-  yawV1,
-  type AnalysisV1,
-  type BrakesV1,
-  type VehicleV1,
-} from '../case/v1/schema.js';
-import type { CaseMeta, InterviewState, SavedInterview } from './types.js';
+import { skidV1, yawV1, type AnalysisV1, type VehicleV1 } from '../case/v1/schema.js';
+import type { AnswerReader, CaseMeta, InterviewState, SavedInterview } from './types.js';
 import { analysisCount, choiceOf, markLook, unitsOf } from './answers-read.js';
-import { readAnswers, type AnswerReader } from './answer-values.js';
-import { WHEELS } from './questions-vehicle.js';
+import { readAnswers } from './answer-values.js';
 import { analysisKeep, CASE_KEEP, kept, measuredByOffsets, VEHICLE_KEEP } from './kept-fields.js';
-import { dragOf, segmentsOf, slopeOf, text, type Q } from './build-parts.js';
+import { brakesOf, dragOf, quantityOf, segmentsOf, slopeOf, text } from './build-parts.js';
+import { RULES } from '../case/quantity.js';
+import { samplingFieldV1 } from '../case/v1/extras-fields.js';
 import { restoreNotes } from './kept-notes.js';
 import { testGradeNotes } from './test-grade-notes.js';
 import { withKept } from './kept-analyses.js';
-
-export { segmentsLine } from './build-parts.js';
 
 /** Distance rules a slide's marks may take (the file's `distanceRule`). */
 const DISTANCE_RULES = ['average', 'longest', 'shortest', 'spread'];
@@ -91,56 +84,17 @@ function yawOf(r: AnswerReader, i: number, id: string): AnalysisV1 | undefined {
   return parsed.success ? parsed.data : undefined;
 }
 
-/** The brakes as answered so far, or undefined while they are not (also read by grade-check.ts). */
-export function brakesOf(r: AnswerReader): BrakesV1 | undefined {
-  // Not asked (no slide in the case) or not yet answered: no brakes to write.
-  if (r.status('vehicle.brakes') !== 'answered') return undefined;
-  if (
-    !r.complete(
-      (id) =>
-        id.startsWith('vehicle.brakes') ||
-        id === 'vehicle.share' ||
-        id.startsWith('vehicle.wheel.'),
-    )
-  )
-    return undefined;
-  const mode = r.value('vehicle.brakes');
-  if (mode === 'all') return { mode };
-  if (mode === 'estimate') {
-    const basis = text(r, 'vehicle.brakes.basis');
-    return {
-      mode,
-      efficiency: r.value('vehicle.brakes.efficiency') as Q,
-      ...(basis ? { basis } : {}),
-    };
-  }
-  const wheel = (w: (typeof WHEELS)[number]): Q => {
-    const v = r.value(`vehicle.wheel.${w.id}`);
-    return v === 'working'
-      ? 1
-      : v === 'none'
-        ? 0
-        : (r.value(`vehicle.wheel.${w.id}.fraction`) as Q);
-  };
-  return {
-    mode: 'wheels',
-    frontLeft: wheel(WHEELS[0]),
-    frontRight: wheel(WHEELS[1]),
-    rearLeft: wheel(WHEELS[2]),
-    rearRight: wheel(WHEELS[3]),
-  };
-}
-
 /** The distribution asked at the end of the case, when one was chosen and its questions are answered. */
 function samplingOf(r: AnswerReader): Case['sampling'] {
   const shape = r.value('sampling.shape');
   if (shape !== 'uniform' && shape !== 'normal') return undefined;
   if (!r.complete((id) => id.startsWith('sampling.'))) return undefined;
-  return {
+  const parsed = samplingFieldV1.safeParse({
     shape,
-    samples: r.value('sampling.samples') as number,
-    seed: r.value('sampling.seed') as number,
-  };
+    samples: r.value('sampling.samples'),
+    seed: r.value('sampling.seed'),
+  });
+  return parsed.success ? parsed.data : undefined;
 }
 
 /** Stored id of analysis i (kept from a hand-written case), or `skid-1`, `yaw-2`, ... */
@@ -230,10 +184,10 @@ export function buildCase(state: InterviewState, meta: CaseMeta): Case {
   if (label) vehicle.label = label;
   const brakes = brakesOf(r);
   if (brakes) vehicle.brakes = brakes;
-  const share = r.value('vehicle.share');
-  if (brakes?.mode === 'wheels' && share !== undefined) vehicle.frontAxleShare = share as Q;
-  const track = r.value('vehicle.trackWidth');
-  if (track !== undefined) vehicle.trackWidth = track as Q;
+  const share = quantityOf(r, 'vehicle.share', RULES.share);
+  if (brakes?.mode === 'wheels' && share !== undefined) vehicle.frontAxleShare = share;
+  const track = quantityOf(r, 'vehicle.trackWidth', RULES.trackWidth);
+  if (track !== undefined) vehicle.trackWidth = track;
   const analyses = withKept(
     included(state, answers, r, !!brakes, track !== undefined).flatMap(
       ({ i, id, kind }) => (kind === 'skid' ? skidOf(r, i, id) : yawOf(r, i, id)) ?? [],
@@ -259,8 +213,8 @@ export function buildCase(state: InterviewState, meta: CaseMeta): Case {
   if (meta.created) c.created = meta.created;
   if (meta.updated) c.updated = meta.updated;
   if (Object.keys(details).length) c.details = details;
-  const limit = r.value('limit');
-  if (limit !== undefined) c.postedLimit = limit as Q;
+  const limit = quantityOf(r, 'limit', RULES.postedLimit);
+  if (limit !== undefined) c.postedLimit = limit;
   const sampling = samplingOf(r);
   if (sampling) c.sampling = sampling;
   restoreNotes(c, answers);

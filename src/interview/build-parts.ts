@@ -4,14 +4,20 @@
  * mistyped reaches the engine: a part the answers do not make yet is undefined.
  */
 import { quantity, RULES, type Quantity, type QuantityRule } from '../case/quantity.js';
-import { dragV1, segmentV1, type DragV1, type SegmentV1 } from '../case/v1/schema.js';
-import type { Answers } from './types.js';
+import {
+  brakesV1,
+  dragV1,
+  segmentV1,
+  type BrakesV1,
+  type DragV1,
+  type SegmentV1,
+} from '../case/v1/schema.js';
+import type { AnswerReader } from './types.js';
 import { formatSegmentLine } from '../input/index.js';
-import { segmentCount, surfaceMode } from './answers-read.js';
-import { readAnswers, type AnswerReader } from './answer-values.js';
+import { isSegment, segmentCount, surfaceMode, testWhere } from './answers-read.js';
 import { OTHER_SURFACE } from './drag-table.js';
 import { signed } from './signed.js';
-import { isSegment, testWhere } from './questions-test-grade.js';
+import { WHEELS } from './wheels.js';
 export type Q = Quantity;
 
 /** The answer `id` as a Quantity under `rule`, read with the file's schema; undefined otherwise. */
@@ -119,10 +125,39 @@ export function segmentsOf(r: AnswerReader, i: number): SegmentV1[] | undefined 
  * The segments of slide `i` written on one quick-entry line, when every segment question is
  * answered and the line can say them (undefined otherwise): Enter then keeps them as they are.
  */
-export function segmentsLine(answers: Answers, i: number): string | undefined {
-  const r = readAnswers(answers);
+export function segmentsLine(r: AnswerReader, i: number): string | undefined {
   const own = new RegExp(`^a${i}\\.seg\\d+\\.`);
-  if (segmentCount(answers, i) === 0 || !r.complete((id) => own.test(id))) return undefined;
+  if (segmentCount(r.answers, i) === 0 || !r.complete((id) => own.test(id))) return undefined;
   const segments = segmentsOf(r, i);
   return segments && formatSegmentLine(segments);
+}
+
+/** The brakes as answered so far, or undefined while they are not. */
+export function brakesOf(r: AnswerReader): BrakesV1 | undefined {
+  // Not asked (no slide in the case) or not yet answered: no brakes to write.
+  if (r.status('vehicle.brakes') !== 'answered') return undefined;
+  if (
+    !r.complete(
+      (id) =>
+        id.startsWith('vehicle.brakes') ||
+        id === 'vehicle.share' ||
+        id.startsWith('vehicle.wheel.'),
+    )
+  )
+    return undefined;
+  const mode = r.value('vehicle.brakes');
+  const basis = text(r, 'vehicle.brakes.basis');
+  const wheel = (w: (typeof WHEELS)[number]): unknown => {
+    const v = r.value(`vehicle.wheel.${w.id}`);
+    return v === 'working' ? 1 : v === 'none' ? 0 : r.value(`vehicle.wheel.${w.id}.fraction`);
+  };
+  const raw =
+    mode === 'estimate'
+      ? { mode, efficiency: r.value('vehicle.brakes.efficiency'), ...(basis ? { basis } : {}) }
+      : mode === 'wheels'
+        ? { mode, ...Object.fromEntries(WHEELS.map((w) => [w.key, wheel(w)])) }
+        : { mode };
+  // Read with the file's schema: a wheel or an efficiency not (validly) answered makes no brakes.
+  const parsed = brakesV1.safeParse(raw);
+  return parsed.success ? parsed.data : undefined;
 }

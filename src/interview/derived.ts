@@ -9,8 +9,6 @@ import { showNumber } from '../input/index.js';
 import { analysisSection } from './questions.js';
 import { isMetaAnswer } from './kept-fields.js';
 
-export { isMetaAnswer } from './kept-fields.js';
-
 /** The question the cursor is on, or undefined on the review. */
 export function currentQuestion(state: InterviewState): Question | undefined {
   const r = readAnswers(state.answers);
@@ -48,6 +46,18 @@ export function questionStates(state: InterviewState): QuestionState[] {
     if (!seen.has(id) && !isMetaAnswer(id))
       out.push({ id, title: id, section: 'Not used', status: 'unused' });
   return out;
+}
+
+/**
+ * The questions that apply and still need an answer (not answered yet, or answered with text
+ * that no longer reads), by title, in the order asked: what stands between the answers and a
+ * figure. Optional questions are left out.
+ */
+export function stillToAnswer(state: InterviewState): string[] {
+  const r = readAnswers(state.answers);
+  return r.questions
+    .filter((q) => !q.optional && r.status(q.id) !== 'answered')
+    .map((q) => (r.status(q.id) === 'invalid' ? `${q.title} (does not read)` : q.title));
 }
 
 /** Where a resumed interview lands: the first open or invalid question, or the review. */

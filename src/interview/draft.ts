@@ -32,5 +32,5 @@ function solveFresh(state: InterviewState, id: string): CaseSolution {
       analyses: [],
       warnings: loaded.issues.map(describeIssue),
     };
-  return solveCase(loaded.case);
+  return solveCase(loaded.case, loaded.unknownFields);
 }

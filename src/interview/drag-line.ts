@@ -3,9 +3,8 @@
  * going on: the mean and the smallest to largest of the tests, pulls or readings.
  */
 import { dragFactor } from '../engine/index.js';
-import { formatNumber } from '../format/numbers.js';
-import type { Answers } from './types.js';
-import { readAnswers } from './answer-values.js';
+import { formatNumber } from '../engine/number-text.js';
+import type { AnswerReader } from './types.js';
 import { unitsOf } from './answers-read.js';
 import { dragOf } from './build-parts.js';
 
@@ -18,10 +17,9 @@ const WHAT: Record<string, string> = {
 /**
  * "f = 0.71 (0.69 to 0.74): the mean of 3 sled pulls, the range from the smallest to the
  * largest." Undefined until the source's figures are answered, or when they give no factor.
- * @example measuredDragLine(answers, 'a0.seg0')
+ * @example measuredDragLine(readAnswers(answers), 'a0.seg0')
  */
-export function measuredDragLine(a: Answers, prefix: string): string | undefined {
-  const r = readAnswers(a);
+export function measuredDragLine(r: AnswerReader, prefix: string): string | undefined {
   const source = r.value(`${prefix}.drag.source`);
   if (typeof source !== 'string' || !(source in WHAT)) return undefined;
   // Read with the file's schema: undefined until the source's figures are all in.
@@ -33,7 +31,7 @@ export function measuredDragLine(a: Answers, prefix: string): string | undefined
       : drag.source === 'sled'
         ? drag.pulls.length
         : drag.readings.length;
-  const out = dragFactor(drag, unitsOf(a));
+  const out = dragFactor(drag, unitsOf(r.answers));
   if (!out.ok) return undefined;
   const { value, low, high } = out.value.f;
   const d = (x: number) => formatNumber(x, 'drag');

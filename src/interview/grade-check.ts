@@ -4,13 +4,12 @@
  * the review; this says so at the grade question itself, while the investigator is still on scene
  * or at the measurement, so the grade or the drag factor can be checked at once.
  */
-import { quantity, RULES, spread } from '../case/quantity.js';
+import { quantity, RULES } from '../case/quantity.js';
+import { spread } from '../engine/spread.js';
 import { brakingEfficiency, dragFactor, effectiveDrag } from '../engine/index.js';
 import type { AnswerContext } from './types.js';
 import { choiceOf } from './answers-read.js';
-import { readAnswers } from './answer-values.js';
-import { dragOf, quantityOf } from './build-parts.js';
-import { brakesOf } from './build-case.js';
+import { brakesOf, dragOf, quantityOf } from './build-parts.js';
 
 /** The note for a too-steep downhill on segment `prefix` (`a0.seg1`), or undefined. */
 export function steepDownhillNote(
@@ -20,7 +19,7 @@ export function steepDownhillNote(
 ): string | undefined {
   if (!/^a\d+\.seg\d+$/.test(prefix) || choiceOf(ctx.answers, `${prefix}.grade.dir`) !== 'downhill')
     return undefined;
-  const r = readAnswers(ctx.answers);
+  const r = ctx.read;
   if (r.status(`${prefix}.drag.source`) !== 'answered') return undefined;
   // Read with the file's schema: undefined until the drag answers make a drag factor. The tests'
   // grade is asked after this one, so test skids are read as run level here.

@@ -2,7 +2,15 @@
  * Builders for each kind of question, so that the question lists read as data. `validate` is
  * always `parse` without the value, so the two can never disagree.
  */
-import type { Answers, AnswerContext, Choice, Help, ParseResult, Question } from './types.js';
+import type {
+  Answers,
+  AnswerContext,
+  AnswerReader,
+  Choice,
+  Help,
+  ParseResult,
+  Question,
+} from './types.js';
 import { readQuantity, type QuantitySpec } from './read-quantity.js';
 import { readMarks, readValues } from './read-list.js';
 import { caseUnitOf, parseCount, type QuantityKind } from '../input/index.js';
@@ -16,8 +24,8 @@ export interface QuestionBase {
   prompt: string;
   help: Help;
   appliesWhen(answers: Answers): boolean;
-  defaultText?(answers: Answers): string | undefined;
-  explainChoice?(answers: Answers): string | undefined;
+  defaultText?(answers: Answers, read: AnswerReader): string | undefined;
+  explainChoice?(answers: Answers, read: AnswerReader): string | undefined;
   example?: string;
   /** The example for a metric case, when the imperial one would mislead (45 m is no chord). */
   metricExample?: string;

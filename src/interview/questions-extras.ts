@@ -9,6 +9,7 @@ import { choiceOf } from './answers-read.js';
 import { reactionTimeSource } from '../extras/limit-inputs.js';
 import { DEFAULT_SAMPLES, DEFAULT_SEED } from '../extras/sampling.js';
 import { REACTION_TIME } from '../prefs/schema.js';
+import { REACTION_TIMES as T } from '../engine/constants.js';
 
 /** A posted limit was given: the time-distance comparison has something to compare with. */
 export const hasLimit = (a: Answers): boolean => typeof a.limit?.value === 'number';
@@ -54,7 +55,7 @@ export function timeDistanceQuestions(
         title: 'Reaction time',
         prompt: 'Perception-reaction time for this case, in seconds',
         help: {
-          why: `Used for the comparison at the posted limit. 1.5 s: ${reactionTimeSource(1.5)}. 2.5 s: ${reactionTimeSource(2.5)}.`,
+          why: `Used for the comparison at the posted limit. ${T.surprise} s: ${reactionTimeSource(T.surprise)}. ${T.design} s: ${reactionTimeSource(T.design)}.`,
           how: 'Leave it empty to use your preference; give a time here only when this case calls for another one, and say why in the notes.',
         },
         appliesWhen: asked,

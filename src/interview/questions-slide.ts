@@ -189,7 +189,7 @@ export function slideQuestions(
           how: 'e.g. 48 @0.74 +2%, 31 @0.55, 22 @0.40-0.50 -3%. A drag factor range is written low-high.',
         },
         appliesWhen: (a) => applies(a) && surfaceMode(a, i) === 'quick',
-        defaultText: (a) => segmentsLine(a, i),
+        defaultText: (_a, r) => segmentsLine(r, i),
         example: '48 @0.74 +2%, 31 @0.55, 22 @0.40 -3%',
         metricExample: '15 @0.74 +2%, 9.5 @0.55, 6.7 @0.40 -3%',
       },

@@ -8,15 +8,8 @@
  */
 import type { Answers, Question } from './types.js';
 import { choiceQuestion, quantityQuestion } from './question-kinds.js';
-import { choiceOf } from './answers-read.js';
+import { choiceOf, isSegment, testWhere } from './answers-read.js';
 import { SLOPE_CHOICES, sloped } from './questions-grade.js';
-
-/** True for a slide segment's prefix (`a0.seg1`); a yaw's drag (`a2`) has no grade of its own. */
-export const isSegment = (prefix: string): boolean => /^a\d+\.seg\d+$/.test(prefix);
-
-/** Where the tests were run, for segment `prefix`: `same` stretch and direction, or `elsewhere`. */
-export const testWhere = (a: Answers, prefix: string): string | undefined =>
-  choiceOf(a, `${prefix}.drag.testWhere`);
 
 /** The segment's grade as answered, in words: "level", "3% downhill". */
 function gradeWords(a: Answers, prefix: string): string {

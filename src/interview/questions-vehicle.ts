@@ -7,20 +7,13 @@ import type { Answers, Question } from './types.js';
 import { choiceQuestion, quantityQuestion, textQuestion } from './question-kinds.js';
 import { choiceOf } from './answers-read.js';
 import { wheelsLine } from './brakes-line.js';
+import { WHEELS } from './wheels.js';
 
 const S = 'Vehicle';
 const always = () => true;
 type Applies = (a: Answers) => boolean;
 const brakesAre = (mode: string, applies: Applies) => (a: Answers) =>
   applies(a) && choiceOf(a, 'vehicle.brakes') === mode;
-
-/** Wheel keys as in the case file, with the words used on screen. */
-export const WHEELS = [
-  { key: 'frontLeft', id: 'fl', label: 'front left' },
-  { key: 'frontRight', id: 'fr', label: 'front right' },
-  { key: 'rearLeft', id: 'rl', label: 'rear left' },
-  { key: 'rearRight', id: 'rr', label: 'rear right' },
-] as const;
 
 function wheelQuestions(w: (typeof WHEELS)[number], section: string, applies: Applies): Question[] {
   const id = `vehicle.wheel.${w.id}`;
@@ -37,7 +30,7 @@ function wheelQuestions(w: (typeof WHEELS)[number], section: string, applies: Ap
         },
         appliesWhen: brakesAre('wheels', applies),
         defaultText: () => 'working',
-        explainChoice: wheelsLine,
+        explainChoice: (_a, r) => wheelsLine(r),
       },
       [
         { value: 'working', key: 'w', label: 'working' },
@@ -57,7 +50,7 @@ function wheelQuestions(w: (typeof WHEELS)[number], section: string, applies: Ap
         },
         appliesWhen: (a) => brakesAre('wheels', applies)(a) && choiceOf(a, id) === 'partly',
         example: '0.5',
-        explainChoice: wheelsLine,
+        explainChoice: (_a, r) => wheelsLine(r),
       },
       {
         kind: 'factor',

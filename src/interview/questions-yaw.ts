@@ -7,7 +7,7 @@ import type { Answers, AnswerContext, Question } from './types.js';
 import { choiceQuestion, customQuestion, quantityQuestion } from './question-kinds.js';
 import { choiceOf, unitsOf } from './answers-read.js';
 import { measuredByOffsets } from './kept-fields.js';
-import { spread } from '../case/quantity.js';
+import { spread } from '../engine/spread.js';
 import { radiusFromChord, unitsOf as engineUnits } from '../engine/index.js';
 import { radiusFromOffsets } from '../engine/radius-offsets.js';
 import { readStations, STATIONS_SYNTAX, type StationValue } from './read-stations.js';

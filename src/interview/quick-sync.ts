@@ -6,7 +6,7 @@
  */
 import type { Answers } from './types.js';
 import { allQuestions } from './questions.js';
-import { contextOf } from './answer-values.js';
+import { contextOf, readAnswers } from './answer-values.js';
 import { analysisCount, segmentCount, surfaceMode } from './answers-read.js';
 import { segmentsLine } from './build-parts.js';
 
@@ -23,7 +23,7 @@ export function syncQuickLines(answers: Answers, except?: string): Answers {
     const id = `a${i}.quick`;
     const had = answers[id];
     if (id === except || !had || surfaceMode(answers, i) !== 'quick') continue;
-    const line = segmentsLine(answers, i);
+    const line = segmentsLine(readAnswers(answers), i);
     if (line === undefined || line === had.text) continue;
     const q = allQuestions(answers).find((x) => x.id === id);
     const r = q?.parse(line, contextOf(answers));

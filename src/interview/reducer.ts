@@ -4,7 +4,7 @@
  */
 import type { Action, Answers, InterviewMode, InterviewState, Question } from './types.js';
 import { allQuestions, questionsFor } from './questions.js';
-import { contextOf } from './answer-values.js';
+import { contextOf, defaultTextOf, explainOf } from './answer-values.js';
 import { matchChoice } from './question-kinds.js';
 import { nextOf, nextOpenAfter, previousOf, REVIEW, validCursor } from './navigate.js';
 import { fillChanges, syncQuickLines } from './quick-sync.js';
@@ -49,7 +49,7 @@ const UNITS_NOTE =
 
 function submit(state: InterviewState, q: Question, typed: string): InterviewState {
   let text = typed;
-  if (text.trim() === '' && !q.optional) text = q.defaultText?.(state.answers) ?? '';
+  if (text.trim() === '' && !q.optional) text = defaultTextOf(q, state.answers) ?? '';
   const r = q.parse(text, contextOf(state.answers));
   if (!r.ok) return { ...quiet(state), error: { id: q.id, text: typed, message: r.message } };
   // A choice is stored by its value, not the key pressed, so a later change of keys cannot re-read it.
@@ -72,7 +72,7 @@ function submit(state: InterviewState, q: Question, typed: string): InterviewSta
   const applied = changes.length ? `Changed: ${changes.join('; ')}.` : undefined;
   const notice = unitsChanged
     ? UNITS_NOTE
-    : [r.notice, applied].filter(Boolean).join(' ') || q.explainChoice?.(answers);
+    : [r.notice, applied].filter(Boolean).join(' ') || explainOf(q, answers);
   return notice ? { ...next, notice } : next;
 }
 
@@ -89,7 +89,7 @@ export function reduce(state: InterviewState, action: Action): InterviewState {
         : { ...quiet(s), notice: 'The review is open: choose a question to change an answer.' };
     case 'accept-default': {
       if (!here) return quiet(s);
-      const d = here.defaultText?.(s.answers);
+      const d = defaultTextOf(here, s.answers);
       if (d === undefined && !here.optional)
         return {
           ...quiet(s),

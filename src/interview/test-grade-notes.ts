@@ -3,12 +3,18 @@
  * were run, and so what was done with their grade. The file holds only the grade (`testGrade`);
  * whether it is the slide's own stretch is the investigator's answer, read here.
  */
-import { formatNumber } from '../format/numbers.js';
-import { spread } from '../case/quantity.js';
-import type { AnswerReader } from './answer-values.js';
-import { choiceOf, markLook, segmentCount, surfaceMode } from './answers-read.js';
+import { formatNumber } from '../engine/number-text.js';
+import { spread } from '../engine/spread.js';
+import type { AnswerReader } from './types.js';
+import {
+  choiceOf,
+  isSegment,
+  markLook,
+  segmentCount,
+  surfaceMode,
+  testWhere,
+} from './answers-read.js';
 import { testGradeOf } from './build-parts.js';
-import { isSegment, testWhere } from './questions-test-grade.js';
 
 const pct = (n: number) => `${n > 0 ? '+' : ''}${formatNumber(n, 'percent')}%`;
 

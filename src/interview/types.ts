@@ -19,10 +19,29 @@ export interface Answer {
 /** Answers by question id (`units`, `vehicle.brakes`, `a0.seg1.drag.source`, ...). */
 export type Answers = Record<string, Answer>;
 
-/** What validation and parsing may look at: the case's units and the other answers. */
+/**
+ * Parsed values of the answers that apply now (made by `readAnswers` in answer-values.ts, which
+ * knows the list of questions). Question callbacks receive one, so that what a question says can
+ * look at other answers without the questions importing their own list.
+ */
+export interface AnswerReader {
+  answers: Answers;
+  /** Applicable questions in order. */
+  questions: Question[];
+  /** 'answered', 'open' or 'invalid' for an applicable question id; undefined if it does not apply. */
+  status(id: string): Exclude<QuestionStatus, 'unused'> | undefined;
+  /** Parsed value of an applicable, valid answer; undefined otherwise. */
+  value(id: string): unknown;
+  /** Every applicable question whose id passes `pick` is answered and valid. */
+  complete(pick: (id: string) => boolean): boolean;
+}
+
+/** What validation and parsing may look at: the case's units, the other answers and their reader. */
 export interface AnswerContext {
   units: UnitSystem;
   answers: Answers;
+  /** The reader of `answers`. */
+  read: AnswerReader;
 }
 
 /** Why a question is asked and how to measure it, for a less experienced investigator. */
@@ -88,9 +107,9 @@ export interface Question {
   /** Reads the text. `fills` are extra answers set at once (quick entry of segments). */
   parse(text: string, ctx: AnswerContext): ParseResult;
   /** Text offered by Enter (accept-default), if any. */
-  defaultText?(answers: Answers): string | undefined;
+  defaultText?(answers: Answers, read: AnswerReader): string | undefined;
   /** A sentence saying what the current answer implies (e.g. which formula chain and why). */
-  explainChoice?(answers: Answers): string | undefined;
+  explainChoice?(answers: Answers, read: AnswerReader): string | undefined;
   /** An empty answer keeps this preference (the screen shows its value as what Enter gives). */
   usesPreference?: 'reactionTime';
 }

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { DEFAULT_REACTION_TIME } from '../engine/constants.js';
 
 /** Perception-reaction time bounds, seconds: what a preference may hold. */
 export const REACTION_TIME = { min: 0.5, max: 5 } as const;
@@ -27,7 +28,7 @@ export type PrefKey = keyof Prefs;
 /** Defaults: imperial, 1.5 s reaction time (common practice), hints on, guided mode. */
 export const DEFAULT_PREFS: Prefs = {
   units: 'imperial',
-  reactionTime: 1.5,
+  reactionTime: DEFAULT_REACTION_TIME,
   hints: true,
   mode: 'guided',
 };

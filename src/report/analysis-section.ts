@@ -8,7 +8,8 @@ import type {
 } from '../engine/types.js';
 import { KIND_NAMES } from '../format/kind-names.js';
 import { phasesLines } from '../format/phases-text.js';
-import { formatNumber, formatRange } from '../format/numbers.js';
+import { formatRange } from '../format/numbers.js';
+import { formatNumber } from '../engine/number-text.js';
 import { para, list, section, table, type Block, type Section, type StepBlock } from './doc.js';
 import { dragSourceLines } from './drag-source.js';
 import { atLeastText, stepResultText } from './figures-text.js';

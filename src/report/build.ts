@@ -1,6 +1,7 @@
 import type { Case } from '../case/load.js';
 import type { CaseSolution } from '../engine/types.js';
 import { CAUTIONS } from '../format/cautions.js';
+import { limitWord } from '../format/verdict.js';
 import { analysisSection } from './analysis-section.js';
 import {
   REPORT_FORMAT,
@@ -15,7 +16,7 @@ import {
 } from './doc.js';
 import { extrasSections, type ReportExtrasOptions } from './extras-section.js';
 import { speedText } from './figures-text.js';
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from '../engine/number-text.js';
 import { measurementTables } from './measurements.js';
 
 /** What the report says about itself, and settings of its further sections. */
@@ -89,7 +90,7 @@ function limitSection(sol: CaseSolution): Section | undefined {
   const lines = sol.analyses.map((o, i) => {
     if (!o.ok) return `${i + 1}. ${o.id}: not computed, so not compared.`;
     const low = o.solution.speed.low;
-    return `${i + 1}. ${o.solution.id}: the low end of the range, ${speedText(low, u)}, is ${low > lim.value ? 'above' : 'not above'} the posted limit of ${lim.value} ${u}.`;
+    return `${i + 1}. ${o.solution.id}: the low end of the range, ${speedText(low, u)}, is ${limitWord(low, lim.value)} the posted limit of ${lim.value} ${u}.`;
   });
   return section('posted-limit', 'Comparison with the posted limit', [
     para(

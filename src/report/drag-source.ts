@@ -6,7 +6,7 @@ import {
   type DragTableRow,
   type RowKnown,
 } from '../engine/drag-table.js';
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from '../engine/number-text.js';
 
 const KNOWN_TEXT: Record<RowKnown, string> = {
   'seen-in-reprint': 'seen in a reprint',

@@ -5,7 +5,7 @@ import { sensitivitySvg } from '../extras/pictures-svg.js';
 import { sampleSpeeds, type SampleOptions } from '../extras/sampling.js';
 import { sensitivityBars } from '../extras/sensitivity-bars.js';
 import { sensitivity, type SensitivityRow } from '../extras/sensitivity.js';
-import { formatNumber } from '../format/numbers.js';
+import { formatNumber } from '../engine/number-text.js';
 import { para, section, table, type Block, type Section } from './doc.js';
 import { speedText } from './figures-text.js';
 import { figureName, picturesSection } from './pictures-section.js';

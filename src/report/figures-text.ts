@@ -1,6 +1,7 @@
 import type { Range, Step } from '../engine/types.js';
-import { kindOfUnit } from '../format/chain-text.js';
-import { formatNumber, formatRange, withUnit, zeroRangeNote } from '../format/numbers.js';
+import { kindOfUnit } from '../format/step-text.js';
+import { formatRange, withUnit, zeroRangeNote } from '../format/numbers.js';
+import { formatNumber } from '../engine/number-text.js';
 
 /** A step's result with its range, as the chain shows it: `43.3 mph (40.2 to 46.1)`. */
 export function stepResultText(s: Step): string {

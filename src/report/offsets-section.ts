@@ -2,7 +2,8 @@ import type { Case } from '../case/load.js';
 import type { AnalysisSolution, Units } from '../engine/types.js';
 import { offsetsFromCase } from '../extras/case-fields.js';
 import { fitCircleToOffsets } from '../extras/offsets-fit.js';
-import { formatNumber, formatRange } from '../format/numbers.js';
+import { formatRange } from '../format/numbers.js';
+import { formatNumber } from '../engine/number-text.js';
 import { stepBlocks } from './analysis-section.js';
 import { list, para, section, table, type Section } from './doc.js';
 

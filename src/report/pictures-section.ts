@@ -1,4 +1,4 @@
-import { spread } from '../case/quantity.js';
+import { spread } from '../engine/spread.js';
 import type { Case } from '../case/load.js';
 import type { AnalysisSolution, Units } from '../engine/types.js';
 import { segmentLabels } from '../extras/limit-inputs.js';

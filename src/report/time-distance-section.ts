@@ -1,29 +1,19 @@
 import type { Case } from '../case/load.js';
+import { DEFAULT_REACTION_TIME } from '../engine/constants.js';
 import type { AnalysisSolution, Range, Units } from '../engine/types.js';
 import { timeDistanceFromCase } from '../extras/case-fields.js';
 import { limitComparison, type LimitComparison } from '../extras/limit-comparison.js';
 import type { Verdict } from '../extras/limit-steps.js';
-import { formatNumber, formatRange } from '../format/numbers.js';
-import { limitFraming } from '../format/limit-framing.js';
+import { formatRange } from '../format/numbers.js';
+import { formatNumber } from '../engine/number-text.js';
+import { limitFraming, verdictSentence } from '../format/verdict.js';
 import { stepBlocks } from './analysis-section.js';
 import { list, para, section, table, type Section } from './doc.js';
-
-/** Perception-reaction time when neither the case nor the user's preference sets one (DOMAIN.md). */
-export const DEFAULT_REACTION_TIME = 1.5;
 
 const asChosen = (t: number) => String(Number(t.toPrecision(4)));
 
 const rangeText = (r: Range, kind: 'length' | 'seconds' | 'speed', unit: string) =>
   formatRange(r, kind, unit);
-
-function verdictText(v: Verdict, limit: string, u: Units): string {
-  const m = (r: Range) => rangeText(r, 'length', u.length);
-  if (v.stops === 'yes')
-    return `A vehicle at the posted limit of ${limit}, perceiving at the same point, would have come to rest before ${v.what} (${formatNumber(v.at, 'length')} ${u.length} from the start of the marks), ${m(v.margin)} short of it.`;
-  if (v.stops === 'no')
-    return `A vehicle at the posted limit of ${limit}, perceiving at the same point, would not have come to rest before ${v.what} (${formatNumber(v.at, 'length')} ${u.length} from the start of the marks); its speed there: ${rangeText(v.speedThere, 'speed', u.speed)}.`;
-  return `Whether a vehicle at the posted limit of ${limit}, perceiving at the same point, would have come to rest before ${v.what} (${formatNumber(v.at, 'length')} ${u.length} from the start of the marks) depends on where the inputs lie within their ranges: margin ${m(v.margin)}, speed there ${rangeText(v.speedThere, 'speed', u.speed)}.`;
-}
 
 function figuresTable(t: LimitComparison, u: Units) {
   const L = (r: Range) => rangeText(r, 'length', u.length);
@@ -86,13 +76,12 @@ export function timeDistanceSection(
   });
   if (!r.ok) return section(`${id}-time`, title, [para(`Not computed: ${r.reason}.`)]);
   const t = r.value;
-  const limit = `${t.postedLimit} ${u.speed}`;
   return section(`${id}-time`, title, [
     // The time as chosen (1.25 s stays 1.25 s), not rounded like a computed time.
     ...limitFraming(t, s.speed, u).map((l) => para(l)),
     para(`Perception-reaction time ${asChosen(t.reactionTime)} s (${t.reactionSource}).`),
-    para(verdictText(t.endOfMarks, limit, u), 'strong'),
-    ...(t.conflict ? [para(verdictText(t.conflict, limit, u), 'strong')] : []),
+    para(verdictSentence(t.endOfMarks, u), 'strong'),
+    ...(t.conflict ? [para(verdictSentence(t.conflict, u), 'strong')] : []),
     figuresTable(t, u),
     ...stepBlocks(t.steps),
     ...(t.assumptions.length ? [list(t.assumptions)] : []),

@@ -13,11 +13,12 @@ import { JumpList } from './jump-list.js';
 import { Footer } from './footer.js';
 import { ReadOnlyBanner } from './read-only-banner.js';
 import { filterQuestions } from './jump-filter.js';
-import { reviewLines, type ShownLine } from './review-lines.js';
+import { reviewLinesOf } from './review-lines.js';
+import type { ShownLine } from './review-step.js';
 import { isChoice } from './question-view.js';
 import type { Question } from '../interview/types.js';
-import type { ReviewContext } from './review-extras.js';
-import { DEFAULT_REACTION_TIME } from '../extras/analysis-extras.js';
+import { reviewFigures, type ReviewContext, type ReviewFigures } from './review-extras.js';
+import { DEFAULT_REACTION_TIME, REACTION_TIMES } from '../engine/constants.js';
 
 export interface AppProps {
   services: Services;
@@ -60,7 +61,7 @@ function shownDefault(
 ): string | undefined {
   if (q.usesPreference === 'reactionTime') {
     const t = reactionTime ?? DEFAULT_REACTION_TIME;
-    return `your preference, ${t} s (1.5 s: surprise event, M. Green 2000; 2.5 s: AASHTO design)`;
+    return `your preference, ${t} s (${REACTION_TIMES.surprise} s: surprise event, M. Green 2000; ${REACTION_TIMES.design} s: AASHTO design)`;
   }
   if (text === undefined || !isChoice(q)) return text;
   return q.choices!.find((c) => c.value === text)?.label ?? text;
@@ -85,15 +86,24 @@ export function App(props: AppProps) {
   const banner = s?.open.readOnly ? 2 : 0;
   const body = height - footerRows - banner - (s ? 2 : 0) - (s?.saveNote ? 1 : 0);
 
-  const review = useMemo((): ShownLine[] => {
-    if (!s || question) return [];
+  // The heavy part (solve, sampling, the limit comparison, sensitivity) runs once per change of
+  // the answers; a resize or any other render only lays the lines out again.
+  const onReview = !!s && !question;
+  const reactionTime = props.services.reactionTime;
+  const figures = useMemo((): ReviewFigures | string | undefined => {
+    if (!s || !onReview) return undefined;
     const built = port.build(s.state, s.open.case);
-    if (!built.ok)
-      return [{ text: `The case is not complete yet: ${built.message}`, tone: 'warning' }];
+    if (!built.ok) return built.message;
     const ctx: ReviewContext = { case: built.case, notes: port.notes(s.state) };
-    if (props.services.reactionTime !== undefined) ctx.reactionTime = props.services.reactionTime;
-    return reviewLines(port.solve(built.case), width, ctx);
-  }, [s?.state, question, width]);
+    if (reactionTime !== undefined) ctx.reactionTime = reactionTime;
+    return reviewFigures(port.solve(built.case), ctx);
+  }, [s?.state.answers, s?.open.case, onReview, reactionTime]);
+  const review = useMemo((): ShownLine[] => {
+    if (figures === undefined) return [];
+    if (typeof figures === 'string')
+      return [{ text: `The case is not complete yet: ${figures}`, tone: 'warning' }];
+    return reviewLinesOf(figures, width);
+  }, [figures, width]);
 
   // The running chain only changes with the answers, not with each key typed.
   const draft = useMemo(
@@ -161,7 +171,7 @@ export function App(props: AppProps) {
         session={s}
         question={question}
         defaultText={shownDefault(question, port.defaultText(s.state), props.services.reactionTime)}
-        explain={question.explainChoice?.(s.state.answers)}
+        explain={port.explain(s.state)}
         draft={draft!}
         width={width}
         height={body - 1}

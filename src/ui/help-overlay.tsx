@@ -1,7 +1,7 @@
 import React from 'react';
 import { Box, Text } from 'ink';
 import { KEY_TABLE, bindingKeys, keysFor, type KeyContext } from './keys.js';
-import type { ShownLine } from './review-lines.js';
+import type { ShownLine } from './review-step.js';
 import { wrap } from '../report/wrap.js';
 import { STATIONS_SYNTAX } from '../interview/read-stations.js';
 import { ScrollView } from './scroll-view.js';

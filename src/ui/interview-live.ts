@@ -11,15 +11,18 @@ import {
   firstOpenQuestion,
   progress,
   questionStates,
+  stillToAnswer,
   summaryOfDone,
 } from '../interview/derived.js';
 import { buildCase, lookNotes } from '../interview/build-case.js';
 import { solveDraft } from '../interview/draft.js';
+import { defaultTextOf, explainOf } from '../interview/answer-values.js';
 import { stateFromCase } from '../interview/from-case.js';
 import type { InterviewState } from '../interview/types.js';
 import type { DraftView } from './draft-panel.js';
 import type { InterviewPort } from './interview-port.js';
-import { atLeast, kindForUnit } from './review-lines.js';
+import { atLeast } from './review-lines.js';
+import { kindOfUnit } from '../format/step-text.js';
 
 /** Solves a case exactly as `solve` would read it from its file: through the loader first. */
 export function solveAsFile(c: Case): CaseSolution {
@@ -31,11 +34,14 @@ export function solveAsFile(c: Case): CaseSolution {
       analyses: [],
       warnings: loaded.issues.map((i) => `${i.path}: ${i.message}`),
     };
-  return solveCase(loaded.case);
+  return solveCase(loaded.case, loaded.unknownFields);
 }
 
-/** The side panel's view of the running solution. */
-export function draftView(sol: CaseSolution): DraftView {
+/**
+ * The side panel's view of the running solution. `open` names the questions still to answer,
+ * so that before the first figure the panel says what it waits for.
+ */
+export function draftView(sol: CaseSolution, open: readonly string[] = []): DraftView {
   const steps: DraftView['steps'] = [];
   const results: string[] = [];
   const problems: string[] = [];
@@ -46,7 +52,7 @@ export function draftView(sol: CaseSolution): DraftView {
         name: s.name,
         result: formatRange(
           { value: s.result, low: s.low, high: s.high },
-          kindForUnit(s.unit),
+          kindOfUnit(s.unit),
           s.unit,
         ),
       });
@@ -57,7 +63,10 @@ export function draftView(sol: CaseSolution): DraftView {
   const view: DraftView = { steps };
   if (results.length) view.result = results.join('; ');
   if (problems.length) view.note = problems.join('; ');
-  else if (!results.length)
+  else if (!results.length && open.length) {
+    const more = open.length > 3 ? `, and ${open.length - 3} more` : '';
+    view.note = `No figure yet: still to answer: ${open.slice(0, 3).join('; ')}${more}.`;
+  } else if (!results.length)
     view.note = 'No figure yet: the chain fills in once an analysis is complete.';
   return view;
 }
@@ -69,7 +78,11 @@ export const liveInterview: InterviewPort = {
   states: questionStates,
   defaultText(state: InterviewState) {
     const q = currentQuestion(state);
-    return q?.defaultText?.(state.answers);
+    return q && defaultTextOf(q, state.answers);
+  },
+  explain(state: InterviewState) {
+    const q = currentQuestion(state);
+    return q && explainOf(q, state.answers);
   },
   build(state, base) {
     const meta = { id: base.id, ...(base.created ? { created: base.created } : {}) };
@@ -82,7 +95,7 @@ export const liveInterview: InterviewPort = {
     return { ...st, cursor: firstOpenQuestion(st), mode, explain: mode === 'guided' };
   },
   summary: summaryOfDone,
-  draft: (state, base) => draftView(solveDraft(state, base.id)),
+  draft: (state, base) => draftView(solveDraft(state, base.id), stillToAnswer(state)),
   solve: solveAsFile,
   notes: lookNotes,
 };

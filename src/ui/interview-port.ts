@@ -23,6 +23,8 @@ export interface InterviewPort {
   states(state: InterviewState): QuestionState[];
   /** The default Enter accepts for the current question, if any. */
   defaultText(state: InterviewState): string | undefined;
+  /** What the current answer of the current question implies, in a sentence, if anything. */
+  explain(state: InterviewState): string | undefined;
   /** The case the answers make, or why they do not make one yet. */
   build(
     state: InterviewState,

@@ -46,10 +46,14 @@ export type Command =
   | 'report'
   | 'to-question'
   | 'to-list'
-  | 'pick';
+  | 'pick'
+  | 'line-start'
+  | 'line-end'
+  | 'line-clear';
 
 /**
- * One key: a named key (`return`, `escape`, `up`, `down`, `pageup`, `pagedown`, `tab`), a
+ * One key: a named key (`return`, `escape`, `up`, `down`, `pageup`, `pagedown`, `home`, `end`,
+ * `tab`), a
  * printable character, or `digit` (any of 1-9). `ctrl` binds the chord; without it the key
  * fires only when no modifier is held.
  */
@@ -91,6 +95,8 @@ const EVERYWHERE: KeyContext[] = [
   'path',
   'conflict',
 ];
+/** Where a line of text is being typed: an answer, the go-to filter, a file's path. */
+const TEXT: KeyContext[] = ['question', 'jump', 'path'];
 const CASE: KeyContext[] = ['question', 'choice', 'review'];
 
 export const KEY_TABLE: readonly KeyBinding[] = [
@@ -341,6 +347,27 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     footer: ['conflict'],
     rank: 1,
   },
+  {
+    command: 'line-start',
+    keys: [ctrl('a'), plain('home')],
+    label: 'line start',
+    description: 'Move the cursor to the start of the text being typed',
+    when: TEXT,
+  },
+  {
+    command: 'line-end',
+    keys: [plain('end')],
+    label: 'line end',
+    description: 'Move the cursor to the end of the text being typed',
+    when: TEXT,
+  },
+  {
+    command: 'line-clear',
+    keys: [ctrl('u')],
+    label: 'clear line',
+    description: 'Clear the text being typed',
+    when: TEXT,
+  },
 ];
 
 /** How a key is written for people: `Ctrl+G`, `Enter`, `Esc`, `q`. */
@@ -352,6 +379,8 @@ export function keyLabel(k: KeySpec): string {
     down: '↓',
     pageup: 'PgUp',
     pagedown: 'PgDn',
+    home: 'Home',
+    end: 'End',
     tab: 'Tab',
     ' ': 'Space',
     choice: 'letter',
@@ -372,6 +401,8 @@ const NAMED: Record<string, (k: Key) => boolean> = {
   down: (k) => k.downArrow,
   pageup: (k) => k.pageUp,
   pagedown: (k) => k.pageDown,
+  home: (k) => k.home,
+  end: (k) => k.end,
   tab: (k) => k.tab,
 };
 

@@ -17,25 +17,30 @@ export function lineOf(text: string): Line {
   return { value: text, cursor: text.length };
 }
 
+/** The line after one of the key table's editing commands (Ctrl+A/Home, End, Ctrl+U: keys.ts). */
+export function lineCommand(line: Line, command: 'line-start' | 'line-end' | 'line-clear'): Line {
+  if (command === 'line-clear') return EMPTY_LINE;
+  return { value: line.value, cursor: command === 'line-start' ? 0 : line.value.length };
+}
+
 /**
- * Applies one key to a line: printable text is inserted at the cursor (a paste arrives as one
- * chunk), Backspace/Delete remove, arrows and Home/End move. Anything else leaves it unchanged.
+ * Applies one key that is not a binding to a line: printable text is inserted at the cursor (a
+ * paste arrives as one chunk), Backspace/Delete remove, the arrows move. Anything else leaves it
+ * unchanged; the editing keys of the key table go through `lineCommand`.
  * @example editLine(lineOf('8'), '0', key) // { value: '80', cursor: 2 }
  */
 export function editLine(line: Line, input: string, key: Key): Line {
   const { value, cursor } = line;
   if (key.leftArrow) return { value, cursor: Math.max(0, cursor - 1) };
   if (key.rightArrow) return { value, cursor: Math.min(value.length, cursor + 1) };
-  if (key.home || (key.ctrl && input === 'a')) return { value, cursor: 0 };
-  if (key.end) return { value, cursor: value.length };
-  if (key.ctrl && input === 'u') return EMPTY_LINE;
   // Terminals send 0x7f for Backspace, which Ink reports as `delete`; both erase to the left.
   if (key.backspace || key.delete) {
     if (cursor === 0) return line;
     return { value: value.slice(0, cursor - 1) + value.slice(cursor), cursor: cursor - 1 };
   }
   if (key.ctrl || key.meta || key.return || key.escape || key.tab) return line;
-  if (key.upArrow || key.downArrow || key.pageUp || key.pageDown) return line;
+  if (key.upArrow || key.downArrow || key.pageUp || key.pageDown || key.home || key.end)
+    return line;
   // Strip control characters a paste may carry (a newline would end the answer early).
   const text = input.replace(/[\u0000-\u001f\u007f]/g, '');
   if (!text) return line;

@@ -3,19 +3,21 @@
  * at the posted limit, the distribution of speeds, the offsets fit, and the pictures as text.
  * Every figure is read from src/extras (analysisExtras); nothing is computed here.
  */
-import { spread } from '../case/quantity.js';
+import { spread } from '../engine/spread.js';
 import type { Case } from '../case/load.js';
-import type { AnalysisSolution, Outcome, Range, Units } from '../engine/types.js';
+import type { AnalysisSolution, CaseSolution, Outcome, Range, Units } from '../engine/types.js';
 import { analysisExtras, type AnalysisExtras } from '../extras/analysis-extras.js';
 import type { Verdict } from '../extras/limit-steps.js';
 import type { LimitComparison } from '../extras/limit-comparison.js';
 import type { SampleSummary } from '../extras/sampling.js';
 import type { YawFromOffsets } from '../extras/yaw-offsets.js';
+import { sensitivity, type SensitivityRow } from '../extras/sensitivity.js';
 import { speedAlongSlideChart } from '../extras/slide-chart.js';
 import { yawArcSketch } from '../extras/yaw-sketch.js';
-import { formatNumber, formatRange, withUnit } from '../format/numbers.js';
-import { limitFraming } from '../format/limit-framing.js';
-import type { ShownLine } from './review-lines.js';
+import { formatRange, withUnit } from '../format/numbers.js';
+import { limitFraming, verdictWords } from '../format/verdict.js';
+import { formatNumber } from '../engine/number-text.js';
+import type { ShownLine } from './review-step.js';
 import { pushWrapped, stepLines } from './review-step.js';
 
 /** What the review needs beside the solution to show the extras. */
@@ -27,38 +29,13 @@ export interface ReviewContext {
   notes?: Record<string, string[]>;
 }
 
-const WORD = { yes: 'yes', no: 'no', depends: 'depends on the inputs' } as const;
-
-/** A distance from the point, named by its side: "12.0 ft short of it" or "3.1 ft beyond it". */
-function side(margin: number, u: Units): string {
-  const d = withUnit(Math.abs(margin), 'length', u.length);
-  return margin >= 0 ? `${d} short of it` : `${d} beyond it`;
-}
-
-function verdictLines(out: ShownLine[], v: Verdict, u: Units, width: number, what: string) {
-  const at = withUnit(v.at, 'length', u.length);
-  pushWrapped(
-    out,
-    `Would have stopped before ${what} (${at} from the start of the marks): ${WORD[v.stops]}`,
-    width,
-    '    ',
-    { bold: true, tone: v.stops === 'no' ? 'warning' : 'result' },
-  );
-  const margin = formatRange(v.margin, 'length', u.length);
-  const beyond = formatRange(
-    { value: -v.margin.value, low: -v.margin.high, high: -v.margin.low },
-    'length',
-    u.length,
-  );
-  const there = formatRange(v.speedThere, 'speed', u.speed);
-  // Said in the direction it goes, so no distance is read as a negative "short of it".
-  const detail =
-    v.stops === 'yes'
-      ? `it comes to rest ${margin} short of it`
-      : v.stops === 'no'
-        ? `it reaches it still moving at ${there} and comes to rest ${beyond} beyond it`
-        : `over the input ranges it comes to rest anywhere from ${side(v.margin.low, u)} to ${side(v.margin.high, u)} (at the values: ${side(v.margin.value, u)}); speed there ${there}`;
-  pushWrapped(out, detail, width, '      ');
+function verdictLines(out: ShownLine[], v: Verdict, u: Units, width: number) {
+  const w = verdictWords(v, u);
+  pushWrapped(out, w.headline, width, '    ', {
+    bold: true,
+    tone: v.stops === 'no' ? 'warning' : 'result',
+  });
+  pushWrapped(out, w.detail, width, '      ');
 }
 
 function limitLines(out: ShownLine[], t: LimitComparison, speed: Range, u: Units, width: number) {
@@ -82,8 +59,8 @@ function limitLines(out: ShownLine[], t: LimitComparison, speed: Range, u: Units
     ],
   ];
   for (const [k, v] of rows) pushWrapped(out, `${k}: ${v}`, width, '    ');
-  verdictLines(out, t.endOfMarks, u, width, 'the end of the marks');
-  if (t.conflict) verdictLines(out, t.conflict, u, width, 'the conflict point');
+  verdictLines(out, t.endOfMarks, u, width);
+  if (t.conflict) verdictLines(out, t.conflict, u, width);
   t.steps.forEach((s, j) => stepLines(out, s, j + 1, width, '    '));
   for (const a of t.assumptions) pushWrapped(out, `- ${a}`, width, '    ');
 }
@@ -181,21 +158,52 @@ function pictures(
 }
 
 /**
- * The extras' lines for one solved analysis of `ctx.case`, at most `width` columns each.
- * @example extrasLines(solution, units, { case: c, reactionTime: 1.5 }, 80)
+ * Everything the review shows that takes work: the solution's extras (sampling, the limit
+ * comparison, the offsets fit, sensitivity) for each solved analysis. Computed once per case and
+ * answers; laying the lines out for a width (`reviewLines`) reads them and computes nothing.
+ */
+export interface ReviewFigures {
+  solution: CaseSolution;
+  ctx?: ReviewContext;
+  /** By analysis id, for each solved analysis. */
+  sensitivity: Record<string, SensitivityRow[]>;
+  /** By analysis id, for each solved analysis, when the case is given. */
+  extras: Record<string, AnalysisExtras>;
+}
+
+/**
+ * @example const figures = reviewFigures(solveCase(c), { case: c }); reviewLinesOf(figures, 80)
+ */
+export function reviewFigures(solution: CaseSolution, ctx?: ReviewContext): ReviewFigures {
+  const fig: ReviewFigures = { solution, sensitivity: {}, extras: {}, ...(ctx ? { ctx } : {}) };
+  for (const a of solution.analyses) {
+    if (!a.ok) continue;
+    const s = a.solution;
+    if (ctx) {
+      const x = analysisExtras(
+        ctx.case,
+        s,
+        ctx.reactionTime !== undefined ? { reactionTime: ctx.reactionTime } : {},
+      );
+      fig.extras[s.id] = x;
+      fig.sensitivity[s.id] = x.sensitivity;
+    } else fig.sensitivity[s.id] = sensitivity(s);
+  }
+  return fig;
+}
+
+/**
+ * The extras' lines for one solved analysis of case `c`, at most `width` columns each, from its
+ * extras as `reviewFigures` computed them.
  */
 export function extrasLines(
   s: AnalysisSolution,
   u: Units,
-  ctx: ReviewContext,
+  c: Case,
+  x: AnalysisExtras,
   width: number,
 ): ShownLine[] {
   const out: ShownLine[] = [];
-  const x = analysisExtras(
-    ctx.case,
-    s,
-    ctx.reactionTime !== undefined ? { reactionTime: ctx.reactionTime } : {},
-  );
   part(out, 'Time and distance at the posted limit', x.limit, width, (v) =>
     limitLines(out, v, s.speed, u, width),
   );
@@ -203,6 +211,6 @@ export function extrasLines(
   part(out, 'Circle fitted to the offsets', x.offsets, width, (v) =>
     offsetsLines(out, v, u, width, s.warnings),
   );
-  pictures(out, s, ctx.case, x, u, width);
+  pictures(out, s, c, x, u, width);
   return out;
 }

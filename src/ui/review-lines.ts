@@ -6,17 +6,20 @@
  * and the tests read the same lines the user reads.
  */
 import type { AnalysisSolution, CaseSolution } from '../engine/types.js';
-import { isAboveLimit } from '../engine/index.js';
 import { CAUTIONS } from '../format/cautions.js';
 import { KIND_NAMES } from '../format/kind-names.js';
-import { formatNumber, formatRange, zeroRangeNote } from '../format/numbers.js';
+import { formatRange, zeroRangeNote } from '../format/numbers.js';
+import { formatNumber } from '../engine/number-text.js';
 import { phasesLine } from '../format/phases-text.js';
-import { sensitivity } from '../extras/sensitivity.js';
+import { limitWord } from '../format/verdict.js';
 import { sensitivityBars } from '../extras/sensitivity-bars.js';
 import { pushWrapped, stepLines, type ShownLine } from './review-step.js';
-import { extrasLines, type ReviewContext } from './review-extras.js';
-
-export { kindForUnit, type ShownLine } from './review-step.js';
+import {
+  extrasLines,
+  reviewFigures,
+  type ReviewContext,
+  type ReviewFigures,
+} from './review-extras.js';
 
 /** "at least 41 mph": the low end rounded down, as the engine gives it in `minimum`. */
 export function atLeast(s: AnalysisSolution, speedUnit: string): string {
@@ -28,9 +31,12 @@ function analysisLines(
   s: AnalysisSolution,
   sol: CaseSolution,
   width: number,
-  ctx: ReviewContext | undefined,
+  fig: ReviewFigures,
 ) {
   const unit = sol.units.speed;
+  const ctx = fig.ctx;
+  const x = fig.extras[s.id];
+  const rows = fig.sensitivity[s.id] ?? [];
   s.steps.forEach((step, i) => stepLines(out, step, i + 1, width, '  '));
   out.push({ text: '' });
   pushWrapped(
@@ -57,14 +63,10 @@ function analysisLines(
     const v = sol.postedLimit.value;
     // A limit converted from the other unit is not whole: show it as converted, not rounded.
     const limit = `${formatNumber(v, Number.isInteger(v) ? 'integer' : 'speed')} ${unit}`;
-    const above = isAboveLimit(s.speed.low, sol.postedLimit.value);
-    pushWrapped(
-      out,
-      `Posted limit ${limit}: the low end is ${above ? 'above' : 'not above'} the limit.`,
-      width,
-      '  ',
-      { tone: above ? 'warning' : undefined },
-    );
+    const word = limitWord(s.speed.low, sol.postedLimit.value);
+    pushWrapped(out, `Posted limit ${limit}: the low end is ${word} the limit.`, width, '  ', {
+      tone: word === 'above' ? 'warning' : undefined,
+    });
   }
   if (s.assumptions.length) {
     out.push({ text: '  Assumptions', bold: true });
@@ -76,7 +78,6 @@ function analysisLines(
     out.push({ text: '  Warnings', bold: true, tone: 'warning' });
     for (const w of s.warnings) pushWrapped(out, `! ${w}`, width, '   ', { tone: 'warning' });
   }
-  const rows = sensitivity(s);
   if (rows.length) {
     out.push({ text: '  What moves the result', bold: true });
     for (const l of sensitivityBars(rows, width - 2, { speedUnit: unit }))
@@ -84,7 +85,7 @@ function analysisLines(
   }
   const zero = zeroRangeNote(s.speed);
   if (zero) pushWrapped(out, zero, width, '  ', { tone: 'muted' });
-  if (ctx) out.push(...extrasLines(s, sol.units, ctx, width));
+  if (ctx && x) out.push(...extrasLines(s, sol.units, ctx.case, x, width));
 }
 
 /**
@@ -121,6 +122,12 @@ export function glanceLines(sol: CaseSolution, width: number): ShownLine[] {
  * @example reviewLines(solveCase(c), 80)[0] // { text: 'At a glance', ... }
  */
 export function reviewLines(sol: CaseSolution, width: number, ctx?: ReviewContext): ShownLine[] {
+  return reviewLinesOf(reviewFigures(sol, ctx), width);
+}
+
+/** The review's lines laid out for `width` from figures already computed: nothing is computed here. */
+export function reviewLinesOf(fig: ReviewFigures, width: number): ShownLine[] {
+  const sol = fig.solution;
   const out: ShownLine[] = glanceLines(sol, width);
   sol.analyses.forEach((a, i) => {
     const head = a.ok ? a.solution : a;
@@ -130,7 +137,7 @@ export function reviewLines(sol: CaseSolution, width: number, ctx?: ReviewContex
       tone: 'heading',
       bold: true,
     });
-    if (a.ok) analysisLines(out, a.solution, sol, width, ctx);
+    if (a.ok) analysisLines(out, a.solution, sol, width, fig);
     else
       pushWrapped(
         out,

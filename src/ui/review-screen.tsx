@@ -1,6 +1,6 @@
 import React from 'react';
 import { Box, Text } from 'ink';
-import type { ShownLine } from './review-lines.js';
+import type { ShownLine } from './review-step.js';
 import { ScrollView } from './scroll-view.js';
 import { TONE } from './theme.js';
 

@@ -1,6 +1,6 @@
 /** Lines of one step of a chain and wrapped text, shared by the review's parts. */
 import type { Step } from '../engine/types.js';
-import { kindOfUnit } from '../format/chain-text.js';
+import { kindOfUnit } from '../format/step-text.js';
 import { formatRange } from '../format/numbers.js';
 import { wrap } from '../report/wrap.js';
 import type { TONE } from './theme.js';
@@ -11,9 +11,6 @@ export interface ShownLine {
   tone?: keyof typeof TONE;
   bold?: boolean;
 }
-
-/** Number style for a step's unit: the one rule `solve` and the report use too. */
-export const kindForUnit = kindOfUnit;
 
 /** Appends `text` wrapped to `width`, its first line after `indent`, the rest two further in. */
 export function pushWrapped(
@@ -40,7 +37,7 @@ export function stepLines(
   pushWrapped(out, `formula  ${step.formula}`, width, inner);
   pushWrapped(out, `numbers  ${step.substituted}`, width, inner);
   const r = { value: step.result, low: step.low, high: step.high };
-  pushWrapped(out, `result   ${formatRange(r, kindForUnit(step.unit), step.unit)}`, width, inner, {
+  pushWrapped(out, `result   ${formatRange(r, kindOfUnit(step.unit), step.unit)}`, width, inner, {
     tone: 'result',
   });
   if (step.why) pushWrapped(out, `why      ${step.why}`, width, inner, { tone: 'muted' });

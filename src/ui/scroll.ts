@@ -19,10 +19,3 @@ export function windowOf<T>(lines: readonly T[], top: number, height: number) {
     below: Math.max(0, lines.length - start - h),
   };
 }
-
-/** Keeps a selected row inside a window: the new top. */
-export function followSelection(top: number, selected: number, height: number): number {
-  if (selected < top) return selected;
-  if (selected >= top + height) return selected - height + 1;
-  return top;
-}

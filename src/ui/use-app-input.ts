@@ -6,7 +6,7 @@
 import { useRef } from 'react';
 import { useInput, type Key } from 'ink';
 import { findBinding, type Command, type KeyContext } from './keys.js';
-import { editLine } from './line-edit.js';
+import { editLine, lineCommand, type Line } from './line-edit.js';
 import { splitKeys } from './split-keys.js';
 import { filterQuestions } from './jump-filter.js';
 import { isChoice } from './question-view.js';
@@ -95,22 +95,29 @@ function typed(ctx: KeyContext, input: string, key: Key, d: InputDeps) {
     if (clearsLine(input, key) && m.session.state.error) app.act({ type: 'clear-error' });
     return;
   }
-  if (ctx === 'question' && m.session) {
-    const line = editLine(m.session.line, input, key);
+  editField(ctx, d, (l) => editLine(l, input, key));
+}
+
+/** Changes the line of text on screen (the answer, the go-to filter or the path) by `edit`. */
+function editField(ctx: KeyContext, d: InputDeps, edit: (l: Line) => Line, clears = false) {
+  const { app } = d;
+  const m = app.current();
+  if ((ctx === 'question' || ctx === 'choice') && m.session) {
+    const line = edit(m.session.line);
     if (line !== m.session.line)
       app.update((x) => (x.session ? { ...x, session: { ...x.session, line } } : x));
     // Ctrl+U empties the line: the message about what was on it goes with it.
-    if (clearsLine(input, key) && m.session.state.error) app.act({ type: 'clear-error' });
+    if (clears && m.session.state.error) app.act({ type: 'clear-error' });
     return;
   }
   if (ctx === 'jump' && m.overlay?.kind === 'jump') {
-    const filter = editLine(m.overlay.filter, input, key);
+    const filter = edit(m.overlay.filter);
     if (filter !== m.overlay.filter)
       app.update((x) => ({ ...x, overlay: { kind: 'jump', filter, selected: 0 } }));
     return;
   }
   if (ctx === 'path' && m.home.path) {
-    const path = editLine(m.home.path, input, key);
+    const path = edit(m.home.path);
     if (path !== m.home.path) app.setHome({ path });
   }
 }
@@ -228,6 +235,10 @@ function run(command: Command, ctx: KeyContext, d: InputDeps) {
       return void app.closeCase();
     case 'pick':
       return;
+    case 'line-start':
+    case 'line-end':
+    case 'line-clear':
+      return editField(ctx, d, (l) => lineCommand(l, command), command === 'line-clear');
   }
 }
 

@@ -7,6 +7,7 @@
  * same answers, so the test knows which question the screen must show, and fails, naming it, if
  * the screen shows anything else.
  */
+import { defaultTextOf } from '../../src/interview/answer-values.js';
 import { initialState, reduce } from '../../src/interview/reducer.js';
 import { currentQuestion } from '../../src/interview/derived.js';
 import type { InterviewMode, InterviewState, Question } from '../../src/interview/types.js';
@@ -73,7 +74,7 @@ function answerFor(script: Script, q: Question, state: InterviewState): string {
   const answer = script[q.id];
   if (answer !== undefined) return answer;
   if (q.optional) return '';
-  const offered = q.defaultText?.(state.answers);
+  const offered = defaultTextOf(q, state.answers);
   if (offered !== undefined) {
     console.log(
       `interview driver: ${q.id} is not in the script; Enter takes its default "${offered}"`,

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { solveCase } from '../../src/engine/index.js';
-import { formatChainText } from '../../src/format/index.js';
+import { formatChainText } from '../../src/format/chain-text.js';
 import { caseOf } from './helpers.js';
 
 const num = (min: number, max: number) =>

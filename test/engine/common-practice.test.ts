@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { spread } from '../../src/case/quantity.js';
+import { spread } from '../../src/engine/spread.js';
 import {
   brakingEfficiency,
   exact,

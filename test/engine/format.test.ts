@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { CAUTIONS, formatNumber, formatRange, type NumberKind } from '../../src/format/index.js';
+import { CAUTIONS } from '../../src/format/cautions.js';
+import { formatRange } from '../../src/format/numbers.js';
+import { formatNumber, type NumberKind } from '../../src/engine/number-text.js';
 
 describe('number formatting', () => {
   it('fixed decimals per kind', () => {

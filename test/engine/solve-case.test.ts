@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { solveAnalysis, solveCase } from '../../src/engine/index.js';
 import { caseOf } from './helpers.js';
+import { unknownFields } from '../../src/case/unknown-fields.js';
 
 const drag = { source: 'entered', value: 0.7 };
 
@@ -10,7 +11,7 @@ describe('solveCase', () => {
       analyses: [{ id: 's', kind: 'skid', marks: [50], segments: [{ drag }], middleOrdinat: 3 }],
       extra: { colour: 'blue' },
     });
-    const s = solveCase(c);
+    const s = solveCase(c, unknownFields(c));
     expect(s.warnings).toEqual([
       'colour: not a field of the case format; kept, but not used (misspelt?)',
       'analyses[0].middleOrdinat: not a field of the case format; kept, but not used (misspelt?)',

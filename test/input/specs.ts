@@ -1,5 +1,6 @@
 /** Specs the interview would pass, shared by the input tests. */
-import { RULES, type Quantity, spread } from '../../src/case/quantity.js';
+import { RULES, type Quantity } from '../../src/case/quantity.js';
+import { spread } from '../../src/engine/spread.js';
 import type { QuantitySpec } from '../../src/input/index.js';
 import { expect } from 'vitest';
 

@@ -1,3 +1,4 @@
+import { defaultTextOf, explainOf } from '../../src/interview/answer-values.js';
 import { describe, expect, it } from 'vitest';
 import { currentQuestion, questionsFor, buildCase } from '../../src/interview/index.js';
 import { fillUntil, ids, start, type } from './drive.js';
@@ -42,7 +43,7 @@ describe('branching on the look of the marks', () => {
     const surfaces = currentQuestion(s)!;
     expect(surfaces.id).toBe('a0.surfaces');
     expect(surfaces.choices!.map((c) => c.value)).toEqual(['several', 'quick']);
-    expect(surfaces.defaultText!(s.answers)).toBe('several');
+    expect(defaultTextOf(surfaces, s.answers)).toBe('several');
     s = type(s, 's', '2');
     expect(ids(s)).not.toContain('a0.count');
     expect(ids(s)).not.toContain('a0.marks');
@@ -108,7 +109,7 @@ describe('branching on the brakes', () => {
     const share = currentQuestion(s)!;
     expect(share.id).toBe('vehicle.share');
     // Typical front-axle share 0.55-0.65 of front-engine cars (common practice; from memory), DOMAIN.md
-    expect(share.defaultText!(s.answers)).toBe('0.55-0.65');
+    expect(defaultTextOf(share, s.answers)).toBe('0.55-0.65');
     expect(share.help.how).toContain('common practice; from memory');
     expect(share.help.why).toContain('overstates n');
     s = type(s, '', 'w', 'w', 'n', 'p');
@@ -154,8 +155,8 @@ describe('branching inside an analysis', () => {
     expect(row.hint).toContain('Baker');
     s = type(s, row.key);
     const value = currentQuestion(s)!;
-    expect(value.defaultText!(s.answers)).toBe('0.55-0.70');
-    expect(value.explainChoice!(s.answers)).toContain('Traffic Institute');
+    expect(defaultTextOf(value, s.answers)).toBe('0.55-0.70');
+    expect(explainOf(value, s.answers)).toContain('Traffic Institute');
   });
 
   it('another surface asks for its name', () => {

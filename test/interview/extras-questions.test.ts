@@ -1,3 +1,4 @@
+import { defaultTextOf } from '../../src/interview/answer-values.js';
 import { describe, expect, it } from 'vitest';
 import {
   buildCase,
@@ -39,7 +40,7 @@ describe('a yaw radius measured by offsets', () => {
       'one chord and its middle ordinate',
       'offsets at stations along one chord',
     ]);
-    expect(q.defaultText!(s.answers)).toBe('ordinate');
+    expect(defaultTextOf(q, s.answers)).toBe('ordinate');
     expect(ids(type(s, ''))).toContain('a0.ordinate');
     const o = ids(type(s, 'o'));
     expect(o).toEqual(expect.arrayContaining(['a0.offsets.chord', 'a0.offsets.stations']));
@@ -160,7 +161,7 @@ describe('a distribution at the end of the case', () => {
     const s = fillUntil(start(), SLIDE, 'sampling.shape');
     const all = ids(s);
     expect(all[all.length - 1]).toBe('sampling.shape');
-    expect(currentQuestion(s)!.defaultText!(s.answers)).toBe('none');
+    expect(defaultTextOf(currentQuestion(s)!, s.answers)).toBe('none');
     expect(buildCase(fill(s, {}), { id: 't' })).not.toHaveProperty('sampling');
   });
 

@@ -1,3 +1,4 @@
+import { defaultTextOf, explainOf } from '../../src/interview/answer-values.js';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
@@ -119,7 +120,7 @@ function resolve(s: InterviewState, a: Action): Action {
     const marks = q?.id.endsWith('.marks') ? '80.5' : undefined;
     return {
       type: 'answer',
-      text: c ?? marks ?? q?.example ?? q?.defaultText?.(s.answers) ?? String(n + 1),
+      text: c ?? marks ?? q?.example ?? (q && defaultTextOf(q, s.answers)) ?? String(n + 1),
     };
   }
   if (a.type !== 'jump' || !a.id.startsWith('#')) return a;
@@ -147,7 +148,7 @@ function screenTexts(s: InterviewState): string[] {
       q.unitHint ?? '',
       q.example ?? '',
     );
-    out.push(q.defaultText?.(s.answers) ?? '', q.explainChoice?.(s.answers) ?? '');
+    out.push(defaultTextOf(q, s.answers) ?? '', explainOf(q, s.answers) ?? '');
     for (const c of q.choices ?? []) out.push(c.label, c.hint ?? '', c.key);
   }
   const sol = solveDraft(s);

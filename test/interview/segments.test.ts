@@ -1,3 +1,4 @@
+import { defaultTextOf } from '../../src/interview/answer-values.js';
 import { describe, expect, it } from 'vitest';
 import { buildCase, currentQuestion, questionStates } from '../../src/interview/index.js';
 import type { SkidV1 } from '../../src/case/v1/schema.js';
@@ -95,7 +96,7 @@ describe('quick entry of segments', () => {
     let s = fill(type(atQuick(), '48 @0.74 +2%, 31 @0.55'), {});
     s = type(act(s, { type: 'jump', id: 'a0.seg1.grade.dir' }), 'd', '1.5');
     s = act(s, { type: 'jump', id: 'a0.quick' });
-    expect(currentQuestion(s)!.defaultText!(s.answers)).toBe('48 @0.74 +2%, 31 @0.55 -1.5%');
+    expect(defaultTextOf(currentQuestion(s)!, s.answers)).toBe('48 @0.74 +2%, 31 @0.55 -1.5%');
     s = act(s, { type: 'accept-default' });
     expect(skid(s).segments[1]!.grade).toBe(-1.5);
   });

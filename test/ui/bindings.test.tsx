@@ -279,7 +279,34 @@ const CHECKS: Record<Command, (keys: string) => Promise<void>> = {
     const app = await review();
     await app.press(k, 'Go to:');
   },
+  async 'line-start'(k) {
+    const app = await fresh();
+    for (const ch of 'abc') app.stdin.write(ch);
+    await app.waitText('abc');
+    app.stdin.write(k);
+    await app.press('X', 'X|abc');
+  },
+  async 'line-end'(k) {
+    const app = await fresh();
+    for (const ch of 'abc') app.stdin.write(ch);
+    await app.waitText('abc');
+    app.stdin.write(ctrl('a'));
+    await app.press('X', 'X|abc');
+    app.stdin.write(k);
+    await app.press('Y', '> XabcY_');
+  },
+  async 'line-clear'(k) {
+    const app = await fresh();
+    for (const ch of 'abc') app.stdin.write(ch);
+    await app.waitText('abc');
+    app.stdin.write(k);
+    const f = await app.press('Z', /> Z/);
+    expect(f).not.toContain('abc');
+  },
 };
+
+const HOME = '\u001B[H';
+const END = '\u001B[F';
 
 describe('key bindings', () => {
   it.each(KEY_TABLE.map((b) => [b.command, b] as const))(
@@ -299,15 +326,23 @@ describe('key bindings', () => {
                   ? PAGE_DOWN
                   : k.name === 'pageup'
                     ? '\u001B[5~'
-                    : k.ctrl
-                      ? ctrl(k.name)
-                      : k.name;
+                    : k.name === 'home'
+                      ? HOME
+                      : k.name === 'end'
+                        ? END
+                        : k.ctrl
+                          ? ctrl(k.name)
+                          : k.name;
       await CHECKS[b.command](bytes);
     },
   );
 
   it('Ctrl+P goes back like Ctrl+B (Ctrl+B is the tmux prefix)', async () => {
     await CHECKS.back(ctrl('p'));
+  });
+
+  it('Home moves to the start like Ctrl+A', async () => {
+    await CHECKS['line-start'](HOME);
   });
 
   it('Ctrl+C saves and leaves like Ctrl+Q', async () => {

@@ -168,13 +168,13 @@ describe('a chord outside the usual lengths', () => {
     await app.press('y', 'A short label');
     await app.press(ENTER, 'How was the radius');
     await app.press('c', 'Chord length');
-    let f = said(await app.answer('140', 'Middle ordinate'));
+    let f = said(await app.answer('140', 'chords usually taken'));
     expect(f).toContain(
       'A 140 ft chord is longer than the chords usually taken: check it spans only the first part of the yaw mark (about 30-50 ft).',
     );
     await app.press(ctrl('p'), 'Chord length');
     for (let i = 0; i < 3; i++) app.stdin.write(BACKSPACE);
-    f = said(await app.answer('45', 'Middle ordinate'));
+    f = said(await app.answer('45', "from the chord's midpoint to the mark"));
     expect(f).not.toContain('chords usually taken');
   });
 });

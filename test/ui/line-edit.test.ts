@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { Key } from 'ink';
 import { NO_KEY } from '../../src/ui/split-keys.js';
-import { EMPTY_LINE, editLine, lineOf } from '../../src/ui/line-edit.js';
+import { EMPTY_LINE, editLine, lineCommand, lineOf } from '../../src/ui/line-edit.js';
 
 const none = NO_KEY;
 const k = (x: Partial<Key>) => ({ ...none, ...x });
@@ -33,9 +33,19 @@ describe('editLine', () => {
     expect(editLine(l, '', k({ escape: true, meta: true }))).toBe(l);
   });
 
-  it('Ctrl+U clears the line, Home and End move to the ends', () => {
-    expect(editLine(lineOf('abc'), 'u', k({ ctrl: true }))).toEqual(EMPTY_LINE);
-    expect(editLine(lineOf('abc'), '', k({ home: true })).cursor).toBe(0);
-    expect(editLine({ value: 'abc', cursor: 1 }, '', k({ end: true })).cursor).toBe(3);
+  it("the key table's editing commands: clear, to the start, to the end", () => {
+    expect(lineCommand(lineOf('abc'), 'line-clear')).toEqual(EMPTY_LINE);
+    expect(lineCommand(lineOf('abc'), 'line-start')).toEqual({ value: 'abc', cursor: 0 });
+    expect(lineCommand({ value: 'abc', cursor: 1 }, 'line-end')).toEqual({
+      value: 'abc',
+      cursor: 3,
+    });
+  });
+
+  it('leaves Ctrl+U, Home and End to the key table (they reach editLine only unbound)', () => {
+    const l = { value: 'abc', cursor: 1 };
+    expect(editLine(l, 'u', k({ ctrl: true }))).toBe(l);
+    expect(editLine(l, '', k({ home: true }))).toBe(l);
+    expect(editLine(l, '', k({ end: true }))).toBe(l);
   });
 });

@@ -62,18 +62,21 @@ export function renderApp(o: RenderOptions = {}) {
   });
   if (o.services) services = o.services(services);
   const exits: number[] = [];
-  const r = render(
+  const app = (columns: number, rows: number) => (
     <App
       services={services}
       port={liveInterview}
       start={o.start ?? { kind: 'home' }}
       color={o.color ?? false}
       quickEntry={QUICK_ENTRY_HELP}
-      columns={o.columns ?? 100}
-      rows={o.rows ?? 30}
+      columns={columns}
+      rows={rows}
       onExit={(c) => exits.push(c)}
-    />,
+    />
   );
+  const r = render(app(o.columns ?? 100, o.rows ?? 30));
+  /** The terminal resized: the same app rendered again at the new size. */
+  const resize = (columns: number, rows = o.rows ?? 30) => r.rerender(app(columns, rows));
   const frame = () => strip(r.lastFrame());
 
   /** Polls until `test` holds for the current frame; fails with the last frame shown. */
@@ -112,5 +115,5 @@ export function renderApp(o: RenderOptions = {}) {
     return press(ENTER, expect);
   }
 
-  return { ...r, dir, cfg, services, frame, waitFor, waitText, press, answer, exits };
+  return { ...r, dir, cfg, services, frame, waitFor, waitText, press, answer, exits, resize };
 }
