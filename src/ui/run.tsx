@@ -4,7 +4,7 @@
  */
 import React from 'react';
 import { render } from 'ink';
-import { releaseAllLocks } from '../store/index.js';
+import { releaseAllLocks, releaseAllLocksSync } from '../store/index.js';
 import { App } from './app.js';
 import { liveInterview } from './interview-live.js';
 import { liveServices } from './services-live.js';
@@ -46,7 +46,47 @@ export async function runInteractive(opts: RunOptions): Promise<number> {
     />,
     { exitOnCtrlC: false },
   );
+  const stop = onEndSignals(() => instance.unmount());
   await instance.waitUntilExit();
+  stop();
   await releaseAllLocks();
   return code;
+}
+
+/** How long keys already typed may keep arriving after a hang-up before the program ends. */
+const DRAIN_MS = 80;
+
+/**
+ * SIGHUP (the terminal closed) and SIGTERM: keys already typed (an Enter just pressed) are still
+ * read and handled first (each accepted answer is written to disk as it is handled), then the
+ * screen is given back, the locks are released and the program ends with 128 + the signal's
+ * number. Without this, a hang-up right after Enter could end the program before it read the Enter.
+ */
+function onEndSignals(unmount: () => void): () => void {
+  const numbers: Record<string, number> = { SIGHUP: 1, SIGTERM: 15 };
+  let ending = false;
+  const handler = (signal: NodeJS.Signals) => {
+    if (ending) return;
+    ending = true;
+    let last = Date.now();
+    const seen = () => (last = Date.now());
+    process.stdin.on('data', seen);
+    const check = () => {
+      if (Date.now() - last < DRAIN_MS) return void setTimeout(check, 20);
+      try {
+        unmount();
+      } catch {
+        // the screen may be gone with the terminal
+      }
+      releaseAllLocksSync();
+      process.exit(128 + (numbers[signal] ?? 0));
+    };
+    setTimeout(check, 20);
+  };
+  process.on('SIGHUP', handler);
+  process.on('SIGTERM', handler);
+  return () => {
+    process.off('SIGHUP', handler);
+    process.off('SIGTERM', handler);
+  };
 }
