@@ -36,9 +36,22 @@ export function questionStates(state: InterviewState): QuestionState[] {
   for (const q of allQuestions(state.answers)) {
     if (seen.has(q.id)) continue;
     const status = r.status(q.id);
-    if (status) out.push({ id: q.id, title: q.title, section: q.section, status });
-    else if (state.answers[q.id] && !r.questions.some((x) => x.id === q.id))
-      out.push({ id: q.id, title: q.title, section: q.section, status: 'unused' });
+    const given = state.answers[q.id];
+    const answer =
+      given === undefined
+        ? undefined
+        : given.text === ''
+          ? '(skipped)'
+          : (q.choices?.find((c) => c.value === given.text)?.label ?? given.text);
+    const row = (st: QuestionState['status']): QuestionState => ({
+      id: q.id,
+      title: q.title,
+      section: q.section,
+      status: st,
+      ...(answer !== undefined ? { answer } : {}),
+    });
+    if (status) out.push(row(status));
+    else if (given && !r.questions.some((x) => x.id === q.id)) out.push(row('unused'));
     else continue;
     seen.add(q.id);
   }

@@ -122,6 +122,8 @@ export interface QuestionState {
   title: string;
   section: string;
   status: QuestionStatus;
+  /** The answer as the user would recognise it (a choice's words), when there is one. */
+  answer?: string;
 }
 
 export type InterviewMode = 'guided' | 'brisk';

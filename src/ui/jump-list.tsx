@@ -50,7 +50,9 @@ export function JumpList(p: JumpProps) {
           <Text key={q.id} wrap="truncate" bold={at}>
             {at ? '> ' : '  '}
             <Text color={TONE_OF[q.status]}>{STATUS_WORD[q.status].padEnd(wordW)}</Text>
-            {q.section} · {q.title}
+            {q.title}
+            {q.answer !== undefined ? <Text color={TONE.muted}>: {q.answer}</Text> : null}
+            <Text color={TONE.muted}> · {q.section}</Text>
           </Text>
         );
       })}

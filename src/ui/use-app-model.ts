@@ -163,6 +163,8 @@ export function useAppModel(
 
   /** Set after a leave found unsaved answers: the next leave goes without them. */
   const leaveArmed = useRef(false);
+  /** Set after a leave found typed text not yet accepted: the next leave goes without it. */
+  const draftArmed = useRef(false);
 
   const leave = useCallback(async () => {
     if (ref.current.leaving) return;
@@ -176,6 +178,15 @@ export function useAppModel(
         ? `these answers are not saved (read-only: ${s.open.readOnly.replace(/\.$/, '')}); press ${keysFor('save-now')} to save them as a new case, or ${keysFor('save-leave')} again to leave without saving`
         : `${s.saveError ?? 'not saved'}; press ${keysFor('save-leave')} again to leave without saving`;
       update((m) => (m.session ? { ...m, session: { ...m.session, saveError } } : m));
+      return;
+    }
+    // Text typed but not accepted is no answer yet: say so once, rather than drop it unseen.
+    const draft = s?.line.value.trim();
+    if (s && draft && !draftArmed.current) {
+      draftArmed.current = true;
+      const shown = draft.length > 30 ? `${draft.slice(0, 30)}…` : draft;
+      const saveNote = `"${shown}" is typed but not accepted: Enter accepts it; ${keysFor('save-leave')} again leaves without it.`;
+      update((m) => (m.session ? { ...m, session: { ...m.session, saveNote } } : m));
       return;
     }
     update((m) => ({ ...m, leaving: true }));

@@ -169,7 +169,7 @@ const CHECKS: Record<Command, (keys: string) => Promise<void>> = {
     await app.press(k, 'Go to:');
     for (const ch of 'unit') app.stdin.write(ch);
     const f = await app.waitText('Go to: unit');
-    expect(f).toMatch(/open\s+Case · Units/);
+    expect(f).toMatch(/open\s+Units · Case/);
     await app.press(ENTER, 'Which units were the measurements taken in?');
   },
   async undo(k) {

@@ -111,6 +111,20 @@ describe('interview screen', () => {
     expect(f).toContain('finished-slide');
   });
 
+  it('Ctrl+Q with text typed but not accepted says so, and leaves on the second press', async () => {
+    const app = await newCase();
+    for (const ch of 'HALF-TYPED') app.stdin.write(ch);
+    await app.waitText('> HALF-TYPED');
+    const f = await app.press(ctrl('q'), 'is typed but not accepted');
+    expect(f).toContain(
+      '"HALF-TYPED" is typed but not accepted: Enter accepts it; Ctrl+Q / Ctrl+C again leaves without it.',
+    );
+    expect(app.exits).toEqual([]);
+    app.stdin.write(ctrl('q'));
+    await app.waitFor(() => app.exits.length > 0, 'exit');
+    expect(app.exits).toEqual([0]);
+  });
+
   it('keeps answers in memory and says so when a save fails', async () => {
     const app = renderApp({
       services: (s) => ({ ...s, saveCase: () => ({ ok: false, message: 'disk is full' }) }),
@@ -282,8 +296,9 @@ describe('go-to list', () => {
     await app.press(ctrl('g'), 'Go to:');
     for (const ch of 'brak') app.stdin.write(ch);
     const f = await app.waitText('Go to: brak');
-    expect(f).toMatch(/answered\s+Analysis 1 - slide · Brakes/);
-    expect(f).toMatch(/not used now\s+Analysis 1 - slide · Braking efficiency/);
+    // Each row shows its answer, so the list doubles as a summary to jump from.
+    expect(f).toMatch(/answered\s+Brakes: all working · Analysis 1 - slide/);
+    expect(f).toMatch(/not used now\s+Braking efficiency: 0\.8 · Analysis 1 - slide/);
     await app.press(ESC, 'A short label');
   });
 

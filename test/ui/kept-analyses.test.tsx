@@ -1,12 +1,14 @@
 // Cases beyond what the interview asks about (a truck's 18 marks, a slide into a surveyed yaw and
 // a fall): opened in the interview and changed elsewhere, every analysis is saved as it was.
 import fs from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup } from 'ink-testing-library';
 import { loadCaseText } from '../../src/case/load.js';
 import { solveCase } from '../../src/engine/index.js';
 import { ENTER, ctrl, renderApp } from './render-app.js';
+import { halfDone } from './fixtures.js';
 
 afterEach(() => cleanup());
 
@@ -89,3 +91,21 @@ function loadOk(c: object) {
   if (!r.ok) throw new Error('fixture does not load');
   return r.case;
 }
+
+describe('a case opened from a file', () => {
+  it('is saved back to that file (its name need not be its id), with the backup beside it', async () => {
+    const elsewhere = fs.mkdtempSync(path.join(os.tmpdir(), 'skidcase-open-'));
+    const file = path.join(elsewhere, 'scene-notes.json');
+    fs.writeFileSync(file, JSON.stringify(halfDone, null, 2));
+    const app = renderApp({ start: { kind: 'open', path: file } });
+    await app.waitText('Which units were the measurements taken in?');
+    await app.press('m', /saved \d\d:\d\d:\d\d/);
+    const saved = JSON.parse(fs.readFileSync(file, 'utf8'));
+    expect(saved.units).toBe('metric');
+    expect(JSON.parse(fs.readFileSync(`${file}.bak`, 'utf8')).units).not.toBe('metric');
+    // Nothing was written under the case's id, here or in the sessions folder.
+    expect(fs.existsSync(path.join(elsewhere, 'half-done.json'))).toBe(false);
+    expect(fs.readdirSync(app.dir).filter((n) => n.endsWith('.json'))).toEqual([]);
+    fs.rmSync(elsewhere, { recursive: true, force: true });
+  });
+});
