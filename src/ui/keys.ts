@@ -118,7 +118,7 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     description: 'Save the case and leave skidcase',
     when: [...EVERYWHERE, 'help'],
     footer: CASE,
-    rank: 4,
+    rank: 1,
   },
   {
     command: 'quit',
@@ -265,7 +265,7 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     description: 'Open a case file by its path',
     when: ['home'],
     footer: ['home'],
-    rank: 4,
+    rank: 2,
   },
   {
     command: 'demo',

@@ -39,6 +39,13 @@ describe('footer line', () => {
       expect(hints).toContain(h);
   });
 
+  it('at 60 columns keeps the keys that keep or lose work: save & leave on a question, open file on the list', () => {
+    for (const ctx of ['question', 'choice', 'review'] as const)
+      expect(footerLine(ctx, 59), ctx).toContain('Ctrl+Q save & leave');
+    expect(footerLine('home', 59)).toContain('o open file');
+    expect(footerLine('home', 59)).toContain('n new case');
+  });
+
   it('shows fewer hints at 60 columns, never the help key missing', () => {
     expect(footerLine('question', 59).length).toBeLessThan(footerLine('question', 79).length);
     expect(footerLine('question', 59)).toContain('Enter accept');
