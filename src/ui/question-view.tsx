@@ -137,7 +137,7 @@ export function QuestionView(p: QuestionViewProps) {
         <Box flexDirection="column">
           <Box>
             <Text color={TONE.key}>{'> '}</Text>
-            <TextField line={p.line} color={p.color} />
+            <TextField line={p.line} color={p.color} width={p.width - 2} />
           </Box>
           <Para
             text="Enter reads what is typed; Esc clears it"
@@ -149,7 +149,7 @@ export function QuestionView(p: QuestionViewProps) {
       ) : isChoice(q) ? null : (
         <Box>
           <Text color={TONE.key}>{'> '}</Text>
-          <TextField line={p.line} color={p.color} />
+          <TextField line={p.line} color={p.color} width={p.width - 2} />
         </Box>
       )}
       {enterGives ? (

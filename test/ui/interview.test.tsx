@@ -125,6 +125,23 @@ describe('interview screen', () => {
     expect(app.exits).toEqual([0]);
   });
 
+  it('a pasted line of 1,851 characters scrolls within its row: header and question stay on a 24-row screen', async () => {
+    const app = await newCase({ columns: 80, rows: 24 });
+    const paste = Array.from({ length: 1851 }, (_, i) => 'abcdefghij'[i % 10]).join('');
+    app.stdin.write(paste);
+    const f = await app.waitText('…');
+    const lines = f.split('\n');
+    expect(lines.length).toBeLessThanOrEqual(24);
+    expect(lines[0]).toMatch(/^case-/);
+    expect(f).toContain('Case or report reference');
+    const input = lines.filter((l) => l.startsWith('> '));
+    expect(input).toHaveLength(1);
+    expect(input[0]!.length).toBeLessThanOrEqual(80);
+    // The end of what was pasted is in view, where the cursor is.
+    expect(input[0]).toMatch(/^> …[a-j]+_/);
+    expect(input[0]).toContain(`${paste.slice(-20)}_`);
+  });
+
   it('keeps answers in memory and says so when a save fails', async () => {
     const app = renderApp({
       services: (s) => ({ ...s, saveCase: () => ({ ok: false, message: 'disk is full' }) }),

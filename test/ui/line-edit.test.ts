@@ -1,3 +1,4 @@
+import { visiblePart } from '../../src/ui/text-field.js';
 import { describe, expect, it } from 'vitest';
 import type { Key } from 'ink';
 import { NO_KEY } from '../../src/ui/split-keys.js';
@@ -47,5 +48,19 @@ describe('editLine', () => {
     expect(editLine(l, 'u', k({ ctrl: true }))).toBe(l);
     expect(editLine(l, '', k({ home: true }))).toBe(l);
     expect(editLine(l, '', k({ end: true }))).toBe(l);
+  });
+});
+
+describe('a long line scrolls within its row', () => {
+  it('keeps the cursor in view and marks what is cut', () => {
+    expect(visiblePart({ value: 'abcdefghij', cursor: 10 }, 6)).toEqual({
+      value: '…hij',
+      cursor: 4,
+    });
+    expect(visiblePart({ value: 'abcdefghij', cursor: 0 }, 6)).toEqual({
+      value: 'abcd…',
+      cursor: 0,
+    });
+    expect(visiblePart({ value: 'abc', cursor: 3 }, 6)).toEqual({ value: 'abc', cursor: 3 });
   });
 });
