@@ -47,6 +47,23 @@ export function surfaceMode(answers: Answers, i: number): 'one' | 'several' | 'q
   return v === 'one' || v === 'several' || v === 'quick' ? v : undefined;
 }
 
+/**
+ * True when slide `i` is entered in parts, each with its length: several surfaces, or a quick line
+ * of more than one segment (or one with a length). A quick line of one segment without a length
+ * (`@0.74 -1%`) is one surface: its distance comes from the marks, as with `one`.
+ */
+export function slideInParts(answers: Answers, i: number): boolean {
+  const mode = surfaceMode(answers, i);
+  if (mode === 'several') return true;
+  if (mode !== 'quick') return false;
+  const v = answers[`a${i}.quick`]?.value;
+  return !(
+    Array.isArray(v) &&
+    v.length === 1 &&
+    (v[0] as { length?: unknown } | undefined)?.length === undefined
+  );
+}
+
 /** Segments in play for slide `i` (0 while the count is not yet known). */
 export function segmentCount(answers: Answers, i: number): number {
   const mode = surfaceMode(answers, i);

@@ -14,7 +14,7 @@ import {
 } from '../case/v1/schema.js';
 import type { AnswerReader } from './types.js';
 import { formatSegmentLine } from '../input/index.js';
-import { isSegment, segmentCount, surfaceMode, testWhere } from './answers-read.js';
+import { isSegment, segmentCount, slideInParts, testWhere } from './answers-read.js';
 import { OTHER_SURFACE } from './drag-table.js';
 import { signed } from './signed.js';
 import { WHEELS } from './wheels.js';
@@ -103,7 +103,7 @@ export const text = (r: AnswerReader, id: string) => {
  * one of them is not complete and valid.
  */
 export function segmentsOf(r: AnswerReader, i: number): SegmentV1[] | undefined {
-  const several = surfaceMode(r.answers, i) !== 'one';
+  const several = slideInParts(r.answers, i);
   const segments: SegmentV1[] = [];
   for (let j = 0; j < segmentCount(r.answers, i); j++) {
     const sp = `a${i}.seg${j}`;

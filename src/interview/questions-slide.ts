@@ -11,6 +11,7 @@ import {
   textQuestion,
 } from './question-kinds.js';
 import {
+  slideInParts,
   choiceOf,
   countOf,
   markLook,
@@ -77,7 +78,7 @@ export function slideQuestions(
 ): Question[] {
   const p = `a${i}`;
   const gap = (a: Answers) => markLook(a, i) === 'gap';
-  const inParts = (a: Answers) => surfaceMode(a, i) === 'several' || surfaceMode(a, i) === 'quick';
+  const inParts = (a: Answers) => slideInParts(a, i);
   const marksAsked = (a: Answers) => applies(a) && !gap(a) && surfaceMode(a, i) !== undefined;
   const count = (a: Answers) => countOf(a, `${p}.count`);
   const out: Question[] = [

@@ -5,6 +5,7 @@
 import type { Answers, Question } from './types.js';
 import { choiceQuestion, confirmQuestion, textQuestion, unitHintOf } from './question-kinds.js';
 import {
+  slideInParts,
   analysisCount,
   choiceOf,
   isSlideLook,
@@ -33,7 +34,7 @@ export function analysisSection(a: Answers, i: number): string {
         ? ' - critical speed'
         : look === 'gap'
           ? ' - slide in parts'
-          : mode === 'several' || mode === 'quick'
+          : slideInParts(a, i)
             ? ' - slide, several surfaces'
             : ' - slide';
   return `Analysis ${i + 1}${chain}`;

@@ -7,6 +7,7 @@ import { formatNumber } from '../engine/number-text.js';
 import { spread } from '../engine/spread.js';
 import type { AnswerReader } from './types.js';
 import {
+  slideInParts,
   choiceOf,
   isSegment,
   markLook,
@@ -38,7 +39,7 @@ export function testGradeNotes(r: AnswerReader, i: number): string[] {
   const p = `a${i}`;
   if (markLook(r.answers, i) === 'yaw')
     return [noteFor(r, p, 'Drag factor')].flatMap((n) => n ?? []);
-  const several = surfaceMode(r.answers, i) !== 'one' || segmentCount(r.answers, i) > 1;
+  const several = slideInParts(r.answers, i) || segmentCount(r.answers, i) > 1;
   const out: string[] = [];
   for (let j = 0; j < segmentCount(r.answers, i); j++) {
     const n = noteFor(r, `${p}.seg${j}`, several ? `Segment ${j + 1}` : 'Drag factor');
