@@ -6,7 +6,7 @@ import { rel } from './helpers.js';
 // Table 3-1 stopping sight distance: SSD = 1.47 V t + 1.075 V²/a, t = 2.5 s, a = 11.2 ft/s²
 // (a/g = 0.348); metric 0.278 V t + 0.039 V²/a, a = 3.4 m/s². Each part rounded to 0.1 ft/m.
 // Design values for 30, 50 and 60 mph seen in a reprint; the rest recomputed from the formula
-// (DOMAIN.md).
+// (docs/physics.md, "Check values").
 const T = 2.5;
 const F_US = 0.348; // a/g = 11.2/32.2
 const F_SI = 3.4 / 9.80665;
@@ -36,7 +36,7 @@ describe('AASHTO Green Book Table 3-1: stopping sight distance (US customary)', 
       expect(rel(reactionDistance(row.V, T, 'imperial').distance, row.reaction)).toBeLessThan(
         0.003,
       );
-      // Braking: S²/(30 f) with f = 0.348 lands within 0.5% of the AASHTO column (DOMAIN.md).
+      // Braking: S²/(30 f) with f = 0.348 lands within 0.5% of AASHTO's braking term (1.075 is (5280/3600)²/2 rounded).
       expect(rel(braking(row.V, F_US, 0, 'imperial'), row.braking)).toBeLessThan(0.005);
       // The design value is the sum rounded up to the next 5 ft: ours is not above it, and less
       // than 5 ft (plus the 0.5% tolerance) below it.

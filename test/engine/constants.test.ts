@@ -21,14 +21,14 @@ describe('trade constants from first principles (mathjs units)', () => {
 
   it('S² = C d f: C = 2g in mph²/ft is within 0.2% of 30', () => {
     const C = g2.toNumber('mi^2/(h^2 ft)');
-    expect(C).toBeCloseTo(29.91, 2); // DOMAIN.md check value 29.91
+    expect(C).toBeCloseTo(29.91, 2); // 2 × 32.174 × (3600/5280)² = 29.91
     expect(rel(tradeConstants('imperial').slide, C)).toBeLessThan(0.003); // 30 vs 29.91 is 0.29% in S², 0.15% in S
     expect(rel(Math.sqrt(tradeConstants('imperial').slide), Math.sqrt(C))).toBeLessThan(0.002);
   });
 
   it('S² = C d f: C = 2g in (km/h)²/m is within 0.2% of 254', () => {
     const C = g2.toNumber('km^2/(h^2 m)');
-    expect(C).toBeCloseTo(254.19, 2); // DOMAIN.md check value 254.19
+    expect(C).toBeCloseTo(254.19, 2); // 2 × 9.80665 × 3.6² = 254.19
     expect(rel(tradeConstants('metric').slide, C)).toBeLessThan(0.002);
   });
 

@@ -36,8 +36,8 @@ const oneSurface = (
 
 // AASHTO, A Policy on Geometric Design of Highways and Streets (Green Book 2011/2018), Table 3-1,
 // stopping sight distance, t = 2.5 s, a = 11.2 ft/s² (a/g = 0.348): reaction + braking columns
-// (DOMAIN.md). Our reaction uses 5280/3600 exactly (AASHTO 1.47) and braking S²/(30 f): DOMAIN.md
-// says within 0.5% of the AASHTO braking column.
+// (docs/physics.md, "Check values"). Our reaction uses 5280/3600 exactly (AASHTO 1.47) and
+// braking S²/(30 f), within 0.5% of AASHTO's braking term.
 const table31 = [
   { V: 30, reaction: 110.3, braking: 86.4 },
   { V: 40, reaction: 147.0, braking: 153.6 },
@@ -56,7 +56,7 @@ describe('stopping distance at the posted limit vs AASHTO Green Book Table 3-1 (
     });
 
   // Metric rows of Table 3-1: 0.278 V t + 0.039 V²/a, a = 3.4 m/s²; 50 km/h 34.8 + 28.7 m,
-  // 100 km/h 69.5 + 114.7 m (DOMAIN.md). AASHTO's 0.039 is 1/(2 × 3.6²) = 0.0386 rounded up, so
+  // 100 km/h 69.5 + 114.7 m. AASHTO's 0.039 is 1/(2 × 3.6²) = 0.0386 rounded up, so
   // its braking column sits about 1% above S²/(254 f) with f = 3.4 / 9.80665: tolerance 1.2%.
   for (const row of [
     { V: 50, reaction: 34.8, braking: 28.7 },
@@ -70,7 +70,7 @@ describe('stopping distance at the posted limit vs AASHTO Green Book Table 3-1 (
     });
 });
 
-describe('AASHTO Green Book Table 3-2, grades (DOMAIN.md; reaction included, rounded up to the foot)', () => {
+describe('AASHTO Green Book Table 3-2, grades (AASHTO's formula; reaction included, rounded up to the foot)', () => {
   it('60 mph on a 6% downgrade: 638 ft', () => {
     expect(
       rel(run(oneSurface(60, 0.348, -6), 2.5).atLimit.stoppingDistance.value, 638),

@@ -6,7 +6,7 @@ import { oracleCase } from './contract-oracle.js';
 import { runSolve } from './run-solve.js';
 
 // An outside checker's view of `skidcase solve --json`: hand-made cases (invented numbers) probing
-// the edges a literal reading of /work/shared/CASE-FORMAT.md implies, compared with the
+// the edges a literal reading of docs/case-file.md implies, compared with the
 // independent reader in contract-oracle.ts (written from that text, not from src/engine).
 
 type Json = Record<string, any>; // eslint-disable-line @typescript-eslint/no-explicit-any
@@ -129,7 +129,7 @@ const fromMarks = (drag: Json = entered(0.7, 0.6, 0.8), grade?: unknown) => ({
   ...(grade !== undefined ? { grade } : {}),
 });
 
-describe('solve --json agrees with a literal reading of CASE-FORMAT.md', () => {
+describe('solve --json agrees with a literal reading of docs/case-file.md', () => {
   const cases: [string, Json, number[]?][] = [
     ['Q as a plain number', kase('imperial', [skid([fromMarks()], { marks: [64] })])],
     [

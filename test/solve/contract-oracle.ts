@@ -1,4 +1,4 @@
-// An independent reader of /work/shared/CASE-FORMAT.md's formulas, written from that text alone
+// An independent reader of docs/case-file.md's formulas, written from that text alone
 // (it does not import src/engine). Ranges are found by brute force over every corner of the
 // inputs' ranges, so the engine's "each input at its matching end" shortcut is checked, not copied.
 
@@ -143,7 +143,7 @@ export interface OracleCase {
   postedLimit?: { value: number; exceededAtMinimum: boolean };
 }
 
-/** What a careful reader of CASE-FORMAT.md expects `solve --json` to print for a valid case. */
+/** What a careful reader of docs/case-file.md expects `solve --json` to print for a valid case. */
 export function oracleCase(c: Json): OracleCase {
   const analyses = (c.analyses as Json[]).map((a) =>
     a.kind === 'skid' ? oracleSkid(c, a) : oracleYaw(c, a),
