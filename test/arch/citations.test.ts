@@ -68,6 +68,18 @@ describe('citations point at sources a reader can consult', () => {
     expect(cited.filter((c) => !headings.has(c.section))).toEqual([]);
   });
 
+  it('tests and code name the behaviour, not a tracker issue number', () => {
+    const named = SCANNED.flatMap((e) => {
+      const p = join(ROOT, e);
+      return statSync(p).isDirectory() ? filesUnder(p) : [p];
+    }).flatMap((f) =>
+      readFileSync(f, 'utf8')
+        .split('\n')
+        .flatMap((l, i) => (/\bissues? #?\d+/i.test(l) ? [`${relative(ROOT, f)}:${i + 1}`] : [])),
+    );
+    expect(named).toEqual([]);
+  });
+
   describe('the scanner itself', () => {
     const dir = mkdtempSync(join(tmpdir(), 'skidcase-citations-'));
     afterAll(() => rmSync(dir, { recursive: true, force: true }));

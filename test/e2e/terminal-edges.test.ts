@@ -1,4 +1,4 @@
-// Terminal edge cases (issue 7): no TTY, NO_COLOR, 60 columns, a resize in the middle of a
+// Terminal edge cases: no TTY, NO_COLOR, 60 columns, a resize in the middle of a
 // question. The built binary, in a real pseudo-terminal where there is one.
 import { afterAll, afterEach, describe, expect, it } from 'vitest';
 import { spawn } from 'node:child_process';

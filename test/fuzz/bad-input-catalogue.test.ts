@@ -1,4 +1,4 @@
-// The catalogue of bad inputs (issue 7), through every numeric question of the interview: what
+// The catalogue of bad inputs, through every numeric question of the interview: what
 // the investigator types, and what the message must tell them. The fragments say what a person
 // needs to read (what is wrong, what is expected), not the exact wording.
 import { describe, expect, it } from 'vitest';
