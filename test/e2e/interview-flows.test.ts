@@ -1,9 +1,11 @@
-// Whole cases typed into the built binary in a real pseudo-terminal (a whole case, resume after a kill, the fast path): the
-// figures on the review screen must equal `skidcase solve --json` on the file the program saved.
+// Whole cases typed into the built binary in a real pseudo-terminal (a whole case, resume after a
+// kill, the fast path): the figures on the review screen must equal `skidcase solve --json` on the
+// file the program saved.
 import { afterAll, afterEach, describe, expect, it } from 'vitest';
 import { existsSync, readFileSync } from 'node:fs';
 import { disposeAll, ptySupport, startTerm, type Term } from './harness.js';
 import { makeWorkspace, type Workspace } from './env.js';
+import { describeInTerminal } from './pty-gate.js';
 import { answerOrder, dryRun, squash, typeInterview, type Script } from './interview-driver.js';
 import {
   asShown,
@@ -27,7 +29,6 @@ import { firstOpenQuestion, currentQuestion } from '../../src/interview/derived.
 import { loadCaseText } from '../../src/case/load.js';
 
 const pty = await ptySupport();
-if (!pty.ok) console.warn(`interview end-to-end tests skipped: ${pty.reason}`);
 
 const spaces: Workspace[] = [];
 const workspace = () => {
@@ -71,8 +72,10 @@ const typedInOneGo = () =>
     solved: await solveJson(r.files[0]!),
   })));
 
-describe.skipIf(!pty.ok)(
-  `typing whole cases into the terminal${pty.ok ? '' : ` (skipped: ${pty.reason})`}`,
+describeInTerminal(
+  'typing whole cases into the terminal',
+  'interview end-to-end tests',
+  pty,
   () => {
     afterEach(disposeAll);
 
