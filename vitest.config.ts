@@ -3,6 +3,8 @@ import { defineConfig } from 'vitest/config';
 export default defineConfig({
   test: {
     include: ['test/**/*.test.{ts,tsx}'],
+    // removes the temporary folders each test file's helpers made (test/temp-dirs.ts)
+    setupFiles: ['test/setup/temp-cleanup.ts'],
     testTimeout: 30_000,
     hookTimeout: 60_000,
     // pseudo-terminal and crash tests spawn processes; two cores only

@@ -76,7 +76,7 @@ async function releaseLocks(ctx) {
   if (release) await release();
 }
 
-/** A slide model from the engine when it exists (the real one), else from DOMAIN.md's formula. */
+/** A slide model from the engine when it exists (the real one), else from docs/physics.md's formula. */
 async function benchModel(ctx) {
   const solveCase = await findExport(ctx.root, 'src/engine', 'solveCase');
   if (solveCase) {
@@ -84,7 +84,8 @@ async function benchModel(ctx) {
     const a = sol.analyses[0];
     if (a?.ok) return { model: a.solution.model, from: 'engine solveCase' };
   }
-  // S = sqrt(30 * sum d_i (f_i n + G_i/100)), three segments, n = 1 (DOMAIN.md, several surfaces)
+  // S = sqrt(30 * sum d_i (f_i n + G_i/100)), three segments, n = 1 (docs/physics.md, "Several
+  // surfaces")
   const inputs = [
     ['d[0]', 38.5, 38, 39],
     ['f[0]', 0.72, 0.66, 0.78],

@@ -3,7 +3,7 @@ import { fitCircleToOffsets, type OffsetStation, type OffsetsFit } from './offse
 import { fail, ok, type Outcome, type Range, type Units, type UnitSystem } from './types.js';
 import type { Step } from './types.js';
 
-/** How closely an offset is read by default: 1/8 inch (DOMAIN.md, practitioner guidance) or 3 mm. */
+/** How closely an offset is read by default: 1/8 inch (common practice, docs/physics.md) or 3 mm. */
 export const OFFSET_READING = { imperial: 0.125 / 12, metric: 0.003 } as const;
 
 /** How many standard errors of a fitted radius either side of it make its range (about 95%). */

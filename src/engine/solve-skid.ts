@@ -23,7 +23,7 @@ const sumRanges = (rs: Range[]): Range =>
     high: 0,
   });
 
-/** The caveat each look of the marks carries (DOMAIN.md, "Marks"; all common practice). */
+/** The caveat each look of the marks carries (docs/physics.md, "Look of the marks"; common practice). */
 export const APPEARANCE_NOTES: Record<'locked' | 'abs' | 'skip' | 'gap', string | undefined> = {
   locked: undefined,
   abs: 'The marks were faint, evenly dashed marks (anti-lock brakes): they show hard braking, but the slide figure is an estimate from anti-lock marks and must be reported as such (common practice).',

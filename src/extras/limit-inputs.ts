@@ -57,7 +57,8 @@ export function segmentLabels(c: Case, analysisId: string): string[] {
 }
 
 /**
- * Where a perception-reaction time comes from, for the step that shows it (DOMAIN.md):
+ * Where a perception-reaction time comes from, for the step that shows it (docs/physics.md,
+ * "Perception-reaction and stopping distance"):
  * M. Green, Transportation Human Factors 2(3), 2000, for 0.7-0.75 s (fully expected), 1.25 s
  * (unexpected common event) and 1.5 s (surprise); AASHTO's 2.5 s design value; else the user's.
  */

@@ -1,6 +1,6 @@
 /**
- * The cautions every result is shown with, in the project's words (DOMAIN.md, "Cautions the tool
- * must show"). Screens, the report and `solve` all print this same list.
+ * The cautions every result is shown with, in the project's words (docs/physics.md,
+ * "Cautions"). Screens, the report and `solve` all print this same list.
  */
 export const CAUTIONS: readonly string[] = [
   'These figures are estimates for trained investigators; each is a minimum, not the speed.',

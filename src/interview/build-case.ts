@@ -141,8 +141,8 @@ function included(
 
 /**
  * What the look of the marks adds to each analysis that enters the case, by stored id: anti-lock
- * marks make the slide figure an estimate (common practice, DOMAIN.md). The case file has no field
- * for the look, so this is read from the answers.
+ * marks make the slide figure an estimate (common practice, docs/physics.md). The case file has no
+ * field for the look, so this is read from the answers.
  */
 export function lookNotes(state: InterviewState): Record<string, string[]> {
   const r = readAnswers(state.answers);

@@ -1,8 +1,9 @@
 /**
  * A downhill grade steeper than the segment's friction can hold means the vehicle could not have
- * slowed by sliding there (DOMAIN.md, "Grade": f × n + G <= 0). The engine refuses such a segment at
- * the review; this says so at the grade question itself, while the investigator is still on scene
- * or at the measurement, so the grade or the drag factor can be checked at once.
+ * slowed by sliding there (docs/physics.md, "Effective drag on a grade": f × n + G/100 <= 0). The
+ * engine refuses such a segment at the review; this says so at the grade question itself, while the
+ * investigator is still on scene or at the measurement, so the grade or the drag factor can be
+ * checked at once.
  */
 import { quantity, RULES } from '../case/quantity.js';
 import { spread } from '../engine/spread.js';

@@ -17,7 +17,7 @@ export const hasLimit = (a: Answers): boolean => typeof a.limit?.value === 'numb
 /** Bounds as the case file takes them (src/case/v1/extras-fields.ts). */
 const CONFLICT = { what: 'conflict point', min: 0, max: 100_000 };
 // The same bounds as the preference: a perception-reaction time under half a second is not credible
-// for a driver (DOMAIN.md: about 0.7 s even when fully expected).
+// for a driver (M. Green 2000: about 0.7 s even when fully expected; docs/physics.md).
 const REACTION = { what: 'reaction time', min: REACTION_TIME.min, max: REACTION_TIME.max };
 export const SAMPLES = { min: 1000, max: 1_000_000 };
 const SEED_MAX = 0xffffffff;

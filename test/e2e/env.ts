@@ -2,9 +2,9 @@
  * Environment and folders for programs the end-to-end tests start, so that a test never reads or
  * writes the developer's own preferences or sessions, and behaves the same on a laptop and in CI.
  */
-import { mkdtempSync, mkdirSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { mkdirSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
+import { trackedTempDir } from '../temp-dirs.js';
 
 /**
  * The parent's environment with what would change the program's behaviour removed: Ink renders
@@ -42,7 +42,7 @@ export interface Workspace {
 }
 
 export function makeWorkspace(prefix = 'skidcase-e2e-'): Workspace {
-  const root = mkdtempSync(join(tmpdir(), prefix));
+  const root = trackedTempDir(prefix);
   const sessions = join(root, 'sessions');
   const config = join(root, 'config');
   mkdirSync(sessions);

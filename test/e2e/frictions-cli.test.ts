@@ -1,4 +1,5 @@
-// Frictions met on the command line (issue 13), run through the built binary. Invented cases.
+// Frictions met on the command line (a word that is no command, solve's limit and range notes),
+// run through the built binary. Invented cases.
 import { afterAll, describe, expect, it } from 'vitest';
 import { spawn } from 'node:child_process';
 import { writeFileSync } from 'node:fs';

@@ -4,12 +4,12 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { fileURLToPath } from 'node:url';
 import { disposeAll, ptySupport, startTerm } from './harness.js';
 import { colourCodes, stripAnsi } from './ansi.js';
+import { describeInTerminal } from './pty-gate.js';
 
 const ECHO = fileURLToPath(new URL('./fixtures/echo-keys.mjs', import.meta.url));
 const pty = await ptySupport();
-if (!pty.ok) console.warn(`end-to-end harness tests skipped: ${pty.reason}`);
 
-describe.skipIf(!pty.ok)(`terminal harness${pty.ok ? '' : ` (skipped: ${pty.reason})`}`, () => {
+describeInTerminal('terminal harness', 'end-to-end harness tests', pty, () => {
   afterEach(disposeAll);
 
   it('shows the screen as drawn, after the program overwrote text in place', async () => {

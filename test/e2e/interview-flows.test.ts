@@ -1,9 +1,11 @@
-// Whole cases typed into the built binary in a real pseudo-terminal (issues 3, 4 and 5): the
-// figures on the review screen must equal `skidcase solve --json` on the file the program saved.
+// Whole cases typed into the built binary in a real pseudo-terminal (a whole case, resume after a
+// kill, the fast path): the figures on the review screen must equal `skidcase solve --json` on the
+// file the program saved.
 import { afterAll, afterEach, describe, expect, it } from 'vitest';
 import { existsSync, readFileSync } from 'node:fs';
 import { disposeAll, ptySupport, startTerm, type Term } from './harness.js';
 import { makeWorkspace, type Workspace } from './env.js';
+import { describeInTerminal } from './pty-gate.js';
 import { answerOrder, dryRun, squash, typeInterview, type Script } from './interview-driver.js';
 import {
   asShown,
@@ -27,7 +29,6 @@ import { firstOpenQuestion, currentQuestion } from '../../src/interview/derived.
 import { loadCaseText } from '../../src/case/load.js';
 
 const pty = await ptySupport();
-if (!pty.ok) console.warn(`interview end-to-end tests skipped: ${pty.reason}`);
 
 const spaces: Workspace[] = [];
 const workspace = () => {
@@ -64,19 +65,21 @@ const figures = (s: SolvedJson) =>
   s.analyses.map((a) => ({ kind: a.kind, speed: a.speed, minimum: a.minimum }));
 
 let oneGo: Promise<Awaited<ReturnType<typeof typeWhole>> & { solved: SolvedJson }> | undefined;
-/** Issue 3's case typed in one go; shared by the issue 3 and issue 4 tests. */
+/** The two-surface slide and yaw typed in one go; shared by the whole-case and resume tests. */
 const typedInOneGo = () =>
   (oneGo ??= typeWhole(TWO_SURFACES_AND_YAW).then(async (r) => ({
     ...r,
     solved: await solveJson(r.files[0]!),
   })));
 
-describe.skipIf(!pty.ok)(
-  `typing whole cases into the terminal${pty.ok ? '' : ` (skipped: ${pty.reason})`}`,
+describeInTerminal(
+  'typing whole cases into the terminal',
+  'interview end-to-end tests',
+  pty,
   () => {
     afterEach(disposeAll);
 
-    it('issue 3: a two-surface downhill slide with a partly failed brake and a banked yaw; the review equals solve --json of the saved file', async () => {
+    it('a two-surface downhill slide with a partly failed brake and a banked yaw; the review equals solve --json of the saved file', async () => {
       const { lines, files, solved } = await typedInOneGo();
       expect(files).toHaveLength(1);
       const shown = shownResults(lines);
@@ -103,7 +106,7 @@ describe.skipIf(!pty.ok)(
       expect(lines.join('\n')).toMatch(/Posted limit 40 mph/);
     }, 120_000);
 
-    it('issue 4: answer half, SIGKILL the terminal, `skidcase resume`, finish: nothing asked twice, result equal to the case typed in one go', async () => {
+    it('answer half, SIGKILL the terminal, `skidcase resume`, finish: nothing asked twice, result equal to the case typed in one go', async () => {
       const whole = await typedInOneGo();
       const ws = workspace();
       const order = answerOrder(TWO_SURFACES_AND_YAW);
@@ -112,8 +115,8 @@ describe.skipIf(!pty.ok)(
       await openNewCase(first, ws);
       await typeInterview(first, TWO_SURFACES_AND_YAW, { maxAnswers: half });
       const lastId = order[half - 1]!;
-      // Kill only once the save of the last answer has landed on disk, as issue 4 requires of a save
-      // that "had returned"; then the kill is as abrupt as a closed terminal window.
+      // Kill only once the save of the last answer has landed on disk (resuming is promised only
+      // for a save that had returned); then the kill is as abrupt as a closed terminal window.
       const file = await waitForSavedAnswer(ws, lastId);
       first.kill('SIGKILL');
       expect((await first.waitForExit()).signal).toBe(9);
@@ -151,7 +154,7 @@ describe.skipIf(!pty.ok)(
       expect(strip(readCase(file))).toEqual(strip(readCase(whole.files[0]!)));
     }, 180_000);
 
-    it('issue 5: the two-surface downhill slide by the fast path takes far fewer key presses than question by question, same figures; report written from the review', async () => {
+    it('the two-surface downhill slide by the fast path takes far fewer key presses than question by question, same figures; report written from the review', async () => {
       const slideKeys = { guided: 0, fast: 0 };
       const isSlide = (id: string) => /^a0\.(surfaces|segcount|quick|seg\d)/.test(id);
       const guided = await typeWhole(
@@ -166,7 +169,7 @@ describe.skipIf(!pty.ok)(
       const quick = await typeWhole(SLIDE_ONLY_QUICK);
       const [g, f] = await Promise.all([solveJson(guided.files[0]!), solveJson(fast.files[0]!)]);
       console.log(
-        `issue 5 key presses, whole case: question by question ${guided.keys}, fast path ${fast.keys}; ` +
+        `key presses, whole case: question by question ${guided.keys}, fast path ${fast.keys}; ` +
           `the two segments alone: ${slideKeys.guided} question by question (labels typed), ${slideKeys.fast} on one line (no labels); ` +
           `same case with labels, segments on one line: ${quick.keys}`,
       );

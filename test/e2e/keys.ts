@@ -1,6 +1,6 @@
 /**
  * Bytes a terminal sends for the keys the end-to-end tests press, as an xterm-compatible terminal
- * (and tmux) sends them in normal cursor mode. Names follow STYLE.md's test conventions.
+ * (and tmux) sends them in normal cursor mode. Names follow the test conventions in DEVELOPERS.md.
  */
 export const KEYS = {
   enter: '\r',

@@ -78,7 +78,7 @@ const YAW: Script = {
   'sampling.shape': 'none',
 };
 
-/** Issue 3: the two-surface downhill slide with a partly failed brake, and a banked yaw. */
+/** The two-surface downhill slide with a partly failed brake, and a banked yaw. */
 export const TWO_SURFACES_AND_YAW: Script = {
   ...CASE,
   ...VEHICLE,
@@ -88,7 +88,7 @@ export const TWO_SURFACES_AND_YAW: Script = {
   ...YAW,
 };
 
-/** Issue 5: the slide alone, answered question by question. */
+/** The slide alone, answered question by question (the guided path). */
 export const SLIDE_ONLY_GUIDED: Script = {
   ...CASE,
   ...VEHICLE,
@@ -100,7 +100,7 @@ export const SLIDE_ONLY_GUIDED: Script = {
 };
 
 /**
- * Issue 5: the same slide as an experienced investigator enters it: Enter for every default and
+ * The same slide as an experienced investigator enters it (the fast path): Enter for every default and
  * every optional text, the segments on one line (no labels). Same measurements, same figures.
  */
 export const SLIDE_ONLY_FAST: Script = {

@@ -1,4 +1,4 @@
-// Terminal edge cases (issue 7): no TTY, NO_COLOR, 60 columns, a resize in the middle of a
+// Terminal edge cases: no TTY, NO_COLOR, 60 columns, a resize in the middle of a
 // question. The built binary, in a real pseudo-terminal where there is one.
 import { afterAll, afterEach, describe, expect, it } from 'vitest';
 import { spawn } from 'node:child_process';
@@ -8,6 +8,7 @@ import { readFileSync } from 'node:fs';
 import { caseFiles } from './review.js';
 import { loadCaseText } from '../../src/case/load.js';
 import { colourCodes } from './ansi.js';
+import { describeInTerminal } from './pty-gate.js';
 import { squash, typeInterview, type Script } from './interview-driver.js';
 
 /** The case questions answered with Enter (all optional) and imperial units. */
@@ -65,7 +66,6 @@ describe('without a terminal', () => {
 });
 
 const pty = await ptySupport();
-if (!pty.ok) console.warn(`terminal edge tests skipped: ${pty.reason}`);
 
 /** Opens the home screen and starts a new case, landing on the first question. */
 async function newCase(t: Term, where: Workspace = ws) {
@@ -76,7 +76,7 @@ async function newCase(t: Term, where: Workspace = ws) {
   return t.waitFor(/Case or report reference/, { what: 'the first question' });
 }
 
-describe.skipIf(!pty.ok)(`in a terminal${pty.ok ? '' : ` (skipped: ${pty.reason})`}`, () => {
+describeInTerminal('in a terminal', 'terminal edge tests', pty, () => {
   afterEach(disposeAll);
 
   it('with NO_COLOR set, writes no colour codes on the home screen, a question or an error; without it, does', async () => {

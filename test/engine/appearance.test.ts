@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { loadCase } from '../../src/case/load.js';
 import { solveCase } from '../../src/engine/index.js';
 
-// DOMAIN.md, "Marks": the caveats for ABS, skip and gap skids are common practice.
+// docs/physics.md, "Look of the marks": the caveats for ABS, skip and gap skids are common practice.
 const base = (appearance?: string) => ({
   format: 'skidcase-case',
   version: 1,

@@ -61,7 +61,7 @@ describe('braking efficiency as a decimal (common practice)', () => {
 });
 
 describe('per-wheel sum with the front axle share (common practice)', () => {
-  it('common practice: front axle 60%, rear brakes not working: n = 0.60 (DOMAIN.md example shape)', () => {
+  it('common practice: front axle 60%, rear brakes not working: n = 0.60 (static weight shares)', () => {
     const e = brakingEfficiency({
       frontAxleShare: 0.6,
       brakes: { mode: 'wheels', frontLeft: 1, frontRight: 1, rearLeft: 0, rearRight: 0 },

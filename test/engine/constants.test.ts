@@ -19,16 +19,16 @@ describe('trade constants from first principles (mathjs units)', () => {
     expect(unit(1, 'mi').toNumber('ft')).toBeCloseTo(5280, 9);
   });
 
-  it('S² = C d f: C = 2g in mph²/ft is within 0.2% of 30', () => {
+  it('S² = C d f: C = 2g in mph²/ft is 29.91, within 0.3% of 30 in S² and 0.2% in S', () => {
     const C = g2.toNumber('mi^2/(h^2 ft)');
-    expect(C).toBeCloseTo(29.91, 2); // DOMAIN.md check value 29.91
+    expect(C).toBeCloseTo(29.91, 2); // 2 × 32.174 × (3600/5280)² = 29.91
     expect(rel(tradeConstants('imperial').slide, C)).toBeLessThan(0.003); // 30 vs 29.91 is 0.29% in S², 0.15% in S
     expect(rel(Math.sqrt(tradeConstants('imperial').slide), Math.sqrt(C))).toBeLessThan(0.002);
   });
 
-  it('S² = C d f: C = 2g in (km/h)²/m is within 0.2% of 254', () => {
+  it('S² = C d f: C = 2g in (km/h)²/m is 254.19, within 0.2% of 254 in S²', () => {
     const C = g2.toNumber('km^2/(h^2 m)');
-    expect(C).toBeCloseTo(254.19, 2); // DOMAIN.md check value 254.19
+    expect(C).toBeCloseTo(254.19, 2); // 2 × 9.80665 × 3.6² = 254.19
     expect(rel(tradeConstants('metric').slide, C)).toBeLessThan(0.002);
   });
 

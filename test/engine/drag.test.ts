@@ -77,7 +77,7 @@ describe('drag factor sources', () => {
   });
 });
 
-describe('drag factor reference table: exactly the rows in DOMAIN.md, marked by how well known', () => {
+describe('drag factor reference table: the Baker 1975 rows (via Fricke 1990) and Noon 1994 figures, marked by how well known', () => {
   // Northwestern University Traffic Institute table (J. S. Baker 1975, reprinted in L. B. Fricke 1990):
   // rows seen in a reprint.
   it('dry asphalt rows seen in a reprint', () => {

@@ -42,7 +42,7 @@ describe('number formatting', () => {
   });
 });
 
-describe('cautions (DOMAIN.md, "Cautions the tool must show")', () => {
+describe('cautions every result is shown with', () => {
   it('say minimum, verify the drag factor, agency procedures and law, qualified person, no fault', () => {
     const all = CAUTIONS.join(' ');
     expect(all).toMatch(/minimum, not the speed/);

@@ -80,7 +80,7 @@ describe('first-principles SI integration against the combined-speed result', ()
     v.forEach((vi, i) => expect(rel(vi / KMH, b[i]!.speed.value)).toBeLessThan(0.001));
   });
 
-  it('with the exact slope (f n cos θ + sin θ) it stays within 0.5% below a 10% grade (DOMAIN.md)', () => {
+  it('with the exact slope (f n cos θ + sin θ) it stays within 0.5% below a 10% grade', () => {
     const v = integrateBack(endKmh * KMH, segs, n, true);
     v.forEach((vi, i) => expect(rel(vi / KMH, b[i]!.speed.value)).toBeLessThan(0.005));
   });

@@ -2,8 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { solveCase } from '../../src/engine/index.js';
 import { caseOf } from './helpers.js';
 
-// The skid model that sensitivity and sampling call in loops, against DOMAIN.md's several-surface
-// formula written out here: S² = S_end² + 30 Σ d_i (f_i n + G_i/100) (mph, ft). Invented scenario.
+// The skid model that sensitivity and sampling call in loops, against the several-surface
+// formula (docs/physics.md) written out here: S² = S_end² + 30 Σ d_i (f_i n + G_i/100) (mph, ft). Invented scenario.
 const S = (segs: [number, number, number][], n: number, end = 0) =>
   Math.sqrt(end * end + 30 * segs.reduce((a, [d, f, G]) => a + d * (f * n + G / 100), 0));
 

@@ -4,7 +4,7 @@ import type { AnalysisSolution } from '../../src/engine/types.js';
 import { caseOf } from './helpers.js';
 
 // A yaw analysis measured by offsets along a chord instead of one middle ordinate. The arcs are
-// generated here from a known radius with circle geometry (DOMAIN.md: R = C²/(8M) + M/2, any
+// generated here from a known radius with circle geometry (R = C²/(8M) + M/2, any
 // circle): with the chord's midpoint at x = C/2, the mark's offset from the chord at x is
 // y(x) = sqrt(R² − (x − C/2)²) − (R − M), M = R − sqrt(R² − (C/2)²). Invented scenarios.
 
@@ -53,7 +53,7 @@ describe('yaw from offsets, solved end to end', () => {
       });
       const [byChord, byOffsets] = solvedAll(c);
       expect(Math.abs(byOffsets!.speed.value - byChord!.speed.value)).toBeLessThan(1e-6);
-      // S = sqrt(K × R_path × (f + e)/(1 − f e)), K = 15 (mph, ft) or 127 (km/h, m) (DOMAIN.md).
+      // S = sqrt(K × R_path × (f + e)/(1 − f e)), K = 15 (mph, ft) or 127 (km/h, m) (docs/physics.md, "Critical speed").
       const K = units === 'imperial' ? 15 : 127;
       const Rp = R - (track ?? 0) / 2;
       const f = 0.74;
@@ -91,7 +91,7 @@ describe('yaw from offsets, solved end to end', () => {
     });
     const [s] = solvedAll(c);
     expect(s!.model.inputs.map((i) => i.key)).toEqual(['R', 'f']);
-    // DOMAIN.md: S = sqrt(15 × f × R), mph and ft.
+    // Critical speed: S = sqrt(15 × f × R), mph and ft.
     expect(s!.model.evaluate({ R: 150, f: 0.5 })).toBeCloseTo(Math.sqrt(15 * 0.5 * 150), 9);
     expect(s!.radius?.value).toBeCloseTo(120, 6);
   });

@@ -96,7 +96,7 @@ describe('critical speed', () => {
 });
 
 describe('sensitivity to the middle ordinate', () => {
-  it('1 inch on a 4-inch ordinate moves R by about 25% and S by about 12% (DOMAIN.md rule of thumb)', () => {
+  it('1 inch on a 4-inch ordinate moves R by about 25% and S by about 12% (dR/R ≈ −dM/M, from R = C²/(8M) + M/2)', () => {
     // M = 4 in = 1/3 ft on a 30 ft chord; dR/R ≈ −dM/M = −25%; S ∝ sqrt(R) → about −11 to −13%.
     const s = ordinateSensitivity(30, 4 / 12, 0.7, 0, 'imperial');
     if (!s) throw new Error('no sensitivity');

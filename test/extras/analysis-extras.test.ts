@@ -52,7 +52,7 @@ describe('analysisExtras: what applies to an analysis, and only that', () => {
     });
     const x = analysisExtras(c, solved(c));
     expect(x.limit).toBeUndefined();
-    // R = 40²/(8 × 2) + 2/2 = 101 ft (DOMAIN.md circle geometry): one station at the middle is
+    // R = 40²/(8 × 2) + 2/2 = 101 ft (circle geometry): one station at the middle is
     // the middle ordinate.
     expect(x.offsets?.ok && x.offsets.value.radius.value).toBeCloseTo(101, 9);
   });

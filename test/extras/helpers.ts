@@ -25,7 +25,7 @@ export function solved(c: Case, i = 0): AnalysisSolution {
 }
 
 /**
- * A slide-to-stop model written here from DOMAIN.md's formula S = sqrt(30 d f n), independent of
+ * A slide-to-stop model written here from the formula S = sqrt(30 d f n) (docs/physics.md), independent of
  * the engine: the reference the extras are checked against.
  */
 export function slideToStopModel(

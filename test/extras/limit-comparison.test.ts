@@ -1,6 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { limitComparison, type LimitComparison } from '../../src/extras/limit-comparison.js';
 import type { Case } from '../../src/case/load.js';
+import {
+  AASHTO_F_SI,
+  AASHTO_F_US,
+  AASHTO_T,
+  STOPPING_METRIC,
+  STOPPING_ON_GRADE,
+  STOPPING_US,
+} from '../engine/aashto-rows.js';
 import { caseOf, clean, rel, solved } from './helpers.js';
 
 const K = 5280 / 3600; // ft/s per mph, exact
@@ -35,52 +43,37 @@ const oneSurface = (
   });
 
 // AASHTO, A Policy on Geometric Design of Highways and Streets (Green Book 2011/2018), Table 3-1,
-// stopping sight distance, t = 2.5 s, a = 11.2 ft/s² (a/g = 0.348): reaction + braking columns
-// (DOMAIN.md). Our reaction uses 5280/3600 exactly (AASHTO 1.47) and braking S²/(30 f): DOMAIN.md
-// says within 0.5% of the AASHTO braking column.
-const table31 = [
-  { V: 30, reaction: 110.3, braking: 86.4 },
-  { V: 40, reaction: 147.0, braking: 153.6 },
-  { V: 50, reaction: 183.8, braking: 240.0 },
-  { V: 60, reaction: 220.5, braking: 345.5 },
-  { V: 70, reaction: 257.3, braking: 470.3 },
-];
-
-describe('stopping distance at the posted limit vs AASHTO Green Book Table 3-1 (f = 0.348, n = 1, t = 2.5 s)', () => {
-  for (const row of table31)
+// stopping sight distance, t = 2.5 s, a = 11.2 ft/s² (a/g = 0.348): the reaction and braking
+// figures of AASHTO's formula (the rows in test/engine/aashto-rows.ts; docs/physics.md, "Check
+// values"). Our reaction uses 5280/3600 exactly (AASHTO 1.47) and braking S²/(30 f), within 0.5%
+// of AASHTO's braking term.
+describe("stopping distance at the posted limit vs AASHTO's stopping sight distance formula (f = 0.348, n = 1, t = 2.5 s)", () => {
+  for (const row of STOPPING_US)
     it(`${row.V} mph: ${row.reaction} + ${row.braking} ft`, () => {
-      const r = run(oneSurface(row.V, 0.348, 0), 2.5);
+      const r = run(oneSurface(row.V, AASHTO_F_US, 0), AASHTO_T);
       expect(rel(r.atLimit.reactionDistance, row.reaction)).toBeLessThan(0.003);
       expect(rel(r.atLimit.brakingDistance.value, row.braking)).toBeLessThan(0.005);
       expect(rel(r.atLimit.stoppingDistance.value, row.reaction + row.braking)).toBeLessThan(0.005);
     });
 
   // Metric rows of Table 3-1: 0.278 V t + 0.039 V²/a, a = 3.4 m/s²; 50 km/h 34.8 + 28.7 m,
-  // 100 km/h 69.5 + 114.7 m (DOMAIN.md). AASHTO's 0.039 is 1/(2 × 3.6²) = 0.0386 rounded up, so
+  // 100 km/h 69.5 + 114.7 m. AASHTO's 0.039 is 1/(2 × 3.6²) = 0.0386 rounded up, so
   // its braking column sits about 1% above S²/(254 f) with f = 3.4 / 9.80665: tolerance 1.2%.
-  for (const row of [
-    { V: 50, reaction: 34.8, braking: 28.7 },
-    { V: 100, reaction: 69.5, braking: 114.7 },
-  ])
+  for (const row of STOPPING_METRIC)
     it(`${row.V} km/h: ${row.reaction} + ${row.braking} m`, () => {
-      const r = run(oneSurface(row.V, 3.4 / 9.80665, 0, 'metric'), 2.5);
+      const r = run(oneSurface(row.V, AASHTO_F_SI, 0, 'metric'), AASHTO_T);
       expect(rel(r.atLimit.reactionDistance, row.reaction)).toBeLessThan(0.003);
       expect(rel(r.atLimit.brakingDistance.value, row.braking)).toBeLessThan(0.012);
       expect(rel(r.atLimit.stoppingDistance.value, row.reaction + row.braking)).toBeLessThan(0.012);
     });
 });
 
-describe('AASHTO Green Book Table 3-2, grades (DOMAIN.md; reaction included, rounded up to the foot)', () => {
-  it('60 mph on a 6% downgrade: 638 ft', () => {
-    expect(
-      rel(run(oneSurface(60, 0.348, -6), 2.5).atLimit.stoppingDistance.value, 638),
-    ).toBeLessThan(0.005);
-  });
-  it('60 mph on a 6% upgrade: 515 ft', () => {
-    expect(
-      rel(run(oneSurface(60, 0.348, 6), 2.5).atLimit.stoppingDistance.value, 515),
-    ).toBeLessThan(0.005);
-  });
+describe("AASHTO's formula for stopping distance on grades (Green Book Table 3-2; reaction included, rounded up to the foot)", () => {
+  for (const row of STOPPING_ON_GRADE)
+    it(`${row.V} mph on a ${Math.abs(row.grade)}% ${row.grade < 0 ? 'downgrade' : 'upgrade'}: ${row.distance} ft`, () => {
+      const r = run(oneSurface(row.V, AASHTO_F_US, row.grade), AASHTO_T);
+      expect(rel(r.atLimit.stoppingDistance.value, row.distance)).toBeLessThan(0.005);
+    });
 });
 
 describe('a hand-worked case (invented numbers)', () => {

@@ -56,7 +56,7 @@ describe('exact arcs: the fitted radius is the true radius (circle geometry)', (
     );
   });
 
-  it('one station at the middle gives R = C²/(8M) + M/2 (DOMAIN.md) and a warning that nothing checks the shape', () => {
+  it('one station at the middle gives R = C²/(8M) + M/2 (circle geometry) and a warning that nothing checks the shape', () => {
     // Chord 40 ft, middle ordinate 2.0 ft: R = 1600/16 + 1 = 101.0 ft.
     const fit = must(fitCircleToOffsets(40, [{ at: 20, offset: 2 }]));
     expect(fit.radius).toBeCloseTo(101, 9);

@@ -46,7 +46,7 @@ describe('sampleSpeeds', () => {
   });
 
   it.each(['uniform', 'normal'] as const)(
-    '%s: percentiles lie within the low and high speeds (DOMAIN.md: monotone formula)',
+    '%s: percentiles lie within the low and high speeds (the formula is monotone)',
     (shape) => {
       // Low and high ends by hand: sqrt(30 × 98 × 0.6 × 0.95) and sqrt(30 × 102 × 0.8 × 1).
       const low = Math.sqrt(30 * 98 * 0.6 * 0.95);

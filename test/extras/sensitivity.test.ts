@@ -4,10 +4,10 @@ import { sensitivityBars } from '../../src/extras/sensitivity-bars.js';
 import { textWidth } from '../../src/extras/text-fit.js';
 import { caseOf, clean, slideToStopModel, solved } from './helpers.js';
 
-// Reference formula: slide to stop S = sqrt(30 d f n) (DOMAIN.md), evaluated here by hand.
+// Reference formula: slide to stop S = sqrt(30 d f n) (docs/physics.md, "Slide to stop"), evaluated here by hand.
 const S = (d: number, f: number, n: number) => Math.sqrt(30 * d * f * n);
 
-describe('sensitivity of a slide to stop (model written from DOMAIN.md)', () => {
+describe('sensitivity of a slide to stop (model written from the physics, not the engine)', () => {
   const model = slideToStopModel([100, 99, 101], [0.7, 0.6, 0.8], [1, 1, 1]);
   const rows = sensitivity({ model });
 
@@ -51,7 +51,7 @@ describe('sensitivity through the engine (yaw: the middle ordinate lowers the sp
     ],
   });
   const rows = sensitivity(solved(c));
-  // Independent: R = C²/(8M) + M/2, S = sqrt(15 f R) (DOMAIN.md, circle geometry).
+  // Independent: R = C²/(8M) + M/2, S = sqrt(15 f R) (circle geometry).
   const yaw = (C: number, M: number, f: number) => Math.sqrt(15 * f * ((C * C) / (8 * M) + M / 2));
 
   it('matches direct evaluation at each end', () => {
@@ -130,7 +130,7 @@ describe('sensitivity through the engine (two segments with a grade)', () => {
     ],
   });
   const rows = sensitivity(solved(c));
-  // Combined speed (DOMAIN.md): S² = 30 Σ d_i (f_i n + G_i/100), written out here.
+  // Combined speed (docs/physics.md, "Several surfaces"): S² = 30 Σ d_i (f_i n + G_i/100), written out here.
   const S2 = (f0: number, G1: number) => Math.sqrt(30 * (50 * f0 + 25 * (0.45 + G1 / 100)));
   it('matches the combined-speed formula at each end', () => {
     const G = rows.find((r) => r.key === 'G[1]')!;

@@ -3,7 +3,7 @@ import { yawFromOffsets } from '../../src/extras/yaw-offsets.js';
 import { caseOf } from './helpers.js';
 
 // Invented yaw mark on a 101 ft circle, chord 40 ft: middle ordinate 2.0 ft (R = 40²/(8 × 2) + 2/2
-// = 101, DOMAIN.md); offsets at 10 and 30 ft from Pythagoras: sqrt(101² − 10²) − 99.
+// = 101, circle geometry); offsets at 10 and 30 ft from Pythagoras: sqrt(101² − 10²) − 99.
 const off10 = Math.sqrt(101 ** 2 - 10 ** 2) - 99;
 const yaw = (extra: Record<string, unknown> = {}) => ({
   id: 'yaw-1',
@@ -21,7 +21,7 @@ const yaw = (extra: Record<string, unknown> = {}) => ({
 });
 
 describe('critical speed from offsets', () => {
-  it('an exact arc gives the chord-and-ordinate figure: S = sqrt(15 × 0.70 × 101) = 32.57 mph (DOMAIN.md)', () => {
+  it('an exact arc gives the chord-and-ordinate figure: S = sqrt(15 × 0.70 × 101) = 32.57 mph (critical speed)', () => {
     const r = yawFromOffsets(caseOf({ analyses: [yaw()] }), 'yaw-1');
     if (!r.ok || !r.value) throw new Error('no result');
     expect(r.value.radius.value).toBeCloseTo(101, 9);

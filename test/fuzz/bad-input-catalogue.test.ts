@@ -1,4 +1,4 @@
-// The catalogue of bad inputs (issue 7), through every numeric question of the interview: what
+// The catalogue of bad inputs, through every numeric question of the interview: what
 // the investigator types, and what the message must tell them. The fragments say what a person
 // needs to read (what is wrong, what is expected), not the exact wording.
 import { describe, expect, it } from 'vitest';
@@ -13,7 +13,7 @@ import {
   type AtQuestion,
 } from './question-states.js';
 
-/** How a question family takes numbers, from the domain (docs/case-file.md, DOMAIN.md). */
+/** How a question family takes numbers, from the domain (docs/case-file.md, docs/physics.md). */
 interface Traits {
   /** An empty answer is fine (optional, or Enter takes an offered default). */
   emptyOk?: boolean;
@@ -56,7 +56,8 @@ const TRAITS: Record<string, Traits> = {
   'a#.offsets.chord': {},
   'a#.offsets.stations': { stations: true },
   'a#.conflict': { emptyOk: true, zeroOk: true, single: true },
-  // Perception-reaction time: DOMAIN.md's values run from about 0.7 s to 2.5 s; 0 s is not one.
+  // Perception-reaction time: published values (Green 2000, AASHTO) run from about 0.7 s to 2.5 s;
+  // 0 s is not one.
   'a#.reaction': { emptyOk: true, single: true },
   'sampling.samples': { emptyOk: true, count: true },
   'sampling.seed': { emptyOk: true, count: true, zeroOk: true },

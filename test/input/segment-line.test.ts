@@ -119,7 +119,7 @@ describe('parseSegmentLine: accepted lines', () => {
   });
 
   it('takes a reference table row by key, with the range of the table', () => {
-    // Loose gravel 0.40-0.70: Baker table (1975) row, from memory (verify before use), as in DOMAIN.md.
+    // Loose gravel 0.40-0.70: Baker table (1975) row, from memory (verify before use).
     const r = parseSegmentLine('22 @gravel-loose', imperial);
     expect(r).toEqual({
       ok: true,
@@ -135,7 +135,7 @@ describe('parseSegmentLine: accepted lines', () => {
 
   it('takes the speed band of a two-band row from the key or from the context', () => {
     // Dry travelled asphalt, over 30 mph 0.55-0.70, under 30 mph 0.60-0.80: Baker table (1975),
-    // seen in a reprint (Fricke 1990), as in DOMAIN.md.
+    // seen in a reprint (Fricke 1990).
     const over = {
       source: 'table',
       surface: 'asphalt-dry-travelled',

@@ -3,7 +3,7 @@ import { loadCase } from '../../src/case/load.js';
 import { buildCase, stateFromCase } from '../../src/interview/index.js';
 import { solveCase } from '../../src/engine/index.js';
 
-// The look of the marks (DOMAIN.md, "Marks") travels from the interview into the case file, so the
+// The look of the marks (docs/physics.md, "Look of the marks") travels from the interview into the case file, so the
 // chain that solve and the report print carries its common-practice caveat.
 const handWritten = (appearance?: string) => ({
   format: 'skidcase-case',

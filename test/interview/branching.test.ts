@@ -108,7 +108,7 @@ describe('branching on the brakes', () => {
     let s = type(atBrakes(), 'w');
     const share = currentQuestion(s)!;
     expect(share.id).toBe('vehicle.share');
-    // Typical front-axle share 0.55-0.65 of front-engine cars (common practice; from memory), DOMAIN.md
+    // Typical front-axle share 0.55-0.65 of front-engine cars (common practice; from memory)
     expect(defaultTextOf(share, s.answers)).toBe('0.55-0.65');
     expect(share.help.how).toContain('common practice; from memory');
     expect(share.help.why).toContain('overstates n');
@@ -150,7 +150,7 @@ describe('branching inside an analysis', () => {
     let s = type(atSource(), 't');
     const surface = currentQuestion(s)!;
     const row = surface.choices!.find((c) => c.value === 'asphalt-dry-travelled')!;
-    // NU Traffic Institute table via Fricke 1990, dry asphalt travelled: 0.60-0.80 under / 0.55-0.70 over 30 mph (DOMAIN.md)
+    // NU Traffic Institute table via Fricke 1990, dry asphalt travelled: 0.60-0.80 under / 0.55-0.70 over 30 mph (seen in the reprint)
     expect(row.hint).toContain('under 30 mph 0.60-0.80, over 30 mph 0.55-0.70');
     expect(row.hint).toContain('Baker');
     s = type(s, row.key);

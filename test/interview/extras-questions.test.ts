@@ -64,7 +64,7 @@ describe('a yaw radius measured by offsets', () => {
     });
     const sol = solveCase(c).analyses[0]!;
     if (!sol.ok) throw new Error(sol.reason);
-    // S = sqrt(15 f R) = sqrt(15 × 0.7 × 101) = 32.57 mph (critical speed, DOMAIN.md)
+    // S = sqrt(15 f R) = sqrt(15 × 0.7 × 101) = 32.57 mph (critical speed)
     expect(sol.solution.speed.value).toBeCloseTo(32.57, 1);
   });
 
@@ -122,7 +122,7 @@ describe('time and distance for a slide', () => {
     const q = currentQuestion(s)!;
     expect(q.id).toBe('a0.reaction');
     expect(q.usesPreference).toBe('reactionTime');
-    // 1.5 s for a surprise (M. Green 2000) and AASHTO's 2.5 s design value, as DOMAIN.md gives them
+    // 1.5 s for a surprise (M. Green 2000) and AASHTO's 2.5 s design value
     expect(q.help.why).toContain('1.5 s');
     expect(q.help.why).toContain('Green');
     expect(q.help.why).toContain('2.5 s');

@@ -103,8 +103,8 @@ describe('a case typed through the interview gives the figures of the same case 
     const typed = speedOf(solveCase(built).analyses[0]);
     const hand = speedOf(solveCase(HAND).analyses[0]);
     expect(typed).toEqual(hand);
-    // Independent: n = 0.6/2 (1 + 1) + 0.4/2 (0 + 0.5) = 0.70 (static weight shares, DOMAIN.md);
-    // S^2 = 30 sum d_i (f_i n + G_i), C = 30 for mph and ft (DOMAIN.md, trade constant).
+    // Independent: n = 0.6/2 (1 + 1) + 0.4/2 (0 + 0.5) = 0.70 (static weight shares);
+    // S^2 = 30 sum d_i (f_i n + G_i), C = 30 for mph and ft (the trade constant, 2 g (3600/5280)² = 29.91 rounded).
     const n = 0.7;
     const S = (f1: number, f2: number) =>
       Math.sqrt(30 * (52 * (f1 * n - 0.03) + 24 * (f2 * n - 0.01)));
@@ -119,7 +119,7 @@ describe('a case typed through the interview gives the figures of the same case 
     const hand = speedOf(solveCase(HAND).analyses[1]);
     expect(typed).toEqual(hand);
     // Independent: R = C^2/(8M) + M/2 = 1600/20 + 1.25 = 81.25 ft (circle geometry);
-    // S = sqrt(15 R (f + e) / (1 - f e)) (DOMAIN.md, banked curve).
+    // S = sqrt(15 R (f + e) / (1 - f e)) (critical speed on a banked curve).
     const S = (f: number) => Math.sqrt((15 * 81.25 * (f + 0.04)) / (1 - f * 0.04));
     expect(typed.value).toBeCloseTo(S(0.7), 6);
     expect(typed.low).toBeCloseTo(S(0.65), 6);
@@ -156,7 +156,7 @@ describe('a metric yaw, banked away from the centre, with sled pulls and the cen
     const got = speedOf(solveCase(buildCase(s, { id: 'metric-yaw' })).analyses[0]);
     // Independent: R = 15²/(8 × 0.9) + 0.9/2 = 31.7 m; path R - T/2 = 30.9 m (common practice);
     // f_i = pull / weight, mean and extremes (case-file format); e = -0.02 (away from the centre);
-    // S = sqrt(127 R (f + e) / (1 - f e)) (DOMAIN.md, metric).
+    // S = sqrt(127 R (f + e) / (1 - f e)) (banked curve, metric).
     const R = 15 ** 2 / (8 * 0.9) + 0.9 / 2 - 1.6 / 2;
     const S = (f: number) => Math.sqrt((127 * R * (f - 0.02)) / (1 + f * 0.02));
     expect(got.value).toBeCloseTo(S((25 + 24.5 + 26) / 3 / 34), 6);

@@ -108,7 +108,7 @@ describe('wheel by wheel brakes come to a braking efficiency on screen', () => {
   it('one rear wheel at half, share 0.55-0.65: n = 0.75 + 0.25 × share', () => {
     const s = fillUntil(start(), { units: 'f', 'a0.look': 'd' }, 'vehicle.brakes');
     // Front wheels full, rear 0.5 and 1: n = share/2 × 2 + (1 − share)/2 × 1.5 = 0.75 + 0.25 share,
-    // so 0.8875 at 0.55, 0.9 at 0.6 and 0.9125 at 0.65 (worked by hand from DOMAIN.md's formula).
+    // so 0.8875 at 0.55, 0.9 at 0.6 and 0.9125 at 0.65 (worked by hand from the static-share formula).
     const partway = type(s, 'w', '0.55-0.65', 'w', 'w', 'p', '0.5');
     expect(partway.notice).toBeUndefined();
     const done = type(partway, 'w');

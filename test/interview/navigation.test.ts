@@ -48,7 +48,7 @@ describe('back, forward, jump and edits', () => {
     s = type(act(s, { type: 'jump', id: 'a0.seg0.drag.value' }), '0.56');
     // Nothing else is open, so the answer returns to the review.
     expect(s.cursor).toBe(REVIEW);
-    // S = sqrt(30 d f n): the speed scales with sqrt(f) (DOMAIN.md, slide to stop).
+    // S = sqrt(30 d f n): the speed scales with sqrt(f) (slide to stop).
     expect(speed(s) / first).toBeCloseTo(Math.sqrt(0.56 / 0.7), 10);
   });
 

@@ -103,7 +103,7 @@ describe('quick entry of segments', () => {
 
   it('takes a reference-table row and keeps it as a table drag factor', () => {
     const s = fill(type(atQuick(), '40 @gravel-loose -1%, 20 @0.3'), {});
-    // Loose gravel 0.40-0.70 (NU Traffic Institute table, from memory; DOMAIN.md): value the middle.
+    // Loose gravel 0.40-0.70 (NU Traffic Institute table, Baker 1975; from memory): value the middle.
     expect(skid(s).segments[0]!.drag).toEqual({
       source: 'table',
       surface: 'gravel-loose',

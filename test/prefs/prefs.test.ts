@@ -1,11 +1,11 @@
 import fs from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { trackedTempDir } from '../temp-dirs.js';
 import { CONFIG_DIR_ENV, DEFAULT_PREFS, loadPrefs, savePref } from '../../src/prefs/index.js';
 
 /** conf is always pointed at a fresh temp folder: the real user config is never touched. */
-const tempConf = () => fs.mkdtempSync(path.join(os.tmpdir(), 'skidcase-prefs-'));
+const tempConf = () => trackedTempDir('skidcase-prefs-');
 const file = (cwd: string) => path.join(cwd, 'config.json');
 
 describe('loadPrefs', () => {

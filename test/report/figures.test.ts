@@ -44,7 +44,7 @@ describe.each(CASES)('report figures equal solve --json: %s', (_name, file) => {
         expect(m[2]).toBe(shownAs(a.speed.value, 1));
         expect(m[3]).toBe(shownAs(a.speed.low, 1));
         expect(m[4]).toBe(shownAs(a.speed.high, 1));
-        // The "at least" figure is the low end rounded down (DOMAIN.md, common practice).
+        // The "at least" figure is the low end rounded down (common practice).
         expect(a.minimum).toBe(Math.floor(a.speed.low + 1e-9));
       });
     });

@@ -6,7 +6,7 @@ import { oracleCase } from './contract-oracle.js';
 import { runSolve } from './run-solve.js';
 
 // An outside checker's view of `skidcase solve --json`: hand-made cases (invented numbers) probing
-// the edges a literal reading of /work/shared/CASE-FORMAT.md implies, compared with the
+// the edges a literal reading of docs/case-file.md implies, compared with the
 // independent reader in contract-oracle.ts (written from that text, not from src/engine).
 
 type Json = Record<string, any>; // eslint-disable-line @typescript-eslint/no-explicit-any
@@ -76,7 +76,6 @@ function checkShape(a: Json) {
     expect(typeof s.why).toBe('string');
   }
   expect(Array.isArray(a.assumptions)).toBe(true);
-  expect(Array.isArray(a.warnings)).toBe(true);
 }
 
 /** Solves c and compares every figure with the oracle; returns the JSON for extra checks. */
@@ -97,6 +96,16 @@ async function agree(c: Json, minimum?: number[]): Promise<Json> {
     for (const k of ['value', 'low', 'high'] as const)
       near(a.speed[k], e.speed![k], `analyses[${i}].speed.${k}`);
     expect(a.minimum).toBe(minimum?.[i] ?? e.minimum);
+    const warned = (re: RegExp) => a.warnings.filter((w: string) => re.test(w)).length;
+    expect(warned(/drag factor .*above 1\.0/), `analyses[${i}] drag factor warning`).toBe(
+      e.warns.drag ? 1 : 0,
+    );
+    expect(warned(/marks differ by more than a quarter/), `analyses[${i}] marks warning`).toBe(
+      e.warns.marks ? 1 : 0,
+    );
+    expect(warned(/radius .* under (50 ft|15 m)/), `analyses[${i}] radius warning`).toBe(
+      e.warns.radius ? 1 : 0,
+    );
     if (e.mismatch !== undefined)
       expect(
         a.warnings.some((w: string) => /5%/.test(w)),
@@ -129,7 +138,7 @@ const fromMarks = (drag: Json = entered(0.7, 0.6, 0.8), grade?: unknown) => ({
   ...(grade !== undefined ? { grade } : {}),
 });
 
-describe('solve --json agrees with a literal reading of CASE-FORMAT.md', () => {
+describe('solve --json agrees with a literal reading of docs/case-file.md', () => {
   const cases: [string, Json, number[]?][] = [
     ['Q as a plain number', kase('imperial', [skid([fromMarks()], { marks: [64] })])],
     [
@@ -308,6 +317,19 @@ describe('solve --json agrees with a literal reading of CASE-FORMAT.md', () => {
       ]),
     ],
     ['yaw, level', kase('imperial', [yaw(47.5, 3.6, entered(0.7, 0.62, 0.78))])],
+    // The three plausibility warnings, each drawn by a figure just past its threshold.
+    [
+      'a drag factor whose high end is above 1.0 (warned of)',
+      kase('imperial', [skid([fromMarks(entered(0.95, 0.9, 1.05))], { marks: [64] })]),
+    ],
+    [
+      'marks whose longest is more than 1.25 times the shortest (warned of)',
+      kase('imperial', [skid([fromMarks()], { marks: [60, 76] })]),
+    ],
+    [
+      'a yaw radius under 15 m (warned of)',
+      kase('metric', [yaw(10, 0.9, entered(0.7, 0.62, 0.78))]),
+    ],
     [
       'yaw with spreads on chord and ordinate',
       kase('metric', [

@@ -1,4 +1,4 @@
-// An independent reader of /work/shared/CASE-FORMAT.md's formulas, written from that text alone
+// An independent reader of docs/case-file.md's formulas, written from that text alone
 // (it does not import src/engine). Ranges are found by brute force over every corner of the
 // inputs' ranges, so the engine's "each input at its matching end" shortcut is checked, not copied.
 
@@ -83,6 +83,18 @@ export interface OracleAnalysis {
   minimum?: number;
   /** Only for skid: true when the marks and the segments' sum differ by more than 5%. */
   mismatch?: boolean;
+  /**
+   * The plausibility warnings docs/case-file.md promises ("Warnings `solve` gives"): a drag factor
+   * with any end above 1.0, marks whose longest value is more than 1.25 times the shortest, a yaw
+   * radius (of the mark or of the path) under 50 ft or 15 m at its value.
+   */
+  warns: { drag: boolean; marks: boolean; radius: boolean };
+}
+
+const dragAboveOne = (ds: Ends[]) => ds.some((d) => Math.max(...d) > 1);
+function marksDisagree(marks: Q[] | undefined): boolean {
+  const vs = (marks ?? []).map((m) => ends(m)[0]);
+  return vs.length >= 2 && Math.max(...vs) > 1.25 * Math.min(...vs);
 }
 
 function oracleSkid(c: Json, a: Json): OracleAnalysis {
@@ -118,7 +130,12 @@ function oracleSkid(c: Json, a: Json): OracleAnalysis {
     }
     return Math.sqrt(s2);
   });
-  return speed ? { speed, minimum: Math.floor(speed.low), mismatch } : { mismatch };
+  const warns = {
+    drag: dragAboveOne(segs.map((s) => oracleDrag(s.drag, metric))),
+    marks: marksDisagree(a.marks),
+    radius: false,
+  };
+  return speed ? { speed, minimum: Math.floor(speed.low), mismatch, warns } : { mismatch, warns };
 }
 
 function oracleYaw(c: Json, a: Json): OracleAnalysis {
@@ -132,7 +149,14 @@ function oracleYaw(c: Json, a: Json): OracleAnalysis {
     if (!(m! < ch! / 2) || !(R > 0) || !(f! + e > 0) || !(1 - f! * e > 0)) return undefined;
     return Math.sqrt((K * R * (f! + e)) / (1 - f! * e));
   });
-  return speed ? { speed, minimum: Math.floor(speed.low) } : {};
+  const [ch, m] = [ends(a.chord)[0], ends(a.middleOrdinate)[0]];
+  const R = ch ** 2 / (8 * m) + m / 2 - (half ? ends(c.vehicle.trackWidth)[0] / 2 : 0);
+  const warns = {
+    drag: dragAboveOne([inputs[2]!]),
+    marks: false,
+    radius: R < (c.units === 'metric' ? 15 : 50),
+  };
+  return speed ? { speed, minimum: Math.floor(speed.low), warns } : { warns };
 }
 
 /** The oracle's answer for a case: the contract's figures, and whether every one is computable. */
@@ -143,7 +167,7 @@ export interface OracleCase {
   postedLimit?: { value: number; exceededAtMinimum: boolean };
 }
 
-/** What a careful reader of CASE-FORMAT.md expects `solve --json` to print for a valid case. */
+/** What a careful reader of docs/case-file.md expects `solve --json` to print for a valid case. */
 export function oracleCase(c: Json): OracleCase {
   const analyses = (c.analyses as Json[]).map((a) =>
     a.kind === 'skid' ? oracleSkid(c, a) : oracleYaw(c, a),

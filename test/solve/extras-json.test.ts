@@ -80,7 +80,7 @@ describe('solve --json: the extras per analysis', () => {
     expect(out.warnings).toEqual([]); // the new fields are known: no "not a field" warning
   });
 
-  it('sensitivity rows: speeds at each end from S = sqrt(30 d f n) (DOMAIN.md), largest swing first', async () => {
+  it('sensitivity rows: speeds at each end from S = sqrt(30 d f n) (slide to stop), largest swing first', async () => {
     const rows = (await json(doc())).analyses[0]!.sensitivity as {
       key: string;
       speedAtLow: number;
@@ -138,7 +138,7 @@ describe('solve --json: the extras per analysis', () => {
     expect(td).toEqual(JSON.parse(JSON.stringify(expected.value)));
     expect(td.reactionTime).toBe(1.5);
     expect(td.reactionSource).toMatch(/solve does not read the preferences/);
-    // Independent figures at the limit, DOMAIN.md: reaction distance 1.466 × S × t (5280/3600
+    // Independent figures at the limit (docs/physics.md): reaction distance 1.466 × S × t (5280/3600
     // exactly), braking distance S² / (30 (f n + G)).
     expect(td.atLimit.reactionDistance).toBeCloseTo((5280 / 3600) * 30 * 1.5, 9);
     expect(td.atLimit.brakingDistance.value).toBeCloseTo(30 ** 2 / (30 * 0.72 * 0.9), 9);

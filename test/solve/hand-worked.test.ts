@@ -61,7 +61,8 @@ describe('imperial skid, two marks averaged, stop (hand-worked)', () => {
       for (const k of ['name', 'formula', 'inputs', 'result', 'unit', 'why', 'substituted'])
         expect(s).toHaveProperty(k);
     expect(a.assumptions.length).toBeGreaterThan(0);
-    expect(Array.isArray(a.warnings)).toBe(true);
+    // Drag 0.70-0.80, marks 70 and 74 ft (74/70 = 1.06, under 1.25), all brakes: nothing to warn of.
+    expect(a.warnings).toEqual([]);
   });
   it('prints the chain with the numbers substituted and "at least"', async () => {
     const r = await runSolve(fixture('skid-imperial-two-marks.json'));

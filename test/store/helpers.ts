@@ -1,11 +1,10 @@
 import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
 import type { Case } from '../../src/case/load.js';
+import { trackedTempDir } from '../temp-dirs.js';
 
-/** A fresh temp folder per test; never the real sessions folder. */
+/** A fresh temp folder per test, removed after the test file; never the real sessions folder. */
 export function tempDir(tag = 'store'): string {
-  return fs.mkdtempSync(path.join(os.tmpdir(), `skidcase-${tag}-`));
+  return trackedTempDir(`skidcase-${tag}-`);
 }
 
 /**

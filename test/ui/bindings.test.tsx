@@ -1,5 +1,6 @@
 import fs from 'node:fs';
 import path from 'node:path';
+import { trackedTempDir } from '../temp-dirs.js';
 import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup } from 'ink-testing-library';
 import { KEY_TABLE, bindingKeys, keyLabel, type Command } from '../../src/ui/keys.js';
@@ -236,8 +237,9 @@ const CHECKS: Record<Command, (keys: string) => Promise<void>> = {
     await app.press(k, 'Case or report reference');
   },
   async 'open-path'(k) {
-    const elsewhere = fs.mkdtempSync(
-      path.join(fs.realpathSync(process.env.TMPDIR ?? '/tmp'), 'skidcase-other-'),
+    const elsewhere = trackedTempDir(
+      'skidcase-other-',
+      fs.realpathSync(process.env.TMPDIR ?? '/tmp'),
     );
     const file = path.join(elsewhere, 'finished-slide.json');
     fs.writeFileSync(file, JSON.stringify(finishedSlide));

@@ -22,7 +22,7 @@ describe('home screen', () => {
     const f = await app.waitText('half-done');
     expect(f.indexOf('finished-slide')).toBeLessThan(f.indexOf('half-done'));
     expect(f).toContain('UI-TEST-FINISHED');
-    // S = sqrt(30 × 100 × 0.60) = 42.43 at the low end (DOMAIN.md slide to stop): "at least 42 mph".
+    // S = sqrt(30 × 100 × 0.60) = 42.43 at the low end (slide to stop): "at least 42 mph".
     expect(f).toContain('at least 42 mph');
     expect(f).toMatch(
       /half-done · UI-TEST-HALF · saved 2026-11-\d\d \d\d:00\n\s+5 of \d+ answered · stopped at: Units/,

@@ -4,8 +4,8 @@
  * polls the frame until the expected change, with a timeout (never a fixed sleep alone).
  */
 import fs from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
+import { trackedTempDir } from '../temp-dirs.js';
 import React from 'react';
 import { render } from 'ink-testing-library';
 import { App } from '../../src/ui/app.js';
@@ -39,7 +39,7 @@ export interface RenderOptions {
 }
 
 export function tempDir(prefix: string): string {
-  return fs.mkdtempSync(path.join(os.tmpdir(), prefix));
+  return trackedTempDir(prefix);
 }
 
 export function renderApp(o: RenderOptions = {}) {

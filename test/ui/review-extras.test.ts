@@ -40,7 +40,7 @@ const flat = (lines: string[]) => lines.join(' ').replace(/\s+/g, ' ');
 describe('the review shows the extras', () => {
   it('compares with a vehicle at the posted limit: stops before the end of the marks, depends at the conflict point', () => {
     const all = flat(review(slide()));
-    // DOMAIN.md: reaction distance 1.466 × S × t. At 40 mph and 1.5 s: 88.0 ft. Braking from 40 mph
+    // docs/physics.md: reaction distance 1.466 × S × t. At 40 mph and 1.5 s: 88.0 ft. Braking from 40 mph
     // at f 0.70: 40² / (30 × 0.70) = 76.2 ft, so stopping distance 88.0 + 76.2 = 164.2 ft.
     expect(all).toContain('at the limit, reaction distance: 88.0 ft');
     expect(all).toMatch(/at the limit, braking distance: 76\.2 ft/);

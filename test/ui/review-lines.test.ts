@@ -33,7 +33,7 @@ describe('reviewLines', () => {
   const all = text.join('\n');
 
   it('shows the start speed and its range from S = sqrt(30 d f n)', () => {
-    // DOMAIN.md slide to stop: S = sqrt(30 × 100 × 0.70) = 45.83; low sqrt(30 × 100 × 0.60) = 42.43;
+    // Slide to stop: S = sqrt(30 × 100 × 0.70) = 45.83; low sqrt(30 × 100 × 0.60) = 42.43;
     // high sqrt(30 × 100 × 0.80) = 48.99.
     expect(all).toContain('45.8 mph (42.4 to 49.0)');
     // "at least": the low end rounded down (common practice).

@@ -48,7 +48,7 @@ describe('a slide with a posted limit', () => {
     }
     const all = seen.replace(/\s+/g, ' ');
     expect(all).toContain('the slide figure is an estimate from anti-lock marks');
-    // 4 marks of 100 ft, f 0.70, n 1: S = sqrt(30 × 100 × 0.70) = 45.8 mph (DOMAIN.md). At 40 mph
+    // 4 marks of 100 ft, f 0.70, n 1: S = sqrt(30 × 100 × 0.70) = 45.8 mph (slide to stop). At 40 mph
     // with 1.5 s the limit vehicle rests 63.4 ft in (see review-extras.test.ts): short of the
     // 100 ft end, beyond the conflict point at 50 ft.
     expect(all).toContain('45.8 mph');

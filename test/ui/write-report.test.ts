@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { mkdtempSync, readdirSync, readFileSync, copyFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { readdirSync, readFileSync, copyFileSync } from 'node:fs';
 import path from 'node:path';
+import { trackedTempDir } from '../temp-dirs.js';
 import { loadCaseText } from '../../src/case/load.js';
 import { writeCaseReport } from '../../src/ui/write-report.js';
 import type { OpenCase } from '../../src/ui/services.js';
@@ -10,7 +10,7 @@ const DEMO = path.join(__dirname, '../../sessions/demo-orchard-hill.json');
 
 describe('"write report" from the review', () => {
   it('writes the Markdown with its speed picture beside it, using the reaction-time preference', async () => {
-    const dir = mkdtempSync(path.join(tmpdir(), 'skidcase-review-report-'));
+    const dir = trackedTempDir('skidcase-review-report-');
     const file = path.join(dir, 'demo-orchard-hill.json');
     copyFileSync(DEMO, file);
     const loaded = loadCaseText(readFileSync(file, 'utf8'));
