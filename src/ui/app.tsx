@@ -84,7 +84,10 @@ export function App(props: AppProps) {
   // The footer is one line at any width; one more while leaving (the note).
   const footerRows = model.leaving ? 2 : 1;
   const banner = s?.open.readOnly ? 2 : 0;
-  const body = height - footerRows - banner - (s ? 2 : 0) - (s?.saveNote ? 1 : 0);
+  // A note from the last save wraps: its rows come off the body (the wrap breaks at spaces, so
+  // one row more than the plain division is allowed for).
+  const noteRows = s?.saveNote ? Math.ceil(s.saveNote.length / width) + 1 : 0;
+  const body = height - footerRows - banner - (s ? 2 : 0) - noteRows;
 
   // The heavy part (solve, sampling, the limit comparison, sensitivity) runs once per change of
   // the answers; a resize or any other render only lays the lines out again.

@@ -13,7 +13,7 @@ export interface HeaderProps {
   /** When the case file was last written, before this session (ISO time), for a case reopened. */
   lastSaved?: string | undefined;
   saveError?: string | undefined;
-  /** What the last save did beside writing (a file moved aside, a copy made): one line. */
+  /** What the last save did beside writing (a file moved aside, a copy made); wraps. */
   saveNote?: string | undefined;
   readOnly: boolean;
 }
@@ -56,7 +56,7 @@ export function Header(p: HeaderProps) {
         {p.section} · {p.progress.answered} of {p.progress.applicable} answered · {p.mode} mode
       </Text>
       {p.saveNote ? (
-        <Text color={TONE.warning} wrap="truncate-end">
+        <Text color={TONE.warning} wrap="wrap">
           {p.saveNote}
         </Text>
       ) : null}

@@ -155,12 +155,16 @@ export function liveServices(o: LiveOptions): Services {
       const notes: string[] = [];
       if (r.keptBroken)
         notes.push(
-          `The case file on disk had been replaced by something that is not a case: it was moved to ${r.keptBroken}.`,
+          `The file on disk was no longer a case: it was moved beside it as ${path.basename(r.keptBroken)}, and your answers were saved.`,
         );
       if (r.keptOutside)
-        notes.push(`The version changed outside skidcase was kept as ${r.keptOutside}.`);
+        notes.push(
+          `The version changed outside skidcase was kept beside it as ${path.basename(r.keptOutside)}.`,
+        );
       if (r.keptOriginal)
-        notes.push(`The original of the older format was kept as ${r.keptOriginal}.`);
+        notes.push(
+          `The original of the older format was kept beside it as ${path.basename(r.keptOriginal)}.`,
+        );
       return { ok: true, at: now(), notes };
     },
     async saveCopy(c) {

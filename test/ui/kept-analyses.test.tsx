@@ -109,3 +109,22 @@ describe('a case opened from a file', () => {
     fs.rmSync(elsewhere, { recursive: true, force: true });
   });
 });
+
+describe('a case file replaced by garbage while open', () => {
+  it('is moved aside at the next save, and the screen says where; the answers are written', async () => {
+    const app = renderApp({
+      files: { 'half-done.json': halfDone },
+      start: { kind: 'resume', id: 'half-done' },
+    });
+    await app.waitText('Which units were the measurements taken in?');
+    const file = path.join(app.dir, 'half-done.json');
+    fs.writeFileSync(file, '\u0000\u0000 not a case at all');
+    const f = (await app.press('m', 'your answers were saved')).replace(/\s+/g, ' ');
+    expect(f).toMatch(/it was moved beside it as half-done\.broken-\d{8}T\d{6}Z\.json/);
+    expect(JSON.parse(fs.readFileSync(file, 'utf8')).units).toBe('metric');
+    const broken = fs.readdirSync(app.dir).find((n) => n.startsWith('half-done.broken-'))!;
+    expect(fs.readFileSync(path.join(app.dir, broken), 'utf8')).toBe(
+      '\u0000\u0000 not a case at all',
+    );
+  });
+});
