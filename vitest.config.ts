@@ -5,6 +5,8 @@ export default defineConfig({
     include: ['test/**/*.test.{ts,tsx}'],
     // removes the temporary folders each test file's helpers made (test/temp-dirs.ts)
     setupFiles: ['test/setup/temp-cleanup.ts'],
+    // vitest's summary, then one plain line: N passed, N failed, N skipped
+    reporters: ['default', './test/setup/count-reporter.ts'],
     testTimeout: 30_000,
     hookTimeout: 60_000,
     // pseudo-terminal and crash tests spawn processes; two cores only
