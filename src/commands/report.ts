@@ -1,7 +1,7 @@
-import { readFile, stat } from 'node:fs/promises';
+import { stat } from 'node:fs/promises';
 import path from 'node:path';
 import { describeIssue } from '../case/issues.js';
-import { decodeCaseBytes } from '../case/decode-bytes.js';
+import { printable } from '../case/printable.js';
 import { loadCaseText, type Case } from '../case/load.js';
 import { solveCase } from '../engine/solve-case.js';
 import type { CaseSolution } from '../engine/types.js';
@@ -10,6 +10,8 @@ import { REPORT_FORMATS, renderReport, type ReportFormat } from '../report/rende
 import { toolVersion } from '../report/version.js';
 import { writeReport } from '../report/write-report.js';
 import { caseFilePath, checkId } from '../store/case-path.js';
+import { describeWriteError } from '../store/write-error.js';
+import { readCaseFile } from './read-case.js';
 
 /** Exit codes of `skidcase report`: as `solve`, plus 1 when an output file is in the way (or a bad option). */
 export const REPORT_EXIT = { done: 0, refused: 1, invalid: 2, uncomputable: 3 } as const;
@@ -33,10 +35,11 @@ export interface ReportIo {
   err(s: string): void;
 }
 
-async function isFile(p: string): Promise<boolean> {
+/** What is at a path: a file, a folder, something else, or nothing. */
+async function kindAt(p: string): Promise<'file' | 'folder' | 'other' | 'none'> {
   return stat(p).then(
-    (s) => s.isFile(),
-    () => false,
+    (s) => (s.isFile() ? 'file' : s.isDirectory() ? 'folder' : 'other'),
+    () => 'none' as const,
   );
 }
 
@@ -45,15 +48,17 @@ async function resolveTarget(
   target: string,
   sessionsDir: string,
 ): Promise<{ file: string } | { message: string }> {
-  if (await isFile(target)) return { file: target };
+  const at = await kindAt(target);
+  // A folder or a special file gets the message `solve` gives for it.
+  if (at !== 'none') return { file: target };
   if (checkId(target) === undefined) {
     const p = caseFilePath(sessionsDir, target);
-    if (p.ok && (await isFile(p.path))) return { file: p.path };
+    if (p.ok && (await kindAt(p.path)) === 'file') return { file: p.path };
     return {
-      message: `${target}: no such file, and no case "${target}" in ${path.resolve(sessionsDir)}`,
+      message: `${target}: no such file, and no case "${target}" in ${printable(path.resolve(sessionsDir))}`,
     };
   }
-  return { message: `${target}: no such file` };
+  return { message: `${printable(target)}: no such file` };
 }
 
 type Loaded =
@@ -66,20 +71,16 @@ async function loadAndSolve(target: string, sessionsDir: string, io: ReportIo): 
     io.err(`skidcase: ${where.message}\n`);
     return { ok: false, code: REPORT_EXIT.invalid };
   }
-  let text: string;
-  try {
-    text = decodeCaseBytes(await readFile(where.file));
-  } catch (e) {
-    io.err(
-      `skidcase: ${where.file}: cannot be read (${e instanceof Error ? e.message : String(e)})\n`,
-    );
+  const read = await readCaseFile(where.file);
+  if ('message' in read) {
+    io.err(`skidcase: ${read.message}\n`);
     return { ok: false, code: REPORT_EXIT.invalid };
   }
-  const loaded = loadCaseText(text);
+  const loaded = loadCaseText(read.text);
   if (!loaded.ok) {
     // The same order as solve: each issue first, starting with its path; the summary line last.
     for (const issue of loaded.issues) io.err(`${describeIssue(issue)}\n`);
-    io.err(`skidcase: ${where.file} is not a valid case file\n`);
+    io.err(`skidcase: ${printable(where.file)} is not a valid case file\n`);
     return { ok: false, code: REPORT_EXIT.invalid };
   }
   const solution = solveCase(loaded.case, loaded.unknownFields);

@@ -9,6 +9,7 @@ import { getKnown, hashOf, sameSig, sigOf, type FileSig } from './known-files.js
 import { acquireLock, releaseLock } from './lock.js';
 import { sweepLeftovers } from './leftovers.js';
 import { errCode } from './errno.js';
+import { MAX_CASE_BYTES, tooLargeMessage } from '../case/limits.js';
 
 export type OpenFailureKind =
   'missing' | 'unreadable' | 'json' | 'invalid' | 'newer' | 'format' | 'locked-error';
@@ -154,6 +155,8 @@ async function readWithSig(
     const handle = await fs.open(file, 'r');
     try {
       const stat = await handle.stat();
+      if (stat.size > MAX_CASE_BYTES)
+        return fail('json', file, [{ path: '(file)', message: tooLargeMessage(stat.size) }]);
       const bytes = await handle.readFile();
       return { text: bytes.toString('utf8'), hash: hashOf(bytes), sig: sigOf(stat), stat };
     } finally {

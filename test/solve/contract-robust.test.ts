@@ -170,11 +170,13 @@ describe('odd files', () => {
     // Longest mark 48 ft: sqrt(30 × 48 × 0.75) = sqrt(1080), by hand.
     expect(JSON.parse(r.out).analyses[0].speed.value).toBeCloseTo(Math.sqrt(1080), 9);
   });
-  it('deep nesting in an unknown field and in the interview is kept, not fatal', async () => {
+  it('deep nesting in an unknown field or in the interview is refused (exit 2), never a crash', async () => {
     for (const key of ['extra', 'interview']) {
       const text = JSON.stringify(full()).replace(/}$/, `, "${key}": ${deep(100_000)}}`);
       const r = await runSolve(write(text), true);
-      expect(r.code).toBe(0);
+      expect(r.code).toBe(2);
+      expect(r.err).toMatch(/^\(file\): nested too deeply: more than 64 levels/);
+      expect(r.out).toBe('');
     }
   });
 });

@@ -1,0 +1,157 @@
+// Bad input that used to crash or mislead (issue 11), run through the built binary: each gets a
+// clear message, an exit code of the contract (0, 2 or 3; report's 1 for an output in the way),
+// and leaves the files on disk as they were. Invented cases.
+import { afterAll, afterEach, describe, expect, it } from 'vitest';
+import { spawn } from 'node:child_process';
+import { readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { BINARY, disposeAll, ptySupport, startTerm } from './harness.js';
+import { childEnv, makeWorkspace } from './env.js';
+
+const ws = makeWorkspace('skidcase-bad-input-');
+afterAll(() => ws.cleanup());
+
+/** Runs the binary without a terminal and collects what it printed. */
+function run(args: string[], cwd = ws.root) {
+  return new Promise<{ code: number | null; out: string; err: string }>((resolve) => {
+    const p = spawn(process.execPath, [BINARY, ...args], {
+      cwd,
+      env: childEnv(ws.env),
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
+    let out = '';
+    let err = '';
+    p.stdout!.on('data', (d) => (out += d));
+    p.stderr!.on('data', (d) => (err += d));
+    const timer = setTimeout(() => p.kill('SIGKILL'), 30_000);
+    p.on('close', (code) => {
+      clearTimeout(timer);
+      resolve({ code, out, err });
+    });
+  });
+}
+
+/** A valid one-skid case (two marks, one surface, to a stop). */
+function skidCase(id: string, extra: Record<string, unknown> = {}) {
+  return {
+    format: 'skidcase-case',
+    version: 1,
+    id,
+    units: 'imperial',
+    vehicle: { brakes: { mode: 'all' } },
+    analyses: [
+      {
+        id: 'skid-1',
+        kind: 'skid',
+        marks: [52, 55],
+        segments: [{ drag: { source: 'entered', value: 0.72 } }],
+        end: { mode: 'stop' },
+      },
+    ],
+    ...extra,
+  };
+}
+
+/** The text of a valid case with `levels` nested objects under an extra field. */
+function deepCaseText(id: string, levels: number) {
+  const text = JSON.stringify(skidCase(id));
+  return `${text.slice(0, -1)},"extra":${'{"a":'.repeat(levels)}1${'}'.repeat(levels)}}`;
+}
+
+/** Every file in a folder, with its content, to compare before and after a command. */
+function snapshot(dir: string) {
+  return Object.fromEntries(
+    readdirSync(dir, { recursive: true, withFileTypes: true })
+      .filter((e) => e.isFile())
+      .map((e) => {
+        const p = join(e.parentPath, e.name);
+        return [p, readFileSync(p, 'utf8')];
+      }),
+  );
+}
+
+const NO_CRASH = /RangeError|Maximum call stack|internal error|\n\s+at\s/;
+
+describe('a case file nested thousands of levels deep', () => {
+  it('solve refuses it with exit 2 naming the file and the limit, and writes nothing', async () => {
+    const file = join(ws.root, 'deep-solve.json');
+    writeFileSync(file, deepCaseText('deep-solve', 3500));
+    const before = snapshot(ws.root);
+    const r = await run(['solve', file]);
+    expect(r.code).toBe(2);
+    expect(r.err).toContain('nested too deeply: more than 64 levels');
+    expect(r.err).toContain(`${file} is not a valid case file`);
+    expect(r.err).not.toMatch(NO_CRASH);
+    expect(r.out).toBe('');
+    expect(snapshot(ws.root)).toEqual(before);
+  });
+
+  it('report refuses it the same way, by path and by id', async () => {
+    writeFileSync(join(ws.sessions, 'deep-report.json'), deepCaseText('deep-report', 3500));
+    for (const target of [join(ws.sessions, 'deep-report.json'), 'deep-report']) {
+      const r = await run(['report', target]);
+      expect(r.code).toBe(2);
+      expect(r.err).toContain('nested too deeply: more than 64 levels');
+      expect(r.err).toContain('deep-report.json is not a valid case file');
+      expect(r.err).not.toMatch(NO_CRASH);
+    }
+  });
+
+  it('at 65 levels is refused and at 64 is read (the limit is exact)', async () => {
+    // The case itself is one object (level 1); `extra` adds the rest.
+    const at = (levels: number) => {
+      const f = join(ws.root, `levels-${levels}.json`);
+      writeFileSync(f, deepCaseText('levels', levels));
+      return f;
+    };
+    const ok = await run(['solve', at(63)]);
+    expect(ok.code).toBe(0);
+    expect(ok.out).toContain('extra: not a field of the case format');
+    const over = await run(['solve', at(64)]);
+    expect(over.code).toBe(2);
+    expect(over.err).toContain('nested too deeply: more than 64 levels');
+  });
+});
+
+const pty = await ptySupport();
+if (!pty.ok) console.warn(`bad-input terminal tests skipped: ${pty.reason}`);
+
+describe.skipIf(!pty.ok)(
+  `bad input in a terminal${pty.ok ? '' : ` (skipped: ${pty.reason})`}`,
+  () => {
+    afterEach(disposeAll);
+
+    it('the case list shows the other cases and marks the over-deep one; resume names the problem', async () => {
+      const local = makeWorkspace('skidcase-deep-list-');
+      try {
+        writeFileSync(join(local.sessions, 'good-one.json'), JSON.stringify(skidCase('good-one')));
+        writeFileSync(join(local.sessions, 'good-two.json'), JSON.stringify(skidCase('good-two')));
+        writeFileSync(join(local.sessions, 'too-deep.json'), deepCaseText('too-deep', 3500));
+        const before = snapshot(local.sessions);
+        const home = await startTerm({ cwd: local.root, env: local.env });
+        const screen = await home.waitFor(/nested too deeply/, {
+          what: 'the over-deep case marked',
+        });
+        expect(screen).toContain('good-one');
+        expect(screen).toContain('good-two');
+        expect(screen).toContain('too-deep');
+        expect(screen).not.toMatch(NO_CRASH);
+        await home.dispose();
+
+        const resume = await startTerm({
+          args: ['resume', 'too-deep'],
+          cwd: local.root,
+          env: local.env,
+        });
+        const shown = await resume.waitFor(/nested too deeply: more than 64 levels/, {
+          what: 'why the case cannot be opened',
+        });
+        expect(shown).not.toMatch(NO_CRASH);
+        await resume.dispose();
+        expect(snapshot(local.sessions)).toEqual(before);
+      } finally {
+        local.cleanup();
+      }
+    });
+  },
+);
