@@ -113,6 +113,98 @@ describe('a case file nested thousands of levels deep', () => {
   });
 });
 
+describe("a case beyond the format's caps", () => {
+  const write = (name: string, c: unknown) => {
+    const f = join(ws.root, name);
+    writeFileSync(f, typeof c === 'string' ? c : JSON.stringify(c));
+    return f;
+  };
+  const many = (n: number) => Array.from({ length: n }, (_, i) => 40 + (i % 7));
+
+  it('two million marks: exit 2 naming the list and the cap, at once and with no output', async () => {
+    const c = skidCase('huge');
+    c.analyses[0]!.marks = many(2_000_000);
+    const r = await run(['solve', write('huge.json', c)]);
+    expect(r.code).toBe(2);
+    expect(r.err.split('\n')[0]).toBe('analyses[0].marks: marks must have at most 1000 items');
+    expect(r.out).toBe('');
+  });
+
+  it('each list of the format has the cap, named in the message', async () => {
+    const seg = { drag: { source: 'entered', value: 0.7 }, length: 1 };
+    const cases: [string, (c: any) => void, string][] = [
+      [
+        'segments',
+        (c) => (c.analyses[0].segments = Array(1001).fill(seg)),
+        'analyses[0].segments: segments must have at most 1000 items',
+      ],
+      [
+        'analyses',
+        (c) =>
+          (c.analyses = Array.from({ length: 1001 }, (_, i) => ({
+            ...c.analyses[0],
+            id: `s${i}`,
+          }))),
+        'analyses: analyses must have at most 1000 items',
+      ],
+      [
+        'tests',
+        (c) =>
+          (c.analyses[0].segments[0].drag = {
+            source: 'test-skids',
+            tests: Array(1001).fill({ speed: 30, distance: 40 }),
+          }),
+        'analyses[0].segments[0].drag.tests: tests must have at most 1000 items',
+      ],
+      [
+        'pulls',
+        (c) =>
+          (c.analyses[0].segments[0].drag = {
+            source: 'sled',
+            weight: 30,
+            pulls: many(1001).map((n) => n / 2),
+          }),
+        'analyses[0].segments[0].drag.pulls: pulls must have at most 1000 items',
+      ],
+    ];
+    for (const [name, edit, message] of cases) {
+      const c = skidCase(`cap-${name}`);
+      edit(c);
+      const r = await run(['solve', write(`cap-${name}.json`, c)]);
+      expect(r.code, name).toBe(2);
+      expect(r.err.split('\n')[0], name).toBe(message);
+    }
+  });
+
+  it('1000 marks solve, and the step lists the first 8 and the count of the rest', async () => {
+    const c = skidCase('thousand');
+    c.analyses[0]!.marks = many(1000);
+    const r = await run(['solve', write('thousand.json', c)]);
+    expect(r.code).toBe(0);
+    // The average of 40..46 repeated: (142 × (40 + ... + 46) + 40 + ... + 45) / 1000 = 42.997.
+    expect(r.out).toContain(
+      'd = (40.0 + 41.0 + 42.0 + 43.0 + 44.0 + 45.0 + 46.0 + 40.0 + … 992 more) / 1000 = 43.0 ft',
+    );
+    expect(r.out.length).toBeLessThan(20_000);
+  });
+
+  it('a file over 32 MB is refused before it is read, by solve and report', async () => {
+    const text = JSON.stringify(skidCase('too-big'));
+    const f = write(
+      'too-big.json',
+      `${text.slice(0, -1)},"notes":"${'x'.repeat(33 * 1024 * 1024)}"}`,
+    );
+    for (const cmd of ['solve', 'report']) {
+      const r = await run([cmd, f]);
+      expect(r.code, cmd).toBe(2);
+      expect(r.err, cmd).toContain(
+        `${f}: the file is too large: 33 MB, more than the 32 MB a case file may have`,
+      );
+      expect(r.out, cmd).toBe('');
+    }
+  });
+});
+
 const pty = await ptySupport();
 if (!pty.ok) console.warn(`bad-input terminal tests skipped: ${pty.reason}`);
 
