@@ -3,7 +3,7 @@
 // and leaves the files on disk as they were. Invented cases.
 import { afterAll, afterEach, describe, expect, it } from 'vitest';
 import { spawn } from 'node:child_process';
-import { readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { chmodSync, mkdirSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { BINARY, disposeAll, ptySupport, startTerm } from './harness.js';
 import { childEnv, makeWorkspace } from './env.js';
@@ -201,6 +201,70 @@ describe("a case beyond the format's caps", () => {
         `${f}: the file is too large: 33 MB, more than the 32 MB a case file may have`,
       );
       expect(r.out, cmd).toBe('');
+    }
+  });
+});
+
+describe('report onto a folder, into a missing or read-only folder, and of a folder', () => {
+  const TEMP_NAMES = /\.part\b|\.lock\.new|\.tmp/;
+  const caseFile = () => {
+    const f = join(ws.root, 'out-case.json');
+    writeFileSync(f, JSON.stringify(skidCase('out-case')));
+    return f;
+  };
+
+  it('--out onto an existing folder, with or without --force: exit 1, the folder named, nothing written', async () => {
+    const out = join(ws.root, 'reports.md');
+    mkdirSync(out);
+    const f = caseFile();
+    for (const force of [[], ['--force']]) {
+      const before = snapshot(ws.root);
+      const r = await run(['report', f, '--out', out, ...force]);
+      expect(r.code).toBe(1);
+      expect(r.err).toContain(`${out} is a folder; give the report a file name`);
+      expect(r.err).toContain('no report written');
+      expect(r.err).not.toMatch(TEMP_NAMES);
+      expect(r.err).not.toContain('EISDIR');
+      expect(snapshot(ws.root)).toEqual(before);
+      expect(readdirSync(ws.root).filter((n) => n.endsWith('.svg'))).toEqual([]);
+    }
+  });
+
+  it('--out into a folder that does not exist: says so, nothing written', async () => {
+    const before = snapshot(ws.root);
+    const out = join(ws.root, 'no-such-folder', 'r.md');
+    const r = await run(['report', caseFile(), '--out', out, '--force']);
+    expect(r.code).toBe(1);
+    expect(r.err).toContain(`${join(ws.root, 'no-such-folder')}: the folder does not exist`);
+    expect(r.err).not.toMatch(TEMP_NAMES);
+    expect(snapshot(ws.root)).toEqual(before);
+  });
+
+  it.skipIf(process.getuid?.() === 0)(
+    '--out into a read-only folder: says it cannot be written, no temp file named, nothing written (skipped as root, who may write anywhere)',
+    async () => {
+      const dir = join(ws.root, 'read-only');
+      mkdirSync(dir);
+      chmodSync(dir, 0o555);
+      try {
+        const r = await run(['report', caseFile(), '--out', join(dir, 'r.md')]);
+        expect(r.code).toBe(1);
+        expect(r.err).toContain(
+          `${dir}: cannot be written: the folder cannot be written (permission denied)`,
+        );
+        expect(r.err).not.toMatch(TEMP_NAMES);
+        expect(readdirSync(dir)).toEqual([]);
+      } finally {
+        chmodSync(dir, 0o755);
+      }
+    },
+  );
+
+  it('report of a folder says it is a folder, as solve does', async () => {
+    for (const cmd of ['solve', 'report']) {
+      const r = await run([cmd, '/etc']);
+      expect(r.code, cmd).toBe(2);
+      expect(r.err, cmd).toBe('skidcase: /etc: is a folder, not a case file\n');
     }
   });
 });
