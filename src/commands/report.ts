@@ -1,7 +1,7 @@
 import { stat } from 'node:fs/promises';
 import path from 'node:path';
 import { describeIssue } from '../case/issues.js';
-import { printable } from '../case/printable.js';
+import { printable, printableIo } from '../case/printable.js';
 import { loadCaseText, type Case } from '../case/load.js';
 import { solveCase } from '../engine/solve-case.js';
 import type { CaseSolution } from '../engine/types.js';
@@ -122,8 +122,9 @@ async function loadAndSolve(target: string, sessionsDir: string, io: ReportIo): 
 export async function reportCommand(
   target: string,
   opts: ReportOptions,
-  io: ReportIo,
+  rawIo: ReportIo,
 ): Promise<number> {
+  const io = printableIo(rawIo);
   if (!REPORT_FORMATS.includes(opts.format)) {
     io.err(`skidcase: --format must be one of ${REPORT_FORMATS.join(', ')}\n`);
     return REPORT_EXIT.refused;

@@ -2,7 +2,7 @@ import { describeIssue } from '../case/issues.js';
 import { loadCaseText } from '../case/load.js';
 import { solveCase } from '../engine/solve-case.js';
 import { formatChainText } from '../format/chain-text.js';
-import { printable } from '../case/printable.js';
+import { printable, printableIo } from '../case/printable.js';
 import { readCaseFile } from './read-case.js';
 import { solutionToJson } from '../format/solution-json.js';
 
@@ -23,8 +23,9 @@ export interface SolveIo {
 export async function solveCommand(
   file: string,
   opts: { json: boolean },
-  io: SolveIo,
+  rawIo: SolveIo,
 ): Promise<number> {
+  const io = printableIo(rawIo);
   const read = await readCaseFile(file);
   if ('message' in read) {
     io.err(`skidcase: ${read.message}\n`);

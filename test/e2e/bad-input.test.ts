@@ -269,6 +269,38 @@ describe('report onto a folder, into a missing or read-only folder, and of a fol
   });
 });
 
+describe('control characters in file names, ids, field names and labels', () => {
+  // A name that would set the terminal's title if printed raw.
+  const TITLE = '\u001b]0;owned\u0007';
+  const ESCAPED = '\\u001b]0;owned\\u0007';
+  const RAW = /[\u0000-\u0008\u000b-\u001f\u007f-\u009f]/;
+
+  it('solve and report print them escaped, in messages and in the chain', async () => {
+    const missing = join(ws.root, `gone${TITLE}.json`);
+    const invalid = join(ws.root, `bad${TITLE}.json`);
+    writeFileSync(invalid, JSON.stringify({ ...skidCase('bad'), units: 'furlongs' }));
+    const labelled = join(ws.root, `label${TITLE}.json`);
+    const c = skidCase('labelled', { [`odd${TITLE}`]: 1 }) as any;
+    c.analyses[0].label = `front left${TITLE}`;
+    writeFileSync(labelled, JSON.stringify(c));
+    const runs = [
+      [['solve', missing], `gone${ESCAPED}.json: no such file`],
+      [['report', missing], `gone${ESCAPED}.json: no such file`],
+      [['report', `case${TITLE}`], `case${ESCAPED}: no such file`],
+      [['solve', invalid], `bad${ESCAPED}.json is not a valid case file`],
+      [['report', invalid], `bad${ESCAPED}.json is not a valid case file`],
+      [['solve', labelled], `front left${ESCAPED}`],
+      [['solve', labelled], `odd${ESCAPED}: not a field of the case format`],
+      [['report', labelled, '--format', 'md'], 'front left\\u001b'],
+    ] as const;
+    for (const [args, text] of runs) {
+      const r = await run([...args]);
+      expect(r.out + r.err, args.join(' ')).toContain(text);
+      expect(r.out + r.err, args.join(' ')).not.toMatch(RAW);
+    }
+  });
+});
+
 const pty = await ptySupport();
 if (!pty.ok) console.warn(`bad-input terminal tests skipped: ${pty.reason}`);
 
