@@ -10,6 +10,14 @@ export type Case = CaseV1;
 export const LATEST_VERSION = 1;
 export const FORMAT = 'skidcase-case';
 
+/** How a file of a version newer than this program is described, wherever it is shown. */
+export const NEWER_WORDS = 'written by a newer skidcase';
+
+/** True when a problem message says the file comes from a newer skidcase (not that it is damaged). */
+export function isNewerFileProblem(message: string): boolean {
+  return message.includes(NEWER_WORDS);
+}
+
 export type LoadResult =
   | {
       ok: true;
@@ -66,7 +74,7 @@ export function loadCase(input: unknown): LoadResult {
       issues: [
         {
           path: 'version',
-          message: `version ${version} is newer than this skidcase understands (up to ${LATEST_VERSION}); update skidcase`,
+          message: `${NEWER_WORDS} (file version ${version}; this one reads up to version ${LATEST_VERSION}): update skidcase to open it`,
         },
       ],
     };

@@ -341,5 +341,29 @@ describe.skipIf(!pty.ok)(
         local.cleanup();
       }
     });
+
+    it('a version-99 file is said to come from a newer skidcase, not to be damaged, on the list and by solve', async () => {
+      const local = makeWorkspace('skidcase-v99-');
+      try {
+        const file = join(local.sessions, 'from-future.json');
+        writeFileSync(file, JSON.stringify({ ...skidCase('from-future'), version: 99 }));
+        const before = snapshot(local.sessions);
+        const home = await startTerm({ cwd: local.root, env: local.env });
+        const screen = await home.waitFor(/written by a newer skidcase: update skidcase/, {
+          what: 'the newer-version line for the selected row',
+        });
+        expect(screen).toContain('file version 99');
+        expect(screen).not.toMatch(/damaged|no backup/);
+        await home.dispose();
+        const r = await run(['solve', file]);
+        expect(r.code).toBe(2);
+        expect(r.err.split('\n')[0]).toBe(
+          'version: written by a newer skidcase (file version 99; this one reads up to version 1): update skidcase to open it',
+        );
+        expect(snapshot(local.sessions)).toEqual(before);
+      } finally {
+        local.cleanup();
+      }
+    });
   },
 );
