@@ -99,7 +99,7 @@ async function loadAndSolve(target: string, sessionsDir: string, io: ReportIo): 
     io.err(`skidcase: ${printable(where.file)} is not a valid case file\n`);
     return { ok: false, code: REPORT_EXIT.invalid };
   }
-  const solution = solveCase(loaded.case, loaded.unknownFields);
+  const solution = solveCase(loaded.case, loaded.unknownFields, loaded.duplicateKeys);
   const failures = solution.analyses.flatMap((r, i) =>
     r.ok ? [] : [`analyses[${i}] (${r.id}): cannot be computed: ${r.reason}`],
   );

@@ -39,7 +39,7 @@ export async function solveCommand(
     io.err(`skidcase: ${printable(file)} is not a valid case file\n`);
     return EXIT.invalid;
   }
-  const solution = solveCase(loaded.case, loaded.unknownFields);
+  const solution = solveCase(loaded.case, loaded.unknownFields, loaded.duplicateKeys);
   const failures = solution.analyses.flatMap((r, i) =>
     r.ok ? [] : [`analyses[${i}] (${r.id}): cannot be computed: ${r.reason}`],
   );

@@ -26,6 +26,8 @@ export type OpenResult =
       migratedFrom?: number;
       /** Fields the schema does not know (kept on save), as paths, for a warning. */
       unknownFields: string[];
+      /** Keys the file gives twice in one object (the last one is used), as paths, for a warning. */
+      duplicateKeys: string[];
       /** Releases the write lock (nothing when read-only). Safe to call twice. */
       release(): Promise<void>;
     }
@@ -134,6 +136,7 @@ export async function openCase(dirOrPath: string, opts: OpenOptions = {}): Promi
     path: file,
     readOnly: readOnlyReason !== undefined,
     unknownFields: loaded.unknownFields,
+    duplicateKeys: loaded.duplicateKeys,
     release: async () => {
       if (released || !locked) return;
       released = true;

@@ -301,6 +301,42 @@ describe('control characters in file names, ids, field names and labels', () => 
   });
 });
 
+describe('duplicate keys and infinite numbers', () => {
+  it('solve warns naming each key given twice, with its path, and uses the last', async () => {
+    const text = JSON.stringify(skidCase('twice'))
+      .replace('"units":"imperial"', '"units":"imperial","units":"metric"')
+      .replace('"value":0.72', '"value":0.5,"value":0.72');
+    const f = join(ws.root, 'twice.json');
+    writeFileSync(f, text);
+    const r = await run(['solve', f]);
+    expect(r.code).toBe(0);
+    expect(r.out).toContain('units: given twice in one object; the last one is used');
+    expect(r.out).toContain(
+      'analyses[0].segments[0].drag.value: given twice in one object; the last one is used',
+    );
+    expect(r.out).toContain('Case twice (metric: m, km/h)');
+    const json = await run(['solve', f, '--json']);
+    expect(JSON.parse(json.out).warnings).toContain(
+      'units: given twice in one object; the last one is used',
+    );
+  });
+
+  it('infinity gets one wording, "must be a finite number", for marks and drag factors alike', async () => {
+    const text = JSON.stringify(skidCase('infinite'))
+      .replace('"marks":[52,55]', '"marks":[52,1e999]')
+      .replace('"value":0.72', '"value":1e999');
+    const f = join(ws.root, 'infinite.json');
+    writeFileSync(f, text);
+    const r = await run(['solve', f]);
+    expect(r.code).toBe(2);
+    expect(r.err).toContain('analyses[0].marks[1]: length must be a finite number');
+    expect(r.err).toContain(
+      'analyses[0].segments[0].drag.value: drag factor must be a finite number',
+    );
+    expect(r.err).not.toMatch(/must be a number\b/);
+  });
+});
+
 const pty = await ptySupport();
 if (!pty.ok) console.warn(`bad-input terminal tests skipped: ${pty.reason}`);
 
