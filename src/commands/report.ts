@@ -9,9 +9,8 @@ import { buildReport } from '../report/build.js';
 import { REPORT_FORMATS, renderReport, type ReportFormat } from '../report/render.js';
 import { toolVersion } from '../report/version.js';
 import { writeReport } from '../report/write-report.js';
-import type { WriteResult } from '../report/write-files.js';
+import { writeFailureText } from '../report/write-files.js';
 import { caseFilePath, checkId } from '../store/case-path.js';
-import { describeWriteError } from '../store/write-error.js';
 import { readCaseFile } from './read-case.js';
 
 /** Exit codes of `skidcase report`: as `solve`, plus 1 when an output file is in the way (or a bad option). */
@@ -60,21 +59,6 @@ async function resolveTarget(
     };
   }
   return { message: `${printable(target)}: no such file` };
-}
-
-/**
- * A report that could not be written, in words the user can act on: which file or folder, and
- * why (never the name of a temporary file).
- * @example writeFailureText({ ok: false, kind: 'folder', path: 'out' }) // 'out is a folder; ...'
- */
-export function writeFailureText(r: WriteResult & { ok: false }): string {
-  if (r.kind === 'exists') return `${r.paths.map((p) => printable(p)).join(', ')} already exists`;
-  const where = printable(r.path);
-  if (r.kind === 'folder')
-    return `${where} is a folder; give the report a file name, such as ${path.join(where, 'report.md')}`;
-  if (r.code === 'ENOENT') return `${where}: the folder does not exist`;
-  if (r.code === 'ENOTDIR') return `${where}: is not a folder`;
-  return `${where}: cannot be written: ${describeWriteError({ code: r.code }).text}`;
 }
 
 type Loaded =

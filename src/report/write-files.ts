@@ -120,3 +120,27 @@ export async function writeFiles(files: OutFile[], force: boolean): Promise<Writ
   }
   return { ok: true, written };
 }
+
+/**
+ * A report that could not be written, in words the user can act on: which file or folder, and
+ * why (never the name of a temporary file).
+ * @example writeFailureText({ ok: false, kind: 'folder', path: 'out' }) // 'out is a folder; ...'
+ */
+export function writeFailureText(r: WriteResult & { ok: false }): string {
+  if (r.kind === 'exists') return `${r.paths.join(', ')} already exists`;
+  // The command's output escapes control characters (printableIo), the screen shows text as text.
+  const where = r.path;
+  if (r.kind === 'folder')
+    return `${where} is a folder; give the report a file name, such as ${path.join(where, 'report.md')}`;
+  if (r.code === 'ENOENT') return `${where}: the folder does not exist`;
+  if (r.code === 'ENOTDIR') return `${where}: is not a folder`;
+  const why =
+    r.code === 'EACCES' || r.code === 'EPERM'
+      ? 'the folder cannot be written (permission denied)'
+      : r.code === 'EROFS'
+        ? 'the folder is on a read-only file system'
+        : r.code === 'ENOSPC' || r.code === 'EDQUOT'
+          ? 'the disk is full'
+          : `the disk reported an error (${r.code ?? 'unknown'})`;
+  return `${where}: cannot be written: ${why}`;
+}

@@ -7,7 +7,7 @@ import type { Case } from '../case/load.js';
 import { buildReport } from '../report/build.js';
 import { toolVersion } from '../report/version.js';
 import { writeReport } from '../report/write-report.js';
-import { writeFailureText } from '../commands/report.js';
+import { writeFailureText } from '../report/write-files.js';
 import { solveAsFile } from './interview-live.js';
 import type { OpenCase } from './services.js';
 
