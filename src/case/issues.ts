@@ -1,4 +1,5 @@
 import type { z } from 'zod';
+import { printable } from './printable.js';
 
 /** One thing wrong with a file or an answer: where (a path such as `analyses[0].marks[2]`) and what. */
 export interface FieldIssue {
@@ -6,12 +7,15 @@ export interface FieldIssue {
   message: string;
 }
 
-/** `['analyses', 0, 'marks', 2]` -> `analyses[0].marks[2]`. */
+/**
+ * `['analyses', 0, 'marks', 2]` -> `analyses[0].marks[2]`. A key is written with its control
+ * characters escaped: a field name comes from the file and may be anything.
+ */
 export function formatPath(path: readonly PropertyKey[]): string {
   let out = '';
   for (const p of path) {
     if (typeof p === 'number') out += `[${p}]`;
-    else out += out ? `.${String(p)}` : String(p);
+    else out += out ? `.${printable(String(p))}` : printable(String(p));
   }
   return out || '(file)';
 }

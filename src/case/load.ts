@@ -2,14 +2,31 @@ import { caseV1, type CaseV1 } from './v1/schema.js';
 import { fromZod, type FieldIssue } from './issues.js';
 import { MIGRATIONS } from './migrate.js';
 import { unknownFields } from './unknown-fields.js';
+import { scanJson } from './json-scan.js';
+import { MAX_CASE_BYTES, MAX_DEPTH, TOO_DEEP, tooLargeMessage } from './limits.js';
 
 /** The case type the rest of the program works with: always the latest version. */
 export type Case = CaseV1;
 export const LATEST_VERSION = 1;
 export const FORMAT = 'skidcase-case';
 
+/** How a file of a version newer than this program is described, wherever it is shown. */
+export const NEWER_WORDS = 'written by a newer skidcase';
+
+/** True when a problem message says the file comes from a newer skidcase (not that it is damaged). */
+export function isNewerFileProblem(message: string): boolean {
+  return message.includes(NEWER_WORDS);
+}
+
 export type LoadResult =
-  | { ok: true; case: Case; migratedFrom?: number; unknownFields: string[] }
+  | {
+      ok: true;
+      case: Case;
+      migratedFrom?: number;
+      unknownFields: string[];
+      /** Paths of keys the file gives twice in one object; the last one is used (a warning). */
+      duplicateKeys: string[];
+    }
   | { ok: false; kind: 'json' | 'format' | 'newer' | 'invalid'; issues: FieldIssue[] };
 
 /** The issues with exact repeats (one rule checked at several ends of one number) dropped. */
@@ -57,7 +74,7 @@ export function loadCase(input: unknown): LoadResult {
       issues: [
         {
           path: 'version',
-          message: `version ${version} is newer than this skidcase understands (up to ${LATEST_VERSION}); update skidcase`,
+          message: `${NEWER_WORDS} (file version ${version}; this one reads up to version ${LATEST_VERSION}): update skidcase to open it`,
         },
       ],
     };
@@ -79,13 +96,28 @@ export function loadCase(input: unknown): LoadResult {
     ok: true,
     case: parsed.data,
     unknownFields: unknownFields(parsed.data),
+    duplicateKeys: [],
   };
   if (version < LATEST_VERSION) result.migratedFrom = version;
   return result;
 }
 
-/** Parses text (a file's contents) then loads it; a JSON syntax error is a `json` failure. */
+/**
+ * Parses text (a file's contents) then loads it; a JSON syntax error is a `json` failure, and so
+ * is a text beyond the size or nesting limits (docs/case-file.md), checked before it is parsed.
+ * Keys given twice in one object are listed in `duplicateKeys`.
+ */
 export function loadCaseText(text: string): LoadResult {
+  // UTF-16 code units never outnumber UTF-8 bytes, so this holds for the file's bytes too.
+  if (text.length > MAX_CASE_BYTES)
+    return {
+      ok: false,
+      kind: 'json',
+      issues: [{ path: '(file)', message: tooLargeMessage(text.length) }],
+    };
+  const scan = scanJson(text, MAX_DEPTH);
+  if (scan.tooDeep)
+    return { ok: false, kind: 'json', issues: [{ path: '(file)', message: TOO_DEEP }] };
   let json: unknown;
   try {
     json = JSON.parse(text);
@@ -97,5 +129,7 @@ export function loadCaseText(text: string): LoadResult {
       issues: [{ path: '(file)', message: `not valid JSON (${msg})` }],
     };
   }
-  return loadCase(json);
+  const loaded = loadCase(json);
+  if (loaded.ok) loaded.duplicateKeys = scan.duplicateKeys;
+  return loaded;
 }

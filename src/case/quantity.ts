@@ -89,6 +89,23 @@ export function quantity(rule: QuantityRule) {
     });
 }
 
+/**
+ * A plain number field (one that is not a quantity) with the quantity's wording: missing is
+ * "is required", text or another type "must be <expected>", and infinity (`1e999` in a file)
+ * "must be a finite number", as for every quantity.
+ * @example finiteNumber('drag factor').safeParse(Infinity) // issue: 'drag factor must be a finite number'
+ */
+export function finiteNumber(what: string, expected = 'a number') {
+  return z.number({
+    error: (iss: { input?: unknown }) =>
+      iss.input === undefined
+        ? `${what} is required`
+        : typeof iss.input === 'number'
+          ? `${what} must be a finite number`
+          : `${what} must be ${expected}`,
+  });
+}
+
 /** Common rules, shared by the schema and by the interview's answer checks. */
 export const RULES = {
   length: { what: 'length', gt: 0, max: 100_000 },

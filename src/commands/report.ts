@@ -1,7 +1,7 @@
-import { readFile, stat } from 'node:fs/promises';
+import { stat } from 'node:fs/promises';
 import path from 'node:path';
 import { describeIssue } from '../case/issues.js';
-import { decodeCaseBytes } from '../case/decode-bytes.js';
+import { printable, printableIo } from '../case/printable.js';
 import { loadCaseText, type Case } from '../case/load.js';
 import { solveCase } from '../engine/solve-case.js';
 import type { CaseSolution } from '../engine/types.js';
@@ -9,7 +9,9 @@ import { buildReport } from '../report/build.js';
 import { REPORT_FORMATS, renderReport, type ReportFormat } from '../report/render.js';
 import { toolVersion } from '../report/version.js';
 import { writeReport } from '../report/write-report.js';
+import { writeFailureText } from '../report/write-files.js';
 import { caseFilePath, checkId } from '../store/case-path.js';
+import { readCaseFile } from './read-case.js';
 
 /** Exit codes of `skidcase report`: as `solve`, plus 1 when an output file is in the way (or a bad option). */
 export const REPORT_EXIT = { done: 0, refused: 1, invalid: 2, uncomputable: 3 } as const;
@@ -33,10 +35,11 @@ export interface ReportIo {
   err(s: string): void;
 }
 
-async function isFile(p: string): Promise<boolean> {
+/** What is at a path: a file, a folder, something else, or nothing. */
+async function kindAt(p: string): Promise<'file' | 'folder' | 'other' | 'none'> {
   return stat(p).then(
-    (s) => s.isFile(),
-    () => false,
+    (s) => (s.isFile() ? 'file' : s.isDirectory() ? 'folder' : 'other'),
+    () => 'none' as const,
   );
 }
 
@@ -45,15 +48,17 @@ async function resolveTarget(
   target: string,
   sessionsDir: string,
 ): Promise<{ file: string } | { message: string }> {
-  if (await isFile(target)) return { file: target };
+  const at = await kindAt(target);
+  // A folder or a special file gets the message `solve` gives for it.
+  if (at !== 'none') return { file: target };
   if (checkId(target) === undefined) {
     const p = caseFilePath(sessionsDir, target);
-    if (p.ok && (await isFile(p.path))) return { file: p.path };
+    if (p.ok && (await kindAt(p.path)) === 'file') return { file: p.path };
     return {
-      message: `${target}: no such file, and no case "${target}" in ${path.resolve(sessionsDir)}`,
+      message: `${target}: no such file, and no case "${target}" in ${printable(path.resolve(sessionsDir))}`,
     };
   }
-  return { message: `${target}: no such file` };
+  return { message: `${printable(target)}: no such file` };
 }
 
 type Loaded =
@@ -66,23 +71,19 @@ async function loadAndSolve(target: string, sessionsDir: string, io: ReportIo): 
     io.err(`skidcase: ${where.message}\n`);
     return { ok: false, code: REPORT_EXIT.invalid };
   }
-  let text: string;
-  try {
-    text = decodeCaseBytes(await readFile(where.file));
-  } catch (e) {
-    io.err(
-      `skidcase: ${where.file}: cannot be read (${e instanceof Error ? e.message : String(e)})\n`,
-    );
+  const read = await readCaseFile(where.file);
+  if ('message' in read) {
+    io.err(`skidcase: ${read.message}\n`);
     return { ok: false, code: REPORT_EXIT.invalid };
   }
-  const loaded = loadCaseText(text);
+  const loaded = loadCaseText(read.text);
   if (!loaded.ok) {
     // The same order as solve: each issue first, starting with its path; the summary line last.
     for (const issue of loaded.issues) io.err(`${describeIssue(issue)}\n`);
-    io.err(`skidcase: ${where.file} is not a valid case file\n`);
+    io.err(`skidcase: ${printable(where.file)} is not a valid case file\n`);
     return { ok: false, code: REPORT_EXIT.invalid };
   }
-  const solution = solveCase(loaded.case, loaded.unknownFields);
+  const solution = solveCase(loaded.case, loaded.unknownFields, loaded.duplicateKeys);
   const failures = solution.analyses.flatMap((r, i) =>
     r.ok ? [] : [`analyses[${i}] (${r.id}): cannot be computed: ${r.reason}`],
   );
@@ -105,8 +106,9 @@ async function loadAndSolve(target: string, sessionsDir: string, io: ReportIo): 
 export async function reportCommand(
   target: string,
   opts: ReportOptions,
-  io: ReportIo,
+  rawIo: ReportIo,
 ): Promise<number> {
+  const io = printableIo(rawIo);
   if (!REPORT_FORMATS.includes(opts.format)) {
     io.err(`skidcase: --format must be one of ${REPORT_FORMATS.join(', ')}\n`);
     return REPORT_EXIT.refused;
@@ -131,7 +133,8 @@ export async function reportCommand(
     return REPORT_EXIT.refused;
   }
   if (!r.ok) {
-    io.err(`skidcase: ${r.path}: cannot be written (${r.message})\n`);
+    io.err(`skidcase: ${writeFailureText(r)}\n`);
+    io.err('skidcase: no report written\n');
     return REPORT_EXIT.refused;
   }
   for (const p of r.written) io.out(`wrote ${p}\n`);

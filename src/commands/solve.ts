@@ -1,9 +1,9 @@
-import { readFile } from 'node:fs/promises';
-import { decodeCaseBytes } from '../case/decode-bytes.js';
 import { describeIssue } from '../case/issues.js';
 import { loadCaseText } from '../case/load.js';
 import { solveCase } from '../engine/solve-case.js';
 import { formatChainText } from '../format/chain-text.js';
+import { printable, printableIo } from '../case/printable.js';
+import { readCaseFile } from './read-case.js';
 import { solutionToJson } from '../format/solution-json.js';
 
 /** Exit codes of `skidcase solve`. */
@@ -12,14 +12,6 @@ export const EXIT = { solved: 0, invalid: 2, uncomputable: 3 } as const;
 export interface SolveIo {
   out: (s: string) => void;
   err: (s: string) => void;
-}
-
-function readError(file: string, e: unknown): string {
-  const code = (e as { code?: string }).code;
-  if (code === 'ENOENT') return `${file}: no such file`;
-  if (code === 'EISDIR') return `${file}: is a folder, not a case file`;
-  if (code === 'EACCES') return `${file}: permission denied`;
-  return `${file}: cannot be read (${e instanceof Error ? e.message : String(e)})`;
 }
 
 /**
@@ -31,24 +23,23 @@ function readError(file: string, e: unknown): string {
 export async function solveCommand(
   file: string,
   opts: { json: boolean },
-  io: SolveIo,
+  rawIo: SolveIo,
 ): Promise<number> {
-  let text: string;
-  try {
-    text = decodeCaseBytes(await readFile(file));
-  } catch (e) {
-    io.err(`skidcase: ${readError(file, e)}\n`);
+  const io = printableIo(rawIo);
+  const read = await readCaseFile(file);
+  if ('message' in read) {
+    io.err(`skidcase: ${read.message}\n`);
     return EXIT.invalid;
   }
-  const loaded = loadCaseText(text);
+  const loaded = loadCaseText(read.text);
   if (!loaded.ok) {
     // The issues come first, each starting with its path, so that a script can read the first
     // line as "path: message" (docs/case-file.md); the summary line follows.
     for (const issue of loaded.issues) io.err(`${describeIssue(issue)}\n`);
-    io.err(`skidcase: ${file} is not a valid case file\n`);
+    io.err(`skidcase: ${printable(file)} is not a valid case file\n`);
     return EXIT.invalid;
   }
-  const solution = solveCase(loaded.case, loaded.unknownFields);
+  const solution = solveCase(loaded.case, loaded.unknownFields, loaded.duplicateKeys);
   const failures = solution.analyses.flatMap((r, i) =>
     r.ok ? [] : [`analyses[${i}] (${r.id}): cannot be computed: ${r.reason}`],
   );

@@ -1,7 +1,7 @@
 import type { Spread } from './spread.js';
 import { formatNumber } from './number-text.js';
 import type { Range, Step, Units } from './types.js';
-import { input, makeStep } from './step.js';
+import { input, joinList, makeStep } from './step.js';
 
 export type DistanceRule = 'average' | 'longest' | 'shortest' | 'spread';
 
@@ -91,11 +91,11 @@ export function slideDistanceFromMarks(
   const substituted = single
     ? `d = ${list[0]} ${units.length}`
     : r.fn === 'mean'
-      ? `d = (${list.join(' + ')}) / ${marks.length} = ${result}` +
+      ? `d = (${joinList(list, ' + ')}) / ${marks.length} = ${result}` +
         (rule === 'spread'
           ? `; range ${fmt(distance.low)} to ${fmt(distance.high)} ${units.length}`
           : '')
-      : `d = ${r.fn}(${list.join(', ')}) = ${result}`;
+      : `d = ${r.fn}(${joinList(list, ', ')}) = ${result}`;
   const step = makeStep({
     name: 'Slide distance',
     formula: single ? 'd = the mark' : r.formula,

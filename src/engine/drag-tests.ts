@@ -5,7 +5,7 @@ import { tradeConstants, unitsOf } from './constants.js';
 import { testSkidDrag } from './formulas.js';
 import { reduceRepeated } from './reduce.js';
 import { fail, ok, type Outcome, type Range, type Step, type UnitSystem } from './types.js';
-import { input, makeStep } from './step.js';
+import { input, joinList, makeStep } from './step.js';
 
 const f2 = (n: number) => formatNumber(n, 'drag');
 type TestSkids = Extract<DragV1, { source: 'test-skids' }>;
@@ -40,8 +40,11 @@ export function testSkidsDrag(
   const parts = tests.map(
     (t) => `${formatNumber(t.S, 'speed')}²/(${C} × ${formatNumber(t.d, 'length')})`,
   );
-  const partsText = `mean(${parts.join(', ')})`;
-  const valuesText = `mean(${tests.map((t) => f2(testSkidDrag(t.S, t.d, system))).join(', ')})`;
+  const partsText = `mean(${joinList(parts, ', ')})`;
+  const valuesText = `mean(${joinList(
+    tests.map((t) => f2(testSkidDrag(t.S, t.d, system))),
+    ', ',
+  )})`;
   const gText = `${G.value < 0 ? '+' : '−'} ${formatNumber(Math.abs(G.value), 'percent')}/100`;
   return ok({
     f,

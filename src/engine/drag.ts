@@ -5,7 +5,7 @@ import { dragTableRow } from './drag-table.js';
 import { testSkidsDrag } from './drag-tests.js';
 import { reduceRepeated } from './reduce.js';
 import { ok, type Outcome, type Range, type Step, type UnitSystem } from './types.js';
-import { input, makeStep } from './step.js';
+import { input, joinList, makeStep } from './step.js';
 
 export interface Drag {
   f: Range;
@@ -82,7 +82,10 @@ export function dragFactor(drag: DragV1, system: UnitSystem): Outcome<Drag> {
       step: makeStep({
         name: 'Drag factor from a drag sled',
         formula: 'f_i = pull_i / weight; f = mean, range = smallest to largest',
-        substituted: `f = mean(${pulls.map((p) => `${formatNumber(p, 'ratio')}/${formatNumber(W, 'ratio')}`).join(', ')}) = ${f2(f.value)}`,
+        substituted: `f = mean(${joinList(
+          pulls.map((p) => `${formatNumber(p, 'ratio')}/${formatNumber(W, 'ratio')}`),
+          ', ',
+        )}) = ${f2(f.value)}`,
         inputs: {
           weight: { value: W, unit: '' },
           ...Object.fromEntries(pulls.map((p, i) => [`pull_${i + 1}`, { value: p, unit: '' }])),
@@ -102,7 +105,7 @@ export function dragFactor(drag: DragV1, system: UnitSystem): Outcome<Drag> {
     step: makeStep({
       name: 'Drag factor from a decelerometer',
       formula: 'f = mean of readings (in g), range = smallest to largest',
-      substituted: `f = mean(${readings.map(f2).join(', ')}) = ${f2(f.value)}`,
+      substituted: `f = mean(${joinList(readings.map(f2), ', ')}) = ${f2(f.value)}`,
       inputs: Object.fromEntries(
         readings.map((r, i) => [`reading_${i + 1}`, { value: r, unit: 'g' }]),
       ),

@@ -75,17 +75,24 @@ export function solveAnalysis(c: Case, i: number): AnalysisOutcome {
  * Solves every analysis of a validated case, each phase of a chain once and before the phase
  * that runs into it, and compares with the posted limit: `exceededAtMinimum` is true when some
  * analysis's low end is above the limit. `unknownFields`, the paths of fields the file holds
- * that its format does not define (as `loadCase` reports them), become warnings naming them.
+ * that its format does not define (as `loadCase` reports them), become warnings naming them, and so
+ * do `duplicateKeys`, the keys its text gives twice in one object (as `loadCaseText` reports them).
  * @example
  * const loaded = loadCaseText(text);
  * if (loaded.ok) solveCase(loaded.case, loaded.unknownFields).analyses.forEach((r) => r.ok && r.solution.speed);
  */
-export function solveCase(c: Case, unknownFields: readonly string[] = []): CaseSolution {
+export function solveCase(
+  c: Case,
+  unknownFields: readonly string[] = [],
+  duplicateKeys: readonly string[] = [],
+): CaseSolution {
   const memo = new Map<number, AnalysisOutcome>();
   const analyses = c.analyses.map((_, i) => solveInChain(c, i, memo, []));
   const warnings = unknownFields.map(
     (path) => `${path}: not a field of the case format; kept, but not used (misspelt?)`,
   );
+  for (const path of duplicateKeys)
+    warnings.push(`${path}: given twice in one object; the last one is used`);
   if (c.analyses.length === 0) warnings.push('The case has no analyses yet: nothing to solve.');
   const out: CaseSolution = { id: c.id, units: unitsOf(c.units), analyses, warnings };
   if (c.postedLimit !== undefined) {

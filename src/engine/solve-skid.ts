@@ -8,7 +8,7 @@ import { dragFactor } from './drag.js';
 import { brakingEfficiency } from './efficiency.js';
 import { skidModel } from './skid-model.js';
 import { slideSpeed, type SlideEnd, type SlideSegment } from './slide.js';
-import { input, makeStep } from './step.js';
+import { input, joinList, makeStep } from './step.js';
 import { phaseEnd } from './phase-end.js';
 import type { AnalysisOutcome, AnalysisSolution, Range, Step } from './types.js';
 import { solvedAnalysis } from './solution.js';
@@ -76,7 +76,10 @@ export function solveSkid(
         name: 'Slide distance',
         formula: several ? 'd = d_1 + d_2 + …' : 'd = the segment’s measured length',
         substituted: several
-          ? `d = ${lengths.map((l) => formatNumber(l.value, 'length')).join(' + ')} = ${formatNumber(total.value, 'length')} ${u.length}`
+          ? `d = ${joinList(
+              lengths.map((l) => formatNumber(l.value, 'length')),
+              ' + ',
+            )} = ${formatNumber(total.value, 'length')} ${u.length}`
           : `d = ${formatNumber(total.value, 'length')} ${u.length}`,
         inputs: Object.fromEntries(lengths.map((l, j) => [`d_${j + 1}`, input(l, u.length)])),
         result: total,

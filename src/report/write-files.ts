@@ -1,5 +1,5 @@
 import { constants } from 'node:fs';
-import { access, link, rename, unlink } from 'node:fs/promises';
+import { access, link, lstat, rename, stat, unlink } from 'node:fs/promises';
 import path from 'node:path';
 import writeFileAtomic from 'write-file-atomic';
 
@@ -13,7 +13,38 @@ export interface OutFile {
 export type WriteResult =
   | { ok: true; written: string[] }
   | { ok: false; kind: 'exists'; paths: string[] }
-  | { ok: false; kind: 'io'; path: string; message: string };
+  | { ok: false; kind: 'folder'; path: string }
+  /** `code` is the system's error code (ENOENT, EACCES, ...); `message` names temp files, for logs only. */
+  | { ok: false; kind: 'io'; path: string; message: string; code?: string };
+
+const codeOf = (e: unknown) => (e as { code?: string }).code;
+
+/**
+ * Why the files cannot be written, found before anything is: a target that is a folder, or a
+ * folder to write in that is missing or not writable. Undefined when the writes may go ahead.
+ */
+async function cannotWrite(files: OutFile[]): Promise<WriteResult | undefined> {
+  for (const f of files) {
+    const at = await lstat(f.path).catch(() => undefined);
+    if (at?.isDirectory()) return { ok: false, kind: 'folder', path: f.path };
+  }
+  for (const dir of new Set(files.map((f) => path.dirname(path.resolve(f.path))))) {
+    try {
+      if (!(await stat(dir)).isDirectory())
+        return { ok: false, kind: 'io', path: dir, message: 'not a folder', code: 'ENOTDIR' };
+      await access(dir, constants.W_OK);
+    } catch (e) {
+      return {
+        ok: false,
+        kind: 'io',
+        path: dir,
+        message: String(e),
+        ...(codeOf(e) ? { code: codeOf(e)! } : {}),
+      };
+    }
+  }
+  return undefined;
+}
 
 async function exists(p: string): Promise<boolean> {
   try {
@@ -58,6 +89,8 @@ async function writeNew(target: string, content: string): Promise<'written' | 'e
  * last, so the report never links to a picture not yet on disk.
  */
 export async function writeFiles(files: OutFile[], force: boolean): Promise<WriteResult> {
+  const refused = await cannotWrite(files);
+  if (refused) return refused;
   if (!force) {
     const taken: string[] = [];
     for (const f of files) if (await exists(f.path)) taken.push(f.path);
@@ -81,8 +114,33 @@ export async function writeFiles(files: OutFile[], force: boolean): Promise<Writ
         kind: 'io',
         path: f.path,
         message: e instanceof Error ? e.message : String(e),
+        ...(codeOf(e) ? { code: codeOf(e)! } : {}),
       };
     }
   }
   return { ok: true, written };
+}
+
+/**
+ * A report that could not be written, in words the user can act on: which file or folder, and
+ * why (never the name of a temporary file).
+ * @example writeFailureText({ ok: false, kind: 'folder', path: 'out' }) // 'out is a folder; ...'
+ */
+export function writeFailureText(r: WriteResult & { ok: false }): string {
+  if (r.kind === 'exists') return `${r.paths.join(', ')} already exists`;
+  // The command's output escapes control characters (printableIo), the screen shows text as text.
+  const where = r.path;
+  if (r.kind === 'folder')
+    return `${where} is a folder; give the report a file name, such as ${path.join(where, 'report.md')}`;
+  if (r.code === 'ENOENT') return `${where}: the folder does not exist`;
+  if (r.code === 'ENOTDIR') return `${where}: is not a folder`;
+  const why =
+    r.code === 'EACCES' || r.code === 'EPERM'
+      ? 'the folder cannot be written (permission denied)'
+      : r.code === 'EROFS'
+        ? 'the folder is on a read-only file system'
+        : r.code === 'ENOSPC' || r.code === 'EDQUOT'
+          ? 'the disk is full'
+          : `the disk reported an error (${r.code ?? 'unknown'})`;
+  return `${where}: cannot be written: ${why}`;
 }

@@ -1,5 +1,6 @@
 import fs from 'node:fs';
 import path from 'node:path';
+import { printable } from '../case/printable.js';
 
 /** The case id rule of the case schema: the id is also the file name, so it must be safe as one. */
 export const CASE_ID = /^[a-z0-9-]{1,64}$/;
@@ -9,19 +10,11 @@ export type PathResult = { ok: true; path: string } | { ok: false; message: stri
 /** Why an id cannot be a file name, or undefined when it can. */
 export function checkId(id: string): string | undefined {
   if (typeof id !== 'string' || id.length === 0) return 'a case id is needed';
-  if (id.length > 64) return `case id "${id.slice(0, 20)}…" is longer than 64 characters`;
+  if (id.length > 64)
+    return `case id "${printable(id.slice(0, 20))}…" is longer than 64 characters`;
   if (!CASE_ID.test(id))
     return `case id "${printable(id)}" may hold only lower-case letters, digits and dashes`;
   return undefined;
-}
-
-/** Shows control characters (NUL and the like) as `\u0000` so a message never hides them. */
-function printable(s: string): string {
-  // eslint-disable-next-line no-control-regex
-  return s.replace(
-    /[\u0000-\u001f\u007f]/g,
-    (ch) => `\\u${ch.charCodeAt(0).toString(16).padStart(4, '0')}`,
-  );
 }
 
 /** True when `file` is `dir` itself or lies beneath it (both already resolved). */

@@ -2,6 +2,7 @@ import fs from 'node:fs/promises';
 import path from 'node:path';
 import { describeIssue } from '../case/issues.js';
 import { loadCaseText, type Case } from '../case/load.js';
+import { MAX_CASE_BYTES, tooLargeMessage } from '../case/limits.js';
 import { isSideFile } from './side-files.js';
 
 /** One file of the sessions folder, as the case list shows it. */
@@ -49,6 +50,8 @@ async function readEntry(file: string): Promise<CaseEntry> {
     const st = await fs.stat(file);
     mtime = st.mtime.toISOString();
     if (!st.isFile()) return { id, path: file, updated: mtime, problem: 'not a file' };
+    if (st.size > MAX_CASE_BYTES)
+      return { id, path: file, updated: mtime, problem: tooLargeMessage(st.size) };
     const loaded = loadCaseText(await fs.readFile(file, 'utf8'));
     if (!loaded.ok) {
       const first = loaded.issues[0];

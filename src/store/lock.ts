@@ -12,6 +12,7 @@ import {
   readLock,
   type LockInfo,
 } from './lock-info.js';
+import { describeWriteError } from './write-error.js';
 import { errCode } from './errno.js';
 
 /**
@@ -95,7 +96,7 @@ export async function acquireLock(caseFile: string): Promise<LockOutcome> {
         return {
           kind: 'error',
           code: errCode(e),
-          message: `cannot lock ${caseFile}: ${String(e)}`,
+          message: `cannot lock ${caseFile}: ${describeWriteError(e).text}`,
         };
     }
     try {
@@ -108,7 +109,7 @@ export async function acquireLock(caseFile: string): Promise<LockOutcome> {
       return {
         kind: 'error',
         code: errCode(e),
-        message: `cannot check the lock ${lockFile}: ${String(e)}`,
+        message: `cannot check the lock ${lockFile}: ${describeWriteError(e).text}`,
       };
     }
   }

@@ -9,6 +9,7 @@ import { getKnown, hashOf, sameSig, sigOf, type FileSig } from './known-files.js
 import { acquireLock, releaseLock } from './lock.js';
 import { sweepLeftovers } from './leftovers.js';
 import { errCode } from './errno.js';
+import { MAX_CASE_BYTES, tooLargeMessage } from '../case/limits.js';
 
 export type OpenFailureKind =
   'missing' | 'unreadable' | 'json' | 'invalid' | 'newer' | 'format' | 'locked-error';
@@ -25,6 +26,8 @@ export type OpenResult =
       migratedFrom?: number;
       /** Fields the schema does not know (kept on save), as paths, for a warning. */
       unknownFields: string[];
+      /** Keys the file gives twice in one object (the last one is used), as paths, for a warning. */
+      duplicateKeys: string[];
       /** Releases the write lock (nothing when read-only). Safe to call twice. */
       release(): Promise<void>;
     }
@@ -133,6 +136,7 @@ export async function openCase(dirOrPath: string, opts: OpenOptions = {}): Promi
     path: file,
     readOnly: readOnlyReason !== undefined,
     unknownFields: loaded.unknownFields,
+    duplicateKeys: loaded.duplicateKeys,
     release: async () => {
       if (released || !locked) return;
       released = true;
@@ -154,6 +158,8 @@ async function readWithSig(
     const handle = await fs.open(file, 'r');
     try {
       const stat = await handle.stat();
+      if (stat.size > MAX_CASE_BYTES)
+        return fail('json', file, [{ path: '(file)', message: tooLargeMessage(stat.size) }]);
       const bytes = await handle.readFile();
       return { text: bytes.toString('utf8'), hash: hashOf(bytes), sig: sigOf(stat), stat };
     } finally {

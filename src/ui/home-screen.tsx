@@ -6,6 +6,7 @@ import { TextField } from './text-field.js';
 import { windowOf } from './scroll.js';
 import { TONE } from './theme.js';
 import { localTime } from './header.js';
+import { isNewerFileProblem } from '../case/load.js';
 
 const FROM: Record<string, string> = {
   flag: 'set by --sessions',
@@ -90,9 +91,11 @@ export function HomeScreen(p: HomeProps) {
       {w.below ? <Text color={TONE.muted}> ↓ {w.below} more</Text> : null}
       {sel?.problem ? (
         <Text color={TONE.warning}>
-          {sel.problem.hasBackup
-            ? 'This file is damaged and is never overwritten. Press b to restore its backup copy.'
-            : 'This file is damaged and is never overwritten; no backup copy was found.'}
+          {isNewerFileProblem(sel.problem.message)
+            ? 'This file was written by a newer skidcase: update skidcase to open it. It is left as it is.'
+            : sel.problem.hasBackup
+              ? 'This file is damaged and is never overwritten. Press b to restore its backup copy.'
+              : 'This file is damaged and is never overwritten; no backup copy was found.'}
         </Text>
       ) : null}
       {p.path ? (

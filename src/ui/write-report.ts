@@ -7,6 +7,7 @@ import type { Case } from '../case/load.js';
 import { buildReport } from '../report/build.js';
 import { toolVersion } from '../report/version.js';
 import { writeReport } from '../report/write-report.js';
+import { writeFailureText } from '../report/write-files.js';
 import { solveAsFile } from './interview-live.js';
 import type { OpenCase } from './services.js';
 
@@ -37,7 +38,6 @@ export async function writeCaseReport(
   if (r.ok) return { ok: true as const, path: file };
   return {
     ok: false as const,
-    message:
-      r.kind === 'exists' ? `${r.paths.join(', ')} already exists` : `${r.path}: ${r.message}`,
+    message: writeFailureText(r),
   };
 }

@@ -109,7 +109,7 @@ const invalid: [string, string, string][] = [
   [
     'a newer version',
     edit((c) => (c.version = 2 as never)),
-    'version: version 2 is newer than this skidcase understands',
+    'version: written by a newer skidcase (file version 2; this one reads up to version 1): update skidcase to open it',
   ],
   ['truncated JSON', JSON.stringify(base()).slice(0, 80), '(file): not valid JSON'],
   [

@@ -153,28 +153,36 @@ describe('odd files', () => {
     expect(r.code).toBe(0);
     expect(r.out).toContain('extra199999: not a field of the case format');
   });
-  it('100 000 marks with the longest rule give the longest mark', async () => {
-    const c = full();
-    c.analyses = [
-      {
-        id: 'many',
-        kind: 'skid',
-        distanceRule: 'longest',
-        marks: Array.from({ length: 100_000 }, (_, i) => 40 + (i % 9)),
-        segments: [{ drag: { source: 'entered', value: 0.75 } }],
-      },
-    ];
-    c.vehicle.brakes = { mode: 'all' };
-    const r = await runSolve(write(JSON.stringify(c)), true);
+  it('1000 marks (the most a list may hold) with the longest rule give the longest mark; 1001 are refused', async () => {
+    const withMarks = (n: number) => {
+      const c = full();
+      c.analyses = [
+        {
+          id: 'many',
+          kind: 'skid',
+          distanceRule: 'longest',
+          marks: Array.from({ length: n }, (_, i) => 40 + (i % 9)),
+          segments: [{ drag: { source: 'entered', value: 0.75 } }],
+        },
+      ];
+      c.vehicle.brakes = { mode: 'all' };
+      return write(JSON.stringify(c));
+    };
+    const r = await runSolve(withMarks(1000), true);
     expect(r.code).toBe(0);
     // Longest mark 48 ft: sqrt(30 × 48 × 0.75) = sqrt(1080), by hand.
     expect(JSON.parse(r.out).analyses[0].speed.value).toBeCloseTo(Math.sqrt(1080), 9);
+    const over = await runSolve(withMarks(1001), true);
+    expect(over.code).toBe(2);
+    expect(over.err).toMatch(/^analyses\[0\]\.marks: marks must have at most 1000 items\n/);
   });
-  it('deep nesting in an unknown field and in the interview is kept, not fatal', async () => {
+  it('deep nesting in an unknown field or in the interview is refused (exit 2), never a crash', async () => {
     for (const key of ['extra', 'interview']) {
       const text = JSON.stringify(full()).replace(/}$/, `, "${key}": ${deep(100_000)}}`);
       const r = await runSolve(write(text), true);
-      expect(r.code).toBe(0);
+      expect(r.code).toBe(2);
+      expect(r.err).toMatch(/^\(file\): nested too deeply: more than 64 levels/);
+      expect(r.out).toBe('');
     }
   });
 });

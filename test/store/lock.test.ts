@@ -229,3 +229,16 @@ describe('releasing', () => {
     expect(!s.ok && s.kind).toBe('read-only');
   });
 });
+
+describe('a lock that cannot be made', () => {
+  it('in a folder that does not exist: says so, names the case, and no temp file name', async () => {
+    const { acquireLock } = await import('../../src/store/lock.js');
+    const file = path.join(tempDir('lock-gone'), 'no-such-folder', 'x.json');
+    const r = await acquireLock(file);
+    expect(r.kind).toBe('error');
+    const message = r.kind === 'error' ? r.message : '';
+    expect(message).toBe(`cannot lock ${file}: the folder does not exist any more`);
+    expect(message).not.toMatch(/\.lock\.new|\.tmp|ENOENT/);
+    expect(fs.existsSync(path.dirname(file))).toBe(false);
+  });
+});

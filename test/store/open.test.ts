@@ -142,7 +142,7 @@ describe('versions', () => {
     expect(r.ok).toBe(false);
     if (!r.ok) {
       expect(r.kind).toBe('newer');
-      expect(r.message).toMatch(/version 2 is newer/);
+      expect(r.message).toMatch(/version: written by a newer skidcase \(file version 2; this one reads up to version 1\)/);
       expect(r.message).toContain(file);
     }
     expect(fs.readFileSync(file, 'utf8')).toBe(text);

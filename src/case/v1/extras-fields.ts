@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { quantity, RULES } from '../quantity.js';
+import { finiteNumber, quantity, RULES } from '../quantity.js';
+import { MAX_ITEMS, tooManyMessage } from '../limits.js';
 
 /**
  * The optional fields of case v1 that feed the extras (docs/case-file.md, "Sampling",
@@ -11,14 +12,12 @@ import { quantity, RULES } from '../quantity.js';
 export const samplingFieldV1 = z.looseObject(
   {
     shape: z.enum(['uniform', 'normal'], { error: 'shape must be uniform or normal' }).optional(),
-    samples: z
-      .number({ error: 'samples must be a number' })
+    samples: finiteNumber('samples')
       .int('samples must be a whole number')
       .min(1000, 'samples must be at least 1000')
       .max(1_000_000, 'samples must be at most 1000000')
       .optional(),
-    seed: z
-      .number({ error: 'seed must be a number' })
+    seed: finiteNumber('seed')
       .int('seed must be a whole number')
       .min(0, 'seed must be at least 0')
       .max(0xffffffff, 'seed must be at most 4294967295')
@@ -30,13 +29,11 @@ export const samplingFieldV1 = z.looseObject(
 /** Per skid analysis `timeDistance`: a reaction time for this case and a conflict point. */
 export const timeDistanceFieldV1 = z.looseObject(
   {
-    reactionTime: z
-      .number({ error: 'reactionTime must be a number of seconds' })
+    reactionTime: finiteNumber('reactionTime', 'a number of seconds')
       .min(0, 'reactionTime must be at least 0 s')
       .max(10, 'reactionTime must be at most 10 s')
       .optional(),
-    conflictAt: z
-      .number({ error: 'conflictAt must be a distance' })
+    conflictAt: finiteNumber('conflictAt', 'a distance')
       .min(0, 'conflictAt must be 0 or more (a distance from the start of the marks)')
       .max(100_000, 'conflictAt must be at most 100000')
       .optional(),
@@ -47,10 +44,8 @@ export const timeDistanceFieldV1 = z.looseObject(
 /** One offset station: `at` along the chord from its start, `offset` from the chord to the mark. */
 export const offsetStationV1 = z.looseObject(
   {
-    at: z
-      .number({ error: 'at must be a distance along the chord' })
-      .gt(0, 'at must be greater than 0'),
-    offset: z.number({ error: 'offset must be a length' }).gt(0, 'offset must be greater than 0'),
+    at: finiteNumber('at', 'a distance along the chord').gt(0, 'at must be greater than 0'),
+    offset: finiteNumber('offset', 'a length').gt(0, 'offset must be greater than 0'),
   },
   { error: 'station must be an object { "at": n, "offset": n }' },
 );
@@ -65,7 +60,8 @@ export const offsetsFieldV1 = z.looseObject(
     chord: quantity({ ...RULES.length, what: 'chord' }),
     stations: z
       .array(offsetStationV1, { error: 'stations must be a list of { "at": n, "offset": n }' })
-      .min(1, 'at least one station is needed'),
+      .min(1, 'at least one station is needed')
+      .max(MAX_ITEMS, tooManyMessage('stations')),
   },
   { error: 'offsets must be an object { "chord": n, "stations": [...] }' },
 );

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { quantity, RULES } from '../quantity.js';
+import { finiteNumber, quantity, RULES } from '../quantity.js';
+import { MAX_ITEMS, tooManyMessage } from '../limits.js';
 
 /**
  * The fields that link analyses into phases and the new ways of measuring them
@@ -35,18 +36,20 @@ export const endAnalysisV1 = z.looseObject({
 /** Largest coordinate a surveyed point may have, in the case's length unit. */
 const COORDINATE_LIMIT = 10_000_000;
 
-const coordinate = z
-  .number({ error: 'a coordinate must be a number' })
-  .refine((n) => Number.isFinite(n) && Math.abs(n) <= COORDINATE_LIMIT, {
+const coordinate = finiteNumber('a coordinate').refine(
+  (n) => Number.isFinite(n) && Math.abs(n) <= COORDINATE_LIMIT,
+  {
     message: `a coordinate must be a finite number of at most ${COORDINATE_LIMIT} in size`,
-  });
+  },
+);
 
 /** Points surveyed along a yaw mark, `[x, y]` in the case's length unit; at least three. */
 export const pointsFieldV1 = z
   .array(z.tuple([coordinate, coordinate], { error: 'a point must be [x, y]: two numbers' }), {
     error: 'points must be a list of [x, y] pairs',
   })
-  .min(3, 'at least 3 points are needed for a circle');
+  .min(3, 'at least 3 points are needed for a circle')
+  .max(MAX_ITEMS, tooManyMessage('points'));
 
 /** A vehicle that left the ground: horizontal distance, drop and take-off grade of its centre of mass. */
 export const airborneV1 = z.looseObject({

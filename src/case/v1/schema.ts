@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { quantity, RULES } from '../quantity.js';
+import { finiteNumber, quantity, RULES } from '../quantity.js';
+import { MAX_ITEMS, tooManyMessage } from '../limits.js';
 import { offsetsFieldV1, samplingFieldV1, timeDistanceFieldV1 } from './extras-fields.js';
 import {
   airborneV1,
@@ -37,18 +38,18 @@ export const dragV1 = z
     [
       z.looseObject({
         source: z.literal('entered'),
-        value: z.number({ error: 'drag factor must be a number' }),
-        low: z.number({ error: 'drag factor (low) must be a number' }).optional(),
-        high: z.number({ error: 'drag factor (high) must be a number' }).optional(),
+        value: finiteNumber('drag factor'),
+        low: finiteNumber('drag factor (low)').optional(),
+        high: finiteNumber('drag factor (high)').optional(),
         note: text('note').optional(),
       }),
       z.looseObject({
         source: z.literal('table'),
         // A label for the report, never checked against the table (docs/case-file.md).
         surface: text('surface').optional(),
-        value: z.number({ error: 'drag factor must be a number' }),
-        low: z.number({ error: 'drag factor (low) must be a number' }).optional(),
-        high: z.number({ error: 'drag factor (high) must be a number' }).optional(),
+        value: finiteNumber('drag factor'),
+        low: finiteNumber('drag factor (low)').optional(),
+        high: finiteNumber('drag factor (high)').optional(),
         band: z.enum(['under-30mph', 'over-30mph']).optional(),
         note: text('note').optional(),
       }),
@@ -67,7 +68,8 @@ export const dragV1 = z
               error: 'tests must be a list of { "speed": n, "distance": n }',
             },
           )
-          .min(1, 'at least one test skid is needed'),
+          .min(1, 'at least one test skid is needed')
+          .max(MAX_ITEMS, tooManyMessage('tests')),
         /** Grade the tests were run on (signed percent, + uphill in their direction); default level. */
         testGrade: q({ ...RULES.grade, what: 'test grade' }).optional(),
         note: text('note').optional(),
@@ -77,14 +79,16 @@ export const dragV1 = z
         weight: q(RULES.sledWeight),
         pulls: z
           .array(q(RULES.sledPull), { error: 'pulls must be a list of numbers' })
-          .min(1, 'at least one pull is needed'),
+          .min(1, 'at least one pull is needed')
+          .max(MAX_ITEMS, tooManyMessage('pulls')),
         note: text('note').optional(),
       }),
       z.looseObject({
         source: z.literal('decelerometer'),
         readings: z
           .array(q(RULES.decel), { error: 'readings must be a list of numbers' })
-          .min(1, 'at least one reading is needed'),
+          .min(1, 'at least one reading is needed')
+          .max(MAX_ITEMS, tooManyMessage('readings')),
         note: text('note').optional(),
       }),
     ],
@@ -186,7 +190,10 @@ export const skidV1 = z.looseObject({
       error: 'appearance must be locked, abs, skip or gap',
     })
     .optional(),
-  marks: z.array(q(RULES.length), { error: 'marks must be a list of lengths' }).optional(),
+  marks: z
+    .array(q(RULES.length), { error: 'marks must be a list of lengths' })
+    .max(MAX_ITEMS, tooManyMessage('marks'))
+    .optional(),
   distanceRule: z
     .enum(['average', 'longest', 'shortest', 'spread'], {
       error: 'distanceRule must be average, longest, shortest or spread',
@@ -194,7 +201,8 @@ export const skidV1 = z.looseObject({
     .optional(),
   segments: z
     .array(segmentV1, { error: 'segments must be a list' })
-    .min(1, 'at least one segment is needed'),
+    .min(1, 'at least one segment is needed')
+    .max(MAX_ITEMS, tooManyMessage('segments')),
   end: endV1.optional(),
   timeDistance: timeDistanceFieldV1.optional(),
 });
@@ -297,7 +305,9 @@ export const caseV1 = z
     postedLimit: q(RULES.postedLimit).optional(),
     sampling: samplingFieldV1.optional(),
     vehicle: vehicleV1,
-    analyses: z.array(analysisV1, need('analyses', 'a list')),
+    analyses: z
+      .array(analysisV1, need('analyses', 'a list'))
+      .max(MAX_ITEMS, tooManyMessage('analyses')),
     interview: z.unknown().optional(),
   })
   .superRefine((c, ctx) => {
