@@ -55,6 +55,10 @@ function opened(r: OpenResult): Opened {
   const open: OpenCase = { case: r.case, file: r.path, release: r.release };
   if (r.readOnly) open.readOnly = r.readOnlyReason ?? 'this case is open in another skidcase.';
   if (r.migratedFrom !== undefined) open.migratedFrom = r.migratedFrom;
+  if (r.duplicateKeys.length)
+    open.warnings = r.duplicateKeys.map(
+      (k) => `Warning: ${k} is given twice in the file; the last one is used.`,
+    );
   return { ok: true, open };
 }
 

@@ -32,6 +32,8 @@ export interface OpenCase {
   migratedFrom?: number;
   /** Just created: the interview starts from its first question. */
   isNew?: boolean;
+  /** Warnings about the file as read (a key given twice), shown when the case opens. */
+  warnings?: string[];
   release(): Promise<void>;
 }
 

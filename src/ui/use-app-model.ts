@@ -97,6 +97,8 @@ export function useAppModel(
       // Nothing answered yet: no "already done" list, the first question and its why.
       if (!opened.open.isNew && port.progress(state).answered > 0)
         session.summary = port.summary(state);
+      if (opened.open.warnings?.length)
+        session.summary = [...opened.open.warnings, ...(session.summary ?? [])];
       if (opened.open.migratedFrom !== undefined)
         session.summary = [
           `This file was written in case format version ${opened.open.migratedFrom}; it is saved in the current version once you change an answer, and the original is kept beside it.`,

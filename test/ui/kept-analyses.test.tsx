@@ -128,3 +128,20 @@ describe('a case file replaced by garbage while open', () => {
     );
   });
 });
+
+describe('a case file with a key given twice', () => {
+  it('opens with a warning naming the key', async () => {
+    const text = JSON.stringify(halfDone, null, 2).replace(
+      '"units": "imperial",',
+      '"units": "imperial",\n  "units": "imperial",',
+    );
+    expect(text).toMatch(/"units": "imperial",\n {2}"units"/);
+    const app = renderApp({
+      files: { 'half-done.json': text },
+      start: { kind: 'resume', id: 'half-done' },
+      rows: 40,
+    });
+    const f = (await app.waitText('given twice')).replace(/\s+/g, ' ');
+    expect(f).toContain('Warning: units is given twice in the file; the last one is used.');
+  });
+});
