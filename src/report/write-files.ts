@@ -2,6 +2,7 @@ import { constants } from 'node:fs';
 import { access, link, lstat, rename, stat, unlink } from 'node:fs/promises';
 import path from 'node:path';
 import writeFileAtomic from 'write-file-atomic';
+import { describeWriteError } from '../io/write-error.js';
 
 /** One file to write: where, and its whole content. */
 export interface OutFile {
@@ -134,13 +135,6 @@ export function writeFailureText(r: WriteResult & { ok: false }): string {
     return `${where} is a folder; give the report a file name, such as ${path.join(where, 'report.md')}`;
   if (r.code === 'ENOENT') return `${where}: the folder does not exist`;
   if (r.code === 'ENOTDIR') return `${where}: is not a folder`;
-  const why =
-    r.code === 'EACCES' || r.code === 'EPERM'
-      ? 'the folder cannot be written (permission denied)'
-      : r.code === 'EROFS'
-        ? 'the folder is on a read-only file system'
-        : r.code === 'ENOSPC' || r.code === 'EDQUOT'
-          ? 'the disk is full'
-          : `the disk reported an error (${r.code ?? 'unknown'})`;
-  return `${where}: cannot be written: ${why}`;
+  const { text } = describeWriteError(Object.assign(new Error(), { code: r.code }));
+  return `${where}: cannot be written: ${text}`;
 }

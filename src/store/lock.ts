@@ -12,7 +12,7 @@ import {
   readLock,
   type LockInfo,
 } from './lock-info.js';
-import { describeWriteError } from './write-error.js';
+import { describeWriteError } from '../io/write-error.js';
 import { errCode } from './errno.js';
 
 /**

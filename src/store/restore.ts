@@ -5,7 +5,7 @@ import { caseFilePath } from './case-path.js';
 import { backupPath, brokenPath } from './side-files.js';
 import { getKnown, hashOf, serial, sigOf } from './known-files.js';
 import { writeVerifiedSync } from './verified-write.js';
-import { describeWriteError } from './write-error.js';
+import { describeWriteError } from '../io/write-error.js';
 import { acquireLock } from './lock.js';
 import { moveToFreeName } from './keep-aside.js';
 

@@ -11,7 +11,7 @@ import { linkReplacingSync, linkUnderFreeNameSync } from './keep-aside.js';
 import { errCode } from './errno.js';
 import { disk } from './disk.js';
 import { writeVerifiedSync } from './verified-write.js';
-import { describeWriteError, type WriteProblem } from './write-error.js';
+import { describeWriteError, type WriteProblem } from '../io/write-error.js';
 
 export type SaveResult =
   | {

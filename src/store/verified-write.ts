@@ -1,7 +1,7 @@
 import path from 'node:path';
 import { randomBytes } from 'node:crypto';
 import { disk } from './disk.js';
-import { ShortWriteError } from './write-error.js';
+import { ShortWriteError } from '../io/write-error.js';
 
 /** The temp name a save writes first: `<id>.json.<pid>-<hex>.new` (leftovers.ts sweeps it). */
 export const tempNameFor = (file: string) =>

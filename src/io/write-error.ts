@@ -1,4 +1,8 @@
-import { errCode } from './errno.js';
+/**
+ * What a failed write means for the user, for every writer (the case store and the report
+ * writer): one wording, never a temp file's name. A leaf: it imports nothing of the project.
+ */
+const errCode = (e: unknown) => (e as NodeJS.ErrnoException).code;
 
 /** Errors that mean "this place cannot take the case now"; the answers stay in memory. */
 export type WriteProblem = 'full' | 'denied' | 'read-only' | 'gone' | 'io' | 'short';
