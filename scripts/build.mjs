@@ -42,6 +42,44 @@ const yogaWithoutFetch = {
 };
 
 /**
+ * string-width, slice-ansi and ansi-tokenize each make an `Intl.Segmenter` when they are loaded,
+ * which starts ICU's break iterators (10 ms and more) before the first frame, although most
+ * screens are plain ASCII and never need one. Each is made on its first `segment` call instead.
+ * The build fails if a package starts using its segmenter for anything but `segment`.
+ */
+const segmentersOnFirstUse = {
+  name: 'segmenters-on-first-use',
+  setup(b) {
+    b.onLoad(
+      {
+        filter:
+          /node_modules[\\/](string-width[\\/]index|slice-ansi[\\/]tokenize-ansi|@alcalzone[\\/]ansi-tokenize[\\/]build[\\/]tokenize)\.js$/,
+      },
+      async (args) => {
+        const text = await readFile(args.path, 'utf8');
+        const decl = /\b(?:const|let|var)\s+([\w$]+)\s*=\s*new Intl\.Segmenter\(/g;
+        const names = [...text.matchAll(decl)].map((m) => m[1]);
+        if (names.length === 0) throw new Error(`${args.path}: no Intl.Segmenter made at load`);
+        for (const name of names) {
+          const n = name.replace('$', '\\$');
+          // a method other than segment(), or the segmenter handed on as a value
+          const uses = text.match(
+            new RegExp(`(?<![\\w$.])${n}\\.(?!segment\\()|[(,=]\\s*${n}\\s*[,);]`, 'g'),
+          );
+          if (uses) throw new Error(`${args.path}: ${name} is used for more than segment()`);
+        }
+        const lazy =
+          'const __lazySegmenter = (...a) => { let s; return { segment: (t) => (s ??= new Intl.Segmenter(...a)).segment(t) }; };\n';
+        return {
+          contents: lazy + text.replace(/new Intl\.Segmenter\(/g, '__lazySegmenter('),
+          loader: 'js',
+        };
+      },
+    );
+  },
+};
+
+/**
  * A hash of everything the bundle is made from: the sources, this script, and the package files.
  * `--if-changed` (what `npm start` passes) skips the build when dist/ was made from the same
  * inputs, so the second start opens in a fraction of a second instead of rebuilding.
@@ -99,9 +137,12 @@ await build({
       'const __dirname = __dn(__filename);',
     ].join('\n'),
   },
-  define: { 'process.env.NODE_ENV': '"production"', __SKIDCASE_VERSION__: JSON.stringify(pkg.version) },
+  define: {
+    'process.env.NODE_ENV': '"production"',
+    __SKIDCASE_VERSION__: JSON.stringify(pkg.version),
+  },
   external: ['react-devtools-core'],
-  plugins: [zodEnglishOnly, yogaWithoutFetch],
+  plugins: [zodEnglishOnly, yogaWithoutFetch, segmentersOnFirstUse],
   logLevel: 'warning',
 });
 chmodSync(new URL('../dist/skidcase.js', import.meta.url), 0o755);

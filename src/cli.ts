@@ -1,8 +1,9 @@
 /**
  * skidcase command line. `solve` and `report` load neither Ink nor React (they are dynamic imports
- * only on the interactive paths), so a scripted solve starts about as fast as node itself.
+ * only on the interactive paths), so a scripted solve starts about as fast as node itself. The two
+ * commonest starts (no arguments, and `solve FILE [--json]`) do not load commander either.
  */
-import { Command, Option } from 'commander';
+import type { Command } from 'commander';
 
 declare const __SKIDCASE_VERSION__: string;
 const VERSION = typeof __SKIDCASE_VERSION__ === 'string' ? __SKIDCASE_VERSION__ : '0.0.0-dev';
@@ -23,7 +24,7 @@ const NO_TTY = [
 async function sessions(flag: string | undefined) {
   const [{ resolveSessionsDir }, { loadPrefs }] = await Promise.all([
     import('./store/index.js'),
-    import('./prefs/index.js'),
+    import('./prefs/prefs.js'),
   ]);
   const { prefs, warnings } = loadPrefs();
   for (const w of warnings) io.err(`skidcase: preferences: ${w}`);
@@ -46,7 +47,7 @@ async function interactive(flag: string | undefined, start: Start): Promise<numb
   return runInteractive({ sessionsDir: where.dir, sessionsFrom: where.from, start });
 }
 
-function program(): Command {
+function program({ Command, Option }: typeof import('commander')): Command {
   const p = new Command('skidcase')
     .description(
       'Guided speed-from-tire-marks reconstruction: skid and yaw marks to a minimum speed with its range.',
@@ -141,10 +142,34 @@ function setExit(code: number) {
   process.exitCode = code;
 }
 
-try {
-  await program().parseAsync(process.argv);
-} catch (e) {
+/**
+ * The arguments that need no parser: none at all (the case list), and `solve FILE` with or
+ * without `--json` (FILE not an option). They run exactly what commander's actions would run;
+ * anything else, `--help` included, goes through commander.
+ */
+function fastPath(args: readonly string[]): (() => Promise<number>) | undefined {
+  if (args.length === 0) return () => interactive(undefined, { kind: 'home' });
+  if (args[0] !== 'solve' || args.length < 2 || args.length > 3) return undefined;
+  const rest = args.slice(1);
+  const json = rest.length === 2;
+  if (json && !rest.includes('--json')) return undefined;
+  const files = rest.filter((a) => a !== '--json');
+  if (files.length !== 1 || files[0]!.startsWith('-')) return undefined;
+  const file = files[0]!;
+  return async () => {
+    const { solveCommand } = await import('./commands/solve.js');
+    return solveCommand(file, { json }, io);
+  };
+}
+
+async function main() {
+  const fast = fastPath(process.argv.slice(2));
+  if (fast) return setExit(await fast());
+  await program(await import('commander')).parseAsync(process.argv);
+}
+
+main().catch((e: unknown) => {
   // Only a programming error lands here; expected failures are exit codes with messages.
   io.err(`skidcase: internal error: ${e instanceof Error ? e.message : String(e)}`);
   process.exitCode = 70;
-}
+});

@@ -44,7 +44,9 @@ export async function runInteractive(opts: RunOptions): Promise<number> {
       quickEntry={[...QUICK_ENTRY_HELP, '', ...UNIT_SUFFIX_HELP]}
       onExit={(c) => (code = c)}
     />,
-    { exitOnCtrlC: false },
+    // Ink's default 30 frames a second holds a frame that follows another within 33 ms (the case
+    // list after its placeholder, a key typed soon after the last); 120 holds it 8 ms at most.
+    { exitOnCtrlC: false, maxFps: 120 },
   );
   const stop = onEndSignals(() => instance.unmount());
   await instance.waitUntilExit();

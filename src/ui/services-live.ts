@@ -17,7 +17,7 @@ import {
   uniqueId,
   type OpenResult,
 } from '../store/index.js';
-import { loadPrefs, savePref, type PrefsOptions } from '../prefs/index.js';
+import { loadPrefs, type PrefsOptions } from '../prefs/prefs.js';
 import type { InterviewMode } from '../interview/types.js';
 import type { InterviewPort } from './interview-port.js';
 import type { CaseRow, Opened, OpenCase, Saved, Services } from './services.js';
@@ -184,7 +184,8 @@ export function liveServices(o: LiveOptions): Services {
     writeReport:
       o.writeReport ?? ((open, c) => writeCaseReport(open, c, now(), prefs.reactionTime)),
     saveMode(mode: InterviewMode) {
-      savePref('mode', mode, o.prefs ?? {});
+      // conf (and its validator) is loaded only when a preference is written, not at start-up.
+      void import('../prefs/save.js').then(({ savePref }) => savePref('mode', mode, o.prefs ?? {}));
     },
   };
 }

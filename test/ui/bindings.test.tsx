@@ -1,7 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { trackedTempDir } from '../temp-dirs.js';
-import { afterEach, describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it, vi } from 'vitest';
 import { cleanup } from 'ink-testing-library';
 import { KEY_TABLE, bindingKeys, keyLabel, type Command } from '../../src/ui/keys.js';
 import { QUICK_ENTRY_HELP } from '../../src/input/index.js';
@@ -194,8 +194,11 @@ const CHECKS: Record<Command, (keys: string) => Promise<void>> = {
   async mode(k) {
     const app = await fresh();
     await app.press(k, 'brisk mode');
-    const cfg = JSON.parse(fs.readFileSync(path.join(app.cfg, 'config.json'), 'utf8'));
-    expect(cfg.mode).toBe('brisk');
+    // the preference is written through conf, which is loaded on this first write
+    await vi.waitFor(() => {
+      const cfg = JSON.parse(fs.readFileSync(path.join(app.cfg, 'config.json'), 'utf8'));
+      expect(cfg.mode).toBe('brisk');
+    });
     await app.press(k, 'guided mode');
   },
   async up(k) {
