@@ -140,6 +140,7 @@ await build({
   define: {
     'process.env.NODE_ENV': '"production"',
     __SKIDCASE_VERSION__: JSON.stringify(pkg.version),
+    __SKIDCASE_BUILD__: JSON.stringify(hash),
   },
   external: ['react-devtools-core'],
   plugins: [zodEnglishOnly, yogaWithoutFetch, segmentersOnFirstUse],

@@ -24,8 +24,16 @@ export {
   type OpenOptions,
   type OpenFailureKind,
 } from './open.js';
-export { listCases, type CaseEntry } from './list.js';
+export { listCases, caseFiles, readCaseEntry, type CaseEntry } from './list.js';
+export {
+  openListIndex,
+  listIndexFile,
+  stampOf,
+  type ListIndex,
+  type FileStamp,
+} from './list-index.js';
 export { restoreBackup, type RestoreResult } from './restore.js';
 export { releaseAllLocks, releaseAllLocksSync, releaseLock } from './lock.js';
 export { backupPath, lockPath } from './side-files.js';
 export { LOCK_STALE_MS } from './lock-info.js';
+export { userCacheDir, CACHE_DIR_ENV } from './cache-dir.js';

@@ -4,6 +4,7 @@ import { describeIssue } from '../case/issues.js';
 import { loadCaseText, type Case } from '../case/load.js';
 import { MAX_CASE_BYTES, tooLargeMessage } from '../case/limits.js';
 import { isSideFile } from './side-files.js';
+import { stampOf, type FileStamp } from './list-index.js';
 
 /** One file of the sessions folder, as the case list shows it. */
 export interface CaseEntry {
@@ -18,6 +19,8 @@ export interface CaseEntry {
   problem?: string;
   /** A valid case whose id differs from its file name (saving it writes `<id>.json`). */
   warning?: string;
+  /** The file's stamp, taken before it was read (for the list index). */
+  stamp?: FileStamp;
 }
 
 /**
@@ -29,6 +32,12 @@ export interface CaseEntry {
  * for (const e of await listCases(dir)) console.log(e.id, e.problem ?? e.case?.details?.reference);
  */
 export async function listCases(dir: string): Promise<CaseEntry[]> {
+  const entries = await Promise.all((await caseFiles(dir)).map(readCaseEntry));
+  return entries.sort((a, b) => b.updated.localeCompare(a.updated) || a.id.localeCompare(b.id));
+}
+
+/** The case files of the sessions folder (absolute paths), unread and unsorted. */
+export async function caseFiles(dir: string): Promise<string[]> {
   let names: string[];
   try {
     names = await fs.readdir(dir);
@@ -36,14 +45,13 @@ export async function listCases(dir: string): Promise<CaseEntry[]> {
     if ((e as NodeJS.ErrnoException).code === 'ENOENT') return [];
     throw e;
   }
-  const files = names
+  return names
     .filter((n) => n.endsWith('.json') && !isSideFile(n))
     .map((n) => path.join(path.resolve(dir), n));
-  const entries = await Promise.all(files.map(readEntry));
-  return entries.sort((a, b) => b.updated.localeCompare(a.updated) || a.id.localeCompare(b.id));
 }
 
-async function readEntry(file: string): Promise<CaseEntry> {
+/** One file of the list, read and checked (`listCases` for each of them). */
+export async function readCaseEntry(file: string): Promise<CaseEntry> {
   const id = path.basename(file, '.json');
   let mtime = new Date(0).toISOString();
   try {
@@ -52,6 +60,7 @@ async function readEntry(file: string): Promise<CaseEntry> {
     if (!st.isFile()) return { id, path: file, updated: mtime, problem: 'not a file' };
     if (st.size > MAX_CASE_BYTES)
       return { id, path: file, updated: mtime, problem: tooLargeMessage(st.size) };
+    const stamp = stampOf(st);
     const loaded = loadCaseText(await fs.readFile(file, 'utf8'));
     if (!loaded.ok) {
       const first = loaded.issues[0];
@@ -68,6 +77,7 @@ async function readEntry(file: string): Promise<CaseEntry> {
       path: file,
       updated: normalise(c.updated) ?? mtime,
       case: c,
+      stamp,
     };
     if (c.id !== id)
       entry.warning = `the case inside has id "${c.id}", the file is named ${id}.json`;

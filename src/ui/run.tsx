@@ -4,13 +4,22 @@
  */
 import React from 'react';
 import { render } from 'ink';
-import { releaseAllLocks, releaseAllLocksSync } from '../store/index.js';
+import {
+  listIndexFile,
+  releaseAllLocks,
+  releaseAllLocksSync,
+  userCacheDir,
+} from '../store/index.js';
 import { App } from './app.js';
 import { liveInterview } from './interview-live.js';
 import { liveServices } from './services-live.js';
 import { applyColorPolicy } from './theme.js';
 import type { Start } from './use-app-model.js';
 import { QUICK_ENTRY_HELP, UNIT_SUFFIX_HELP } from '../input/index.js';
+
+/** The build's identity (a hash of its inputs, set by scripts/build.mjs); none from the sources. */
+declare const __SKIDCASE_BUILD__: string | undefined;
+const BUILD = typeof __SKIDCASE_BUILD__ === 'string' ? __SKIDCASE_BUILD__ : undefined;
 
 export interface RunOptions {
   sessionsDir: string;
@@ -33,6 +42,15 @@ export async function runInteractive(opts: RunOptions): Promise<number> {
     sessionsDir: opts.sessionsDir,
     sessionsFrom: opts.sessionsFrom,
     port: liveInterview,
+    // Rows kept from the last list are trusted only by the build that wrote them.
+    ...(BUILD
+      ? {
+          listIndex: {
+            file: listIndexFile(userCacheDir(), opts.sessionsDir),
+            key: `${BUILD} ${process.version}`,
+          },
+        }
+      : {}),
   });
   let code = 0;
   const instance = render(

@@ -7,10 +7,14 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { Case } from '../case/load.js';
 import { loadCaseText } from '../case/load.js';
+import { z } from 'zod';
 import {
+  caseFiles,
   checkBackup,
-  listCases,
   openCase,
+  openListIndex,
+  readCaseEntry,
+  stampOf,
   restoreBackup,
   saveCase,
   saveCaseSync,
@@ -34,7 +38,60 @@ export interface LiveOptions {
   /** Writes a report; by default the Markdown report beside the case file. */
   writeReport?: Services['writeReport'];
   now?: () => Date;
+  /**
+   * The list index (store/list-index.ts): its file and the build that may read it. Without it
+   * every case is read on every list (tests, and runs from the sources).
+   */
+  listIndex?: { file: string; key: string };
 }
+
+/** What the list index keeps of a row (the file path is the one listed, never a kept one). */
+const keptRow = z.object({
+  id: z.string(),
+  updated: z.string(),
+  reference: z.string().optional(),
+  progress: z.object({ answered: z.number(), applicable: z.number() }).optional(),
+  stoppedAt: z.string().optional(),
+  result: z.string().optional(),
+});
+
+/** The rows of the case list, newest `updated` first (the order of store's `listCases`). */
+async function listRows(dir: string, o: LiveOptions): Promise<CaseRow[]> {
+  const index = o.listIndex && openListIndex(o.listIndex.file, o.listIndex.key, dir);
+  const rows = await Promise.all(
+    (await caseFiles(dir)).map(async (file): Promise<CaseRow> => {
+      if (index) {
+        const st = await fs.stat(file).catch(() => undefined);
+        const kept = st?.isFile() ? keptRow.safeParse(index.get(file, stampOf(st))) : undefined;
+        if (kept?.success) return { ...withoutUndefined(kept.data), file };
+      }
+      const e = await readCaseEntry(file);
+      if (e.case) {
+        const row = summarise(o.port, e.case, e.path, e.updated);
+        if (index && e.stamp) {
+          const { file: _f, ...keep } = row;
+          index.set(file, e.stamp, keep);
+        }
+        return row;
+      }
+      const bak = await checkBackup(e.path);
+      return {
+        id: e.id,
+        file: e.path,
+        updated: e.updated,
+        problem: { message: e.problem ?? 'cannot be read', hasBackup: !!bak?.loadable },
+      };
+    }),
+  );
+  // after the list is drawn: the index only speeds up the next list
+  if (index) setImmediate(() => index.save());
+  return rows.sort(
+    (a, b) => (b.updated ?? '').localeCompare(a.updated ?? '') || a.id.localeCompare(b.id),
+  );
+}
+
+const withoutUndefined = <T extends object>(o: T): T =>
+  Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as T;
 
 /** The demo case shipped with skidcase: `sessions/demo*.json` beside dist/ or src/. */
 export async function findDemoFile(): Promise<string | undefined> {
@@ -105,19 +162,7 @@ export function liveServices(o: LiveOptions): Services {
     reactionTime: prefs.reactionTime,
     now,
     async listCases() {
-      const entries = await listCases(dir);
-      return Promise.all(
-        entries.map(async (e): Promise<CaseRow> => {
-          if (e.case) return summarise(o.port, e.case, e.path, e.updated);
-          const bak = await checkBackup(e.path);
-          return {
-            id: e.id,
-            file: e.path,
-            updated: e.updated,
-            problem: { message: e.problem ?? 'cannot be read', hasBackup: !!bak?.loadable },
-          };
-        }),
-      );
+      return listRows(dir, o);
     },
     async openCase(ref) {
       return opened('id' in ref ? await openCase(dir, { id: ref.id }) : await openCase(ref.path));

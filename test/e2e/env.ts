@@ -36,7 +36,7 @@ export interface Workspace {
   root: string;
   sessions: string;
   config: string;
-  /** SKIDCASE_CONFIG_DIR and SKIDCASE_SESSIONS pointing into this workspace. */
+  /** SKIDCASE_CONFIG_DIR, SKIDCASE_SESSIONS and SKIDCASE_CACHE_DIR pointing into this workspace. */
   env: Record<string, string>;
   cleanup(): void;
 }
@@ -51,7 +51,11 @@ export function makeWorkspace(prefix = 'skidcase-e2e-'): Workspace {
     root,
     sessions,
     config,
-    env: { SKIDCASE_CONFIG_DIR: config, SKIDCASE_SESSIONS: sessions },
+    env: {
+      SKIDCASE_CONFIG_DIR: config,
+      SKIDCASE_SESSIONS: sessions,
+      SKIDCASE_CACHE_DIR: join(root, 'cache'),
+    },
     cleanup: () => rmSync(root, { recursive: true, force: true }),
   };
 }
