@@ -1,83 +1,11 @@
-// Bundles the CLI into dist/. The solve/report paths load only dist/skidcase.js and its small
-// chunks; Ink and React live in a separate chunk loaded by dynamic import when the interview opens.
+// Bundles the CLI into dist/ (the options are in build-options.mjs): the program as one CommonJS
+// file (dist/main.js), in which Ink and React are evaluated only when the interview opens, and the
+// launcher dist/skidcase.js, which runs it through a V8 code cache (src/launch.ts).
 import { build } from 'esbuild';
 import { rmSync, chmodSync, readFileSync, readdirSync, writeFileSync, existsSync } from 'node:fs';
 import { createHash } from 'node:crypto';
 import { join } from 'node:path';
-import { readFile } from 'node:fs/promises';
-
-/**
- * zod's `z` namespace re-exports every locale (about 250 languages), which a namespace import keeps
- * in the bundle and every start of `solve` would parse. Our messages are our own English, so the
- * locales namespace is narrowed to English only.
- */
-const zodEnglishOnly = {
-  name: 'zod-english-only',
-  setup(b) {
-    b.onResolve({ filter: /^\.\.\/locales\/index\.js$/ }, (args) =>
-      /[\\/]zod[\\/]v4[\\/](classic|core)[\\/]/.test(args.importer)
-        ? { path: 'zod-locales-en', namespace: 'zod-locales' }
-        : undefined,
-    );
-    b.onLoad({ filter: /.*/, namespace: 'zod-locales' }, () => ({
-      contents: "export { default as en } from 'zod/v4/locales/en.js';",
-      resolveDir: process.cwd(),
-    }));
-  },
-};
-
-/**
- * In Node 20 the global `fetch` is a lazy getter: evaluating `typeof fetch` loads Node's whole HTTP
- * client (undici) at start-up. yoga-layout's loader asks it, although its wasm is an inline data URI
- * it decodes without fetch either way. Answering "no fetch" at build time spares every start that load.
- */
-const yogaWithoutFetch = {
-  name: 'yoga-without-fetch',
-  setup(b) {
-    b.onLoad({ filter: /yoga-layout[\\/]dist[\\/]binaries[\\/].*\.js$/ }, async (args) => {
-      const text = await readFile(args.path, 'utf8');
-      return { contents: text.replaceAll('typeof fetch', '"undefined"'), loader: 'js' };
-    });
-  },
-};
-
-/**
- * string-width, slice-ansi and ansi-tokenize each make an `Intl.Segmenter` when they are loaded,
- * which starts ICU's break iterators (10 ms and more) before the first frame, although most
- * screens are plain ASCII and never need one. Each is made on its first `segment` call instead.
- * The build fails if a package starts using its segmenter for anything but `segment`.
- */
-const segmentersOnFirstUse = {
-  name: 'segmenters-on-first-use',
-  setup(b) {
-    b.onLoad(
-      {
-        filter:
-          /node_modules[\\/](string-width[\\/]index|slice-ansi[\\/]tokenize-ansi|@alcalzone[\\/]ansi-tokenize[\\/]build[\\/]tokenize)\.js$/,
-      },
-      async (args) => {
-        const text = await readFile(args.path, 'utf8');
-        const decl = /\b(?:const|let|var)\s+([\w$]+)\s*=\s*new Intl\.Segmenter\(/g;
-        const names = [...text.matchAll(decl)].map((m) => m[1]);
-        if (names.length === 0) throw new Error(`${args.path}: no Intl.Segmenter made at load`);
-        for (const name of names) {
-          const n = name.replace('$', '\\$');
-          // a method other than segment(), or the segmenter handed on as a value
-          const uses = text.match(
-            new RegExp(`(?<![\\w$.])${n}\\.(?!segment\\()|[(,=]\\s*${n}\\s*[,);]`, 'g'),
-          );
-          if (uses) throw new Error(`${args.path}: ${name} is used for more than segment()`);
-        }
-        const lazy =
-          'const __lazySegmenter = (...a) => { let s; return { segment: (t) => (s ??= new Intl.Segmenter(...a)).segment(t) }; };\n';
-        return {
-          contents: lazy + text.replace(/new Intl\.Segmenter\(/g, '__lazySegmenter('),
-          loader: 'js',
-        };
-      },
-    );
-  },
-};
+import { BUNDLE_PACKAGE_JSON, bundleOptions, launcherOptions } from './build-options.mjs';
 
 /**
  * A hash of everything the bundle is made from: the sources, this script, and the package files.
@@ -96,7 +24,12 @@ function inputsHash() {
     }
   };
   walk('src');
-  for (const f of ['scripts/build.mjs', 'package.json', 'package-lock.json'])
+  for (const f of [
+    'scripts/build.mjs',
+    'scripts/build-options.mjs',
+    'package.json',
+    'package-lock.json',
+  ])
     if (existsSync(f)) h.update(f).update(readFileSync(f));
   return h.digest('hex');
 }
@@ -112,39 +45,11 @@ if (
 
 const pkg = JSON.parse(readFileSync(new URL('../package.json', import.meta.url), 'utf8'));
 rmSync(new URL('../dist', import.meta.url), { recursive: true, force: true });
-await build({
-  entryPoints: { skidcase: 'src/cli.ts' },
-  outdir: 'dist',
-  bundle: true,
-  splitting: true,
-  format: 'esm',
-  platform: 'node',
-  target: 'node20',
-  minify: true,
-  sourcemap: 'linked',
-  legalComments: 'none',
-  chunkNames: 'chunks/[name]-[hash]',
-  banner: {
-    // CommonJS dependencies bundled into ESM still reach for require, __filename and __dirname
-    // (write-file-atomic names its temp files from __filename).
-    js: [
-      '#!/usr/bin/env node',
-      "import { createRequire as __cr } from 'node:module';",
-      "import { fileURLToPath as __fu } from 'node:url';",
-      "import { dirname as __dn } from 'node:path';",
-      'const require = __cr(import.meta.url);',
-      'const __filename = __fu(import.meta.url);',
-      'const __dirname = __dn(__filename);',
-    ].join('\n'),
-  },
-  define: {
-    'process.env.NODE_ENV': '"production"',
-    __SKIDCASE_VERSION__: JSON.stringify(pkg.version),
-    __SKIDCASE_BUILD__: JSON.stringify(hash),
-  },
-  external: ['react-devtools-core'],
-  plugins: [zodEnglishOnly, yogaWithoutFetch, segmentersOnFirstUse],
-  logLevel: 'warning',
-});
+await build(bundleOptions({ outdir: 'dist', version: pkg.version, buildId: hash }));
+await build(launcherOptions({ outdir: 'dist' }));
+// The launcher runs main.js in a vm.Script, which has no import(): the bundle must have none left.
+if (/(?<![\w$.])import\(/.test(readFileSync('dist/main.js', 'utf8')))
+  throw new Error('dist/main.js still holds a dynamic import()');
+writeFileSync('dist/package.json', BUNDLE_PACKAGE_JSON);
 chmodSync(new URL('../dist/skidcase.js', import.meta.url), 0o755);
 writeFileSync(STAMP, hash);

@@ -37,6 +37,9 @@ export async function runInteractive(opts: RunOptions): Promise<number> {
     process.stderr.write(NO_TTY_MESSAGE);
     return 1;
   }
+  // The CommonJS build loads yoga's WebAssembly in the background (scripts/build.mjs); Ink
+  // needs it from the first render. From the sources this is undefined and there is no wait.
+  await (globalThis as Record<symbol, unknown>)[Symbol.for('skidcase.yoga-ready')];
   const color = applyColorPolicy(process.env);
   const services = liveServices({
     sessionsDir: opts.sessionsDir,

@@ -1,5 +1,8 @@
 import { execFile } from 'node:child_process';
-import { readdirSync } from 'node:fs';
+import { writeFileSync } from 'node:fs';
+import { pathToFileURL } from 'node:url';
+import { build, type BuildOptions } from 'esbuild';
+import { trackedTempDir } from '../temp-dirs.js';
 import { createRequire } from 'node:module';
 import path from 'node:path';
 import { promisify } from 'node:util';
@@ -24,17 +27,29 @@ async function countingSegmenters(code: string): Promise<string> {
 }
 
 describe('the built interface', () => {
-  const uiChunk = () => {
-    const f = readdirSync(path.join(ROOT, 'dist/chunks')).find((n) => /^run-.*\.js$/.test(n));
-    if (!f) throw new Error('dist/chunks/run-*.js missing: run `npm run build` first');
-    return path.join(ROOT, 'dist/chunks', f);
-  };
-
   it('makes no Intl.Segmenter when it is loaded', async () => {
+    // src/ui/run.tsx (Ink, React, the screens) bundled with the shipped build's options.
+    const dir = trackedTempDir('skidcase-ui-bundle-');
+    const { bundleOptions, BUNDLE_PACKAGE_JSON } = (await import(
+      pathToFileURL(path.join(ROOT, 'scripts/build-options.mjs')).href
+    )) as {
+      bundleOptions: (o: { outdir: string; version: string; buildId: string }) => BuildOptions;
+      BUNDLE_PACKAGE_JSON: string;
+    };
+    await build({
+      ...bundleOptions({ outdir: dir, version: '0.0.0', buildId: 'test' }),
+      entryPoints: { run: path.join(ROOT, 'src/ui/run.tsx') },
+      sourcemap: false,
+      absWorkingDir: ROOT,
+      logLevel: 'silent',
+    });
+    writeFileSync(path.join(dir, 'package.json'), BUNDLE_PACKAGE_JSON);
     const out = await countingSegmenters(`
-      const ui = await import(${JSON.stringify(uiChunk())});
-      console.log(JSON.stringify({ loaded: Object.keys(ui).length > 0, made: __made() }));`);
-    expect(JSON.parse(out)).toEqual({ loaded: true, made: 0 });
+      const { createRequire } = await import('node:module');
+      const ui = createRequire(import.meta.url)(${JSON.stringify(path.join(dir, 'run.js'))});
+      await globalThis[Symbol.for('skidcase.yoga-ready')];
+      console.log(JSON.stringify({ loaded: typeof ui.runInteractive, made: __made() }));`);
+    expect(JSON.parse(out)).toEqual({ loaded: 'function', made: 0 });
   });
 
   it('has one string-width: wrap-ansi measures with the same copy as Ink', () => {

@@ -47,6 +47,8 @@ export function makeWorkspace(prefix = 'skidcase-e2e-'): Workspace {
   const config = join(root, 'config');
   mkdirSync(sessions);
   mkdirSync(config);
+  // Outside root: tests compare root's files before and after, and the cache is not the user's.
+  const cache = trackedTempDir(`${prefix}cache-`);
   return {
     root,
     sessions,
@@ -54,8 +56,11 @@ export function makeWorkspace(prefix = 'skidcase-e2e-'): Workspace {
     env: {
       SKIDCASE_CONFIG_DIR: config,
       SKIDCASE_SESSIONS: sessions,
-      SKIDCASE_CACHE_DIR: join(root, 'cache'),
+      SKIDCASE_CACHE_DIR: cache,
     },
-    cleanup: () => rmSync(root, { recursive: true, force: true }),
+    cleanup: () => {
+      rmSync(root, { recursive: true, force: true });
+      rmSync(cache, { recursive: true, force: true });
+    },
   };
 }

@@ -3,28 +3,15 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { promisify } from 'node:util';
-import { build } from 'esbuild';
+import { build, type BuildOptions } from 'esbuild';
+import { pathToFileURL } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demo, escapeRe, flat, ROOT, shownAs } from './helpers.js';
 
 const run = promisify(execFile);
 
 /**
- * The banner scripts/build.mjs puts on top of the bundle (minus the shebang), read from that
- * file so this test runs the code exactly as the shipped build does: the `banner: { ... }` object
- * (from its line to the closing brace at the same indent) is evaluated as the JavaScript it is.
- */
-function buildBanner(): string {
-  const src = readFileSync(path.join(ROOT, 'scripts/build.mjs'), 'utf8');
-  const m = /^([ \t]*)banner:\s*\{([\s\S]*?)^\1\},?[ \t]*$/m.exec(src);
-  if (!m) throw new Error('scripts/build.mjs: no banner found');
-  const banner = new Function(`return {${m[2]}};`)() as { js?: unknown };
-  if (typeof banner.js !== 'string') throw new Error('scripts/build.mjs: banner.js is not text');
-  return banner.js.replace(/^#!.*\n/, '');
-}
-
-/**
- * The command as a user runs it: src/cli.ts bundled the way scripts/build.mjs does (into a
+ * The command as a user runs it: src/cli.ts bundled with the shipped build's options (into a
  * temporary folder, so the shared dist/ is left alone), then `node skidcase.js report ...`.
  */
 describe('skidcase report through the command line', () => {
@@ -35,23 +22,19 @@ describe('skidcase report through the command line', () => {
     const pkg = JSON.parse(readFileSync(path.join(ROOT, 'package.json'), 'utf8')) as {
       version: string;
     };
+    const { bundleOptions, BUNDLE_PACKAGE_JSON } = (await import(
+      pathToFileURL(path.join(ROOT, 'scripts/build-options.mjs')).href
+    )) as {
+      bundleOptions: (o: { outdir: string; version: string; buildId: string }) => BuildOptions;
+      BUNDLE_PACKAGE_JSON: string;
+    };
     await build({
-      entryPoints: { skidcase: path.join(ROOT, 'src/cli.ts') },
-      outdir: dir,
-      bundle: true,
-      splitting: true,
-      format: 'esm',
-      platform: 'node',
-      target: 'node20',
-      banner: { js: buildBanner() },
-      define: {
-        'process.env.NODE_ENV': '"production"',
-        __SKIDCASE_VERSION__: JSON.stringify(pkg.version),
-      },
-      external: ['react-devtools-core'],
+      ...bundleOptions({ outdir: dir, version: pkg.version, buildId: 'test' }),
+      absWorkingDir: ROOT,
       logLevel: 'silent',
     });
-    bin = path.join(dir, 'skidcase.js');
+    writeFileSync(path.join(dir, 'package.json'), BUNDLE_PACKAGE_JSON);
+    bin = path.join(dir, 'main.js');
   });
   afterAll(() => rmSync(dir, { recursive: true, force: true }));
 

@@ -1,0 +1,181 @@
+// The esbuild options of the shipped build, shared by scripts/build.mjs and the tests that bundle
+// the program into a folder of their own (so that they run exactly what is shipped).
+import { readFile } from 'node:fs/promises';
+
+/**
+ * zod's `z` namespace re-exports every locale (about 250 languages), which a namespace import keeps
+ * in the bundle and every start of `solve` would parse. Our messages are our own English, so the
+ * locales namespace is narrowed to English only.
+ */
+const zodEnglishOnly = {
+  name: 'zod-english-only',
+  setup(b) {
+    b.onResolve({ filter: /^\.\.\/locales\/index\.js$/ }, (args) =>
+      /[\\/]zod[\\/]v4[\\/](classic|core)[\\/]/.test(args.importer)
+        ? { path: 'zod-locales-en', namespace: 'zod-locales' }
+        : undefined,
+    );
+    b.onLoad({ filter: /.*/, namespace: 'zod-locales' }, () => ({
+      contents: "export { default as en } from 'zod/v4/locales/en.js';",
+      resolveDir: process.cwd(),
+    }));
+  },
+};
+
+/**
+ * In Node 20 the global `fetch` is a lazy getter: evaluating `typeof fetch` loads Node's whole HTTP
+ * client (undici) at start-up. yoga-layout's loader asks it, although its wasm is an inline data URI
+ * it decodes without fetch either way. Answering "no fetch" at build time spares every start that load.
+ */
+const yogaWithoutFetch = {
+  name: 'yoga-without-fetch',
+  setup(b) {
+    b.onLoad({ filter: /yoga-layout[\\/]dist[\\/]binaries[\\/].*\.js$/ }, async (args) => {
+      const text = await readFile(args.path, 'utf8');
+      return { contents: text.replaceAll('typeof fetch', '"undefined"'), loader: 'js' };
+    });
+  },
+};
+
+/**
+ * yoga-layout's entry awaits its WebAssembly at the top level, which a CommonJS bundle cannot
+ * hold. Ink only calls yoga while rendering, never while loading, so the entry is replaced by
+ * the same object filled in once the WebAssembly is ready; `runInteractive` (src/ui/run.tsx)
+ * awaits that promise, kept under a global symbol, before the first render.
+ */
+const yogaWithoutTopLevelAwait = {
+  name: 'yoga-without-top-level-await',
+  setup(b) {
+    b.onResolve({ filter: /^yoga-layout$/ }, () => ({
+      path: 'yoga-layout',
+      namespace: 'yoga-shim',
+    }));
+    b.onLoad({ filter: /.*/, namespace: 'yoga-shim' }, () => ({
+      contents: [
+        "import { loadYoga } from 'yoga-layout/load';",
+        "export * from 'yoga-layout/load';",
+        'const Yoga = {};',
+        "globalThis[Symbol.for('skidcase.yoga-ready')] = loadYoga().then((y) => { Object.assign(Yoga, y); });",
+        'export default Yoga;',
+      ].join('\n'),
+      resolveDir: process.cwd(),
+    }));
+  },
+};
+
+/**
+ * Ink's reconciler awaits at the top level twice, only when DEV=true (to attach React's devtools,
+ * which this program does not ship: Ink then only warns that react-devtools-core is missing). A
+ * CommonJS bundle cannot hold a top-level await, so the build answers "not DEV" for both.
+ */
+const inkWithoutDevtools = {
+  name: 'ink-without-devtools',
+  setup(b) {
+    b.onLoad({ filter: /[\\/]ink[\\/]build[\\/]reconciler\.js$/ }, async (args) => {
+      const text = await readFile(args.path, 'utf8');
+      const n = text.split('isDev()').length - 1;
+      if (n !== 2) throw new Error(`${args.path}: expected isDev() twice, found ${n}`);
+      return { contents: text.replaceAll('isDev()', 'false'), loader: 'js' };
+    });
+  },
+};
+
+/**
+ * string-width, slice-ansi and ansi-tokenize each make an `Intl.Segmenter` when they are loaded,
+ * which starts ICU's break iterators (10 ms and more) before the first frame, although most
+ * screens are plain ASCII and never need one. Each is made on its first `segment` call instead.
+ * The build fails if a package starts using its segmenter for anything but `segment`.
+ */
+const segmentersOnFirstUse = {
+  name: 'segmenters-on-first-use',
+  setup(b) {
+    b.onLoad(
+      {
+        filter:
+          /node_modules[\\/](string-width[\\/]index|slice-ansi[\\/]tokenize-ansi|@alcalzone[\\/]ansi-tokenize[\\/]build[\\/]tokenize)\.js$/,
+      },
+      async (args) => {
+        const text = await readFile(args.path, 'utf8');
+        const decl = /\b(?:const|let|var)\s+([\w$]+)\s*=\s*new Intl\.Segmenter\(/g;
+        const names = [...text.matchAll(decl)].map((m) => m[1]);
+        if (names.length === 0) throw new Error(`${args.path}: no Intl.Segmenter made at load`);
+        for (const name of names) {
+          const n = name.replace('$', '\\$');
+          // a method other than segment(), or the segmenter handed on as a value
+          const uses = text.match(
+            new RegExp(`(?<![\\w$.])${n}\\.(?!segment\\()|[(,=]\\s*${n}\\s*[,);]`, 'g'),
+          );
+          if (uses) throw new Error(`${args.path}: ${name} is used for more than segment()`);
+        }
+        const lazy =
+          'const __lazySegmenter = (...a) => { let s; return { segment: (t) => (s ??= new Intl.Segmenter(...a)).segment(t) }; };\n';
+        return {
+          contents: lazy + text.replace(/new Intl\.Segmenter\(/g, '__lazySegmenter('),
+          loader: 'js',
+        };
+      },
+    );
+  },
+};
+
+/**
+ * The program: `outdir/main.js`, CommonJS (`outdir/package.json`, `BUNDLE_PACKAGE_JSON`, says so;
+ * the caller writes it). `node outdir/main.js ARGS` runs it; the installed command is the launcher.
+ */
+export function bundleOptions({ outdir = 'dist', version, buildId }) {
+  return {
+    entryPoints: { main: 'src/cli.ts' },
+    outdir,
+    bundle: true,
+    // One CommonJS file: no ESM loader walking chunks at start-up. Modules reached only through a
+    // dynamic import (Ink and React, the solve and report commands) are still evaluated only when
+    // that import runs. dist/package.json says the folder is CommonJS (the project is ESM).
+    format: 'cjs',
+    platform: 'node',
+    target: 'node20',
+    minify: true,
+    sourcemap: 'linked',
+    legalComments: 'none',
+    banner: {
+      // Sources that locate files beside themselves read import.meta.url (the demo cases).
+      js: "const __importMetaUrl = require('node:url').pathToFileURL(__filename).href;",
+    },
+    define: {
+      'import.meta.url': '__importMetaUrl',
+      'process.env.NODE_ENV': '"production"',
+      __SKIDCASE_VERSION__: JSON.stringify(version),
+      __SKIDCASE_BUILD__: JSON.stringify(buildId),
+    },
+    external: ['react-devtools-core'],
+    plugins: [
+      zodEnglishOnly,
+      yogaWithoutFetch,
+      segmentersOnFirstUse,
+      yogaWithoutTopLevelAwait,
+      inkWithoutDevtools,
+    ],
+    logLevel: 'warning',
+  };
+}
+
+/**
+ * The launcher, `outdir/skidcase.js` (the package's `bin`): runs main.js through a V8 code cache
+ * (src/launch.ts). It must stay small: it is compiled on every start without a cache.
+ */
+export function launcherOptions({ outdir = 'dist' }) {
+  return {
+    entryPoints: { skidcase: 'src/launch.ts' },
+    outdir,
+    bundle: true,
+    format: 'cjs',
+    platform: 'node',
+    target: 'node20',
+    minify: true,
+    legalComments: 'none',
+    banner: { js: '#!/usr/bin/env node' },
+    logLevel: 'warning',
+  };
+}
+
+/** The project is ESM (package.json "type": "module"); the bundle's folder is CommonJS. */
+export const BUNDLE_PACKAGE_JSON = JSON.stringify({ type: 'commonjs' }) + '\n';
