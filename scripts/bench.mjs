@@ -41,9 +41,9 @@ const steps = [startScreen, solveJson, keypress, autosave, sampling].filter(
   (s) => !only || only.includes(s.name),
 );
 const FIGURE_NAMES = {
-  startScreen: 'start screen painted (pty)',
+  startScreen: 'start screen (pty)',
   solveJson: 'solve --json, 3 segments',
-  keypress: 'key press to frame, 20 segments (p95)',
+  keypress: 'key press to frame (p95)',
   autosave: 'autosave',
   sampling: 'uncertainty run, 100,000 samples',
 };

@@ -2,8 +2,8 @@
  * The installed `skidcase` (dist/skidcase.js): runs the bundle (dist/main.js) through a V8 code
  * cache, so that a start after the first skips parsing and compiling most of the program.
  *
- * The cache is made on the user's machine on a run that had none (when the process exits, so
- * that the functions that run was compiled go in), and kept in the user cache folder under a key
+ * The cache is made on the user's machine on a run that had none (when the process exits or
+ * 1.5 s after the start, whichever comes first, so that the functions compiled by then go in), and kept in the user cache folder under a key
  * of the node version, the architecture, the V8 and node flags and a hash of the bundle's bytes:
  * V8 itself accepts a cache for any source of the same length, so without the hash an edited
  * bundle could run old code. A cache V8 rejects (another V8, damaged bytes) is replaced; a cache
@@ -80,8 +80,17 @@ function launch(): void {
   const mod = new Module(MAIN);
   mod.filename = MAIN;
   if (fresh && file) {
+    // Made once: at exit (a short command), or once the start screen is drawn, since an
+    // interactive session may end by a signal that skips 'exit'.
     const f = file;
-    process.once('exit', () => save(script, f));
+    let saved = false;
+    const once = () => {
+      if (saved) return;
+      saved = true;
+      save(script, f);
+    };
+    setTimeout(once, 1500).unref();
+    process.once('exit', once);
   }
   run.call(mod.exports, mod.exports, createRequire(MAIN), mod, MAIN, path.dirname(MAIN));
 }

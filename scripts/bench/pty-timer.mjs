@@ -38,7 +38,10 @@ export function spawnTimed(
       (state.frameEnds ??= []).push(now);
       if (state.frameEnds.length > 64) state.frameEnds.shift();
     }
-    term.write(d);
+    // The first output that puts something visible on the screen: the first frame.
+    if (state.firstVisible === undefined && /[^\s]/.test(stripAnsi(d))) state.firstVisible = now;
+    // Once xterm has parsed the chunk, `afterParse` may look at the screen it made.
+    term.write(d, () => state.afterParse?.(now));
   });
   state.exit = new Promise((resolve) =>
     p.onExit((e) => {
@@ -68,9 +71,14 @@ export function spawnTimed(
 
 const tick = (ms) => new Promise((r) => setTimeout(r, ms));
 
+// eslint-disable-next-line no-control-regex
+const stripAnsi = (d) =>
+  d.replace(/\u001B(\[[0-9;?]*[ -/]*[@-~]|\][^\u0007\u001B]*(\u0007|\u001B\\)|[@-Z\\-_])/g, '');
+
 /**
  * Milliseconds from spawn to the last byte of the first settled screen: output that is followed
  * by `quietMs` of silence (or by the program's exit). The quiet wait itself is not counted.
+ * `first`: milliseconds to the first output that shows anything (the first frame).
  */
 export async function timeToSettledScreen(argv, opts = {}) {
   const quietMs = opts.quietMs ?? 400;
@@ -80,7 +88,9 @@ export async function timeToSettledScreen(argv, opts = {}) {
     await tick(5);
     const now = performance.now();
     const settled = s.lastData !== undefined && (s.exited || now - s.lastData >= quietMs);
-    if (settled && s.screen().trim() !== '') break;
+    // `done(screen)`: what the settled screen must show (the case list, not its placeholder)
+    if (settled && s.screen().trim() !== '' && (!opts.done || s.exited || opts.done(s.screen())))
+      break;
     if (now > deadline) {
       await s.kill();
       throw new Error(
@@ -89,9 +99,10 @@ export async function timeToSettledScreen(argv, opts = {}) {
     }
   }
   const ms = s.lastData - s.t0;
+  const first = (s.firstVisible ?? s.lastData) - s.t0;
   const screen = s.screen();
   await s.kill();
-  return { ms, screen };
+  return { ms, first, screen };
 }
 
 /**

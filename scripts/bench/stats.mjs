@@ -59,8 +59,11 @@ function cells(r) {
   const goal =
     r.goal.kind === 'ratio'
       ? `${ratioText} / <= ${r.goal.limit.toFixed(1)}x`
-      : `${ratioText} / < ${r.goal.limit} ms`;
-  return [r.figure, fmtMs(r.measured), fmtMs(r.baseline), goal, r.pass ? 'pass' : 'miss'];
+      : r.goal.kind === 'ms'
+        ? `${ratioText} / < ${r.goal.limit} ms`
+        : `${ratioText} / no goal`;
+  const result = r.goal.kind === 'none' ? '-' : r.pass ? 'pass' : 'miss';
+  return [r.figure, fmtMs(r.measured), fmtMs(r.baseline), goal, result];
 }
 
 /** The results as a plain-text table: figure, measured, baseline, ratio/goal, pass/miss. */
