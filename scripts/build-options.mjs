@@ -1,6 +1,7 @@
 // The esbuild options of the shipped build, shared by scripts/build.mjs and the tests that bundle
 // the program into a folder of their own (so that they run exactly what is shipped).
 import { readFile } from 'node:fs/promises';
+import { fileURLToPath } from 'node:url';
 
 /**
  * zod's `z` namespace re-exports every locale (about 250 languages), which a namespace import keeps
@@ -82,8 +83,10 @@ const inkWithoutDevtools = {
 
 /**
  * string-width, slice-ansi and ansi-tokenize each make an `Intl.Segmenter` when they are loaded,
- * which starts ICU's break iterators (10 ms and more) before the first frame, although most
- * screens are plain ASCII and never need one. Each is made on its first `segment` call instead.
+ * which starts ICU's break iterators (10 ms and more, 25 ms on a busy machine) before the first
+ * frame. Each is replaced by scripts/segmenter-fast.mjs: ICU's segmenter made on first real use,
+ * and text of characters that are always their own grapheme (our screens' `·`, `…`, `↑`) split
+ * without it.
  * The build fails if a package starts using its segmenter for anything but `segment`.
  */
 const segmentersOnFirstUse = {
@@ -107,10 +110,13 @@ const segmentersOnFirstUse = {
           );
           if (uses) throw new Error(`${args.path}: ${name} is used for more than segment()`);
         }
-        const lazy =
-          'const __lazySegmenter = (...a) => { let s; return { segment: (t) => (s ??= new Intl.Segmenter(...a)).segment(t) }; };\n';
+        const helper = JSON.stringify(
+          fileURLToPath(new URL('./segmenter-fast.mjs', import.meta.url)),
+        );
         return {
-          contents: lazy + text.replace(/new Intl\.Segmenter\(/g, '__lazySegmenter('),
+          contents:
+            `import { createSegmenter as __createSegmenter } from ${helper};\n` +
+            text.replace(/new Intl\.Segmenter\(/g, '__createSegmenter('),
           loader: 'js',
         };
       },
