@@ -4,7 +4,8 @@ export default defineConfig({
   test: {
     include: ['test/**/*.test.{ts,tsx}'],
     // removes the temporary folders each test file's helpers made (test/temp-dirs.ts)
-    setupFiles: ['test/setup/temp-cleanup.ts'],
+    // and points the user cache folder of the programs they start at a temporary one
+    setupFiles: ['test/setup/temp-cleanup.ts', 'test/setup/cache-dir.ts'],
     // vitest's summary, then one plain line: N passed, N failed, N skipped
     reporters: ['default', './test/setup/count-reporter.ts'],
     testTimeout: 30_000,

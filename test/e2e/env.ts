@@ -22,6 +22,8 @@ export function childEnv(extra: Record<string, string | undefined> = {}): Record
     if (k.startsWith('SKIDCASE_')) continue;
     env[k] = v;
   }
+  // the temporary cache folder test/setup/cache-dir.ts chose, never the machine's user cache
+  if (process.env.SKIDCASE_CACHE_DIR) env.SKIDCASE_CACHE_DIR = process.env.SKIDCASE_CACHE_DIR;
   env.TERM = 'xterm-256color';
   env.LANG = env.LANG && /utf-?8/i.test(env.LANG) ? env.LANG : 'C.UTF-8';
   for (const [k, v] of Object.entries(extra)) {
