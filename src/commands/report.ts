@@ -5,6 +5,7 @@ import { printable, printableIo } from '../case/printable.js';
 import { loadCaseText, type Case } from '../case/load.js';
 import { solveCase } from '../engine/solve-case.js';
 import type { CaseSolution } from '../engine/types.js';
+import { caseResult } from '../extras/analysis-extras.js';
 import { buildReport } from '../report/build.js';
 import { REPORT_FORMATS, renderReport, type ReportFormat } from '../report/render.js';
 import { toolVersion } from '../report/version.js';
@@ -115,11 +116,11 @@ export async function reportCommand(
   }
   const loaded = await loadAndSolve(target, opts.sessionsDir, io);
   if (!loaded.ok) return loaded.code;
-  const doc = buildReport(loaded.case, loaded.solution, {
+  const settings = opts.reactionTime !== undefined ? { reactionTime: opts.reactionTime } : {};
+  const doc = buildReport(caseResult(loaded.case, loaded.solution, settings), {
     toolVersion: toolVersion(),
     generatedAt: new Date().toISOString(),
     caseFile: loaded.file,
-    ...(opts.reactionTime !== undefined ? { extras: { reactionTime: opts.reactionTime } } : {}),
   });
   if (opts.out === undefined) {
     io.out(renderReport(doc, opts.format));

@@ -14,6 +14,7 @@ import {
   type AnalysisModel,
   type AnalysisOutcome,
   type ModelInput,
+  type OffsetsFit,
   type Outcome,
   type PointsFitSummary,
   type Range,
@@ -102,6 +103,7 @@ export function solveYaw(c: CaseV1, i: number, a: YawV1): AnalysisOutcome {
     radius: R,
     ...(sens ? { sensitivity: sens } : {}),
     ...(measured.value.fit ? { pointsFit: measured.value.fit } : {}),
+    ...(measured.value.offsets ? { offsetsFit: measured.value.offsets } : {}),
     model:
       C && M
         ? yawModel(a, C, M, f, e, T, halfTrack, system)
@@ -124,6 +126,7 @@ function yawRadius(
   C?: Range;
   M?: Range;
   fit?: PointsFitSummary;
+  offsets?: { fit: OffsetsFit; radius: Range };
 }> {
   if (a.points) {
     const r = radiusFromPoints(a.points, system, u);
@@ -133,7 +136,12 @@ function yawRadius(
   if (a.offsets) {
     const r = radiusFromOffsets(spread(a.offsets.chord), a.offsets.stations, system, u);
     if (!r.ok) return fail(r.reason, `offsets.${r.path ?? 'stations'}`);
-    return ok({ radius: r.value.radius, step: r.value.step, warnings: r.value.warnings });
+    return ok({
+      radius: r.value.radius,
+      step: r.value.step,
+      warnings: r.value.warnings,
+      offsets: { fit: r.value.fit, radius: r.value.radius },
+    });
   }
   // The schema guarantees chord and middleOrdinate when there are no offsets.
   if (a.chord === undefined || a.middleOrdinate === undefined)

@@ -19,7 +19,7 @@ import { DEFAULT_SAMPLES, DEFAULT_SEED } from '../extras/sampling.js';
 import { notesOf, NOTES_KEEP } from './kept-notes.js';
 import { ANALYSES_KEEP, splitAnalyses } from './kept-analyses.js';
 import {
-  analysisExtras,
+  analysisKeptFields,
   analysisKeep,
   caseExtras,
   CASE_KEEP,
@@ -190,7 +190,7 @@ export function answersFromCase(c: Case): Answers {
       a.kind === 'skid' && a.timeDistance && c.postedLimit === undefined
         ? { timeDistance: a.timeDistance }
         : {};
-    const extra = { ...analysisExtras(a), ...timeKept };
+    const extra = { ...analysisKeptFields(a), ...timeKept };
     if (Object.keys(extra).length) put(analysisKeep(i), '', extra);
     put(`${p}.label`, a.label ?? '');
     put(`${p}.more`, i < asked.length - 1 ? 'yes' : 'no');

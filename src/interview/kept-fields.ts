@@ -30,7 +30,7 @@ export function extraFields(
 
 export const caseExtras = (c: object) => extraFields(c, CASE_OWN);
 export const vehicleExtras = (v: object) => extraFields(v, VEHICLE_OWN);
-export const analysisExtras = (a: { kind: string }) =>
+export const analysisKeptFields = (a: { kind: string }) =>
   extraFields(a, a.kind === 'yaw' ? YAW_OWN : SKID_OWN);
 
 /** The kept fields under a hidden answer id (an object), or an empty object. */

@@ -14,7 +14,8 @@ import {
   type ReportDoc,
   type Section,
 } from './doc.js';
-import { extrasSections, type ReportExtrasOptions } from './extras-section.js';
+import type { CaseResult } from '../extras/analysis-extras.js';
+import { extrasSections } from './extras-section.js';
 import { speedText } from './figures-text.js';
 import { formatNumber } from '../engine/number-text.js';
 import { measurementTables } from './measurements.js';
@@ -27,8 +28,6 @@ export interface ReportMeta {
   generatedAt: string;
   /** The case file the figures are recomputed from, as the user named it. */
   caseFile?: string;
-  /** Settings of the further sections (reaction time, sampling); defaults when left out. */
-  extras?: ReportExtrasOptions;
 }
 
 function detailsSection(c: Case, meta: ReportMeta): Section {
@@ -109,27 +108,23 @@ function limitSection(sol: CaseSolution): Section | undefined {
  * The case report as a document: details, results, measurements as entered, each analysis step by
  * step (with sensitivity, sampling, time and distance and pictures where they apply), the posted
  * limit comparison, file warnings, the cautions and where the figures come from. Pure: every
- * figure is read from `solution` (the engine's steps and ranges); nothing is computed here.
+ * figure is read from the result document (the engine's steps and ranges, and the extras built
+ * once by caseResult); nothing is computed here.
  * @example
- * const doc = buildReport(c, solveCase(c), { toolVersion: '0.1.0', generatedAt: new Date().toISOString(), caseFile: 'harbor.json' });
+ * const doc = buildReport(caseResult(c, solveCase(c)), { toolVersion: '0.1.0', generatedAt: new Date().toISOString(), caseFile: 'harbor.json' });
  * renderText(doc) // 'Speed from tire marks: ...', 80 columns
  */
-export function buildReport(c: Case, solution: CaseSolution, meta: ReportMeta): ReportDoc {
+export function buildReport(result: CaseResult, meta: ReportMeta): ReportDoc {
+  const { case: c, solution } = result;
   const units = solution.units;
   const sections: Section[] = [detailsSection(c, meta), summarySection(c, solution)];
   sections.push(section('measurements', 'Measurements as entered', measurementTables(c, units)));
   c.analyses.forEach((a, i) => {
-    const o = solution.analyses[i];
-    if (o)
-      sections.push(
-        analysisSection(
-          i,
-          a,
-          o,
-          units,
-          o.ok ? extrasSections(c, o.solution, i, units, meta.extras) : [],
-        ),
-      );
+    const r = result.analyses[i];
+    if (!r) return;
+    const o = r.outcome;
+    const extra = o.ok && r.extras ? extrasSections(c, o.solution, r.extras, i, units) : [];
+    sections.push(analysisSection(i, a, o, units, extra));
   });
   const lim = limitSection(solution);
   if (lim) sections.push(lim);

@@ -4,6 +4,7 @@
  */
 import path from 'node:path';
 import type { Case } from '../case/load.js';
+import { caseResult } from '../extras/analysis-extras.js';
 import { buildReport } from '../report/build.js';
 import { toolVersion } from '../report/version.js';
 import { writeReport } from '../report/write-report.js';
@@ -27,11 +28,12 @@ export async function writeCaseReport(
   at = new Date(),
   reactionTime?: number,
 ) {
-  const doc = buildReport(c, solveAsFile(c), {
+  // The same result document the review shows: the same case and the same settings.
+  const settings = reactionTime !== undefined ? { reactionTime } : {};
+  const doc = buildReport(caseResult(c, solveAsFile(c), settings), {
     toolVersion: toolVersion(),
     generatedAt: at.toISOString(),
     caseFile: open.file,
-    ...(reactionTime !== undefined ? { extras: { reactionTime } } : {}),
   });
   const file = reportPath(open, c, at);
   const r = await writeReport(doc, 'md', file, false);

@@ -145,7 +145,7 @@ const LAYERS: Record<string, { imports: string[]; types?: string[] }> = {
   format: { imports: ['engine', 'extras'], types: ['case'] },
   interview: { imports: ['case', 'engine', 'extras', 'input', 'prefs'] },
   report: { imports: ['engine', 'extras', 'format', 'io'], types: ['case'] },
-  commands: { imports: ['case', 'engine', 'format', 'io', 'report', 'store'] },
+  commands: { imports: ['case', 'engine', 'extras', 'format', 'io', 'report', 'store'] },
   ui: {
     imports: [
       'case',

@@ -25,7 +25,7 @@ describe('"write report" from the review', () => {
     // The demo has a posted limit (35 mph), so the report compares stopping at the limit, with the
     // reaction time of the preference passed in (2 s), not the default 1.5 s:
     // 35 mph × 5280/3600 ft/s per mph × 2 s = 102.7 ft during perception-reaction at the limit.
-    expect(md).toContain("Perception-reaction time 2 s (the investigator's preference");
+    expect(md).toContain("Perception-reaction time 2 s (from the preferences");
     expect(md).toMatch(/At the limit: distance during perception-reaction \| 102\.7 ft/);
     // Never over an existing file: the same moment again is refused.
     const again = await writeCaseReport(open, loaded.case, new Date('2026-12-01T10:00:00Z'), 2);
