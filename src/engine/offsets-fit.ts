@@ -1,5 +1,12 @@
 import { geometricFit, geometricSsr, signRuns, type Point } from './circle-fit.js';
-import { fail, ok, type OffsetsFit, type OffsetResidual, type Outcome, type Step } from './types.js';
+import {
+  fail,
+  ok,
+  type OffsetsFit,
+  type OffsetResidual,
+  type Outcome,
+  type Step,
+} from './types.js';
 
 export type { OffsetsFit, OffsetResidual } from './types.js';
 

@@ -1,5 +1,5 @@
 import { spread } from './spread.js';
-import type { Case } from '../case/load.js';
+import type { CaseInput } from './input.js';
 import { unitsOf } from './constants.js';
 import { solveAirborne } from './solve-airborne.js';
 import { solveSkid } from './solve-skid.js';
@@ -13,7 +13,7 @@ import type { AnalysisOutcome, CaseSolution } from './types.js';
  * which the schema already refuses, fails here rather than recursing).
  */
 function solveInChain(
-  c: Case,
+  c: CaseInput,
   i: number,
   memo: Map<number, AnalysisOutcome>,
   visiting: readonly number[],
@@ -67,7 +67,7 @@ function solveInChain(
  * const r = solveAnalysis(c, 0);
  * if (r.ok) console.log(r.solution.minimum); else console.error(r.reason);
  */
-export function solveAnalysis(c: Case, i: number): AnalysisOutcome {
+export function solveAnalysis(c: CaseInput, i: number): AnalysisOutcome {
   return solveInChain(c, i, new Map(), []);
 }
 
@@ -82,7 +82,7 @@ export function solveAnalysis(c: Case, i: number): AnalysisOutcome {
  * if (loaded.ok) solveCase(loaded.case, loaded.unknownFields).analyses.forEach((r) => r.ok && r.solution.speed);
  */
 export function solveCase(
-  c: Case,
+  c: CaseInput,
   unknownFields: readonly string[] = [],
   duplicateKeys: readonly string[] = [],
 ): CaseSolution {
