@@ -1,8 +1,8 @@
 import type { Case } from '../case/load.js';
 import type { AnalysisSolution, Units } from '../engine/types.js';
 import type { AnalysisExtras } from '../extras/analysis-extras.js';
-import { sensitivitySvg } from '../extras/pictures-svg.js';
-import { sensitivityBars } from '../extras/sensitivity-bars.js';
+import { sensitivitySvg } from '../pictures/pictures-svg.js';
+import { sensitivityBars } from '../pictures/sensitivity-bars.js';
 import type { SensitivityRow } from '../extras/sensitivity.js';
 import { formatNumber } from '../engine/number-text.js';
 import { para, section, table, type Block, type Section } from './doc.js';

@@ -15,8 +15,8 @@ import {
 import type { Verdict } from '../extras/limit-steps.js';
 import type { LimitComparison } from '../extras/limit-comparison.js';
 import type { SampleSummary } from '../extras/sampling.js';
-import { speedAlongSlideChart } from '../extras/slide-chart.js';
-import { yawArcSketch } from '../extras/yaw-sketch.js';
+import { speedAlongSlideChart } from '../pictures/slide-chart.js';
+import { yawArcSketch } from '../pictures/yaw-sketch.js';
 import { formatRange, withUnit } from '../format/numbers.js';
 import { limitFraming, verdictWords } from '../format/verdict.js';
 import { formatNumber } from '../engine/number-text.js';

@@ -12,7 +12,7 @@ import { formatRange, zeroRangeNote } from '../format/numbers.js';
 import { formatNumber } from '../engine/number-text.js';
 import { phasesLine } from '../format/phases-text.js';
 import { limitWord } from '../format/verdict.js';
-import { sensitivityBars } from '../extras/sensitivity-bars.js';
+import { sensitivityBars } from '../pictures/sensitivity-bars.js';
 import { pushWrapped, stepLines, type ShownLine } from './review-step.js';
 import {
   extrasLines,

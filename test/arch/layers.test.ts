@@ -132,9 +132,10 @@ const LAYERS: Record<string, { imports: string[]; types?: string[] }> = {
   store: { imports: ['case', 'io'] },
   input: { imports: ['case', 'engine'] },
   extras: { imports: ['case', 'engine'] },
+  pictures: { imports: ['engine'], types: ['extras'] },
   format: { imports: ['engine', 'extras'], types: ['case'] },
   interview: { imports: ['case', 'engine', 'extras', 'input', 'prefs'] },
-  report: { imports: ['engine', 'extras', 'format', 'io'], types: ['case'] },
+  report: { imports: ['engine', 'extras', 'format', 'io', 'pictures'], types: ['case'] },
   commands: { imports: ['case', 'engine', 'extras', 'format', 'io', 'report', 'store'] },
   ui: {
     imports: [
@@ -145,6 +146,7 @@ const LAYERS: Record<string, { imports: string[]; types?: string[] }> = {
       'input',
       'interview',
       'io',
+      'pictures',
       'prefs',
       'report',
       'store',
