@@ -1,3 +1,4 @@
+import type { NumberKind } from './number-text.js';
 /**
  * Shared shapes of the calculation engine. The engine is pure: no I/O, no UI imports. Every
  * figure carries the steps that made it; the interview, the review screen, the report and
@@ -42,6 +43,8 @@ export interface Step {
   low: number;
   high: number;
   unit: string;
+  /** How the result is written when its unit alone does not say (a factor line with 3 decimals). */
+  kind?: NumberKind;
   why: string;
 }
 

@@ -22,7 +22,7 @@ import type { InterviewState } from '../interview/types.js';
 import type { DraftView } from './draft-panel.js';
 import type { InterviewPort } from './interview-port.js';
 import { atLeast } from './review-lines.js';
-import { kindOfUnit } from '../format/step-text.js';
+import { stepResultText } from '../format/step-text.js';
 
 /** Solves a case exactly as `solve` would read it from its file: through the loader first. */
 export function solveAsFile(c: Case): CaseSolution {
@@ -50,11 +50,7 @@ export function draftView(sol: CaseSolution, open: readonly string[] = []): Draf
     for (const s of a.solution.steps)
       steps.push({
         name: s.name,
-        result: formatRange(
-          { value: s.result, low: s.low, high: s.high },
-          kindOfUnit(s.unit),
-          s.unit,
-        ),
+        result: stepResultText(s),
       });
     results.push(
       `${sol.analyses.length > 1 ? `Analysis ${i + 1}: ` : ''}${formatRange(a.solution.speed, 'speed', sol.units.speed)}, ${atLeast(a.solution, sol.units.speed)}`,

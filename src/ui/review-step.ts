@@ -1,7 +1,6 @@
 /** Lines of one step of a chain and wrapped text, shared by the review's parts. */
 import type { Step } from '../engine/types.js';
-import { kindOfUnit } from '../format/step-text.js';
-import { formatRange } from '../format/numbers.js';
+import { stepResultText } from '../format/step-text.js';
 import { wrap } from '../report/wrap.js';
 import type { TONE } from './theme.js';
 
@@ -36,8 +35,7 @@ export function stepLines(
   pushWrapped(out, `${n}. ${step.name}`, width, indent, { bold: true });
   pushWrapped(out, `formula  ${step.formula}`, width, inner);
   pushWrapped(out, `numbers  ${step.substituted}`, width, inner);
-  const r = { value: step.result, low: step.low, high: step.high };
-  pushWrapped(out, `result   ${formatRange(r, kindOfUnit(step.unit), step.unit)}`, width, inner, {
+  pushWrapped(out, `result   ${stepResultText(step)}`, width, inner, {
     tone: 'result',
   });
   if (step.why) pushWrapped(out, `why      ${step.why}`, width, inner, { tone: 'muted' });
