@@ -83,3 +83,18 @@ export function formatNumber(n: number, kind: NumberKind): string {
       return fixed(Math.round(n), 0);
   }
 }
+
+/** Decimals a number is written with by plain JSON (`0.7` has 1, `80` none). */
+export function jsonDecimals(n: number): number {
+  const s = String(n);
+  return s.includes('e') ? 0 : s.includes('.') ? s.length - s.indexOf('.') - 1 : 0;
+}
+
+/**
+ * A figure as it was typed: with the decimals recorded for it (a quantity's `decimals`: `0.70`),
+ * else as the file holds it (`0.7`). For the record of what was entered, not for computed figures.
+ * @example typedText(0.7, 2) // "0.70"
+ */
+export function typedText(n: number, decimals: number | undefined): string {
+  return decimals !== undefined && decimals > jsonDecimals(n) ? n.toFixed(decimals) : String(n);
+}
