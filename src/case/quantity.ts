@@ -6,8 +6,7 @@ import { z } from 'zod';
  * figure was typed with (`0.70` is 2), which a JSON number cannot keep; the record shows it so.
  */
 export type Quantity =
-  | number
-  | { value: number; low?: number; high?: number; note?: string; decimals?: number };
+  number | { value: number; low?: number; high?: number; note?: string; decimals?: number };
 
 /** Most decimals a figure may say it was typed with (`decimals`). */
 export const MAX_DECIMALS = 9;

@@ -46,7 +46,7 @@ export function readQuantity(text: string, spec: QuantitySpec, units: UnitSystem
   }
   return r.converted
     ? { ok: true, value: r.value, notice: `converted: ${r.converted}` }
-    : { ok: true, value: withTypedDecimals(r.value, text) };
+    : { ok: true, value: r.value };
 }
 
 /** Decimals of each number as typed, in order: `0.70 (0.65-0.80)` gives [2, 2, 2]. */
@@ -55,13 +55,20 @@ function typedDecimals(text: string): number[] {
 }
 
 /**
- * The quantity with the decimals its value was typed with, when the file's number would lose
- * them (`0.70` is saved as 0.7: `decimals: 2` keeps the record as typed). A figure typed in the
- * case's own units only: a converted one was not typed as it is kept.
+ * The quantity with the decimals it was typed with, when the file's number would lose them
+ * (`0.70` is saved as 0.7: `decimals: 2` keeps the record as typed). Only when every number typed
+ * has the same decimals (`0.70 (0.65-0.80)`), and only in the case's own units: a converted
+ * figure was not typed as it is kept.
  */
 export function withTypedDecimals(q: Quantity, text: string): Quantity {
   const value = typeof q === 'number' ? q : q.value;
-  const d = Math.max(0, ...typedDecimals(text));
+  // Only a figure typed with one precision throughout: `0.6 (0.55-0.65)` says nothing of one.
+  const typed = new Set(typedDecimals(text));
+  if (typed.size !== 1) return q;
+  const d = [...typed][0]!;
+  // The value itself typed (not the middle of a range `0.55-0.65`).
+  const first = /\d*\.?\d+/.exec(text);
+  if (!first || Number(first[0]) !== value) return q;
   if (d === 0 || d <= jsonDecimals(value) || d > MAX_DECIMALS) return q;
   return typeof q === 'number' ? { value: q, decimals: d } : { ...q, decimals: d };
 }

@@ -20,10 +20,12 @@ const need = (what: string, expected: string) => ({
 });
 const q = quantity;
 /** How many decimals a figure was typed with (`0.70`: 2): for the record, never for the figures. */
-const typedDecimals = finiteNumber('decimals', 'a whole number from 0 to 9').superRefine((n, ctx) => {
-  const issue = decimalsIssue(n);
-  if (issue) ctx.addIssue({ code: 'custom', message: issue });
-});
+const typedDecimals = finiteNumber('decimals', 'a whole number from 0 to 9').superRefine(
+  (n, ctx) => {
+    const issue = decimalsIssue(n);
+    if (issue) ctx.addIssue({ code: 'custom', message: issue });
+  },
+);
 
 /** value/low/high of a quantity that may not have passed its own checks; undefined if unusable. */
 function endsOf(q: unknown): { value: number; low: number; high?: number } | undefined {
