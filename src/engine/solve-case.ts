@@ -71,6 +71,9 @@ export function solveAnalysis(c: CaseInput, i: number): AnalysisOutcome {
   return solveInChain(c, i, new Map(), []);
 }
 
+/** Unknown fields warned about one by one; the rest are counted in one line. */
+export const UNKNOWN_LISTED = 25;
+
 /**
  * Solves every analysis of a validated case, each phase of a chain once and before the phase
  * that runs into it, and compares with the posted limit: `exceededAtMinimum` is true when some
@@ -88,9 +91,16 @@ export function solveCase(
 ): CaseSolution {
   const memo = new Map<number, AnalysisOutcome>();
   const analyses = c.analyses.map((_, i) => solveInChain(c, i, memo, []));
-  const warnings = unknownFields.map(
+  const listed = unknownFields.slice(0, UNKNOWN_LISTED);
+  const warnings = listed.map(
     (path) => `${path}: not a field of the case format; kept, but not used (misspelt?)`,
   );
+  // A file with very many of them (a tool's export, a damaged file) gets one line for the rest.
+  const rest = unknownFields.length - listed.length;
+  if (rest > 0)
+    warnings.push(
+      `${rest} more fields are not of the case format (kept, but not used), the last ${unknownFields[unknownFields.length - 1]}`,
+    );
   for (const path of duplicateKeys)
     warnings.push(`${path}: given twice in one object; the last one is used`);
   if (c.analyses.length === 0) warnings.push('The case has no analyses yet: nothing to solve.');
