@@ -11,7 +11,19 @@ export interface ShownLine {
   bold?: boolean;
 }
 
-/** Appends `text` wrapped to `width`, its first line after `indent`, the rest two further in. */
+/**
+ * How far the lines after the first go in, so that they start under the first line's text: past
+ * a list marker (`- `, `! `, `* `, `3. `) or a label column (`numbers  `), else not at all.
+ */
+export function hangOf(text: string): number {
+  const m = /^(?:[-!*•] |\d+\. |[a-z]+ {2,})/.exec(text);
+  return m ? m[0].length : 0;
+}
+
+/**
+ * Appends `text` wrapped to `width`, its first line after `indent`, the rest under the first
+ * line's text (past its marker or label, see hangOf).
+ */
 export function pushWrapped(
   out: ShownLine[],
   text: string,
@@ -19,8 +31,13 @@ export function pushWrapped(
   indent: string,
   style: Omit<ShownLine, 'text'> = {},
 ): void {
-  const lines = wrap(text, Math.max(10, width - indent.length - 2));
-  lines.forEach((l, i) => out.push({ text: (i === 0 ? indent : indent + '  ') + l, ...style }));
+  const hang = hangOf(text);
+  // The marker or label kept as written; the text after it wrapped in the column it starts.
+  const body = wrap(text.slice(hang), Math.max(10, width - indent.length - hang));
+  const pad = indent + ' '.repeat(hang);
+  body.forEach((l, i) =>
+    out.push({ text: (i === 0 ? indent + text.slice(0, hang) : pad) + l, ...style }),
+  );
 }
 
 /** A step as numbered lines: its name, formula, numbers substituted, result and why. */
