@@ -45,7 +45,7 @@ async function kindAt(p: string): Promise<'file' | 'folder' | 'other' | 'none'> 
 }
 
 /** A path to a case file, or a case id in the sessions folder; a message when it is neither. */
-async function resolveTarget(
+export async function resolveTarget(
   target: string,
   sessionsDir: string,
 ): Promise<{ file: string } | { message: string }> {
@@ -63,7 +63,8 @@ async function resolveTarget(
 }
 
 type Loaded =
-  { ok: true; case: Case; solution: CaseSolution; file: string } | { ok: false; code: number };
+  | { ok: true; case: Case; solution: CaseSolution; file: string; sha256: string }
+  | { ok: false; code: number };
 
 /** Reads, validates and solves, with the messages `solve` gives for the same file. */
 async function loadAndSolve(target: string, sessionsDir: string, io: ReportIo): Promise<Loaded> {
@@ -93,7 +94,7 @@ async function loadAndSolve(target: string, sessionsDir: string, io: ReportIo): 
     io.err('skidcase: no report written\n');
     return { ok: false, code: REPORT_EXIT.uncomputable };
   }
-  return { ok: true, case: loaded.case, solution, file: where.file };
+  return { ok: true, case: loaded.case, solution, file: where.file, sha256: read.sha256 };
 }
 
 /**
@@ -121,6 +122,7 @@ export async function reportCommand(
     toolVersion: toolVersion(),
     generatedAt: new Date().toISOString(),
     caseFile: loaded.file,
+    caseSha256: loaded.sha256,
   });
   if (opts.out === undefined) {
     io.out(renderReport(doc, opts.format));

@@ -8,6 +8,7 @@ import {
   REPORT_VERSION,
   list,
   para,
+  provenanceLine,
   section,
   table,
   type Block,
@@ -28,6 +29,8 @@ export interface ReportMeta {
   generatedAt: string;
   /** The case file the figures are recomputed from, as the user named it. */
   caseFile?: string;
+  /** SHA-256 of that file's bytes, when the report is made from a file on disk. */
+  caseSha256?: string;
 }
 
 function detailsSection(c: Case, meta: ReportMeta): Section {
@@ -41,6 +44,7 @@ function detailsSection(c: Case, meta: ReportMeta): Section {
     ['Vehicle', c.vehicle.label ?? ''],
     ['Units', c.units === 'imperial' ? 'imperial (feet, mph)' : 'metric (metres, km/h)'],
     ['Case file', meta.caseFile ?? `${c.id}.json`],
+    ['Case file SHA-256', meta.caseSha256 ?? ''],
     ['Case created', c.created ?? ''],
     ['Case last changed', c.updated ?? ''],
   ];
@@ -117,6 +121,8 @@ function limitSection(sol: CaseSolution): Section | undefined {
 export function buildReport(result: CaseResult, meta: ReportMeta): ReportDoc {
   const { case: c, solution } = result;
   const units = solution.units;
+  const source =
+    meta.caseSha256 !== undefined ? { sha256: meta.caseSha256, saved: c.updated ?? '' } : undefined;
   const sections: Section[] = [detailsSection(c, meta), summarySection(c, solution)];
   sections.push(section('measurements', 'Measurements as entered', measurementTables(c, units)));
   c.analyses.forEach((a, i) => {
@@ -139,6 +145,15 @@ export function buildReport(result: CaseResult, meta: ReportMeta): ReportDoc {
         `Every figure in this report is recomputed by skidcase ${meta.toolVersion} from the case file ${meta.caseFile ?? `${c.id}.json`}; none is typed in by hand. Recomputing the same file gives the same figures.`,
       ),
       para(`Generated ${meta.generatedAt}.`),
+      ...(source
+        ? [
+            para(provenanceLine(c.id, source, meta.toolVersion)),
+            para(
+              `skidcase verify REPORT CASE-FILE says whether a case file is the one this report was made from.`,
+              'note',
+            ),
+          ]
+        : []),
     ]),
   );
   return {
@@ -148,6 +163,7 @@ export function buildReport(result: CaseResult, meta: ReportMeta): ReportDoc {
     caseId: c.id,
     toolVersion: meta.toolVersion,
     generatedAt: meta.generatedAt,
+    ...(source ? { source } : {}),
     sections,
   };
 }

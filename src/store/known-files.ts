@@ -1,4 +1,4 @@
-import { createHash } from 'node:crypto';
+import { sha256Of } from '../io/sha256.js';
 import type { Stats } from 'node:fs';
 
 /**
@@ -32,7 +32,7 @@ export function sameSig(a: FileSig | undefined, st: Stats): boolean {
   return a !== undefined && a.ino === st.ino && a.size === st.size && a.mtimeMs === st.mtimeMs;
 }
 
-export const hashOf = (bytes: Buffer | string) => createHash('sha256').update(bytes).digest('hex');
+export const hashOf = (bytes: Buffer | string) => sha256Of(bytes);
 
 export function getKnown(file: string): Known {
   let k = known.get(file);
