@@ -61,9 +61,10 @@ export function draftView(
     );
   });
   // Figures of an analysis still being answered, as soon as their own inputs are in.
+  const many = sol.analyses.length + new Set(early.map((e) => e.analysis)).size > 1;
   for (const e of early)
     steps.push({
-      name: `${sol.analyses.length + early.length > 1 ? `Analysis ${e.analysis + 1}: ` : ''}${e.step.name}`,
+      name: `${many ? `Analysis ${e.analysis + 1}: ` : ''}${e.step.name}`,
       result: stepResultText(e.step),
     });
   const view: DraftView = { steps };

@@ -28,5 +28,10 @@ describe('the chain panel fills in as answers come', () => {
     expect(flat).toMatch(/Radius[^│]*│?[^│]*101\.0 ft/);
     // Not a speed yet: the panel says the speed follows and what it waits for.
     expect(flat).toContain('The speed follows');
+    // One analysis: its figures need no "Analysis 1:" before them.
+    await app.press('e', 'Drag factor');
+    f = (await app.answer('0.72 (0.68-0.76)', 'the surface tilts')).replace(/\s+/g, ' ');
+    expect(f).toMatch(/Drag factor:[\s│]*0\.72 \(0\.68 to 0\.76\)/);
+    expect(f).not.toContain('Analysis 1:');
   });
 });
