@@ -4,6 +4,7 @@
  */
 import type { Case } from '../case/load.js';
 import { APPEARANCE_NOTES } from '../engine/index.js';
+import { airborneV1 } from '../case/v1/phase-fields.js';
 import { skidV1, yawV1, type AnalysisV1, type VehicleV1 } from '../case/v1/schema.js';
 import type { AnswerReader, CaseMeta, InterviewState, SavedInterview } from './types.js';
 import { analysisCount, choiceOf, markLook, unitsOf } from './answers-read.js';
@@ -84,6 +85,23 @@ function yawOf(r: AnswerReader, i: number, id: string): AnalysisV1 | undefined {
   return parsed.success ? parsed.data : undefined;
 }
 
+/** Airborne `i` read with the file's schema; undefined when its answers do not make one. */
+function airborneOf(r: AnswerReader, i: number, id: string): AnalysisV1 | undefined {
+  const p = `a${i}`;
+  const label = text(r, `${p}.label`);
+  const grade = r.value(`${p}.air.grade`);
+  const parsed = airborneV1.safeParse({
+    ...kept(r.answers, analysisKeep(i)),
+    id,
+    kind: 'airborne',
+    ...(label ? { label } : {}),
+    distance: r.value(`${p}.air.distance`),
+    drop: r.value(`${p}.air.drop`),
+    ...(grade !== undefined ? { takeoffGrade: grade } : {}),
+  });
+  return parsed.success ? parsed.data : undefined;
+}
+
 /** The distribution asked at the end of the case, when one was chosen and its questions are answered. */
 function samplingOf(r: AnswerReader): Case['sampling'] {
   const shape = r.value('sampling.shape');
@@ -98,7 +116,7 @@ function samplingOf(r: AnswerReader): Case['sampling'] {
 }
 
 /** Stored id of analysis i (kept from a hand-written case), or `skid-1`, `yaw-2`, ... */
-export function analysisId(state: InterviewState, i: number, kind: 'skid' | 'yaw'): string {
+export function analysisId(state: InterviewState, i: number, kind: Included['kind']): string {
   const kept = state.answers[`a${i}.id`]?.text;
   return kept && /^[A-Za-z0-9._-]{1,64}$/.test(kept) ? kept : `${kind}-${i + 1}`;
 }
@@ -107,7 +125,7 @@ export function analysisId(state: InterviewState, i: number, kind: 'skid' | 'yaw
 interface Included {
   i: number;
   id: string;
-  kind: 'skid' | 'yaw';
+  kind: 'skid' | 'yaw' | 'airborne';
 }
 
 /** The analyses complete enough to enter the case, with the ids they are stored under. */
@@ -128,7 +146,7 @@ function included(
     const extra = new Set([`a${i}.more`, `a${i}.conflict`, `a${i}.reaction`]);
     const own = r.complete((id) => id.startsWith(`a${i}.`) && !extra.has(id));
     if (!own) continue;
-    const kind = look === 'yaw' ? 'yaw' : 'skid';
+    const kind = look === 'yaw' ? 'yaw' : look === 'airborne' ? 'airborne' : 'skid';
     if (kind === 'skid' && !brakes) continue;
     if (kind === 'yaw' && choiceOf(answers, `a${i}.path`) === 'half-track' && !track) continue;
     let id = analysisId(state, i, kind);
@@ -190,7 +208,12 @@ export function buildCase(state: InterviewState, meta: CaseMeta): Case {
   if (track !== undefined) vehicle.trackWidth = track;
   const analyses = withKept(
     included(state, answers, r, !!brakes, track !== undefined).flatMap(
-      ({ i, id, kind }) => (kind === 'skid' ? skidOf(r, i, id) : yawOf(r, i, id)) ?? [],
+      ({ i, id, kind }) =>
+        (kind === 'skid'
+          ? skidOf(r, i, id)
+          : kind === 'airborne'
+            ? airborneOf(r, i, id)
+            : yawOf(r, i, id)) ?? [],
     ),
     answers,
   ) as Case['analyses'];
