@@ -22,6 +22,7 @@ import { brakeQuestions, vehicleQuestions } from './questions-vehicle.js';
 import { slideQuestions } from './questions-slide.js';
 import { yawQuestions } from './questions-yaw.js';
 import { airborneQuestions } from './questions-airborne.js';
+import { endsInto } from './questions-end.js';
 import { samplingQuestions } from './questions-extras.js';
 
 /** Heading of analysis `i`'s section, naming the chain picked. */
@@ -105,8 +106,8 @@ function analysisQuestions(i: number, now: Answers, segments: number): Question[
         { value: 'yaw', key: 'y', label: 'curved, sideways, striated (yaw)' },
         {
           value: 'airborne',
-          key: 'l',
-          label: 'it left the ground: take-off and landing marks (airborne)',
+          key: 'j',
+          label: 'left the ground (take-off, landing)',
         },
       ],
     ),
@@ -132,7 +133,11 @@ function analysisQuestions(i: number, now: Answers, segments: number): Question[
         why: 'A case may hold several analyses, e.g. a slide before an impact and yaw marks after it.',
       },
       appliesWhen: (a) => inPlay(a) && i < MAX_ANALYSES - 1,
-      defaultText: () => 'no',
+      // Yes when an analysis already answered runs on into the next one, still to be entered.
+      defaultText: (a) => {
+        for (let k = 0; k <= i; k++) if (endsInto(a, k) === i + 1) return 'yes';
+        return 'no';
+      },
     }),
   ];
 }

@@ -41,7 +41,7 @@ function savedCase(app: App) {
 describe('an airborne analysis through the interview', () => {
   it('asks distance, signed drop and take-off angle, and the review shows the engine figure of the saved file', async () => {
     const app = await toLook();
-    let f = said(await app.press('l', 'A short label'));
+    let f = said(await app.press('j', 'A short label'));
     expect(f).toContain('the vehicle left the ground');
     await app.answer('off the bank', 'Horizontal distance');
     f = said(app.frame());
@@ -75,7 +75,7 @@ describe('an airborne analysis through the interview', () => {
 
   it('a drop and angle with no path between them are refused with the reason, and a degree angle is read', async () => {
     const app = await toLook();
-    await app.press('l', 'A short label');
+    await app.press('j', 'A short label');
     await app.answer('', 'Horizontal distance');
     await app.answer('40', 'Vertical drop');
     await app.answer('-3', 'Slope of the path at take-off');
@@ -130,5 +130,45 @@ describe('the help gives an airborne example', () => {
     expect(text).toContain(
       `62 ± 2 ft, 8.5 ± 0.5 ft, -2 ± 1 % gives ${formatRange(solved.solution.speed, 'speed', 'mph')}`,
     );
+  });
+});
+
+describe('a slide that went on into a fall', () => {
+  it('links the two; the review shows the phases and the figure of the saved file', async () => {
+    const app = await toLook();
+    await app.press('d', 'Were all four brakes working?');
+    await app.press('a', 'A short label');
+    await app.answer('before the edge', 'Did the vehicle slide over one surface');
+    await app.press('o', 'How many tire marks');
+    await app.answer('1', 'Length of each mark');
+    await app.answer('38 ± 0.5', 'A name for the surface');
+    await app.press(ENTER, 'Where does the drag factor');
+    await app.press('e', 'Drag factor');
+    await app.answer('0.74 (0.70-0.78)', 'Grade, the slide');
+    await app.press('l', 'How did the slide end?');
+    let f = said(await app.press('o', 'Which analysis holds the marks'));
+    expect(f).toContain('analysis 2, the next one');
+    await app.press(ENTER, 'Another analysis?');
+    await app.press(ENTER, 'What do the marks of this analysis look like?');
+    await app.press('j', 'A short label');
+    await app.answer('off the bank', 'Horizontal distance');
+    await app.answer('48 (47-49)', 'Vertical drop');
+    await app.answer('6.5 (6.3-6.7)', 'Slope of the path at take-off');
+    await app.answer('-4', 'Another analysis?');
+    await app.press('n', 'Also show a distribution');
+    f = said(await app.press('n', 'Review ·'));
+    const c = savedCase(app);
+    expect(c.analyses.map((a) => a.kind)).toEqual(['skid', 'airborne']);
+    expect((c.analyses[0] as { end?: unknown }).end).toEqual({
+      mode: 'analysis',
+      analysis: c.analyses[1]!.id,
+    });
+    const solved = solveCase(c).analyses;
+    const slide = solved[0]!;
+    const fall = solved[1]!;
+    if (!slide.ok || !fall.ok) throw new Error('not solved');
+    expect(f).toContain('Phases in order of travel:');
+    expect(f).toContain(formatRange(slide.solution.speed, 'speed', 'mph'));
+    expect(f).toContain(formatRange(fall.solution.speed, 'speed', 'mph'));
   });
 });
