@@ -233,7 +233,11 @@ export function answersFromCase(c: Case): Answers {
       slopeAnswers(put, `${sp}.grade`, s.grade, ['level', 'uphill', 'downhill']);
       testGradeAnswers(put, sp, s.drag, s.grade);
     });
-    if (a.end?.mode === 'speed') {
+    if (a.end?.mode === 'analysis') {
+      put(`${p}.end`, 'next');
+      const to = asked.findIndex((x) => x.id === (a.end as { analysis: string }).analysis);
+      put(`${p}.end.into`, String(to + 1));
+    } else if (a.end?.mode === 'speed') {
       put(`${p}.end`, 'speed');
       put(`${p}.end.speed`, quantityText(a.end.speed));
       put(`${p}.end.basis`, a.end.basis ?? '');
