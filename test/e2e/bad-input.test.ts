@@ -3,11 +3,12 @@
 // and leaves the files on disk as they were. Invented cases.
 import { afterAll, afterEach, describe, expect, it } from 'vitest';
 import { spawn } from 'node:child_process';
-import { chmodSync, mkdirSync, readdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
-import { dirname, join } from 'node:path';
+import { chmodSync, mkdirSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { tmpdir } from 'node:os';
 import { BINARY, disposeAll, ptySupport, startTerm } from './harness.js';
 import { describeInTerminal } from './pty-gate.js';
+import { NOBODY, assertPassableForNobody, runsAsRoot } from '../as-nobody.js';
 import { childEnv, makeWorkspace } from './env.js';
 
 const ws = makeWorkspace('skidcase-bad-input-');
@@ -246,24 +247,20 @@ describe('report onto a folder, into a missing or read-only folder, and of a fol
   it('--out into a read-only folder: says it cannot be written, no temp file named, nothing written', async () => {
     // Root may write anywhere: as root (CI), the program runs as the unprivileged user nobody,
     // with the workspace opened up for reading so that it can read the case.
-    const asRoot = process.getuid?.() === 0;
-    const nobody = { uid: 65534, gid: 65534 };
+    const asRoot = runsAsRoot();
     const dir = join(ws.root, 'read-only');
     mkdirSync(dir);
     chmodSync(dir, 0o555);
     if (asRoot) {
       chmodSync(ws.root, 0o755);
       chmodSync(caseFile(), 0o644);
-      for (let d = dirname(ws.root); d !== dirname(d); d = dirname(d)) {
-        // the temp folder's parents must be passable for nobody (they are on a normal system)
-        if ((statSync(d).mode & 0o001) === 0) throw new Error(`${d} is not passable for nobody`);
-      }
+      assertPassableForNobody(ws.root);
     }
     try {
       const r = await run(
         ['report', caseFile(), '--out', join(dir, 'r.md')],
         asRoot ? tmpdir() : ws.root,
-        asRoot ? nobody : undefined,
+        asRoot ? NOBODY : undefined,
       );
       expect(r.code).toBe(1);
       expect(r.err).toContain(
