@@ -55,6 +55,9 @@ export default defineConfig({
           name: 'processes',
           include: PROCESS_TESTS,
           pool: 'forks',
+          // Three at a time: these files mostly wait for a child's screen or exit, so two would
+          // leave a core idle; a fourth starts to slow the screens they wait for.
+          maxWorkers: 3,
           sequence: { groupOrder: 1 },
         },
       },

@@ -136,6 +136,7 @@ describe("a case beyond the format's caps", () => {
 
   it('each list of the format has the cap, named in the message', async () => {
     const seg = { drag: { source: 'entered', value: 0.7 }, length: 1 };
+    // eslint-disable-next-line @typescript-eslint/no-explicit-any -- edits a parsed JSON case at any depth
     const cases: [string, (c: any) => void, string][] = [
       [
         'segments',
@@ -286,6 +287,7 @@ describe('control characters in file names, ids, field names and labels', () => 
   // A name that would set the terminal's title if printed raw.
   const TITLE = '\u001b]0;owned\u0007';
   const ESCAPED = '\\u001b]0;owned\\u0007';
+  // eslint-disable-next-line no-control-regex -- the control characters that must never reach the terminal raw
   const RAW = /[\u0000-\u0008\u000b-\u001f\u007f-\u009f]/;
 
   it('solve and report print them escaped, in messages and in the chain', async () => {
@@ -293,6 +295,7 @@ describe('control characters in file names, ids, field names and labels', () => 
     const invalid = join(ws.root, `bad${TITLE}.json`);
     writeFileSync(invalid, JSON.stringify({ ...skidCase('bad'), units: 'furlongs' }));
     const labelled = join(ws.root, `label${TITLE}.json`);
+    // eslint-disable-next-line @typescript-eslint/no-explicit-any -- a parsed JSON case, given a label
     const c = skidCase('labelled', { [`odd${TITLE}`]: 1 }) as any;
     c.analyses[0].label = `front left${TITLE}`;
     writeFileSync(labelled, JSON.stringify(c));

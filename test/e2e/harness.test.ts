@@ -1,6 +1,6 @@
 // The harness's own tests, against a tiny program of ours (fixtures/echo-keys.mjs), so that a
 // failing end-to-end test of skidcase points at skidcase and not at the harness.
-import { afterEach, describe, expect, it } from 'vitest';
+import { afterEach, expect, it } from 'vitest';
 import { fileURLToPath } from 'node:url';
 import { disposeAll, ptySupport, startTerm } from './harness.js';
 import { colourCodes, stripAnsi } from './ansi.js';

@@ -1,7 +1,7 @@
 // Whole cases typed into the built binary in a real pseudo-terminal (a whole case, resume after a
 // kill, the fast path): the figures on the review screen must equal `skidcase solve --json` on the
 // file the program saved.
-import { afterAll, afterEach, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, expect, it } from 'vitest';
 import { existsSync, readFileSync } from 'node:fs';
 import { disposeAll, ptySupport, startTerm, type Term } from './harness.js';
 import { makeWorkspace, type Workspace } from './env.js';

@@ -16,11 +16,11 @@ import { soakCount } from '../soak.js';
  * lanes at once, each on its own case; every new child resumes the same case, so it also clears
  * the stale lock its killed predecessor left behind.
  *
- * `npm test` runs 45 kills, `npm run soak` 300 (SKIDCASE_CRASH_KILLS sets another count). Every
+ * `npm test` runs 30 kills, `npm run soak` 300 (SKIDCASE_CRASH_KILLS sets another count). Every
  * random choice comes from one seeded generator per lane; the seed is printed, and
  * SKIDCASE_CRASH_SEED replays a run's choices (the moments themselves still move with the machine).
  */
-const KILLS = soakCount('SKIDCASE_CRASH_KILLS', 45, 300);
+const KILLS = soakCount('SKIDCASE_CRASH_KILLS', 30, 300);
 const LANES = 3;
 const SEED = Number(process.env.SKIDCASE_CRASH_SEED ?? Date.now() % 2 ** 31);
 console.log(`crash test seed ${SEED} (SKIDCASE_CRASH_SEED=${SEED} replays it)`);
