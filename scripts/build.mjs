@@ -99,7 +99,10 @@ await build({
       'const __dirname = __dn(__filename);',
     ].join('\n'),
   },
-  define: { 'process.env.NODE_ENV': '"production"', __SKIDCASE_VERSION__: JSON.stringify(pkg.version) },
+  define: {
+    'process.env.NODE_ENV': '"production"',
+    __SKIDCASE_VERSION__: JSON.stringify(pkg.version),
+  },
   external: ['react-devtools-core'],
   plugins: [zodEnglishOnly, yogaWithoutFetch],
   logLevel: 'warning',

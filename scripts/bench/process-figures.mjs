@@ -1,6 +1,6 @@
 // Figures measured on whole processes: the start screen in a pty, and `solve --json`.
 import { spawn } from 'node:child_process';
-import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
+import { existsSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { interleaved, median } from './stats.mjs';
 import { benchEnv, timeToSettledScreen } from './pty-timer.mjs';
@@ -99,9 +99,4 @@ export async function solveJson(ctx) {
     runs: ctx.processRuns * 2,
     method: 'wall time of the child process, output piped',
   };
-}
-
-export function ensureDir(d) {
-  mkdirSync(d, { recursive: true });
-  return d;
 }

@@ -1,7 +1,6 @@
 import type { Range, Units } from '../engine/types.js';
-import type { Verdict } from '../extras/limit-steps.js';
 import { formatStepLines, kindOfUnit } from './step-text.js';
-import { formatRange, withUnit } from './numbers.js';
+import { withUnit } from './numbers.js';
 import { formatNumber } from '../engine/number-text.js';
 import type { AnalysisExtras } from '../extras/analysis-extras.js';
 import { limitFraming, verdictSentence } from './verdict.js';

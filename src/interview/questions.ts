@@ -13,7 +13,6 @@ import {
   MAX_ANALYSES,
   maxIndexIn,
   segmentCount,
-  surfaceMode,
   unitsOf,
   type MarkLook,
 } from './answers-read.js';
@@ -28,7 +27,6 @@ import { samplingQuestions } from './questions-extras.js';
 /** Heading of analysis `i`'s section, naming the chain picked. */
 export function analysisSection(a: Answers, i: number): string {
   const look = markLook(a, i);
-  const mode = surfaceMode(a, i);
   const chain =
     look === undefined
       ? ''

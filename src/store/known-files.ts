@@ -40,10 +40,6 @@ export function getKnown(file: string): Known {
   return k;
 }
 
-export function forgetKnown(file: string): void {
-  known.delete(file);
-}
-
 /** Runs async tasks on one file one after another, so overlapping autosaves cannot interleave. */
 const queues = new Map<string, Promise<unknown>>();
 export function serial<T>(file: string, task: () => Promise<T>): Promise<T> {

@@ -1,5 +1,5 @@
 import React from 'react';
-import { Box, Text } from 'ink';
+import { Box } from 'ink';
 import { KEY_TABLE, bindingKeys, keysFor, type KeyContext } from './keys.js';
 import type { ShownLine } from './review-step.js';
 import { wrap } from '../report/wrap.js';

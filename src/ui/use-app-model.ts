@@ -59,7 +59,10 @@ export function useAppModel(
     ref.current = n;
     setModel(n);
   }, []);
-  const setHome = (h: Partial<HomeState>) => update((m) => ({ ...m, home: { ...m.home, ...h } }));
+  const setHome = useCallback(
+    (h: Partial<HomeState>) => update((m) => ({ ...m, home: { ...m.home, ...h } })),
+    [update],
+  );
 
   const refresh = useCallback(async () => {
     try {
@@ -111,7 +114,7 @@ export function useAppModel(
         home: { ...m.home, error: undefined, message: undefined, path: undefined },
       }));
     },
-    [port, update],
+    [port, update, setHome],
   );
 
   /**

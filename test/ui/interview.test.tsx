@@ -260,12 +260,14 @@ describe('NO_COLOR', () => {
       chalk.level = 3;
       const coloured = renderApp({ color: true });
       await coloured.waitText('No cases here yet');
+      // eslint-disable-next-line no-control-regex -- a colour code begins with ESC [
       expect(coloured.lastFrame()).toMatch(/\u001B\[/);
       cleanup();
       expect(applyColorPolicy({ NO_COLOR: '1' })).toBe(false);
       const plain = renderApp({ color: false });
       await plain.waitText('No cases here yet');
       await plain.press('n', 'Case or report reference');
+      // eslint-disable-next-line no-control-regex -- no escape code at all
       expect(plain.lastFrame()).not.toMatch(/\u001B/);
     } finally {
       chalk.level = level;
