@@ -1,9 +1,7 @@
 import type { AnalysisSolution, Range, Units } from '../engine/types.js';
 import type { AnalysisExtras } from '../extras/analysis-extras.js';
 import type { LimitComparison } from '../extras/limit-comparison.js';
-import type { Verdict } from '../extras/limit-steps.js';
 import { formatRange } from '../format/numbers.js';
-import { formatNumber } from '../engine/number-text.js';
 import { limitFraming, verdictSentence } from '../format/verdict.js';
 import { stepBlocks } from './analysis-section.js';
 import { list, para, section, table, type Section } from './doc.js';

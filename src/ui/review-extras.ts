@@ -7,11 +7,7 @@
 import { spread } from '../engine/spread.js';
 import type { Case } from '../case/load.js';
 import type { AnalysisSolution, CaseSolution, Outcome, Range, Units } from '../engine/types.js';
-import {
-  caseResult,
-  type AnalysisExtras,
-  type CaseResult,
-} from '../extras/analysis-extras.js';
+import { caseResult, type AnalysisExtras, type CaseResult } from '../extras/analysis-extras.js';
 import type { Verdict } from '../extras/limit-steps.js';
 import type { LimitComparison } from '../extras/limit-comparison.js';
 import type { SampleSummary } from '../extras/sampling.js';

@@ -58,8 +58,7 @@ function analysisLines(
     pushWrapped(out, `Phases in order of travel: ${phasesLine(s.phases, sol.units)}`, width, '  ', {
       tone: 'result',
     });
-  for (const n of notes)
-    pushWrapped(out, `! ${n}`, width, '  ', { tone: 'warning', bold: true });
+  for (const n of notes) pushWrapped(out, `! ${n}`, width, '  ', { tone: 'warning', bold: true });
   if (sol.postedLimit) {
     const v = sol.postedLimit.value;
     // A limit converted from the other unit is not whole: show it as converted, not rounded.

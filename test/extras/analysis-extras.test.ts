@@ -46,7 +46,9 @@ describe('analysisExtras: what applies to an analysis, and only that', () => {
     const plain = analysisExtras(c, solved(c));
     expect(plain.limit?.ok && plain.limit.value.reactionSource).toMatch(/^default; usual value/);
     const solve = analysisExtras(c, solved(c), { defaultReactionNote: 'default 1.5 s (no prefs)' });
-    expect(solve.limit?.ok && solve.limit.value.reactionSource).toMatch(/^default 1\.5 s \(no prefs\)/);
+    expect(solve.limit?.ok && solve.limit.value.reactionSource).toMatch(
+      /^default 1\.5 s \(no prefs\)/,
+    );
   });
 
   it('sampling asked for by the caller runs when the case has no sampling field', () => {
