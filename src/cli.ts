@@ -121,6 +121,15 @@ function program({ Command, Option }: typeof import('commander')): Command {
         setExit(await reportCommand(target, opts, io));
       },
     );
+  p.command('verify <report> [case]')
+    .description(
+      'say whether a report was made from a case file (exit 0 it was, 1 it differs, 2 unreadable)',
+    )
+    .action(async (report: string, target?: string) => {
+      const where = await sessions(p.opts().sessions);
+      const { verifyCommand } = await import('./commands/verify.js');
+      setExit(await verifyCommand(report, target, where.dir, io));
+    });
   return p;
 }
 

@@ -14,7 +14,12 @@ describe('temporary folders of the tests', () => {
     expect(removeTrackedTempDirs()).not.toContain(dir);
   });
 
-  it('every test file ends with the removal: the setup file is in the vitest config', () => {
-    expect(config.test?.setupFiles).toContain('test/setup/temp-cleanup.ts');
+  it('every test file ends with the removal: each project of the vitest config has the setup file', () => {
+    const projects = (config.test?.projects ?? []) as {
+      test?: { name?: string; setupFiles?: string[] };
+    }[];
+    expect(projects.length).toBeGreaterThan(0);
+    for (const p of projects)
+      expect(p.test?.setupFiles, p.test?.name).toContain('test/setup/temp-cleanup.ts');
   });
 });

@@ -3,7 +3,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 
 // Temporary folders the tests make, remembered so that test/setup/temp-cleanup.ts removes them
-// after each test file (vitest gives every test file its own copy of this module).
+// after each test file. Files that share a worker (vitest.config.ts) share this module too; they
+// run one after another, so each file's removal takes only what is left, its own folders.
 
 const made = new Set<string>();
 

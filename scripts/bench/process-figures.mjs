@@ -186,8 +186,3 @@ export async function solveJson(ctx) {
   }
   return out;
 }
-
-export function ensureDir(d) {
-  mkdirSync(d, { recursive: true });
-  return d;
-}

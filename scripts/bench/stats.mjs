@@ -15,21 +15,6 @@ export function percentile(xs, p) {
   return s[rank - 1];
 }
 
-/** Milliseconds since `t0` (a performance.now() reading), as a float. */
-export const since = (t0) => performance.now() - t0;
-
-/** Times `fn` (sync or async) `runs` times after `warmup` untimed calls; returns each run in ms. */
-export async function timeRuns(fn, { runs, warmup = 1 }) {
-  for (let i = 0; i < warmup; i++) await fn();
-  const out = [];
-  for (let i = 0; i < runs; i++) {
-    const t0 = performance.now();
-    await fn();
-    out.push(since(t0));
-  }
-  return out;
-}
-
 /**
  * Interleaves two measurements run by run (subject, baseline, subject, ...), so that a slow
  * moment of a shared machine weighs on both alike. Each function returns one duration in ms.

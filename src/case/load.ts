@@ -1,6 +1,6 @@
 import { caseV1, type CaseV1 } from './v1/schema.js';
 import { fromZod, type FieldIssue } from './issues.js';
-import { MIGRATIONS } from './migrate.js';
+import { MIGRATIONS, migrate, oldestVersion, type MigrationTable } from './migrate.js';
 import { unknownFields } from './unknown-fields.js';
 import { scanJson } from './json-scan.js';
 import { MAX_CASE_BYTES, MAX_DEPTH, TOO_DEEP, tooLargeMessage } from './limits.js';
@@ -43,8 +43,9 @@ function withoutRepeats(issues: FieldIssue[]): FieldIssue[] {
 /**
  * Reads a case from parsed JSON: checks the format, migrates older versions to the latest in
  * memory, validates, and lists fields the schema does not know (kept, but worth a warning).
+ * `migrations` is the table of steps between versions (`MIGRATIONS`; tests pass their own).
  */
-export function loadCase(input: unknown): LoadResult {
+export function loadCase(input: unknown, migrations: MigrationTable = MIGRATIONS): LoadResult {
   if (typeof input !== 'object' || input === null || Array.isArray(input))
     return {
       ok: false,
@@ -61,11 +62,12 @@ export function loadCase(input: unknown): LoadResult {
       ],
     };
   const version = obj.version;
-  if (typeof version !== 'number' || !Number.isInteger(version) || version < 1)
+  const oldest = oldestVersion(migrations, LATEST_VERSION);
+  if (typeof version !== 'number' || !Number.isInteger(version) || version < oldest)
     return {
       ok: false,
       kind: 'invalid',
-      issues: [{ path: 'version', message: 'version must be a whole number from 1' }],
+      issues: [{ path: 'version', message: `version must be a whole number from ${oldest}` }],
     };
   if (version > LATEST_VERSION)
     return {
@@ -78,18 +80,14 @@ export function loadCase(input: unknown): LoadResult {
         },
       ],
     };
-  let current: unknown = input;
-  for (let v = version; v < LATEST_VERSION; v++) {
-    const step = MIGRATIONS[v];
-    if (!step)
-      return {
-        ok: false,
-        kind: 'invalid',
-        issues: [{ path: 'version', message: `no migration from version ${v}` }],
-      };
-    current = step(current as Record<string, unknown>);
-  }
-  const parsed = caseV1.safeParse(current);
+  const migrated = migrate(obj, version, LATEST_VERSION, migrations);
+  if (!migrated.ok)
+    return {
+      ok: false,
+      kind: 'invalid',
+      issues: [{ path: 'version', message: `no migration from version ${migrated.missing}` }],
+    };
+  const parsed = caseV1.safeParse(migrated.value);
   if (!parsed.success)
     return { ok: false, kind: 'invalid', issues: withoutRepeats(fromZod(parsed.error)) };
   const result: LoadResult = {
@@ -107,7 +105,7 @@ export function loadCase(input: unknown): LoadResult {
  * is a text beyond the size or nesting limits (docs/case-file.md), checked before it is parsed.
  * Keys given twice in one object are listed in `duplicateKeys`.
  */
-export function loadCaseText(text: string): LoadResult {
+export function loadCaseText(text: string, migrations: MigrationTable = MIGRATIONS): LoadResult {
   // UTF-16 code units never outnumber UTF-8 bytes, so this holds for the file's bytes too.
   if (text.length > MAX_CASE_BYTES)
     return {
@@ -129,7 +127,7 @@ export function loadCaseText(text: string): LoadResult {
       issues: [{ path: '(file)', message: `not valid JSON (${msg})` }],
     };
   }
-  const loaded = loadCase(json);
+  const loaded = loadCase(json, migrations);
   if (loaded.ok) loaded.duplicateKeys = scan.duplicateKeys;
   return loaded;
 }

@@ -1,10 +1,23 @@
 import { z } from 'zod';
 
 /**
- * A measured or estimated number: a plain number, or `{ value, low?, high?, note? }`.
- * Missing `low`/`high` mean no spread on that input.
+ * A measured or estimated number: a plain number, or `{ value, low?, high?, note?, decimals? }`.
+ * Missing `low`/`high` mean no spread on that input. `decimals` records how many decimals the
+ * figure was typed with (`0.70` is 2), which a JSON number cannot keep; the record shows it so.
  */
-export type Quantity = number | { value: number; low?: number; high?: number; note?: string };
+export type Quantity =
+  number | { value: number; low?: number; high?: number; note?: string; decimals?: number };
+
+/** Most decimals a figure may say it was typed with (`decimals`). */
+export const MAX_DECIMALS = 9;
+
+/** The issue with a `decimals` field, or undefined when it is a whole number 0..9 (or absent). */
+export function decimalsIssue(d: unknown): string | undefined {
+  if (d === undefined) return undefined;
+  return typeof d === 'number' && Number.isInteger(d) && d >= 0 && d <= MAX_DECIMALS
+    ? undefined
+    : `decimals must be a whole number from 0 to ${MAX_DECIMALS} (the decimals the figure was typed with)`;
+}
 
 /** Bounds a kind of quantity must respect, with the words used in messages. */
 export interface QuantityRule {
@@ -74,6 +87,8 @@ export function quantity(rule: QuantityRule) {
       const okH = q.high === undefined || check(q.high, `${rule.what} (high)`, ['high']);
       if (q.note !== undefined && typeof q.note !== 'string')
         ctx.addIssue({ code: 'custom', path: ['note'], message: 'note must be text' });
+      const dec = decimalsIssue(q.decimals);
+      if (dec) ctx.addIssue({ code: 'custom', path: ['decimals'], message: dec });
       if (okV && okL && q.low !== undefined && (q.low as number) > (q.value as number))
         ctx.addIssue({
           code: 'custom',

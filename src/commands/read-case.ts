@@ -2,6 +2,7 @@ import { open, stat } from 'node:fs/promises';
 import { decodeCaseBytes } from '../case/decode-bytes.js';
 import { MAX_CASE_BYTES, tooLargeMessage } from '../case/limits.js';
 import { printable } from '../case/printable.js';
+import { sha256Of } from '../io/sha256.js';
 
 /** Why a path cannot be read as a case file, in words the user can act on. */
 function readError(file: string, e: unknown): string {
@@ -15,11 +16,13 @@ function readError(file: string, e: unknown): string {
 }
 
 /**
- * The text of a case file for `solve` and `report`, or the message saying why there is none: no
+ * The text of a case file for `solve` and `report`, with the SHA-256 of its bytes, or the message saying why there is none: no
  * such file, a folder, no permission, or larger than a case file may be (checked before reading).
  * @example await readCaseFile('/etc') // { message: '/etc: is a folder, not a case file' }
  */
-export async function readCaseFile(file: string): Promise<{ text: string } | { message: string }> {
+export async function readCaseFile(
+  file: string,
+): Promise<{ text: string; sha256: string } | { message: string }> {
   try {
     const st = await stat(file);
     if (st.isDirectory()) return { message: readError(file, { code: 'EISDIR' }) };
@@ -27,7 +30,8 @@ export async function readCaseFile(file: string): Promise<{ text: string } | { m
       return { message: `${printable(file)}: ${tooLargeMessage(st.size)}` };
     const handle = await open(file, 'r');
     try {
-      return { text: decodeCaseBytes(await handle.readFile()) };
+      const bytes = await handle.readFile();
+      return { text: decodeCaseBytes(bytes), sha256: sha256Of(bytes) };
     } finally {
       await handle.close();
     }

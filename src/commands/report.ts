@@ -5,6 +5,7 @@ import { printable, printableIo } from '../case/printable.js';
 import { loadCaseText, type Case } from '../case/load.js';
 import { solveCase } from '../engine/solve-case.js';
 import type { CaseSolution } from '../engine/types.js';
+import { caseResult } from '../extras/analysis-extras.js';
 import { buildReport } from '../report/build.js';
 import { REPORT_FORMATS, renderReport, type ReportFormat } from '../report/render.js';
 import { toolVersion } from '../report/version.js';
@@ -44,7 +45,7 @@ async function kindAt(p: string): Promise<'file' | 'folder' | 'other' | 'none'> 
 }
 
 /** A path to a case file, or a case id in the sessions folder; a message when it is neither. */
-async function resolveTarget(
+export async function resolveTarget(
   target: string,
   sessionsDir: string,
 ): Promise<{ file: string } | { message: string }> {
@@ -62,7 +63,8 @@ async function resolveTarget(
 }
 
 type Loaded =
-  { ok: true; case: Case; solution: CaseSolution; file: string } | { ok: false; code: number };
+  | { ok: true; case: Case; solution: CaseSolution; file: string; sha256: string }
+  | { ok: false; code: number };
 
 /** Reads, validates and solves, with the messages `solve` gives for the same file. */
 async function loadAndSolve(target: string, sessionsDir: string, io: ReportIo): Promise<Loaded> {
@@ -92,7 +94,7 @@ async function loadAndSolve(target: string, sessionsDir: string, io: ReportIo): 
     io.err('skidcase: no report written\n');
     return { ok: false, code: REPORT_EXIT.uncomputable };
   }
-  return { ok: true, case: loaded.case, solution, file: where.file };
+  return { ok: true, case: loaded.case, solution, file: where.file, sha256: read.sha256 };
 }
 
 /**
@@ -115,11 +117,12 @@ export async function reportCommand(
   }
   const loaded = await loadAndSolve(target, opts.sessionsDir, io);
   if (!loaded.ok) return loaded.code;
-  const doc = buildReport(loaded.case, loaded.solution, {
+  const settings = opts.reactionTime !== undefined ? { reactionTime: opts.reactionTime } : {};
+  const doc = buildReport(caseResult(loaded.case, loaded.solution, settings), {
     toolVersion: toolVersion(),
     generatedAt: new Date().toISOString(),
     caseFile: loaded.file,
-    ...(opts.reactionTime !== undefined ? { extras: { reactionTime: opts.reactionTime } } : {}),
+    caseSha256: loaded.sha256,
   });
   if (opts.out === undefined) {
     io.out(renderReport(doc, opts.format));

@@ -5,6 +5,8 @@ import { formatChainText } from '../format/chain-text.js';
 import { printable, printableIo } from '../case/printable.js';
 import { readCaseFile } from './read-case.js';
 import { solutionToJson } from '../format/solution-json.js';
+import { caseResult } from '../extras/analysis-extras.js';
+import { SOLVE_REACTION_ORIGIN } from '../format/solve-extras.js';
 
 /** Exit codes of `skidcase solve`. */
 export const EXIT = { solved: 0, invalid: 2, uncomputable: 3 } as const;
@@ -43,11 +45,12 @@ export async function solveCommand(
   const failures = solution.analyses.flatMap((r, i) =>
     r.ok ? [] : [`analyses[${i}] (${r.id}): cannot be computed: ${r.reason}`],
   );
+  // solve reads no preferences: the default reaction time says so.
+  const result = caseResult(loaded.case, solution, { defaultReactionNote: SOLVE_REACTION_ORIGIN });
   if (opts.json) {
-    if (failures.length === 0)
-      io.out(`${JSON.stringify(solutionToJson(solution, loaded.case), null, 2)}\n`);
+    if (failures.length === 0) io.out(`${JSON.stringify(solutionToJson(result), null, 2)}\n`);
   } else {
-    io.out(formatChainText(solution, loaded.case));
+    io.out(formatChainText(result));
   }
   if (failures.length > 0) {
     for (const f of failures) io.err(`skidcase: ${f}\n`);

@@ -1,5 +1,5 @@
 import { spread } from './spread.js';
-import type { DragV1 } from '../case/v1/schema.js';
+import type { DragInput } from './input.js';
 import { formatNumber } from './number-text.js';
 import { tradeConstants, unitsOf } from './constants.js';
 import { testSkidDrag } from './formulas.js';
@@ -8,7 +8,7 @@ import { fail, ok, type Outcome, type Range, type Step, type UnitSystem } from '
 import { input, joinList, makeStep } from './step.js';
 
 const f2 = (n: number) => formatNumber(n, 'drag');
-type TestSkids = Extract<DragV1, { source: 'test-skids' }>;
+type TestSkids = Extract<DragInput, { source: 'test-skids' }>;
 
 /**
  * Drag factor from test skids, with the grade they were run on taken off:

@@ -1,5 +1,5 @@
 import { spread } from './spread.js';
-import type { DragV1 } from '../case/v1/schema.js';
+import type { DragInput } from './input.js';
 import { formatNumber } from './number-text.js';
 import { dragTableRow } from './drag-table.js';
 import { testSkidsDrag } from './drag-tests.js';
@@ -31,7 +31,7 @@ function fixedRange(d: { value: number; low?: number; high?: number }): Range {
  * Each test, pull and reading enters by its `value`.
  * @example dragFactor({ source: 'entered', value: 0.7, low: 0.65, high: 0.75 }, 'imperial') // f 0.70 (0.65 to 0.75)
  */
-export function dragFactor(drag: DragV1, system: UnitSystem): Outcome<Drag> {
+export function dragFactor(drag: DragInput, system: UnitSystem): Outcome<Drag> {
   const notes: string[] = [];
   if (drag.source === 'entered' || drag.source === 'table') {
     const f = fixedRange(drag);

@@ -1,5 +1,5 @@
 import { spread } from './spread.js';
-import type { VehicleV1 } from '../case/v1/schema.js';
+import type { VehicleInput } from './input.js';
 import { formatNumber } from './number-text.js';
 import { wheelsBraking } from './formulas.js';
 import { fail, ok, type Outcome, type Range, type Step } from './types.js';
@@ -35,7 +35,7 @@ export function wheelsEfficiency(s: Range, fl: Range, fr: Range, rl: Range, rr: 
  * Fails when the brakes (or, per wheel, the front axle share) are not given.
  * @example brakingEfficiency({ brakes: { mode: 'all' } }) // ok, n = 1
  */
-export function brakingEfficiency(vehicle: VehicleV1): Outcome<Efficiency> {
+export function brakingEfficiency(vehicle: VehicleInput): Outcome<Efficiency> {
   const b = vehicle.brakes;
   if (!b) return fail('the vehicle’s brakes are not given', 'vehicle.brakes');
   if (b.mode === 'all') {

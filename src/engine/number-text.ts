@@ -5,13 +5,14 @@
  */
 /**
  * What a number is, which fixes how many decimals it is shown with. Speeds 1 dp, drag factors
- * and braking efficiency 2 dp, lengths 2 dp below 10 and 1 dp from 10, grades as decimals
+ * and braking efficiency 2 dp (`fine-factor` 3 dp, see factorKind), lengths 2 dp below 10 and 1 dp from 10, grades as decimals
  * (`grade`) up to 3 dp, percentages up to 1 dp, seconds 1 dp.
  */
 export type NumberKind =
   | 'speed'
   | 'length'
   | 'drag'
+  | 'fine-factor'
   | 'efficiency'
   | 'grade'
   | 'percent'
@@ -40,6 +41,20 @@ function trimmed(n: number, maxDp: number, minDp: number): string {
 }
 
 /**
+ * The one rule for the dimensionless factors of a step (drag factor, braking efficiency, a grade
+ * or bank as a decimal, the effective drag): every factor in the line, its result included, is
+ * written with 2 decimals, or with 3 when a grade or bank in it has a fraction of a percent
+ * (2.5% is 0.025, which 2 decimals would misstate as 0.03). `percents` are those grades and banks.
+ * @example factorKind(-3) // 'drag': 0.69 × 0.90 − 0.03 = 0.59
+ * @example factorKind(-2.5) // 'fine-factor': 0.690 × 0.900 − 0.025 = 0.596
+ */
+export function factorKind(...percents: number[]): 'drag' | 'fine-factor' {
+  return percents.some((p) => Number.isFinite(p) && Math.abs(Math.round(p * 10)) % 10 !== 0)
+    ? 'fine-factor'
+    : 'drag';
+}
+
+/**
  * Formats a number for people: fixed decimals per kind, never "NaN".
  * @example formatNumber(41.63, 'speed') // "41.6"
  * @example formatNumber(0.7, 'drag') // "0.70"
@@ -56,6 +71,8 @@ export function formatNumber(n: number, kind: NumberKind): string {
     case 'drag':
     case 'efficiency':
       return fixed(n, 2);
+    case 'fine-factor':
+      return fixed(n, 3);
     case 'grade':
       return trimmed(n, 3, 2);
     case 'percent':
@@ -65,4 +82,19 @@ export function formatNumber(n: number, kind: NumberKind): string {
     case 'integer':
       return fixed(Math.round(n), 0);
   }
+}
+
+/** Decimals a number is written with by plain JSON (`0.7` has 1, `80` none). */
+export function jsonDecimals(n: number): number {
+  const s = String(n);
+  return s.includes('e') ? 0 : s.includes('.') ? s.length - s.indexOf('.') - 1 : 0;
+}
+
+/**
+ * A figure as it was typed: with the decimals recorded for it (a quantity's `decimals`: `0.70`),
+ * else as the file holds it (`0.7`). For the record of what was entered, not for computed figures.
+ * @example typedText(0.7, 2) // "0.70"
+ */
+export function typedText(n: number, decimals: number | undefined): string {
+  return decimals !== undefined && decimals > jsonDecimals(n) ? n.toFixed(decimals) : String(n);
 }

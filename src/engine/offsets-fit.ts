@@ -1,5 +1,14 @@
 import { geometricFit, geometricSsr, signRuns, type Point } from './circle-fit.js';
-import { fail, ok, type Outcome, type Step } from './types.js';
+import {
+  fail,
+  ok,
+  type OffsetsFit,
+  type OffsetResidual,
+  type Outcome,
+  type Step,
+} from './types.js';
+
+export type { OffsetsFit, OffsetResidual } from './types.js';
 
 /** Fixed decimals for the step's text ("—" for a number that is not finite). */
 function num(n: number, dp: number): string {
@@ -22,34 +31,6 @@ export interface OffsetsFitOptions {
   tolerance?: number;
   /** Length unit for the step's text ("ft", "m"); default none. */
   unit?: string;
-}
-
-/** How one point sits against the fitted circle. */
-export interface OffsetResidual {
-  at: number;
-  offset: number;
-  /** The fitted arc's offset at this station (undefined if the station lies beyond the circle). */
-  fitted: number | undefined;
-  /** Signed distance from the fitted circle: + the point lies outside it (away from the centre). */
-  residual: number;
-  /** True for the chord's two ends, which are points of the mark by the chord's definition. */
-  chordEnd: boolean;
-}
-
-export interface OffsetsFit {
-  radius: number;
-  /** Standard error of the radius from the scatter (s² (JᵀJ)⁻¹); undefined with one station. */
-  radiusStdError: number | undefined;
-  /** Centre in the chord's frame: x along the chord from its start, y toward the mark. */
-  centre: { x: number; y: number };
-  /** The fitted arc's middle ordinate (its offset at the chord's midpoint). */
-  middleOrdinate: number;
-  residuals: OffsetResidual[];
-  /** Root mean square of the residuals, chord ends included. */
-  rms: number;
-  iterations: number;
-  warnings: string[];
-  step: Step;
 }
 
 function validate(chord: number, stations: readonly OffsetStation[]): Outcome<true> {

@@ -1,4 +1,4 @@
-import type { SkidV1 } from '../case/v1/schema.js';
+import type { SkidInput } from './input.js';
 import { modelInput } from './model-input.js';
 import { tradeConstants, unitsOf } from './constants.js';
 import { effectiveDrag, slideSquaredSpeed } from './formulas.js';
@@ -17,7 +17,7 @@ import type { AnalysisModel, ModelInput, Range, UnitSystem } from './types.js';
  *   .evaluate({ 'f[0]': 0.75 }) // sqrt(30 × 60 × 0.75) = 36.74
  */
 export function skidModel(
-  a: SkidV1,
+  a: SkidInput,
   lengths: readonly Range[],
   segments: readonly SlideSegment[],
   n: Range,

@@ -1,4 +1,4 @@
-import { formatNumber } from './number-text.js';
+import { factorKind, formatNumber } from './number-text.js';
 import { tradeConstants, unitsOf } from './constants.js';
 import { effectiveDrag, slideSquaredSpeed } from './formulas.js';
 import {
@@ -81,16 +81,21 @@ export function slideSpeed(
   }
   const steps: Step[] = [];
   const effs = segments.map((s) => effectiveDragRange(s.f, n, s.gradePercent));
+  // One rule for the factors of a line (factorKind): the speed step writes the effective drag as
+  // its own step did.
+  const kinds = segments.map((s) => factorKind(s.gradePercent.value));
   segments.forEach((s, i) => {
     const G = s.gradePercent.value / 100;
+    const k = kinds[i]!;
     steps.push(
       makeStep({
         name: `Effective drag, ${segName(i, s)}`,
         formula: 'f × n + G/100',
-        substituted: `${formatNumber(s.f.value, 'drag')} × ${formatNumber(n.value, 'efficiency')} ${G < 0 ? '−' : '+'} ${formatNumber(Math.abs(G), 'grade')} = ${formatNumber(effs[i]!.value, 'grade')}`,
+        substituted: `${formatNumber(s.f.value, k)} × ${formatNumber(n.value, k)} ${G < 0 ? '−' : '+'} ${formatNumber(Math.abs(G), k)} = ${formatNumber(effs[i]!.value, k)}`,
         inputs: { f: input(s.f, ''), n: input(n, ''), G: input(s.gradePercent, '%') },
         result: effs[i]!,
         unit: '',
+        kind: k,
         why:
           s.gradePercent.value === 0 && s.gradePercent.low === 0 && s.gradePercent.high === 0
             ? 'level: braking efficiency scales the drag factor'
@@ -143,7 +148,7 @@ export function slideSpeed(
       makeStep({
         name: `Speed at ${where}`,
         formula: `S = sqrt(${hasEnd ? `${endName}² + ` : ''}${C} × d × (f × n + G/100))`,
-        substituted: `S = sqrt(${hasEnd ? sub : ''}${C} × ${formatNumber(s.d.value, 'length')} ${u.length} × ${formatNumber(e.value, 'grade')}) = ${formatNumber(speed.value, 'speed')} ${u.speed}`,
+        substituted: `S = sqrt(${hasEnd ? sub : ''}${C} × ${formatNumber(s.d.value, 'length')} ${u.length} × ${formatNumber(e.value, kinds[i]!)}) = ${formatNumber(speed.value, 'speed')} ${u.speed}`,
         inputs: {
           ...(hasEnd ? { [endName]: input(after, u.speed) } : {}),
           d: input(s.d, u.length),

@@ -1,5 +1,5 @@
 import { spread } from './spread.js';
-import type { AirborneV1, CaseV1 } from '../case/v1/schema.js';
+import type { AirborneInput, CaseInput } from './input.js';
 import { formatNumber } from './number-text.js';
 import { airborneSpeed, airborneSpeedOf } from './airborne.js';
 import { unitsOf } from './constants.js';
@@ -16,7 +16,7 @@ export const AIRBORNE_ASSUMPTIONS = [
 ];
 
 /** Solves one airborne analysis of a case (index i): take-off speed from projectile motion. */
-export function solveAirborne(c: CaseV1, i: number, a: AirborneV1): AnalysisOutcome {
+export function solveAirborne(c: CaseInput, i: number, a: AirborneInput): AnalysisOutcome {
   const system = c.units;
   const u = unitsOf(system);
   const d = spread(a.distance);
@@ -50,7 +50,7 @@ export function solveAirborne(c: CaseV1, i: number, a: AirborneV1): AnalysisOutc
 
 /** The airborne analysis as a function of its inputs "d", "h" and (when given) "G". */
 function airborneModel(
-  a: AirborneV1,
+  a: AirborneInput,
   d: Range,
   h: Range,
   G: Range,

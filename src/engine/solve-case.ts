@@ -1,5 +1,5 @@
 import { spread } from './spread.js';
-import type { Case } from '../case/load.js';
+import type { CaseInput } from './input.js';
 import { unitsOf } from './constants.js';
 import { solveAirborne } from './solve-airborne.js';
 import { solveSkid } from './solve-skid.js';
@@ -13,7 +13,7 @@ import type { AnalysisOutcome, CaseSolution } from './types.js';
  * which the schema already refuses, fails here rather than recursing).
  */
 function solveInChain(
-  c: Case,
+  c: CaseInput,
   i: number,
   memo: Map<number, AnalysisOutcome>,
   visiting: readonly number[],
@@ -67,9 +67,12 @@ function solveInChain(
  * const r = solveAnalysis(c, 0);
  * if (r.ok) console.log(r.solution.minimum); else console.error(r.reason);
  */
-export function solveAnalysis(c: Case, i: number): AnalysisOutcome {
+export function solveAnalysis(c: CaseInput, i: number): AnalysisOutcome {
   return solveInChain(c, i, new Map(), []);
 }
+
+/** Unknown fields warned about one by one; the rest are counted in one line. */
+export const UNKNOWN_LISTED = 25;
 
 /**
  * Solves every analysis of a validated case, each phase of a chain once and before the phase
@@ -82,15 +85,22 @@ export function solveAnalysis(c: Case, i: number): AnalysisOutcome {
  * if (loaded.ok) solveCase(loaded.case, loaded.unknownFields).analyses.forEach((r) => r.ok && r.solution.speed);
  */
 export function solveCase(
-  c: Case,
+  c: CaseInput,
   unknownFields: readonly string[] = [],
   duplicateKeys: readonly string[] = [],
 ): CaseSolution {
   const memo = new Map<number, AnalysisOutcome>();
   const analyses = c.analyses.map((_, i) => solveInChain(c, i, memo, []));
-  const warnings = unknownFields.map(
+  const listed = unknownFields.slice(0, UNKNOWN_LISTED);
+  const warnings = listed.map(
     (path) => `${path}: not a field of the case format; kept, but not used (misspelt?)`,
   );
+  // A file with very many of them (a tool's export, a damaged file) gets one line for the rest.
+  const rest = unknownFields.length - listed.length;
+  if (rest > 0)
+    warnings.push(
+      `${rest} more fields are not of the case format (kept, but not used), the last ${unknownFields[unknownFields.length - 1]}`,
+    );
   for (const path of duplicateKeys)
     warnings.push(`${path}: given twice in one object; the last one is used`);
   if (c.analyses.length === 0) warnings.push('The case has no analyses yet: nothing to solve.');

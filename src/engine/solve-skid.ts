@@ -1,5 +1,5 @@
 import { spread } from './spread.js';
-import type { CaseV1, SkidV1 } from '../case/v1/schema.js';
+import type { CaseInput, SkidInput } from './input.js';
 import { formatNumber } from './number-text.js';
 import { unitsOf } from './constants.js';
 import { dragAboveOne, marksDisagree } from './plausibility.js';
@@ -36,9 +36,9 @@ export const APPEARANCE_NOTES: Record<'locked' | 'abs' | 'skip' | 'gap', string 
  * `next` is the solved analysis its marks ran into, when its end is `{ mode: "analysis" }`.
  */
 export function solveSkid(
-  c: CaseV1,
+  c: CaseInput,
   i: number,
-  a: SkidV1,
+  a: SkidInput,
   next?: AnalysisSolution,
 ): AnalysisOutcome {
   const system = c.units;

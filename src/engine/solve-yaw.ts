@@ -1,6 +1,6 @@
 import { spread } from './spread.js';
 import { modelInput } from './model-input.js';
-import type { CaseV1, YawV1 } from '../case/v1/schema.js';
+import type { CaseInput, YawInput } from './input.js';
 import { unitsOf } from './constants.js';
 import { dragFactor } from './drag.js';
 import { dragAboveOne, radiusTooTight } from './plausibility.js';
@@ -14,6 +14,7 @@ import {
   type AnalysisModel,
   type AnalysisOutcome,
   type ModelInput,
+  type OffsetsFit,
   type Outcome,
   type PointsFitSummary,
   type Range,
@@ -24,7 +25,7 @@ import { arcRadius, centreRadius, criticalSpeedOf } from './formulas.js';
 import { criticalSpeed, ordinateSensitivity, pathRadius, radiusFromChord } from './yaw.js';
 
 /** Solves one yaw analysis of a case (index i): radius, path radius, critical speed, sensitivity. */
-export function solveYaw(c: CaseV1, i: number, a: YawV1): AnalysisOutcome {
+export function solveYaw(c: CaseInput, i: number, a: YawInput): AnalysisOutcome {
   const system = c.units;
   const u = unitsOf(system);
   const p = `analyses[${i}]`;
@@ -102,6 +103,7 @@ export function solveYaw(c: CaseV1, i: number, a: YawV1): AnalysisOutcome {
     radius: R,
     ...(sens ? { sensitivity: sens } : {}),
     ...(measured.value.fit ? { pointsFit: measured.value.fit } : {}),
+    ...(measured.value.offsets ? { offsetsFit: measured.value.offsets } : {}),
     model:
       C && M
         ? yawModel(a, C, M, f, e, T, halfTrack, system)
@@ -114,8 +116,8 @@ export function solveYaw(c: CaseV1, i: number, a: YawV1): AnalysisOutcome {
  * least-squares circle through offsets. Paths are relative to the analysis.
  */
 function yawRadius(
-  a: YawV1,
-  system: CaseV1['units'],
+  a: YawInput,
+  system: CaseInput['units'],
   u: Units,
 ): Outcome<{
   radius: Range;
@@ -124,6 +126,7 @@ function yawRadius(
   C?: Range;
   M?: Range;
   fit?: PointsFitSummary;
+  offsets?: { fit: OffsetsFit; radius: Range };
 }> {
   if (a.points) {
     const r = radiusFromPoints(a.points, system, u);
@@ -133,7 +136,12 @@ function yawRadius(
   if (a.offsets) {
     const r = radiusFromOffsets(spread(a.offsets.chord), a.offsets.stations, system, u);
     if (!r.ok) return fail(r.reason, `offsets.${r.path ?? 'stations'}`);
-    return ok({ radius: r.value.radius, step: r.value.step, warnings: r.value.warnings });
+    return ok({
+      radius: r.value.radius,
+      step: r.value.step,
+      warnings: r.value.warnings,
+      offsets: { fit: r.value.fit, radius: r.value.radius },
+    });
   }
   // The schema guarantees chord and middleOrdinate when there are no offsets.
   if (a.chord === undefined || a.middleOrdinate === undefined)
@@ -147,7 +155,7 @@ function yawRadius(
 
 /** The inputs both yaw models share: drag factor, bank (when given) and track width (half-track). */
 function frictionInputs(
-  a: YawV1,
+  a: YawInput,
   f: Range,
   e: Range,
   T: Range,
@@ -162,13 +170,13 @@ function frictionInputs(
 
 /** The model of a yaw analysis measured by offsets or points: the fitted radius R is one input. */
 function fittedYawModel(
-  a: YawV1,
+  a: YawInput,
   R: Range,
   f: Range,
   e: Range,
   T: Range,
   halfTrack: boolean,
-  system: CaseV1['units'],
+  system: CaseInput['units'],
 ): AnalysisModel {
   const L = unitsOf(system).length;
   const inputs: ModelInput[] = [
@@ -186,14 +194,14 @@ function fittedYawModel(
 }
 
 function yawModel(
-  a: YawV1,
+  a: YawInput,
   C: Range,
   M: Range,
   f: Range,
   e: Range,
   T: Range,
   halfTrack: boolean,
-  system: CaseV1['units'],
+  system: CaseInput['units'],
 ): AnalysisModel {
   const L = unitsOf(system).length;
   const inputs: ModelInput[] = [

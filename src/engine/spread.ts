@@ -1,4 +1,4 @@
-import type { Quantity } from '../case/quantity.js';
+import type { QuantityInput } from './input.js';
 
 /** A quantity read into its three ends (low = value = high when no spread was given). */
 export interface Spread {
@@ -9,7 +9,7 @@ export interface Spread {
 }
 
 /** Reads a validated quantity into value, low and high. */
-export function spread(q: Quantity): Spread {
+export function spread(q: QuantityInput): Spread {
   if (typeof q === 'number') return { value: q, low: q, high: q };
   const s: Spread = { value: q.value, low: q.low ?? q.value, high: q.high ?? q.value };
   if (q.note !== undefined) s.note = q.note;

@@ -1,3 +1,4 @@
+import type { NumberKind } from './number-text.js';
 import type { Range, Step, StepInput } from './types.js';
 
 /** Lists up to this long are written out in full in a step; longer ones are cut to `LIST_HEAD`. */
@@ -37,6 +38,7 @@ export function makeStep(p: {
   inputs: Record<string, StepInput>;
   result: Range;
   unit: string;
+  kind?: NumberKind;
   why: string;
 }): Step {
   return {
@@ -48,6 +50,7 @@ export function makeStep(p: {
     low: p.result.low,
     high: p.result.high,
     unit: p.unit,
+    ...(p.kind !== undefined ? { kind: p.kind } : {}),
     why: p.why,
   };
 }

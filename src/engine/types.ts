@@ -1,3 +1,4 @@
+import type { NumberKind } from './number-text.js';
 /**
  * Shared shapes of the calculation engine. The engine is pure: no I/O, no UI imports. Every
  * figure carries the steps that made it; the interview, the review screen, the report and
@@ -42,6 +43,8 @@ export interface Step {
   low: number;
   high: number;
   unit: string;
+  /** How the result is written when its unit alone does not say (a factor line with 3 decimals). */
+  kind?: NumberKind;
   why: string;
 }
 
@@ -106,6 +109,34 @@ export interface Phase {
   speed: Range;
 }
 
+/** How one point sits against the fitted circle. */
+export interface OffsetResidual {
+  at: number;
+  offset: number;
+  /** The fitted arc's offset at this station (undefined if the station lies beyond the circle). */
+  fitted: number | undefined;
+  /** Signed distance from the fitted circle: + the point lies outside it (away from the centre). */
+  residual: number;
+  /** True for the chord's two ends, which are points of the mark by the chord's definition. */
+  chordEnd: boolean;
+}
+
+export interface OffsetsFit {
+  radius: number;
+  /** Standard error of the radius from the scatter (s² (JᵀJ)⁻¹); undefined with one station. */
+  radiusStdError: number | undefined;
+  /** Centre in the chord's frame: x along the chord from its start, y toward the mark. */
+  centre: { x: number; y: number };
+  /** The fitted arc's middle ordinate (its offset at the chord's midpoint). */
+  middleOrdinate: number;
+  residuals: OffsetResidual[];
+  /** Root mean square of the residuals, chord ends included. */
+  rms: number;
+  iterations: number;
+  warnings: string[];
+  step: Step;
+}
+
 /** The least-squares circle through a yaw mark's surveyed points, as the step reports it. */
 export interface PointsFitSummary {
   radius: number;
@@ -139,6 +170,8 @@ export interface AnalysisSolution {
   sensitivity?: OrdinateSensitivity;
   /** Yaw measured by surveyed points: the circle fit. */
   pointsFit?: PointsFitSummary;
+  /** Yaw measured by offsets along a chord: the circle fit and the mark's radius it gives. */
+  offsetsFit?: { fit: OffsetsFit; radius: Range };
   /**
    * A slide whose end is another analysis: this analysis and every one it runs into, in order of
    * travel, each with its start speed (the speed at each junction).

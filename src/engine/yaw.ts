@@ -1,4 +1,4 @@
-import { formatNumber } from './number-text.js';
+import { factorKind, formatNumber } from './number-text.js';
 import { ordinateReadingStep, tradeConstants, unitsOf } from './constants.js';
 import { arcRadius, centreRadius, criticalSpeedOf } from './formulas.js';
 import {
@@ -133,8 +133,10 @@ export function criticalSpeed(
     return fail('the critical speed cannot be computed from these numbers', 'radius');
   const level = e.value === 0 && e.low === 0 && e.high === 0;
   const fl = (n: number) => formatNumber(n, 'length');
-  const fd = (n: number) => formatNumber(n, 'drag');
-  const fe = formatNumber(e.value, 'grade');
+  // One rule for the factors of a line (factorKind): a bank with a fraction of a percent gives 3.
+  const k = factorKind(e.value * 100);
+  const fd = (n: number) => formatNumber(n, k);
+  const fe = formatNumber(e.value, k);
   return ok({
     speed,
     step: makeStep({

@@ -1,80 +1,125 @@
 import type { Case } from '../case/load.js';
 import { DEFAULT_REACTION_TIME } from '../engine/constants.js';
-import type { AnalysisSolution, Outcome } from '../engine/types.js';
+import type { AnalysisSolution, CaseSolution, Outcome } from '../engine/types.js';
 import { samplingFromCase, timeDistanceFromCase } from './case-fields.js';
 import { limitComparison, type LimitComparison } from './limit-comparison.js';
 import { segmentLabels } from './limit-inputs.js';
-import { sampleSpeeds, type SampleSummary } from './sampling.js';
+import { sampleSpeeds, type SampleOptions, type SampleSummary } from './sampling.js';
 import { sensitivity, type SensitivityRow } from './sensitivity.js';
-import { yawFromOffsets, type YawFromOffsets } from './yaw-offsets.js';
 
-export interface ExtrasOptions {
-  /** The user's preferred perception-reaction time, s (the case's own `timeDistance` wins). */
+/** What the caller knows beside the case: the investigator's settings, where it has them. */
+export interface ExtrasSettings {
+  /** The investigator's preferred perception-reaction time, s (the case's own `timeDistance` wins). */
   reactionTime?: number;
-}
-
-/** What the extras add to one solved analysis, for the review screen (its pictures are drawn as text there). */
-export interface AnalysisExtras {
-  sensitivity: SensitivityRow[];
-  /** Present when the case asks for it (top-level `sampling`). */
-  sampling?: Outcome<SampleSummary>;
-  /** Present for a skid analysis of a case with a posted limit. */
-  limit?: Outcome<LimitComparison>;
-  /** Present for a yaw analysis with `offsets`. */
-  offsets?: Outcome<YawFromOffsets>;
-  /** Surfaces of a skid analysis's segments, as the case names them (for the text chart). */
-  segmentLabels: string[];
+  /**
+   * How the default reaction time is described when neither the case nor a preference sets it
+   * (`solve` reads no preferences and says so); default: "default".
+   */
+  defaultReactionNote?: string;
+  /** Sample the inputs even when the case has no `sampling` field (the case's field wins). */
+  sampling?: SampleOptions;
 }
 
 /**
+ * What the extras add to one solved analysis: the figures beyond the chain itself. Every screen
+ * and file that shows them (the review, `solve`'s text and JSON, each report format) reads this,
+ * built once by `caseResult`; none of them runs an extra itself.
+ */
+export interface AnalysisExtras {
+  /** One input at a time at the ends of its range, largest swing first. */
+  sensitivity: SensitivityRow[];
+  /** Present when the case asks for it (`sampling`) or the caller does. */
+  sampling?: Outcome<SampleSummary>;
+  /** Present for a skid analysis when the case has a posted limit or the analysis a conflict point. */
+  limit?: Outcome<LimitComparison>;
+  /** Surfaces of a skid analysis's segments, as the case names them (for the pictures). */
+  segmentLabels: string[];
+}
+
+/** Where the reaction time comes from, in the words every output uses. */
+export const REACTION_ORIGIN = {
+  caseFile: 'set in the case file',
+  preference: 'from the preferences',
+  default: 'default',
+} as const;
+
+/**
  * Runs every extra that applies to one solved analysis of a case: sensitivity always; sampling if
- * the case has a `sampling` field; time and distance at the posted limit for a skid analysis when
- * the case has a posted limit (reaction time from the analysis's `timeDistance`, else the
- * preference, else the default); the offsets fit for a yaw analysis with `offsets`.
- * Each part that can fail is an Outcome of its own, so one failing part never hides the others.
+ * the case (or the caller) asks for it; time and distance at the posted limit for a skid when the
+ * case has a posted limit or the analysis a conflict point (reaction time from the analysis's
+ * `timeDistance`, else the preference, else the default). Each part that can fail is an Outcome
+ * of its own, so one failing part never hides the others.
  * @example analysisExtras(c, solution, { reactionTime: prefs.reactionTime }).limit
  */
 export function analysisExtras(
   c: Case,
   solution: AnalysisSolution,
-  opts: ExtrasOptions = {},
+  settings: ExtrasSettings = {},
 ): AnalysisExtras {
-  const rows = sensitivity(solution);
-  const labels = segmentLabels(c, solution.id);
   const out: AnalysisExtras = {
-    sensitivity: rows,
-    segmentLabels: labels,
+    sensitivity: sensitivity(solution),
+    segmentLabels: segmentLabels(c, solution.id),
   };
   const sampling = samplingFromCase(c);
   if (!sampling.ok) out.sampling = sampling;
-  else if (sampling.value) out.sampling = sampleSpeeds(solution.model, sampling.value);
-
-  const a = c.analyses.find((x) => x.id === solution.id);
-  if (solution.kind === 'skid') {
-    if (c.postedLimit !== undefined) {
-      const td = timeDistanceFromCase(c, solution.id);
-      if (!td.ok) out.limit = td;
-      else {
-        const own = td.value?.reactionTime;
-        const t = own ?? opts.reactionTime ?? DEFAULT_REACTION_TIME;
-        const origin =
-          own !== undefined
-            ? 'set in the case file'
-            : opts.reactionTime !== undefined
-              ? 'from the preferences'
-              : 'default';
-        const conflictAt = td.value?.conflictAt;
-        out.limit = limitComparison(c, solution, {
-          reactionTime: t,
-          reactionOrigin: origin,
-          ...(conflictAt !== undefined ? { conflictAt } : {}),
-        });
-      }
-    }
-  } else if (a && a.kind === 'yaw') {
-    const fit = yawFromOffsets(c, solution.id);
-    if (!fit.ok) out.offsets = fit;
-    else if (fit.value) out.offsets = { ok: true, value: fit.value };
+  else {
+    const set = sampling.value ?? settings.sampling;
+    if (set) out.sampling = sampleSpeeds(solution.model, set);
   }
+  if (solution.kind !== 'skid') return out;
+  const td = timeDistanceFromCase(c, solution.id);
+  if (!td.ok) {
+    out.limit = td;
+    return out;
+  }
+  const conflictAt = td.value?.conflictAt;
+  if (c.postedLimit === undefined && conflictAt === undefined) return out;
+  const own = td.value?.reactionTime;
+  const [t, origin] =
+    own !== undefined
+      ? [own, REACTION_ORIGIN.caseFile]
+      : settings.reactionTime !== undefined
+        ? [settings.reactionTime, REACTION_ORIGIN.preference]
+        : [DEFAULT_REACTION_TIME, settings.defaultReactionNote ?? REACTION_ORIGIN.default];
+  out.limit = limitComparison(c, solution, {
+    reactionTime: t,
+    reactionOrigin: origin,
+    ...(conflictAt !== undefined ? { conflictAt } : {}),
+  });
   return out;
+}
+
+/** One analysis of the result: the engine's outcome and, when it solved, its extras. */
+export interface AnalysisResult {
+  outcome: CaseSolution['analyses'][number];
+  extras?: AnalysisExtras;
+}
+
+/**
+ * The one result document of a case: the engine's solution and every extra, computed once. The
+ * review, `solve` (text and JSON) and every report format render this; none recomputes a figure.
+ */
+export interface CaseResult {
+  case: Case;
+  solution: CaseSolution;
+  /** In the case's order, one per analysis. */
+  analyses: AnalysisResult[];
+}
+
+/**
+ * Builds the result document from a case and its solution.
+ * @example const r = caseResult(c, solveCase(c), { reactionTime: 1.5 }); r.analyses[0]?.extras?.limit
+ */
+export function caseResult(
+  c: Case,
+  solution: CaseSolution,
+  settings: ExtrasSettings = {},
+): CaseResult {
+  return {
+    case: c,
+    solution,
+    analyses: solution.analyses.map((outcome) =>
+      outcome.ok ? { outcome, extras: analysisExtras(c, outcome.solution, settings) } : { outcome },
+    ),
+  };
 }

@@ -22,7 +22,6 @@ export {
   samplingFieldV1,
   timeDistanceFieldV1,
   type OffsetsFieldV1,
-  type SamplingFieldV1,
   type TimeDistanceFieldV1,
 } from '../case/v1/extras-fields.js';
 

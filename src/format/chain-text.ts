@@ -1,10 +1,10 @@
 import type { Case } from '../case/load.js';
-import type { AnalysisOutcome, AnalysisSolution, CaseSolution, Units } from '../engine/types.js';
+import type { AnalysisSolution, CaseSolution, Units } from '../engine/types.js';
+import type { AnalysisResult, CaseResult } from '../extras/analysis-extras.js';
 import { isAboveLimit } from '../engine/solution.js';
 import { CAUTIONS } from './cautions.js';
 import { formatStepLines } from './step-text.js';
 import { extrasTextLines } from './extras-text.js';
-import { solveExtras } from './solve-extras.js';
 import { KIND_NAMES } from './kind-names.js';
 import { formatRange, withUnit, zeroRangeNote } from './numbers.js';
 import { phasesLine } from './phases-text.js';
@@ -25,7 +25,8 @@ function list(title: string, items: readonly string[]): string[] {
   return [`${title}:`, ...items.map((t) => `  - ${t}`)];
 }
 
-function analysisLines(r: AnalysisOutcome, i: number, units: Units, c: Case): string[] {
+function analysisLines(ar: AnalysisResult, i: number, units: Units, c: Case): string[] {
+  const r = ar.outcome;
   const label = c.analyses[i]?.label;
   const id = r.ok ? r.solution.id : r.id;
   const kind = r.ok ? r.solution.kind : r.kind;
@@ -50,7 +51,7 @@ function analysisLines(r: AnalysisOutcome, i: number, units: Units, c: Case): st
   out.push(`  Result: ${formatAtLeast(s, units)}`);
   const zero = zeroRangeNote(s.speed);
   if (zero) out.push(`  ${zero}`);
-  append(out, extrasTextLines(solveExtras(c, i, s), units, s.speed));
+  if (ar.extras) append(out, extrasTextLines(ar.extras, units, s.speed));
   append(
     out,
     list('  Assumptions', s.assumptions).map((l, k) => (k === 0 ? l : `  ${l}`)),
@@ -85,12 +86,13 @@ export function formatPostedLimit(solution: CaseSolution): string | undefined {
  * The human-readable chain `solve` prints: per analysis every step (name, formula, numbers,
  * result with range, why), the "at least" figure, assumptions and warnings; then the posted limit
  * comparison, the file's warnings and the cautions.
- * @example process.stdout.write(formatChainText(solveCase(c), c));
+ * @example process.stdout.write(formatChainText(caseResult(c, solveCase(c))));
  */
-export function formatChainText(solution: CaseSolution, c: Case): string {
+export function formatChainText(result: CaseResult): string {
+  const { solution, case: c } = result;
   const u = solution.units;
   const out: string[] = [`Case ${solution.id} (${c.units}: ${u.length}, ${u.speed})`, ''];
-  solution.analyses.forEach((r, i) => append(out, [...analysisLines(r, i, u, c), '']));
+  result.analyses.forEach((r, i) => append(out, [...analysisLines(r, i, u, c), '']));
   const limit = formatPostedLimit(solution);
   if (limit) out.push(limit, '');
   if (solution.warnings.length) append(out, [...list('File warnings', solution.warnings), '']);

@@ -1,9 +1,8 @@
 import type { Range, Units } from '../engine/types.js';
-import type { Verdict } from '../extras/limit-steps.js';
 import { formatStepLines, kindOfUnit } from './step-text.js';
-import { formatRange, withUnit } from './numbers.js';
+import { withUnit } from './numbers.js';
 import { formatNumber } from '../engine/number-text.js';
-import type { SolveExtras } from './solve-extras.js';
+import type { AnalysisExtras } from '../extras/analysis-extras.js';
 import { limitFraming, verdictSentence } from './verdict.js';
 
 const speedOr = (s: number | undefined, u: Units) =>
@@ -14,7 +13,7 @@ const speedOr = (s: number | undefined, u: Units) =>
  * rows (largest swing first), the time and distance at the posted limit with its steps, and the
  * sampled percentiles. A part that cannot be computed says why, in one line.
  */
-export function extrasTextLines(x: SolveExtras, u: Units, speed: Range): string[] {
+export function extrasTextLines(x: AnalysisExtras, u: Units, speed: Range): string[] {
   const out: string[] = [];
   if (x.sensitivity.length > 0) {
     out.push('  Sensitivity (each input at the ends of its range, the others at their value):');
@@ -24,7 +23,7 @@ export function extrasTextLines(x: SolveExtras, u: Units, speed: Range): string[
           `${speedOr(r.atLow, u)} to ${speedOr(r.atHigh, u)}, swing ${withUnit(r.swing, 'speed', u.speed)}`,
       );
   }
-  const td = x.timeDistance;
+  const td = x.limit;
   if (td && !td.ok)
     out.push(
       `  Time and distance at the posted limit: cannot be computed: ${td.reason}${td.path ? ` [${td.path}]` : ''}`,
@@ -41,7 +40,7 @@ export function extrasTextLines(x: SolveExtras, u: Units, speed: Range): string[
     if (t.conflict) out.push(`    ${verdictSentence(t.conflict, u)}`);
     for (const a of t.assumptions) out.push(`    - ${a}`);
   }
-  const d = x.distribution;
+  const d = x.sampling;
   if (d && !d.ok) out.push(`  Sampled speeds: cannot be computed: ${d.reason}`);
   else if (d) {
     const v = d.value;

@@ -1,16 +1,16 @@
-import type { Case } from '../case/load.js';
-import type { AnalysisSolution, CaseSolution } from '../engine/types.js';
-import { extrasToJson, solveExtras } from './solve-extras.js';
+import type { AnalysisSolution } from '../engine/types.js';
+import type { AnalysisExtras, CaseResult } from '../extras/analysis-extras.js';
+import { extrasToJson } from './solve-extras.js';
 
 /**
- * One analysis as `solve --json` prints it: the contract's fields first, then extras. With the
- * case and the analysis's index, also `sensitivity`, `timeDistance` and `distribution`
- * (solveExtras). The yaw middle-ordinate reading check is `ordinateSensitivity`; a yaw from
- * surveyed points has `pointsFit`; a slide that runs into another analysis has `phases`.
+ * One analysis as `solve --json` prints it: the contract's fields first, then, given its extras
+ * (from the result document), `sensitivity`, `timeDistance` and `distribution`. The yaw
+ * middle-ordinate reading check is `ordinateSensitivity`; a yaw from surveyed points has
+ * `pointsFit`, one from offsets `offsetsFit`; a slide that runs into another analysis has `phases`.
  */
 export function analysisToJson(
   s: AnalysisSolution,
-  from?: { c: Case; index: number },
+  extras?: AnalysisExtras,
 ): Record<string, unknown> {
   const out: Record<string, unknown> = {
     id: s.id,
@@ -27,8 +27,9 @@ export function analysisToJson(
   if (s.boundaries) out.boundaries = s.boundaries;
   if (s.sensitivity) out.ordinateSensitivity = s.sensitivity;
   if (s.pointsFit) out.pointsFit = s.pointsFit;
+  if (s.offsetsFit) out.offsetsFit = offsetsFitJson(s.offsetsFit);
   if (s.phases) out.phases = s.phases;
-  if (from) Object.assign(out, extrasToJson(solveExtras(from.c, from.index, s)));
+  if (extras) Object.assign(out, extrasToJson(extras));
   return out;
 }
 
@@ -46,19 +47,39 @@ function fileWarningsFor(warnings: readonly string[], i: number): string[] {
   });
 }
 
+/** The offsets fit as JSON: the radius it gives, the fit's figures and each residual. */
+function offsetsFitJson(o: NonNullable<AnalysisSolution['offsetsFit']>) {
+  const f = o.fit;
+  return {
+    radius: o.radius,
+    fittedRadius: f.radius,
+    stdError: f.radiusStdError ?? null,
+    middleOrdinate: f.middleOrdinate,
+    rms: f.rms,
+    residuals: f.residuals.map((r) => ({
+      at: r.at,
+      offset: r.offset,
+      fitted: r.fitted ?? null,
+      residual: r.residual,
+      chordEnd: r.chordEnd,
+    })),
+  };
+}
+
 /**
  * The shape `skidcase solve FILE --json` prints (docs/case-file.md): id, units, analyses, and the
- * posted limit when the case has one, plus the file's warnings; given the case, each analysis
- * also carries its extras (see analysisToJson). Numbers are unrounded except
+ * posted limit when the case has one, plus the file's warnings; each analysis also carries its
+ * extras from the result document (see analysisToJson). Numbers are unrounded except
  * `minimum`. Only for a solution whose analyses all solved; the caller reports failures instead.
  */
-export function solutionToJson(solution: CaseSolution, c?: Case): Record<string, unknown> {
+export function solutionToJson(result: CaseResult): Record<string, unknown> {
+  const { solution } = result;
   const out: Record<string, unknown> = {
     id: solution.id,
     units: solution.units,
-    analyses: solution.analyses.flatMap((r, index) => {
+    analyses: result.analyses.flatMap(({ outcome: r, extras }, index) => {
       if (!r.ok) return [];
-      const a = analysisToJson(r.solution, c ? { c, index } : undefined);
+      const a = analysisToJson(r.solution, extras);
       a.warnings = [...r.solution.warnings, ...fileWarningsFor(solution.warnings, index)];
       return [a];
     }),

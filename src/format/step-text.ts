@@ -12,13 +12,21 @@ export function kindOfUnit(unit: string): NumberKind {
   return 'drag';
 }
 
-/** One step as lines: name, formula, the numbers substituted, the result with its range, why. */
-export function formatStepLines(step: Step, index: number): string[] {
-  const r = formatRange(
+/**
+ * A step's result with its range, as every output shows it: `43.3 mph (40.2 to 46.1)`; written
+ * as the step's numbers line writes it (its `kind`, else its unit's).
+ */
+export function stepResultText(step: Step): string {
+  return formatRange(
     { value: step.result, low: step.low, high: step.high },
-    kindOfUnit(step.unit),
+    step.kind ?? kindOfUnit(step.unit),
     step.unit,
   );
+}
+
+/** One step as lines: name, formula, the numbers substituted, the result with its range, why. */
+export function formatStepLines(step: Step, index: number): string[] {
+  const r = stepResultText(step);
   return [
     `${index}. ${step.name}`,
     `   ${step.formula}`,

@@ -19,7 +19,7 @@ import { DEFAULT_SAMPLES, DEFAULT_SEED } from '../extras/sampling.js';
 import { notesOf, NOTES_KEEP } from './kept-notes.js';
 import { ANALYSES_KEEP, splitAnalyses } from './kept-analyses.js';
 import {
-  analysisExtras,
+  analysisKeptFields,
   analysisKeep,
   caseExtras,
   CASE_KEEP,
@@ -190,7 +190,7 @@ export function answersFromCase(c: Case): Answers {
       a.kind === 'skid' && a.timeDistance && c.postedLimit === undefined
         ? { timeDistance: a.timeDistance }
         : {};
-    const extra = { ...analysisExtras(a), ...timeKept };
+    const extra = { ...analysisKeptFields(a), ...timeKept };
     if (Object.keys(extra).length) put(analysisKeep(i), '', extra);
     put(`${p}.label`, a.label ?? '');
     put(`${p}.more`, i < asked.length - 1 ? 'yes' : 'no');
@@ -233,7 +233,11 @@ export function answersFromCase(c: Case): Answers {
       slopeAnswers(put, `${sp}.grade`, s.grade, ['level', 'uphill', 'downhill']);
       testGradeAnswers(put, sp, s.drag, s.grade);
     });
-    if (a.end?.mode === 'speed') {
+    if (a.end?.mode === 'analysis') {
+      put(`${p}.end`, 'next');
+      const to = asked.findIndex((x) => x.id === (a.end as { analysis: string }).analysis);
+      put(`${p}.end.into`, String(to + 1));
+    } else if (a.end?.mode === 'speed') {
       put(`${p}.end`, 'speed');
       put(`${p}.end.speed`, quantityText(a.end.speed));
       put(`${p}.end.basis`, a.end.basis ?? '');

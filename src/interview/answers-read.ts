@@ -32,14 +32,22 @@ export function analysisCount(answers: Answers): number {
 }
 
 /** What the marks look like. */
-export type MarkLook = 'dark' | 'abs' | 'skip' | 'gap' | 'yaw';
+export type MarkLook = 'dark' | 'abs' | 'skip' | 'gap' | 'yaw' | 'airborne';
 
 export function markLook(answers: Answers, i: number): MarkLook | undefined {
   const v = choiceOf(answers, `a${i}.look`);
-  return v === 'dark' || v === 'abs' || v === 'skip' || v === 'gap' || v === 'yaw' ? v : undefined;
+  return v === 'dark' ||
+    v === 'abs' ||
+    v === 'skip' ||
+    v === 'gap' ||
+    v === 'yaw' ||
+    v === 'airborne'
+    ? v
+    : undefined;
 }
 
-export const isSlideLook = (l: MarkLook | undefined): boolean => l !== undefined && l !== 'yaw';
+export const isSlideLook = (l: MarkLook | undefined): boolean =>
+  l !== undefined && l !== 'yaw' && l !== 'airborne';
 
 /** How the slide's surfaces are entered: `one` surface, `several` one at a time, or `quick` line. */
 export function surfaceMode(answers: Answers, i: number): 'one' | 'several' | 'quick' | undefined {

@@ -4,6 +4,8 @@
  */
 import type { Case } from '../case/load.js';
 import { APPEARANCE_NOTES } from '../engine/index.js';
+import { airborneV1, chainIssues } from '../case/v1/phase-fields.js';
+import { endsInto } from './questions-end.js';
 import { skidV1, yawV1, type AnalysisV1, type VehicleV1 } from '../case/v1/schema.js';
 import type { AnswerReader, CaseMeta, InterviewState, SavedInterview } from './types.js';
 import { analysisCount, choiceOf, markLook, unitsOf } from './answers-read.js';
@@ -20,7 +22,12 @@ import { withKept } from './kept-analyses.js';
 const DISTANCE_RULES = ['average', 'longest', 'shortest', 'spread'];
 
 /** Slide `i` read with the file's schema; undefined when its answers do not make one. */
-function skidOf(r: AnswerReader, i: number, id: string): AnalysisV1 | undefined {
+function skidOf(
+  r: AnswerReader,
+  i: number,
+  id: string,
+  idOf: Map<number, string>,
+): AnalysisV1 | undefined {
   const p = `a${i}`;
   const label = text(r, `${p}.label`);
   // The look of the marks goes into the file, so solve and the report carry its caveat too.
@@ -31,6 +38,9 @@ function skidOf(r: AnswerReader, i: number, id: string): AnalysisV1 | undefined 
   const basis = text(r, `${p}.end.basis`);
   const reaction = r.value(`${p}.reaction`);
   const conflict = r.value(`${p}.conflict`);
+  // Running on into another analysis: that one must enter the case too, under its stored id.
+  const into = end === 'next' ? endsInto(r.answers, i) : undefined;
+  if (end === 'next' && (into === undefined || !idOf.has(into))) return undefined;
   const parsed = skidV1.safeParse({
     ...kept(r.answers, analysisKeep(i)),
     id,
@@ -44,7 +54,9 @@ function skidOf(r: AnswerReader, i: number, id: string): AnalysisV1 | undefined 
     end:
       end === 'speed'
         ? { mode: 'speed', speed: r.value(`${p}.end.speed`), ...(basis ? { basis } : {}) }
-        : { mode: 'stop' },
+        : into !== undefined
+          ? { mode: 'analysis', analysis: idOf.get(into) }
+          : { mode: 'stop' },
     ...(typeof reaction === 'number' || typeof conflict === 'number'
       ? {
           timeDistance: {
@@ -84,6 +96,37 @@ function yawOf(r: AnswerReader, i: number, id: string): AnalysisV1 | undefined {
   return parsed.success ? parsed.data : undefined;
 }
 
+/** Airborne `i` read with the file's schema; undefined when its answers do not make one. */
+function airborneOf(r: AnswerReader, i: number, id: string): AnalysisV1 | undefined {
+  const p = `a${i}`;
+  const label = text(r, `${p}.label`);
+  const grade = r.value(`${p}.air.grade`);
+  const parsed = airborneV1.safeParse({
+    ...kept(r.answers, analysisKeep(i)),
+    id,
+    kind: 'airborne',
+    ...(label ? { label } : {}),
+    distance: r.value(`${p}.air.distance`),
+    drop: r.value(`${p}.air.drop`),
+    ...(grade !== undefined ? { takeoffGrade: grade } : {}),
+  });
+  return parsed.success ? parsed.data : undefined;
+}
+
+/**
+ * The analyses without those whose chain the file would refuse (a loop, or a link to an analysis
+ * that did not enter): the question refuses a loop as it is answered, but a later change of
+ * another slide's end could close one; the case then still loads, without those slides.
+ */
+function unlooped(list: AnalysisV1[]): AnalysisV1[] {
+  let out = list;
+  for (;;) {
+    const bad = new Set(chainIssues(out).map((x) => x.path[1] as number));
+    if (bad.size === 0) return out;
+    out = out.filter((_, k) => !bad.has(k));
+  }
+}
+
 /** The distribution asked at the end of the case, when one was chosen and its questions are answered. */
 function samplingOf(r: AnswerReader): Case['sampling'] {
   const shape = r.value('sampling.shape');
@@ -98,7 +141,7 @@ function samplingOf(r: AnswerReader): Case['sampling'] {
 }
 
 /** Stored id of analysis i (kept from a hand-written case), or `skid-1`, `yaw-2`, ... */
-export function analysisId(state: InterviewState, i: number, kind: 'skid' | 'yaw'): string {
+export function analysisId(state: InterviewState, i: number, kind: Included['kind']): string {
   const kept = state.answers[`a${i}.id`]?.text;
   return kept && /^[A-Za-z0-9._-]{1,64}$/.test(kept) ? kept : `${kind}-${i + 1}`;
 }
@@ -107,7 +150,7 @@ export function analysisId(state: InterviewState, i: number, kind: 'skid' | 'yaw
 interface Included {
   i: number;
   id: string;
-  kind: 'skid' | 'yaw';
+  kind: 'skid' | 'yaw' | 'airborne';
 }
 
 /** The analyses complete enough to enter the case, with the ids they are stored under. */
@@ -128,7 +171,7 @@ function included(
     const extra = new Set([`a${i}.more`, `a${i}.conflict`, `a${i}.reaction`]);
     const own = r.complete((id) => id.startsWith(`a${i}.`) && !extra.has(id));
     if (!own) continue;
-    const kind = look === 'yaw' ? 'yaw' : 'skid';
+    const kind = look === 'yaw' ? 'yaw' : look === 'airborne' ? 'airborne' : 'skid';
     if (kind === 'skid' && !brakes) continue;
     if (kind === 'yaw' && choiceOf(answers, `a${i}.path`) === 'half-track' && !track) continue;
     let id = analysisId(state, i, kind);
@@ -188,9 +231,18 @@ export function buildCase(state: InterviewState, meta: CaseMeta): Case {
   if (brakes?.mode === 'wheels' && share !== undefined) vehicle.frontAxleShare = share;
   const track = quantityOf(r, 'vehicle.trackWidth', RULES.trackWidth);
   if (track !== undefined) vehicle.trackWidth = track;
+  const entering = included(state, answers, r, !!brakes, track !== undefined);
+  const idOf = new Map(entering.map((x) => [x.i, x.id] as const));
   const analyses = withKept(
-    included(state, answers, r, !!brakes, track !== undefined).flatMap(
-      ({ i, id, kind }) => (kind === 'skid' ? skidOf(r, i, id) : yawOf(r, i, id)) ?? [],
+    unlooped(
+      entering.flatMap(
+        ({ i, id, kind }) =>
+          (kind === 'skid'
+            ? skidOf(r, i, id, idOf)
+            : kind === 'airborne'
+              ? airborneOf(r, i, id)
+              : yawOf(r, i, id)) ?? [],
+      ),
     ),
     answers,
   ) as Case['analyses'];

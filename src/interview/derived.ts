@@ -116,8 +116,15 @@ export function summaryOfDone(state: InterviewState): string[] {
         ? 'marks not yet described'
         : look === 'yaw'
           ? 'yaw marks'
-          : `${plural(Math.max(segmentCount(a, i), 0), 'segment')}`;
-    if (look !== undefined && look !== 'yaw' && surfaceMode(a, i) === undefined)
+          : look === 'airborne'
+            ? 'take-off to landing'
+            : `${plural(Math.max(segmentCount(a, i), 0), 'segment')}`;
+    if (
+      look !== undefined &&
+      look !== 'yaw' &&
+      look !== 'airborne' &&
+      surfaceMode(a, i) === undefined
+    )
       what = 'slide, surfaces not yet given';
     lines.push(
       `${analysisSection(a, i)}: ${what}; ${left === 0 ? 'complete' : `${plural(left, 'question')} left`}`,

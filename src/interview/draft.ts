@@ -1,10 +1,21 @@
 /** The running chain: the engine's solution of the analyses completed so far. */
 import { loadCase } from '../case/load.js';
 import { describeIssue } from '../case/issues.js';
-import { solveCase, unitsOf as engineUnits, type CaseSolution } from '../engine/index.js';
+import { spread } from '../engine/spread.js';
+import {
+  dragFactor,
+  radiusFromChord,
+  solveCase,
+  unitsOf as engineUnits,
+  type CaseSolution,
+} from '../engine/index.js';
+import type { Step } from '../engine/types.js';
+import { RULES } from '../case/quantity.js';
 import type { InterviewState } from './types.js';
-import { buildCase } from './build-case.js';
-import { unitsOf } from './answers-read.js';
+import { analysisId, buildCase } from './build-case.js';
+import { analysisCount, markLook, segmentCount, unitsOf } from './answers-read.js';
+import { readAnswers } from './answer-values.js';
+import { dragOf, quantityOf } from './build-parts.js';
 
 /**
  * Solves the case as built so far (only complete analyses), so the panel can show each step
@@ -33,4 +44,50 @@ function solveFresh(state: InterviewState, id: string): CaseSolution {
       warnings: loaded.issues.map(describeIssue),
     };
   return solveCase(loaded.case, loaded.unknownFields);
+}
+
+/** A figure of an analysis still being answered, with the analysis it belongs to. */
+export interface EarlyStep {
+  analysis: number;
+  step: Step;
+}
+
+/**
+ * The figures of the analyses not yet complete whose own inputs are all answered: a yaw mark's
+ * radius once its chord and middle ordinate are in, each drag factor once its source's answers
+ * are (the mean of the test skids, the sled's pulls, ...). Each comes from the engine's own
+ * function, the one the finished chain calls; the panel shows them before the chain is whole.
+ */
+export function earlySteps(state: InterviewState): EarlyStep[] {
+  const solved = new Set(solveDraft(state).analyses.map((a) => (a.ok ? a.solution.id : a.id)));
+  const r = readAnswers(state.answers);
+  const system = unitsOf(state.answers);
+  const u = engineUnits(system);
+  const out: EarlyStep[] = [];
+  for (let i = 0; i < analysisCount(state.answers); i++) {
+    const look = markLook(state.answers, i);
+    if (!look || solved.has(analysisId(state, i, look === 'yaw' ? 'yaw' : 'skid'))) continue;
+    if (look === 'yaw') {
+      const C = quantityOf(r, `a${i}.chord`, RULES.length);
+      const M = quantityOf(r, `a${i}.ordinate`, { ...RULES.length, what: 'middle ordinate' });
+      if (C !== undefined && M !== undefined) {
+        const radius = radiusFromChord(spread(C), spread(M), u);
+        if (radius.ok) out.push({ analysis: i, step: radius.value.step });
+      }
+      const d = dragOf(r, `a${i}`);
+      const f = d && dragFactor(d, system);
+      if (f?.ok) out.push({ analysis: i, step: f.value.step });
+      continue;
+    }
+    const n = segmentCount(state.answers, i);
+    for (let j = 0; j < n; j++) {
+      const d = dragOf(r, `a${i}.seg${j}`);
+      const f = d && dragFactor(d, system);
+      if (!f?.ok) continue;
+      const step =
+        n > 1 ? { ...f.value.step, name: `${f.value.step.name}, segment ${j + 1}` } : f.value.step;
+      out.push({ analysis: i, step });
+    }
+  }
+  return out;
 }

@@ -1,7 +1,7 @@
 /**
  * Analyses the interview cannot ask about: kept from the file exactly as they are, in a hidden
  * answer, and put back at their place when the case is built again. The interview never drops
- * what it cannot show: an airborne analysis, a slide that runs into another analysis, a yaw
+ * what it cannot show: a slide that runs into an analysis it keeps, a yaw
  * measured by surveyed points, or more marks, surfaces or analyses than its questions take.
  */
 import type { AnalysisV1 } from '../case/v1/schema.js';
@@ -21,12 +21,9 @@ export interface KeptAnalysis {
 
 /** Why the interview cannot ask about this analysis, or undefined when it can. */
 export function beyondInterview(a: AnalysisV1): string | undefined {
-  if (a.kind === 'airborne') return 'the interview does not ask about airborne analyses';
   if (a.kind === 'yaw' && a.points !== undefined)
     return 'the interview does not ask for surveyed points';
   if (a.kind === 'skid') {
-    if (a.end?.mode === 'analysis')
-      return 'the interview does not ask for a slide that runs into another analysis';
     if ((a.marks?.length ?? 0) > MAX_MARKS)
       return `it has ${a.marks!.length} marks; the interview takes up to ${MAX_MARKS}`;
     if (a.segments.length > MAX_SEGMENTS)
@@ -45,12 +42,35 @@ export function splitAnalyses(list: readonly AnalysisV1[]): {
 } {
   const asked: AnalysisV1[] = [];
   const kept: KeptAnalysis[] = [];
+  const keep = new Map<number, string>();
+  // A slide that runs into an analysis kept as it is, or into none asked, is kept too (and so
+  // on along the chain), since its end could not be said by the interview's answers.
+  for (let changed = true; changed;) {
+    changed = false;
+    let count = 0;
+    const askedIds = new Set<string>();
+    list.forEach((analysis, at) => {
+      if (keep.has(at)) return;
+      const why =
+        beyondInterview(analysis) ??
+        (count >= MAX_ANALYSES ? `the interview takes up to ${MAX_ANALYSES} analyses` : undefined);
+      if (why) keep.set(at, why);
+      else {
+        count++;
+        askedIds.add(analysis.id);
+      }
+    });
+    list.forEach((a, at) => {
+      if (keep.has(at) || a.kind !== 'skid' || a.end?.mode !== 'analysis') return;
+      const target = a.end.analysis;
+      if (!askedIds.has(target) || target === a.id) {
+        keep.set(at, `it runs into analysis "${target}", which the interview does not ask about`);
+        changed = true;
+      }
+    });
+  }
   list.forEach((analysis, at) => {
-    const why =
-      beyondInterview(analysis) ??
-      (asked.length >= MAX_ANALYSES
-        ? `the interview takes up to ${MAX_ANALYSES} analyses`
-        : undefined);
+    const why = keep.get(at);
     if (why) kept.push({ at, why, analysis });
     else asked.push(analysis);
   });

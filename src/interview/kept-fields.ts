@@ -11,6 +11,7 @@ const CASE_OWN = KNOWN.top;
 const VEHICLE_OWN = KNOWN.vehicle;
 const SKID_OWN = KNOWN.skid;
 const YAW_OWN = KNOWN.yaw;
+const AIRBORNE_OWN = KNOWN.airborne;
 
 /** Hidden answer ids: not questions, never listed in the jump list. */
 export const CASE_KEEP = 'case.keep';
@@ -30,8 +31,8 @@ export function extraFields(
 
 export const caseExtras = (c: object) => extraFields(c, CASE_OWN);
 export const vehicleExtras = (v: object) => extraFields(v, VEHICLE_OWN);
-export const analysisExtras = (a: { kind: string }) =>
-  extraFields(a, a.kind === 'yaw' ? YAW_OWN : SKID_OWN);
+export const analysisKeptFields = (a: { kind: string }) =>
+  extraFields(a, a.kind === 'yaw' ? YAW_OWN : a.kind === 'airborne' ? AIRBORNE_OWN : SKID_OWN);
 
 /** The kept fields under a hidden answer id (an object), or an empty object. */
 export function kept(answers: Answers, id: string): Record<string, unknown> {

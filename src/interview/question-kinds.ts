@@ -11,7 +11,7 @@ import type {
   ParseResult,
   Question,
 } from './types.js';
-import { readQuantity, type QuantitySpec } from './read-quantity.js';
+import { readQuantity, withTypedDecimals, type QuantitySpec } from './read-quantity.js';
 import { readMarks, readValues } from './read-list.js';
 import { caseUnitOf, parseCount, type QuantityKind } from '../input/index.js';
 import type { UnitSystem } from '../engine/types.js';
@@ -167,7 +167,9 @@ export function quantityQuestion(
     const extra = check?.(r.value, ctx);
     if (extra) return { ok: false, message: extra };
     const notice = [r.notice, flag?.(r.value, ctx)].filter(Boolean).join(' ');
-    return notice ? { ok: true, value: r.value, notice } : { ok: true, value: r.value };
+    // Kept as typed (`0.70`) for the record; a converted figure (with its notice) was not typed so.
+    const value = r.notice ? r.value : withTypedDecimals(r.value, text);
+    return notice ? { ok: true, value, notice } : { ok: true, value };
   };
   return finish(base, 'quantity', parse, { unitKind: spec.kind });
 }

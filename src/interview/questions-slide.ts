@@ -242,6 +242,9 @@ export function slideQuestions(
       ),
     );
   }
-  out.push(...endQuestions(p, section, applies), ...timeDistanceQuestions(p, section, applies));
+  out.push(
+    ...endQuestions(p, section, applies, now),
+    ...timeDistanceQuestions(p, section, applies),
+  );
   return out;
 }

@@ -13,7 +13,6 @@ import {
   MAX_ANALYSES,
   maxIndexIn,
   segmentCount,
-  surfaceMode,
   unitsOf,
   type MarkLook,
 } from './answers-read.js';
@@ -21,22 +20,25 @@ import { caseQuestions } from './questions-case.js';
 import { brakeQuestions, vehicleQuestions } from './questions-vehicle.js';
 import { slideQuestions } from './questions-slide.js';
 import { yawQuestions } from './questions-yaw.js';
+import { airborneQuestions } from './questions-airborne.js';
+import { endsInto } from './questions-end.js';
 import { samplingQuestions } from './questions-extras.js';
 
 /** Heading of analysis `i`'s section, naming the chain picked. */
 export function analysisSection(a: Answers, i: number): string {
   const look = markLook(a, i);
-  const mode = surfaceMode(a, i);
   const chain =
     look === undefined
       ? ''
       : look === 'yaw'
         ? ' - critical speed'
-        : look === 'gap'
-          ? ' - slide in parts'
-          : slideInParts(a, i)
-            ? ' - slide, several surfaces'
-            : ' - slide';
+        : look === 'airborne'
+          ? ' - airborne'
+          : look === 'gap'
+            ? ' - slide in parts'
+            : slideInParts(a, i)
+              ? ' - slide, several surfaces'
+              : ' - slide';
   return `Analysis ${i + 1}${chain}`;
 }
 
@@ -48,6 +50,7 @@ export function chainReason(look: MarkLook, metric: boolean): string {
     abs: `Faint, evenly dashed marks are typical of anti-lock brakes working hard: the slide chain applies with care, ${slide}, and the result is an estimate to be reported as such.`,
     skip: `Marks with short regular gaps come from a locked tire bouncing: the slide chain applies, and the whole length, gaps included, counts as sliding (common practice).`,
     gap: `Marks broken by long gaps mean the brakes were released and applied again: slide in parts. Only the marked parts count, each as its own segment; the gaps were not braking and are left out (common practice).`,
+    airborne: `Take-off and landing marks mean the vehicle left the ground: its speed at take-off follows from how far and how far down it flew, ${metric ? 'S = 7.97 d / (cos θ sqrt(d tan θ + h))' : 'S = 2.73 d / (cos θ sqrt(d tan θ + h))'} (projectile motion, air drag neglected).`,
     yaw: `Curved sideways marks with diagonal striations are left by a vehicle sliding sideways with its tires still rotating: the critical speed chain applies, ${metric ? 'S = sqrt(127 f R)' : 'S = sqrt(15 f R)'}.`,
   }[look];
 }
@@ -63,6 +66,7 @@ function analysisQuestions(i: number, now: Answers, segments: number): Question[
   const inPlay = (a: Answers) => i < analysisCount(a);
   const slide = (a: Answers) => inPlay(a) && isSlideLook(markLook(a, i));
   const yaw = (a: Answers) => inPlay(a) && markLook(a, i) === 'yaw';
+  const air = (a: Answers) => inPlay(a) && markLook(a, i) === 'airborne';
   const section = analysisSection(now, i);
   // The brakes are asked once, in the first analysis that is a slide, right after its marks' look.
   const firstSlide = (a: Answers) => inPlay(a) && firstSlideOf(a) === i;
@@ -84,7 +88,7 @@ function analysisQuestions(i: number, now: Answers, segments: number): Question[
             : 'What do the marks of this analysis look like?',
         help: {
           why: 'The look of the marks tells how they were made, and so which formula chain applies.',
-          how: 'Look along the whole length: locked-wheel marks are straight and darken toward the end; yaw marks curve and show striations across the mark.',
+          how: 'Look along the whole length: locked-wheel marks are straight and darken toward the end; yaw marks curve and show striations across the mark; a vehicle that left the ground leaves marks that end at an edge, kerb or ramp and gouges or tire marks where it first came down.',
         },
         appliesWhen: inPlay,
         explainChoice: (a) => {
@@ -98,6 +102,11 @@ function analysisQuestions(i: number, now: Answers, segments: number): Question[
         { value: 'skip', key: 's', label: 'short, regular gaps (skip skid)' },
         { value: 'gap', key: 'g', label: 'broken by long gaps (gap skid)' },
         { value: 'yaw', key: 'y', label: 'curved, sideways, striated (yaw)' },
+        {
+          value: 'airborne',
+          key: 'j',
+          label: 'left the ground (take-off, landing)',
+        },
       ],
     ),
     ...brakeQuestions(section, firstSlide),
@@ -112,6 +121,7 @@ function analysisQuestions(i: number, now: Answers, segments: number): Question[
     }),
     ...slideQuestions(i, section, slide, segments, now),
     ...yawQuestions(i, section, yaw, askTrack),
+    ...airborneQuestions(i, section, air),
     confirmQuestion({
       id: `${p}.more`,
       section,
@@ -121,7 +131,11 @@ function analysisQuestions(i: number, now: Answers, segments: number): Question[
         why: 'A case may hold several analyses, e.g. a slide before an impact and yaw marks after it.',
       },
       appliesWhen: (a) => inPlay(a) && i < MAX_ANALYSES - 1,
-      defaultText: () => 'no',
+      // Yes when an analysis already answered runs on into the next one, still to be entered.
+      defaultText: (a) => {
+        for (let k = 0; k <= i; k++) if (endsInto(a, k) === i + 1) return 'yes';
+        return 'no';
+      },
     }),
   ];
 }

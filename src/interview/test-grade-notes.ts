@@ -12,7 +12,6 @@ import {
   isSegment,
   markLook,
   segmentCount,
-  surfaceMode,
   testWhere,
 } from './answers-read.js';
 import { testGradeOf } from './build-parts.js';

@@ -12,7 +12,8 @@ import { formatRange } from '../format/numbers.js';
 import { formatNumber } from '../engine/number-text.js';
 import { para, list, section, table, type Block, type Section, type StepBlock } from './doc.js';
 import { dragSourceLines } from './drag-source.js';
-import { atLeastText, stepResultText } from './figures-text.js';
+import { atLeastText } from './figures-text.js';
+import { stepResultText } from '../format/step-text.js';
 
 /** The analysis's heading: number, id, label and which chain it uses. */
 export function analysisTitle(i: number, a: { id: string; kind: AnalysisKind; label?: string }) {

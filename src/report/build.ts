@@ -8,13 +8,15 @@ import {
   REPORT_VERSION,
   list,
   para,
+  provenanceLine,
   section,
   table,
   type Block,
   type ReportDoc,
   type Section,
 } from './doc.js';
-import { extrasSections, type ReportExtrasOptions } from './extras-section.js';
+import type { CaseResult } from '../extras/analysis-extras.js';
+import { extrasSections } from './extras-section.js';
 import { speedText } from './figures-text.js';
 import { formatNumber } from '../engine/number-text.js';
 import { measurementTables } from './measurements.js';
@@ -27,8 +29,8 @@ export interface ReportMeta {
   generatedAt: string;
   /** The case file the figures are recomputed from, as the user named it. */
   caseFile?: string;
-  /** Settings of the further sections (reaction time, sampling); defaults when left out. */
-  extras?: ReportExtrasOptions;
+  /** SHA-256 of that file's bytes, when the report is made from a file on disk. */
+  caseSha256?: string;
 }
 
 function detailsSection(c: Case, meta: ReportMeta): Section {
@@ -42,6 +44,7 @@ function detailsSection(c: Case, meta: ReportMeta): Section {
     ['Vehicle', c.vehicle.label ?? ''],
     ['Units', c.units === 'imperial' ? 'imperial (feet, mph)' : 'metric (metres, km/h)'],
     ['Case file', meta.caseFile ?? `${c.id}.json`],
+    ['Case file SHA-256', meta.caseSha256 ?? ''],
     ['Case created', c.created ?? ''],
     ['Case last changed', c.updated ?? ''],
   ];
@@ -109,27 +112,25 @@ function limitSection(sol: CaseSolution): Section | undefined {
  * The case report as a document: details, results, measurements as entered, each analysis step by
  * step (with sensitivity, sampling, time and distance and pictures where they apply), the posted
  * limit comparison, file warnings, the cautions and where the figures come from. Pure: every
- * figure is read from `solution` (the engine's steps and ranges); nothing is computed here.
+ * figure is read from the result document (the engine's steps and ranges, and the extras built
+ * once by caseResult); nothing is computed here.
  * @example
- * const doc = buildReport(c, solveCase(c), { toolVersion: '0.1.0', generatedAt: new Date().toISOString(), caseFile: 'harbor.json' });
+ * const doc = buildReport(caseResult(c, solveCase(c)), { toolVersion: '0.1.0', generatedAt: new Date().toISOString(), caseFile: 'harbor.json' });
  * renderText(doc) // 'Speed from tire marks: ...', 80 columns
  */
-export function buildReport(c: Case, solution: CaseSolution, meta: ReportMeta): ReportDoc {
+export function buildReport(result: CaseResult, meta: ReportMeta): ReportDoc {
+  const { case: c, solution } = result;
   const units = solution.units;
+  const source =
+    meta.caseSha256 !== undefined ? { sha256: meta.caseSha256, saved: c.updated ?? '' } : undefined;
   const sections: Section[] = [detailsSection(c, meta), summarySection(c, solution)];
   sections.push(section('measurements', 'Measurements as entered', measurementTables(c, units)));
   c.analyses.forEach((a, i) => {
-    const o = solution.analyses[i];
-    if (o)
-      sections.push(
-        analysisSection(
-          i,
-          a,
-          o,
-          units,
-          o.ok ? extrasSections(c, o.solution, i, units, meta.extras) : [],
-        ),
-      );
+    const r = result.analyses[i];
+    if (!r) return;
+    const o = r.outcome;
+    const extra = o.ok && r.extras ? extrasSections(c, o.solution, r.extras, i, units) : [];
+    sections.push(analysisSection(i, a, o, units, extra));
   });
   const lim = limitSection(solution);
   if (lim) sections.push(lim);
@@ -144,6 +145,15 @@ export function buildReport(c: Case, solution: CaseSolution, meta: ReportMeta): 
         `Every figure in this report is recomputed by skidcase ${meta.toolVersion} from the case file ${meta.caseFile ?? `${c.id}.json`}; none is typed in by hand. Recomputing the same file gives the same figures.`,
       ),
       para(`Generated ${meta.generatedAt}.`),
+      ...(source
+        ? [
+            para(provenanceLine(c.id, source, meta.toolVersion)),
+            para(
+              `skidcase verify REPORT CASE-FILE says whether a case file is the one this report was made from.`,
+              'note',
+            ),
+          ]
+        : []),
     ]),
   );
   return {
@@ -153,6 +163,7 @@ export function buildReport(c: Case, solution: CaseSolution, meta: ReportMeta): 
     caseId: c.id,
     toolVersion: meta.toolVersion,
     generatedAt: meta.generatedAt,
+    ...(source ? { source } : {}),
     sections,
   };
 }

@@ -78,7 +78,41 @@ export interface ReportDoc {
   caseId: string;
   toolVersion: string;
   generatedAt: string;
+  /** The case file's bytes the figures were made from (`skidcase verify` compares them). */
+  source?: ReportSource;
   sections: Section[];
+}
+
+/** What a report records of the file it was made from. */
+export interface ReportSource {
+  /** SHA-256 of the case file's bytes, lower-case hex. */
+  sha256: string;
+  /** The case's last-saved time as the file records it (`updated`), or empty. */
+  saved: string;
+}
+
+/**
+ * The provenance sentence every format prints, and `skidcase verify` reads back (provenanceOf).
+ * @example provenanceLine('harbor-1', { sha256: 'ab…', saved: '2026-12-01T10:00:00Z' }, '0.1.0')
+ */
+export function provenanceLine(caseId: string, s: ReportSource, toolVersion: string): string {
+  return `Made from case ${caseId}, case file SHA-256 ${s.sha256}, last saved ${s.saved || 'not recorded'}, by skidcase ${toolVersion}.`;
+}
+
+/** The case id and SHA-256 a report's text states (any format), or undefined when it has none. */
+export function provenanceOf(
+  text: string,
+): { caseId: string; sha256: string; saved: string } | undefined {
+  // Markdown may escape a character, HTML wraps the line in tags and may break it: read the text.
+  const plain = text
+    .replace(/<[^>]*>/g, ' ')
+    .replace(/\\([^\s])/g, '$1')
+    .replace(/\s+/g, ' ');
+  const m =
+    /Made from case (\S+), case file SHA-256 ([0-9a-f]{64}), last saved (\S+(?: recorded)?),/.exec(
+      plain,
+    );
+  return m ? { caseId: m[1]!, sha256: m[2]!, saved: m[3]! } : undefined;
 }
 
 /** Builders that keep every block complete (no missing fields), so JSON round-trips exactly. */

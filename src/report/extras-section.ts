@@ -1,10 +1,9 @@
 import type { Case } from '../case/load.js';
 import type { AnalysisSolution, Units } from '../engine/types.js';
-import { samplingFromCase } from '../extras/case-fields.js';
-import { sensitivitySvg } from '../extras/pictures-svg.js';
-import { sampleSpeeds, type SampleOptions } from '../extras/sampling.js';
-import { sensitivityBars } from '../extras/sensitivity-bars.js';
-import { sensitivity, type SensitivityRow } from '../extras/sensitivity.js';
+import type { AnalysisExtras } from '../extras/analysis-extras.js';
+import { sensitivitySvg } from '../pictures/pictures-svg.js';
+import { sensitivityBars } from '../pictures/sensitivity-bars.js';
+import type { SensitivityRow } from '../extras/sensitivity.js';
 import { formatNumber } from '../engine/number-text.js';
 import { para, section, table, type Block, type Section } from './doc.js';
 import { speedText } from './figures-text.js';
@@ -12,14 +11,6 @@ import { figureName, picturesSection } from './pictures-section.js';
 import { TEXT_WIDTH } from './render-text.js';
 import { timeDistanceSection } from './time-distance-section.js';
 import { offsetsSection } from './offsets-section.js';
-
-/** Settings of the further sections. */
-export interface ReportExtrasOptions {
-  /** Perception-reaction time in seconds (the user's preference); the case's own field wins. */
-  reactionTime?: number;
-  /** Sample the inputs even when the case has no `sampling` field (the case's field wins). */
-  sampling?: SampleOptions;
-}
 
 /** A change of speed with its sign; a change that rounds to zero shows as 0.0, unsigned. */
 function signedSpeed(n: number): string {
@@ -64,10 +55,10 @@ function sensitivityTable(rows: SensitivityRow[], u: Units): Block {
 function sensitivitySection(
   c: Case,
   s: AnalysisSolution,
+  rows: SensitivityRow[],
   id: string,
   u: Units,
 ): Section | undefined {
-  const rows = sensitivity(s);
   if (rows.length === 0) return undefined;
   return section(`${id}-sensitivity`, 'Which measurement moves the speed most', [
     para(
@@ -85,22 +76,18 @@ function sensitivitySection(
 }
 
 function samplingSection(
-  c: Case,
   s: AnalysisSolution,
+  x: AnalysisExtras,
   id: string,
   u: Units,
-  opts: ReportExtrasOptions,
 ): Section | undefined {
   const title = 'Spread of the speed by sampling';
-  const field = samplingFromCase(c);
-  if (!field.ok)
+  const r = x.sampling;
+  if (!r) return undefined;
+  if (!r.ok)
     return section(`${id}-sampling`, title, [
-      para(`Not sampled: ${field.reason}${field.path ? ` (field ${field.path})` : ''}.`),
+      para(`Not sampled: ${r.reason}${r.path ? ` (field ${r.path})` : ''}.`),
     ]);
-  const set = field.value ?? opts.sampling;
-  if (!set) return undefined;
-  const r = sampleSpeeds(s.model, set);
-  if (!r.ok) return section(`${id}-sampling`, title, [para(`Not sampled: ${r.reason}.`)]);
   const v = r.value;
   const sp = (n: number) => formatNumber(n, 'speed');
   const skipped = v.skipped ? ` ${v.skipped} draws gave no speed and are left out.` : '';
@@ -122,24 +109,24 @@ function samplingSection(
 }
 
 /**
- * The further sections of one analysis, each where it applies: sensitivity (any input with a
- * range), sampling (when the case asks for it), time and distance at the posted limit (a slide
- * in a case with a limit), the picture (speed along a slide, or the yaw arc), and the circle
- * fitted to offsets where a yaw analysis has them.
+ * The further sections of one analysis, each where it applies, from the result document: the
+ * picture (speed along a slide, or the yaw arc), the circle fitted to offsets where a yaw
+ * analysis has them, sensitivity (any input with a range), sampling (when the case or the report
+ * asks for it), time and distance at the posted limit (a slide in a case with a limit).
  */
 export function extrasSections(
   c: Case,
   s: AnalysisSolution,
+  x: AnalysisExtras,
   i: number,
   units: Units,
-  opts: ReportExtrasOptions = {},
 ): Section[] {
   const id = `analysis-${i + 1}`;
   return [
     picturesSection(c, s, id, units),
-    offsetsSection(c, s, id, units),
-    sensitivitySection(c, s, id, units),
-    samplingSection(c, s, id, units, opts),
-    timeDistanceSection(c, s, id, units, opts.reactionTime),
-  ].filter((x): x is Section => x !== undefined);
+    offsetsSection(s, id, units),
+    sensitivitySection(c, s, x.sensitivity, id, units),
+    samplingSection(s, x, id, units),
+    timeDistanceSection(s, x, id, units),
+  ].filter((y): y is Section => y !== undefined);
 }

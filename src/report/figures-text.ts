@@ -1,12 +1,6 @@
-import type { Range, Step } from '../engine/types.js';
-import { kindOfUnit } from '../format/step-text.js';
-import { formatRange, withUnit, zeroRangeNote } from '../format/numbers.js';
+import type { Range } from '../engine/types.js';
 import { formatNumber } from '../engine/number-text.js';
-
-/** A step's result with its range, as the chain shows it: `43.3 mph (40.2 to 46.1)`. */
-export function stepResultText(s: Step): string {
-  return formatRange({ value: s.result, low: s.low, high: s.high }, kindOfUnit(s.unit), s.unit);
-}
+import { withUnit, zeroRangeNote } from '../format/numbers.js';
 
 /** A speed with its unit, 1 dp: `43.3 mph`. */
 export function speedText(n: number, unit: string): string {

@@ -1,6 +1,7 @@
 import type { Quantity } from '../case/quantity.js';
 import type { Case } from '../case/load.js';
 import type { AirborneV1, DragV1, SkidV1, VehicleV1, YawV1 } from '../case/v1/schema.js';
+import { typedText } from '../engine/number-text.js';
 import { table, type Table } from './doc.js';
 
 /** One row of the measurements table: a number (or a choice) exactly as the case file holds it. */
@@ -11,11 +12,12 @@ const NO_RANGE = 'none';
 /** A quantity as entered: the plain number as written, its low/high if any, and its note. */
 function q(item: string, v: Quantity, unit: string): Row {
   if (typeof v === 'number') return [item, String(v), NO_RANGE, unit, ''];
+  const t = (n: number) => typedText(n, v.decimals);
   const range =
     v.low === undefined && v.high === undefined
       ? NO_RANGE
-      : `${v.low ?? v.value} to ${v.high ?? v.value}`;
-  return [item, String(v.value), range, unit, v.note ?? ''];
+      : `${t(v.low ?? v.value)} to ${t(v.high ?? v.value)}`;
+  return [item, t(v.value), range, unit, v.note ?? ''];
 }
 
 const choice = (item: string, text: string, note = ''): Row => [item, text, '', '', note];
@@ -34,10 +36,11 @@ function dragRows(prefix: string, d: DragV1, speed: string, length: string): Row
   switch (d.source) {
     case 'entered':
     case 'table': {
+      const t = (n: number) => typedText(n, d.decimals);
       const range =
         d.low === undefined && d.high === undefined
           ? NO_RANGE
-          : `${d.low ?? d.value} to ${d.high ?? d.value}`;
+          : `${t(d.low ?? d.value)} to ${t(d.high ?? d.value)}`;
       const where =
         d.source === 'table'
           ? [
@@ -45,7 +48,7 @@ function dragRows(prefix: string, d: DragV1, speed: string, length: string): Row
             ]
           : [];
       const note = [...where, d.note ?? ''].filter(Boolean).join('; ');
-      return [[`${prefix}drag factor (${d.source})`, String(d.value), range, '', note]];
+      return [[`${prefix}drag factor (${d.source})`, t(d.value), range, '', note]];
     }
     case 'test-skids':
       return withNote(

@@ -2,9 +2,9 @@ import { spread } from '../engine/spread.js';
 import type { Case } from '../case/load.js';
 import type { AnalysisSolution, Units } from '../engine/types.js';
 import { segmentLabels } from '../extras/limit-inputs.js';
-import { speedAlongSlideSvg, yawArcSvg } from '../extras/pictures-svg.js';
-import { speedAlongSlideChart } from '../extras/slide-chart.js';
-import { yawArcSketch } from '../extras/yaw-sketch.js';
+import { speedAlongSlideSvg, yawArcSvg } from '../pictures/pictures-svg.js';
+import { speedAlongSlideChart } from '../pictures/slide-chart.js';
+import { yawArcSketch } from '../pictures/yaw-sketch.js';
 import { fileSafe, section, type Figure, type Section } from './doc.js';
 import { TEXT_WIDTH } from './render-text.js';
 

@@ -1,11 +1,7 @@
-import type { Case } from '../case/load.js';
-import { DEFAULT_REACTION_TIME } from '../engine/constants.js';
 import type { AnalysisSolution, Range, Units } from '../engine/types.js';
-import { timeDistanceFromCase } from '../extras/case-fields.js';
-import { limitComparison, type LimitComparison } from '../extras/limit-comparison.js';
-import type { Verdict } from '../extras/limit-steps.js';
+import type { AnalysisExtras } from '../extras/analysis-extras.js';
+import type { LimitComparison } from '../extras/limit-comparison.js';
 import { formatRange } from '../format/numbers.js';
-import { formatNumber } from '../engine/number-text.js';
 import { limitFraming, verdictSentence } from '../format/verdict.js';
 import { stepBlocks } from './analysis-section.js';
 import { list, para, section, table, type Section } from './doc.js';
@@ -37,44 +33,25 @@ function figuresTable(t: LimitComparison, u: Units) {
   );
 }
 
-/** Where t comes from: the case's own field, the user's preference, or the default. */
-function reactionSetting(c: Case, id: string, pref: number | undefined) {
-  const field = timeDistanceFromCase(c, id);
-  const f = field.ok ? field.value : undefined;
-  if (f?.reactionTime !== undefined)
-    return { t: f.reactionTime, origin: 'set in the case file', conflictAt: f.conflictAt, field };
-  if (pref !== undefined)
-    return { t: pref, origin: "the investigator's preference", conflictAt: f?.conflictAt, field };
-  return { t: DEFAULT_REACTION_TIME, origin: 'default', conflictAt: f?.conflictAt, field };
-}
-
 /**
  * Time and distance at the posted limit for a slide: this vehicle's reaction distance and slide
  * duration, and what a vehicle at the limit perceiving at the same point would have needed to
- * stop; every figure from the extras' steps. Only for a skid analysis in a case with a limit.
+ * stop; every figure from the result document's extras. Only where the extras hold it (a skid
+ * analysis in a case with a limit or a conflict point).
  */
 export function timeDistanceSection(
-  c: Case,
   s: AnalysisSolution,
+  x: AnalysisExtras,
   id: string,
   u: Units,
-  pref?: number,
 ): Section | undefined {
-  if (s.kind !== 'skid' || c.postedLimit === undefined) return undefined;
-  const set = reactionSetting(c, s.id, pref);
+  const r = x.limit;
+  if (!r) return undefined;
   const title = 'Time and distance at the posted limit';
-  if (!set.field.ok)
+  if (!r.ok)
     return section(`${id}-time`, title, [
-      para(
-        `Not computed: ${set.field.reason}${set.field.path ? ` (field ${set.field.path})` : ''}.`,
-      ),
+      para(`Not computed: ${r.reason}${r.path ? ` (field ${r.path})` : ''}.`),
     ]);
-  const r = limitComparison(c, s, {
-    reactionTime: set.t,
-    reactionOrigin: set.origin,
-    ...(set.conflictAt !== undefined ? { conflictAt: set.conflictAt } : {}),
-  });
-  if (!r.ok) return section(`${id}-time`, title, [para(`Not computed: ${r.reason}.`)]);
   const t = r.value;
   return section(`${id}-time`, title, [
     // The time as chosen (1.25 s stays 1.25 s), not rounded like a computed time.

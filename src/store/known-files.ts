@@ -1,4 +1,4 @@
-import { createHash } from 'node:crypto';
+import { sha256Of } from '../io/sha256.js';
 import type { Stats } from 'node:fs';
 
 /**
@@ -32,16 +32,12 @@ export function sameSig(a: FileSig | undefined, st: Stats): boolean {
   return a !== undefined && a.ino === st.ino && a.size === st.size && a.mtimeMs === st.mtimeMs;
 }
 
-export const hashOf = (bytes: Buffer | string) => createHash('sha256').update(bytes).digest('hex');
+export const hashOf = (bytes: Buffer | string) => sha256Of(bytes);
 
 export function getKnown(file: string): Known {
   let k = known.get(file);
   if (!k) known.set(file, (k = {}));
   return k;
-}
-
-export function forgetKnown(file: string): void {
-  known.delete(file);
 }
 
 /** Runs async tasks on one file one after another, so overlapping autosaves cannot interleave. */

@@ -100,6 +100,7 @@ export function App(props: AppProps) {
     const ctx: ReviewContext = { case: built.case, notes: port.notes(s.state) };
     if (reactionTime !== undefined) ctx.reactionTime = reactionTime;
     return reviewFigures(port.solve(built.case), ctx);
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- keyed on the answers, not the whole session: a scroll, a resize or a typed key must not recompute (test/ui/review-once.test.tsx); `port` is fixed for the life of the app
   }, [s?.state.answers, s?.open.case, onReview, reactionTime]);
   const review = useMemo((): ShownLine[] => {
     if (figures === undefined) return [];
@@ -111,6 +112,7 @@ export function App(props: AppProps) {
   // The running chain only changes with the answers, not with each key typed.
   const draft = useMemo(
     () => (s && question ? port.draft(s.state, s.open.case) : undefined),
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- keyed on the answers, not the whole session: a scroll, a resize or a typed key must not recompute (test/ui/review-once.test.tsx); `port` is fixed for the life of the app
     [s?.state.answers, question?.id],
   );
 

@@ -1,5 +1,5 @@
 import React from 'react';
-import { Box, Text } from 'ink';
+import { Box } from 'ink';
 import { KEY_TABLE, bindingKeys, keysFor, type KeyContext } from './keys.js';
 import type { ShownLine } from './review-step.js';
 import { wrap } from '../report/wrap.js';
@@ -48,6 +48,21 @@ export function helpLines(width: number, quickEntry: readonly string[]): ShownLi
   out.push({ text: '' }, { text: 'Offsets of a yaw mark', bold: true, tone: 'heading' });
   for (const l of wrap(
     `When the radius is measured by offsets along one chord, type the ${STATIONS_SYNTAX}: the distance along the chord from its start, then the offset from the chord to the mark. A unit may be glued to a number (3.1m:0.12m).`,
+    Math.max(20, width),
+  ))
+    out.push({ text: l });
+  out.push({ text: '' }, { text: 'A vehicle that left the ground', bold: true, tone: 'heading' });
+  for (const l of wrap(
+    'At "What do the marks look like?" press j (take-off and landing marks). Give the horizontal distance of the centre of mass from take-off to first landing, its drop (+ landed lower, - landed higher) and the take-off slope (signed percent or degrees; empty is level), each with a tolerance. Example (invented): 62 ± 2 ft, 8.5 ± 0.5 ft, -2 ± 1 % gives 62.9 mph (56.6 to 71.0).',
+    Math.max(20, width),
+  ))
+    out.push({ text: l });
+  out.push(
+    { text: '' },
+    { text: 'A slide that ran on into more marks', bold: true, tone: 'heading' },
+  );
+  for (const l of wrap(
+    'At "How did the slide end?" press o (went on into the next set of marks), then pick the analysis that holds them, or the next one to be entered. Example (invented): a 38 ft slide into a yaw entered as analysis 2: the slide starts from the yaw\'s speed, and the review shows the phases in order. A loop is refused, naming it.',
     Math.max(20, width),
   ))
     out.push({ text: l });

@@ -15,14 +15,14 @@ import {
   summaryOfDone,
 } from '../interview/derived.js';
 import { buildCase, lookNotes } from '../interview/build-case.js';
-import { solveDraft } from '../interview/draft.js';
+import { earlySteps, solveDraft, type EarlyStep } from '../interview/draft.js';
 import { defaultTextOf, explainOf } from '../interview/answer-values.js';
 import { stateFromCase } from '../interview/from-case.js';
 import type { InterviewState } from '../interview/types.js';
 import type { DraftView } from './draft-panel.js';
 import type { InterviewPort } from './interview-port.js';
 import { atLeast } from './review-lines.js';
-import { kindOfUnit } from '../format/step-text.js';
+import { stepResultText } from '../format/step-text.js';
 
 /** Solves a case exactly as `solve` would read it from its file: through the loader first. */
 export function solveAsFile(c: Case): CaseSolution {
@@ -41,7 +41,11 @@ export function solveAsFile(c: Case): CaseSolution {
  * The side panel's view of the running solution. `open` names the questions still to answer,
  * so that before the first figure the panel says what it waits for.
  */
-export function draftView(sol: CaseSolution, open: readonly string[] = []): DraftView {
+export function draftView(
+  sol: CaseSolution,
+  open: readonly string[] = [],
+  early: readonly EarlyStep[] = [],
+): DraftView {
   const steps: DraftView['steps'] = [];
   const results: string[] = [];
   const problems: string[] = [];
@@ -50,22 +54,26 @@ export function draftView(sol: CaseSolution, open: readonly string[] = []): Draf
     for (const s of a.solution.steps)
       steps.push({
         name: s.name,
-        result: formatRange(
-          { value: s.result, low: s.low, high: s.high },
-          kindOfUnit(s.unit),
-          s.unit,
-        ),
+        result: stepResultText(s),
       });
     results.push(
       `${sol.analyses.length > 1 ? `Analysis ${i + 1}: ` : ''}${formatRange(a.solution.speed, 'speed', sol.units.speed)}, ${atLeast(a.solution, sol.units.speed)}`,
     );
   });
+  // Figures of an analysis still being answered, as soon as their own inputs are in.
+  const many = sol.analyses.length + new Set(early.map((e) => e.analysis)).size > 1;
+  for (const e of early)
+    steps.push({
+      name: `${many ? `Analysis ${e.analysis + 1}: ` : ''}${e.step.name}`,
+      result: stepResultText(e.step),
+    });
   const view: DraftView = { steps };
   if (results.length) view.result = results.join('; ');
   if (problems.length) view.note = problems.join('; ');
   else if (!results.length && open.length) {
     const more = open.length > 3 ? `, and ${open.length - 3} more` : '';
-    view.note = `No figure yet: still to answer: ${open.slice(0, 3).join('; ')}${more}.`;
+    const what = early.length ? 'The speed follows' : 'No figure yet';
+    view.note = `${what}: still to answer: ${open.slice(0, 3).join('; ')}${more}.`;
   } else if (!results.length)
     view.note = 'No figure yet: the chain fills in once an analysis is complete.';
   return view;
@@ -95,7 +103,8 @@ export const liveInterview: InterviewPort = {
     return { ...st, cursor: firstOpenQuestion(st), mode, explain: mode === 'guided' };
   },
   summary: summaryOfDone,
-  draft: (state, base) => draftView(solveDraft(state, base.id), stillToAnswer(state)),
+  draft: (state, base) =>
+    draftView(solveDraft(state, base.id), stillToAnswer(state), earlySteps(state)),
   solve: solveAsFile,
   notes: lookNotes,
 };

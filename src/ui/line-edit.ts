@@ -42,6 +42,7 @@ export function editLine(line: Line, input: string, key: Key): Line {
   if (key.upArrow || key.downArrow || key.pageUp || key.pageDown || key.home || key.end)
     return line;
   // Strip control characters a paste may carry (a newline would end the answer early).
+  // eslint-disable-next-line no-control-regex -- these are the control characters to strip
   const text = input.replace(/[\u0000-\u001f\u007f]/g, '');
   if (!text) return line;
   return {

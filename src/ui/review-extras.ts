@@ -1,19 +1,18 @@
 /**
  * The review's lines for what the extras add to one solved analysis: the time-distance comparison
  * at the posted limit, the distribution of speeds, the offsets fit, and the pictures as text.
- * Every figure is read from src/extras (analysisExtras); nothing is computed here.
+ * Every figure is read from the result document (caseResult in src/extras); nothing is computed
+ * here.
  */
 import { spread } from '../engine/spread.js';
 import type { Case } from '../case/load.js';
 import type { AnalysisSolution, CaseSolution, Outcome, Range, Units } from '../engine/types.js';
-import { analysisExtras, type AnalysisExtras } from '../extras/analysis-extras.js';
+import { caseResult, type AnalysisExtras, type CaseResult } from '../extras/analysis-extras.js';
 import type { Verdict } from '../extras/limit-steps.js';
 import type { LimitComparison } from '../extras/limit-comparison.js';
 import type { SampleSummary } from '../extras/sampling.js';
-import type { YawFromOffsets } from '../extras/yaw-offsets.js';
-import { sensitivity, type SensitivityRow } from '../extras/sensitivity.js';
-import { speedAlongSlideChart } from '../extras/slide-chart.js';
-import { yawArcSketch } from '../extras/yaw-sketch.js';
+import { speedAlongSlideChart } from '../pictures/slide-chart.js';
+import { yawArcSketch } from '../pictures/yaw-sketch.js';
 import { formatRange, withUnit } from '../format/numbers.js';
 import { limitFraming, verdictWords } from '../format/verdict.js';
 import { formatNumber } from '../engine/number-text.js';
@@ -85,7 +84,7 @@ function samplingLines(out: ShownLine[], d: SampleSummary, u: Units, width: numb
 
 function offsetsLines(
   out: ShownLine[],
-  o: YawFromOffsets,
+  o: NonNullable<AnalysisSolution['offsetsFit']>,
   u: Units,
   width: number,
   shown: readonly string[],
@@ -106,7 +105,7 @@ function offsetsLines(
       '    ',
     );
   // A warning the chain already listed (the scatter) is not repeated here.
-  for (const w of o.warnings.filter((x) => !shown.includes(x)))
+  for (const w of o.fit.warnings.filter((x) => !shown.includes(x)))
     pushWrapped(out, `! ${w}`, width, '    ', { tone: 'warning' });
 }
 
@@ -146,9 +145,7 @@ function pictures(
     const ordinate =
       a?.kind === 'yaw' && a.middleOrdinate !== undefined
         ? spread(a.middleOrdinate).value
-        : x.offsets?.ok
-          ? x.offsets.value.fit.middleOrdinate
-          : undefined;
+        : s.offsetsFit?.fit.middleOrdinate;
     if (chord !== undefined && ordinate !== undefined) {
       pic = yawArcSketch(spread(chord).value, ordinate, w, 8, { unit: u.length });
       out.push({ text: '  The arc measured', bold: true });
@@ -158,43 +155,27 @@ function pictures(
 }
 
 /**
- * Everything the review shows that takes work: the solution's extras (sampling, the limit
- * comparison, the offsets fit, sensitivity) for each solved analysis. Computed once per case and
- * answers; laying the lines out for a width (`reviewLines`) reads them and computes nothing.
+ * Everything the review shows that takes work: the result document (the solution and every
+ * extra), built once per case and answers, and the notes the case file cannot hold; laying the
+ * lines out for a width (`reviewLinesOf`) reads them and computes nothing.
  */
 export interface ReviewFigures {
-  solution: CaseSolution;
-  ctx?: ReviewContext;
-  /** By analysis id, for each solved analysis. */
-  sensitivity: Record<string, SensitivityRow[]>;
-  /** By analysis id, for each solved analysis, when the case is given. */
-  extras: Record<string, AnalysisExtras>;
+  result: CaseResult;
+  /** Notes by analysis id that the case file cannot hold (the marks' look). */
+  notes: Record<string, string[]>;
 }
 
 /**
  * @example const figures = reviewFigures(solveCase(c), { case: c }); reviewLinesOf(figures, 80)
  */
-export function reviewFigures(solution: CaseSolution, ctx?: ReviewContext): ReviewFigures {
-  const fig: ReviewFigures = { solution, sensitivity: {}, extras: {}, ...(ctx ? { ctx } : {}) };
-  for (const a of solution.analyses) {
-    if (!a.ok) continue;
-    const s = a.solution;
-    if (ctx) {
-      const x = analysisExtras(
-        ctx.case,
-        s,
-        ctx.reactionTime !== undefined ? { reactionTime: ctx.reactionTime } : {},
-      );
-      fig.extras[s.id] = x;
-      fig.sensitivity[s.id] = x.sensitivity;
-    } else fig.sensitivity[s.id] = sensitivity(s);
-  }
-  return fig;
+export function reviewFigures(solution: CaseSolution, ctx: ReviewContext): ReviewFigures {
+  const settings = ctx.reactionTime !== undefined ? { reactionTime: ctx.reactionTime } : {};
+  return { result: caseResult(ctx.case, solution, settings), notes: ctx.notes ?? {} };
 }
 
 /**
  * The extras' lines for one solved analysis of case `c`, at most `width` columns each, from its
- * extras as `reviewFigures` computed them.
+ * extras in the result document.
  */
 export function extrasLines(
   s: AnalysisSolution,
@@ -208,9 +189,7 @@ export function extrasLines(
     limitLines(out, v, s.speed, u, width),
   );
   part(out, 'Distribution of the speed', x.sampling, width, (v) => samplingLines(out, v, u, width));
-  part(out, 'Circle fitted to the offsets', x.offsets, width, (v) =>
-    offsetsLines(out, v, u, width, s.warnings),
-  );
+  if (s.offsetsFit) offsetsLines(out, s.offsetsFit, u, width, s.warnings);
   pictures(out, s, c, x, u, width);
   return out;
 }

@@ -12,7 +12,7 @@ import { formatRange, zeroRangeNote } from '../format/numbers.js';
 import { formatNumber } from '../engine/number-text.js';
 import { phasesLine } from '../format/phases-text.js';
 import { limitWord } from '../format/verdict.js';
-import { sensitivityBars } from '../extras/sensitivity-bars.js';
+import { sensitivityBars } from '../pictures/sensitivity-bars.js';
 import { pushWrapped, stepLines, type ShownLine } from './review-step.js';
 import {
   extrasLines,
@@ -29,14 +29,15 @@ export function atLeast(s: AnalysisSolution, speedUnit: string): string {
 function analysisLines(
   out: ShownLine[],
   s: AnalysisSolution,
-  sol: CaseSolution,
+  i: number,
   width: number,
   fig: ReviewFigures,
 ) {
+  const sol = fig.result.solution;
   const unit = sol.units.speed;
-  const ctx = fig.ctx;
-  const x = fig.extras[s.id];
-  const rows = fig.sensitivity[s.id] ?? [];
+  const x = fig.result.analyses[i]?.extras;
+  const notes = fig.notes[s.id] ?? [];
+  const rows = x?.sensitivity ?? [];
   s.steps.forEach((step, i) => stepLines(out, step, i + 1, width, '  '));
   out.push({ text: '' });
   pushWrapped(
@@ -57,8 +58,7 @@ function analysisLines(
     pushWrapped(out, `Phases in order of travel: ${phasesLine(s.phases, sol.units)}`, width, '  ', {
       tone: 'result',
     });
-  for (const n of ctx?.notes?.[s.id] ?? [])
-    pushWrapped(out, `! ${n}`, width, '  ', { tone: 'warning', bold: true });
+  for (const n of notes) pushWrapped(out, `! ${n}`, width, '  ', { tone: 'warning', bold: true });
   if (sol.postedLimit) {
     const v = sol.postedLimit.value;
     // A limit converted from the other unit is not whole: show it as converted, not rounded.
@@ -71,8 +71,7 @@ function analysisLines(
   if (s.assumptions.length) {
     out.push({ text: '  Assumptions', bold: true });
     // A caution already shown beside the result (the anti-lock note) is not repeated here.
-    const shown = ctx?.notes?.[s.id] ?? [];
-    for (const a of s.assumptions) if (!shown.includes(a)) pushWrapped(out, `- ${a}`, width, '   ');
+    for (const a of s.assumptions) if (!notes.includes(a)) pushWrapped(out, `- ${a}`, width, '   ');
   }
   if (s.warnings.length) {
     out.push({ text: '  Warnings', bold: true, tone: 'warning' });
@@ -85,7 +84,7 @@ function analysisLines(
   }
   const zero = zeroRangeNote(s.speed);
   if (zero) pushWrapped(out, zero, width, '  ', { tone: 'muted' });
-  if (ctx && x) out.push(...extrasLines(s, sol.units, ctx.case, x, width));
+  if (x) out.push(...extrasLines(s, sol.units, fig.result.case, x, width));
 }
 
 /**
@@ -119,15 +118,15 @@ export function glanceLines(sol: CaseSolution, width: number): ShownLine[] {
 
 /**
  * Lines of the review for a solved case, at most `width` columns each.
- * @example reviewLines(solveCase(c), 80)[0] // { text: 'At a glance', ... }
+ * @example reviewLines(solveCase(c), 80, { case: c })[0] // { text: 'At a glance', ... }
  */
-export function reviewLines(sol: CaseSolution, width: number, ctx?: ReviewContext): ShownLine[] {
+export function reviewLines(sol: CaseSolution, width: number, ctx: ReviewContext): ShownLine[] {
   return reviewLinesOf(reviewFigures(sol, ctx), width);
 }
 
 /** The review's lines laid out for `width` from figures already computed: nothing is computed here. */
 export function reviewLinesOf(fig: ReviewFigures, width: number): ShownLine[] {
-  const sol = fig.solution;
+  const sol = fig.result.solution;
   const out: ShownLine[] = glanceLines(sol, width);
   sol.analyses.forEach((a, i) => {
     const head = a.ok ? a.solution : a;
@@ -137,7 +136,7 @@ export function reviewLinesOf(fig: ReviewFigures, width: number): ShownLine[] {
       tone: 'heading',
       bold: true,
     });
-    if (a.ok) analysisLines(out, a.solution, sol, width, fig);
+    if (a.ok) analysisLines(out, a.solution, i, width, fig);
     else
       pushWrapped(
         out,

@@ -157,7 +157,7 @@ function move(d: InputDeps, ctx: KeyContext, by: number) {
 }
 
 function run(command: Command, ctx: KeyContext, d: InputDeps) {
-  const { app, port, services } = d;
+  const { app, services } = d;
   const m = app.current();
   switch (command) {
     case 'help':

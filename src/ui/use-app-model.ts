@@ -59,7 +59,10 @@ export function useAppModel(
     ref.current = n;
     setModel(n);
   }, []);
-  const setHome = (h: Partial<HomeState>) => update((m) => ({ ...m, home: { ...m.home, ...h } }));
+  const setHome = useCallback(
+    (h: Partial<HomeState>) => update((m) => ({ ...m, home: { ...m.home, ...h } })),
+    [update],
+  );
 
   const refresh = useCallback(async () => {
     try {
@@ -111,7 +114,7 @@ export function useAppModel(
         home: { ...m.home, error: undefined, message: undefined, path: undefined },
       }));
     },
-    [port, update],
+    [port, update, setHome],
   );
 
   /**
@@ -119,8 +122,11 @@ export function useAppModel(
    * caller shows the next question only after this, so what the screen moved past is on disk.
    * A failure keeps the answers in memory and says why and what to do.
    */
+  /** Set by persist: whether its write was refused or failed (not: skipped, or the case incomplete). */
+  const writeFailed = useRef(false);
   const persist = useCallback(
     (s: Session, opts: { overwriteChanged?: boolean } = {}): Session => {
+      writeFailed.current = false;
       if (s.open.readOnly || s.state.answers === savedAnswers.current) return s;
       const built = port.build(s.state, s.open.case);
       if (!built.ok) return { ...s, saveError: `not saved yet: ${built.message}` };
@@ -132,6 +138,7 @@ export function useAppModel(
         if (result.notes.length) done.saveNote = result.notes.join(' ');
         return done;
       }
+      writeFailed.current = true;
       if (result.theirs)
         return { ...rest, saveError: result.message, conflict: { theirs: result.theirs } };
       return { ...rest, saveError: failureText(result.message, result.problem) };
@@ -157,7 +164,18 @@ export function useAppModel(
       if (!before) return;
       let after = applyAction(port, before, action);
       if (after === before) return;
-      if (after.state.answers !== before.state.answers || after.saveError) after = persist(after);
+      if (after.state.answers !== before.state.answers || after.saveError) {
+        after = persist(after);
+        // What the screen moves past is on disk: when the write of a new answer failed (disk
+        // full, the file changed outside), the answer is kept but the question stays on screen
+        // with the reason and the answer as typed, until a save goes through.
+        if (writeFailed.current && after.state.answers !== before.state.answers)
+          after = {
+            ...after,
+            state: { ...after.state, cursor: before.state.cursor },
+            line: before.line,
+          };
+      }
       update((m) => ({ ...m, session: after }));
     },
     [port, persist, update],
@@ -184,7 +202,9 @@ export function useAppModel(
     }
     // Text typed but not accepted is no answer yet: say so once, rather than drop it unseen.
     const draft = s?.line.value.trim();
-    if (s && draft && !draftArmed.current) {
+    // A held answer (its save failed) is in the answers already: the line only shows it.
+    const held = s && draft === s.state.answers[s.state.cursor]?.text.trim();
+    if (s && draft && !held && !draftArmed.current) {
       draftArmed.current = true;
       const shown = draft.length > 30 ? `${draft.slice(0, 30)}…` : draft;
       const saveNote = `"${shown}" is typed but not accepted: Enter accepts it; ${keysFor('save-leave')} again leaves without it.`;

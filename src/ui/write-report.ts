@@ -2,14 +2,42 @@
  * "Write report" from the review: the report module's Markdown report, written beside the case
  * file under a new name each time (never over an existing file).
  */
+import { readFile } from 'node:fs/promises';
 import path from 'node:path';
-import type { Case } from '../case/load.js';
+import { sha256Of } from '../io/sha256.js';
+import { loadCaseText, type Case } from '../case/load.js';
+import { caseResult } from '../extras/analysis-extras.js';
 import { buildReport } from '../report/build.js';
 import { toolVersion } from '../report/version.js';
 import { writeReport } from '../report/write-report.js';
 import { writeFailureText } from '../report/write-files.js';
 import { solveAsFile } from './interview-live.js';
 import type { OpenCase } from './services.js';
+
+/** The same case apart from the save's own stamps (`created`, `updated`), in any key order. */
+function sameContent(a: Case, b: Case): boolean {
+  const plain = (c: Case) => {
+    const {
+      created: _c,
+      updated: _u,
+      ...rest
+    } = c as Case & { created?: string; updated?: string };
+    return stable(rest);
+  };
+  return plain(a) === plain(b);
+}
+
+/** JSON with object keys sorted, so that key order does not count. */
+function stable(v: unknown): string {
+  if (Array.isArray(v)) return `[${v.map(stable).join(',')}]`;
+  if (v && typeof v === 'object')
+    return `{${Object.keys(v)
+      .filter((k) => (v as Record<string, unknown>)[k] !== undefined)
+      .sort()
+      .map((k) => `${JSON.stringify(k)}:${stable((v as Record<string, unknown>)[k])}`)
+      .join(',')}}`;
+  return JSON.stringify(v);
+}
 
 /** `<id>-report-20261201-215203.md` in the case file's folder. */
 export function reportPath(open: OpenCase, c: Case, at: Date): string {
@@ -27,11 +55,22 @@ export async function writeCaseReport(
   at = new Date(),
   reactionTime?: number,
 ) {
-  const doc = buildReport(c, solveAsFile(c), {
+  // The same result document the review shows: the same case and the same settings.
+  const settings = reactionTime !== undefined ? { reactionTime } : {};
+  // The file's fingerprint, only when the file on disk holds this very case (a failed save
+  // leaves an older one there: a report must not claim a file it was not made from).
+  const sha = await readFile(open.file).then(
+    (bytes) => {
+      const disk = loadCaseText(bytes.toString('utf8'));
+      return disk.ok && sameContent(disk.case, c) ? sha256Of(bytes) : undefined;
+    },
+    () => undefined,
+  );
+  const doc = buildReport(caseResult(c, solveAsFile(c), settings), {
     toolVersion: toolVersion(),
     generatedAt: at.toISOString(),
     caseFile: open.file,
-    ...(reactionTime !== undefined ? { extras: { reactionTime } } : {}),
+    ...(sha ? { caseSha256: sha } : {}),
   });
   const file = reportPath(open, c, at);
   const r = await writeReport(doc, 'md', file, false);

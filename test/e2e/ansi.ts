@@ -3,6 +3,7 @@
  * movement are not colour; NO_COLOR (https://no-color.org) asks only that colour be left out.
  */
 
+// eslint-disable-next-line no-control-regex -- matches terminal escape codes, which begin with ESC
 const SGR = /\u001B\[([0-9;:]*)m/g;
 
 /** True for an SGR parameter list that sets or resets a foreground or background colour. */
@@ -32,6 +33,7 @@ export function colourCodes(raw: string): string[] {
 /** Removes every escape sequence, leaving the text a person reads. */
 export function stripAnsi(raw: string): string {
   return raw.replace(
+    // eslint-disable-next-line no-control-regex -- terminal escape codes begin with ESC and may end with BEL
     /\u001B\[[0-?]*[ -/]*[@-~]|\u001B\][^\u0007\u001B]*(\u0007|\u001B\\)|\u001B[@-Z\\-_]/g,
     '',
   );

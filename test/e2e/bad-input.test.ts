@@ -3,11 +3,12 @@
 // and leaves the files on disk as they were. Invented cases.
 import { afterAll, afterEach, describe, expect, it } from 'vitest';
 import { spawn } from 'node:child_process';
-import { chmodSync, mkdirSync, readdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
-import { dirname, join } from 'node:path';
+import { chmodSync, mkdirSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { tmpdir } from 'node:os';
 import { BINARY, disposeAll, ptySupport, startTerm } from './harness.js';
 import { describeInTerminal } from './pty-gate.js';
+import { NOBODY, assertPassableForNobody, runsAsRoot } from '../as-nobody.js';
 import { childEnv, makeWorkspace } from './env.js';
 
 const ws = makeWorkspace('skidcase-bad-input-');
@@ -135,6 +136,7 @@ describe("a case beyond the format's caps", () => {
 
   it('each list of the format has the cap, named in the message', async () => {
     const seg = { drag: { source: 'entered', value: 0.7 }, length: 1 };
+    // eslint-disable-next-line @typescript-eslint/no-explicit-any -- edits a parsed JSON case at any depth
     const cases: [string, (c: any) => void, string][] = [
       [
         'segments',
@@ -246,24 +248,20 @@ describe('report onto a folder, into a missing or read-only folder, and of a fol
   it('--out into a read-only folder: says it cannot be written, no temp file named, nothing written', async () => {
     // Root may write anywhere: as root (CI), the program runs as the unprivileged user nobody,
     // with the workspace opened up for reading so that it can read the case.
-    const asRoot = process.getuid?.() === 0;
-    const nobody = { uid: 65534, gid: 65534 };
+    const asRoot = runsAsRoot();
     const dir = join(ws.root, 'read-only');
     mkdirSync(dir);
     chmodSync(dir, 0o555);
     if (asRoot) {
       chmodSync(ws.root, 0o755);
       chmodSync(caseFile(), 0o644);
-      for (let d = dirname(ws.root); d !== dirname(d); d = dirname(d)) {
-        // the temp folder's parents must be passable for nobody (they are on a normal system)
-        if ((statSync(d).mode & 0o001) === 0) throw new Error(`${d} is not passable for nobody`);
-      }
+      assertPassableForNobody(ws.root);
     }
     try {
       const r = await run(
         ['report', caseFile(), '--out', join(dir, 'r.md')],
         asRoot ? tmpdir() : ws.root,
-        asRoot ? nobody : undefined,
+        asRoot ? NOBODY : undefined,
       );
       expect(r.code).toBe(1);
       expect(r.err).toContain(
@@ -289,6 +287,7 @@ describe('control characters in file names, ids, field names and labels', () => 
   // A name that would set the terminal's title if printed raw.
   const TITLE = '\u001b]0;owned\u0007';
   const ESCAPED = '\\u001b]0;owned\\u0007';
+  // eslint-disable-next-line no-control-regex -- the control characters that must never reach the terminal raw
   const RAW = /[\u0000-\u0008\u000b-\u001f\u007f-\u009f]/;
 
   it('solve and report print them escaped, in messages and in the chain', async () => {
@@ -296,6 +295,7 @@ describe('control characters in file names, ids, field names and labels', () => 
     const invalid = join(ws.root, `bad${TITLE}.json`);
     writeFileSync(invalid, JSON.stringify({ ...skidCase('bad'), units: 'furlongs' }));
     const labelled = join(ws.root, `label${TITLE}.json`);
+    // eslint-disable-next-line @typescript-eslint/no-explicit-any -- a parsed JSON case, given a label
     const c = skidCase('labelled', { [`odd${TITLE}`]: 1 }) as any;
     c.analyses[0].label = `front left${TITLE}`;
     writeFileSync(labelled, JSON.stringify(c));

@@ -158,11 +158,10 @@ export async function typeInterview(
         // screen would (the prompt or a hint may hold the same words, so only that line counts).
         const shown = typedShown(screen, answer, t.cols);
         await t.type(answer);
-        await t.waitFor(shown, {
+        screen = await t.waitFor(shown, {
           what: `the typed answer "${answer}" on the input line, for ${q.id}`,
           ...wait,
         });
-        screen = await t.waitForQuiet(40, wait);
       }
       await t.press('enter');
     }

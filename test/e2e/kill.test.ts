@@ -4,8 +4,8 @@
 // that was never typed, and resume on a question no earlier than the one after the last
 // acknowledged answer. A hang-up (SIGHUP, the terminal closed) right after Enter loses nothing.
 //
-// `npm test` runs SKIDCASE_KILLS (default 12) kills and SKIDCASE_HUPS (default 4) hang-ups;
-// `npm run soak` runs 200 and 20 and prints the figures the README quotes. The seed is printed,
+// `npm test` runs 6 kills and 2 hang-ups; `npm run soak` runs 200 and 20 and prints the figures
+// the README quotes (SKIDCASE_KILLS and SKIDCASE_HUPS set other counts). The seed is printed,
 // and SKIDCASE_KILL_SEED replays a run.
 import { afterAll, describe, expect, it } from 'vitest';
 import { existsSync, readFileSync, readdirSync } from 'node:fs';
@@ -23,6 +23,7 @@ import {
   type Script,
 } from './interview-driver.js';
 import { SLIDE_ONLY_GUIDED } from './scripts.js';
+import { soakCount } from '../soak.js';
 import { loadCaseText } from '../../src/case/load.js';
 import { stateFromCase } from '../../src/interview/from-case.js';
 import { currentQuestion } from '../../src/interview/derived.js';
@@ -34,8 +35,8 @@ const pty = await ptySupport();
 if (!pty.ok && process.env.CI) throw new Error(`no pseudo-terminal in CI: ${pty.reason}`);
 if (!pty.ok) console.warn(`kill tests skipped: ${pty.reason}`);
 
-const KILLS = Number(process.env.SKIDCASE_KILLS ?? 12);
-const HUPS = Number(process.env.SKIDCASE_HUPS ?? 4);
+const KILLS = soakCount('SKIDCASE_KILLS', 6, 200);
+const HUPS = soakCount('SKIDCASE_HUPS', 2, 20);
 const SEED = Number(process.env.SKIDCASE_KILL_SEED ?? Date.now() % 2 ** 31);
 
 const spaces: Workspace[] = [];

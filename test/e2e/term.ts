@@ -188,7 +188,6 @@ export class Term {
         what: `the typed text "${text}" to show`,
         ...opts,
       });
-    await this.waitForQuiet(40, opts);
     await this.press('enter');
   }
 

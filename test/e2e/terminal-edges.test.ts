@@ -8,6 +8,7 @@ import { readFileSync } from 'node:fs';
 import { caseFiles } from './review.js';
 import { loadCaseText } from '../../src/case/load.js';
 import { colourCodes } from './ansi.js';
+import { FOOTER_GAP, footerLine } from '../../src/ui/keys.js';
 import { describeInTerminal } from './pty-gate.js';
 import { squash, typeInterview, type Script } from './interview-driver.js';
 
@@ -25,6 +26,14 @@ const ws = makeWorkspace();
 
 /** How often `part` shows on a screen (lines joined, so a wrapped phrase still counts). */
 const times = (screen: string, part: string) => squash(screen).split(part).length - 1;
+
+/**
+ * The question footer as laid out for `cols` columns: the frame's last row, so once it shows, the
+ * frame drawn for that width is on screen whole (a frame reflowed by the terminal never has it).
+ */
+const footerFor = (cols: number) => footerLine('question', cols).join(' '.repeat(FOOTER_GAP));
+const drawnFor = (cols: number) => (screen: string) =>
+  screen.split('\n').some((row) => row.trim() === footerFor(cols));
 afterAll(() => ws.cleanup());
 
 /** Runs the binary with pipes (no terminal at all) and collects what it printed. */
@@ -156,8 +165,11 @@ describeInTerminal('in a terminal', 'terminal edge tests', pty, () => {
     const header = t.screen().split('\n')[0]!.trim().split(/\s+/)[0]!; // the case id
     await t.type('RESIZE-');
     await t.waitFor('RESIZE-');
+    // The footers differ, so each wait below can only end on the frame drawn for the new width.
+    expect(footerFor(60)).not.toBe(footerFor(100));
+    expect(footerFor(120)).not.toBe(footerFor(60));
     t.resize(60, 24);
-    const narrow = await t.waitForQuiet(200);
+    const narrow = await t.waitFor(drawnFor(60), { what: 'the frame drawn for 60 columns' });
     // One frame on screen: no copy of the wider frame (reflowed by the terminal) left behind.
     expect(times(narrow, header), narrow).toBe(1);
     expect(times(narrow, 'Case or report reference'), narrow).toBe(1);
@@ -167,7 +179,7 @@ describeInTerminal('in a terminal', 'terminal edge tests', pty, () => {
     await t.press('enter');
     await t.waitFor(/When did the crash happen/);
     t.resize(120, 30);
-    const wide = await t.waitForQuiet(200);
+    const wide = await t.waitFor(drawnFor(120), { what: 'the frame drawn for 120 columns' });
     expect(times(wide, header), wide).toBe(1);
     expect(times(wide, 'When did the crash happen'), wide).toBe(1);
   });

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { caseResult } from '../../src/extras/analysis-extras.js';
 import fc from 'fast-check';
 import { solveCase } from '../../src/engine/index.js';
 import { formatChainText } from '../../src/format/chain-text.js';
@@ -41,7 +42,7 @@ describe('the printed chain', () => {
               },
             ],
           });
-          const text = formatChainText(solveCase(c), c);
+          const text = formatChainText(caseResult(c, solveCase(c)));
           expect(text).not.toMatch(/NaN|Infinity|undefined/);
           expect(text).toMatch(/This tool does not state fault\./);
         },
@@ -68,7 +69,7 @@ describe('the printed chain', () => {
         },
       ],
     });
-    const text = formatChainText(solveCase(c), c);
+    const text = formatChainText(caseResult(c, solveCase(c)));
     expect(text).toContain('Analysis 1: down (skid marks), steep lane');
     expect(text).toContain(
       'cannot be computed: segment 1: a 60% downhill grade is steeper than the drag factor 0.40 × n 1.00 can hold; the vehicle could not slow by sliding there [analyses[0].segments[0]]',

@@ -32,6 +32,32 @@ describe('analysisExtras: what applies to an analysis, and only that', () => {
     expect(x.sampling?.ok && x.sampling.value.samples).toBe(2000);
   });
 
+  it('a conflict point without a posted limit: the comparison says why it cannot be made', () => {
+    const c = caseOf({ analyses: [{ ...skid, timeDistance: { conflictAt: 5 } }] });
+    expect(analysisExtras(c, solved(c)).limit).toEqual({
+      ok: false,
+      reason: 'the case has no posted limit',
+      path: 'postedLimit',
+    });
+  });
+
+  it('the default reaction time is described as the caller says (solve reads no preferences)', () => {
+    const c = caseOf({ postedLimit: 30, analyses: [skid] });
+    const plain = analysisExtras(c, solved(c));
+    expect(plain.limit?.ok && plain.limit.value.reactionSource).toMatch(/^default; usual value/);
+    const solve = analysisExtras(c, solved(c), { defaultReactionNote: 'default 1.5 s (no prefs)' });
+    expect(solve.limit?.ok && solve.limit.value.reactionSource).toMatch(
+      /^default 1\.5 s \(no prefs\)/,
+    );
+  });
+
+  it('sampling asked for by the caller runs when the case has no sampling field', () => {
+    const c = caseOf({ analyses: [skid] });
+    expect(analysisExtras(c, solved(c)).sampling).toBeUndefined();
+    const x = analysisExtras(c, solved(c), { sampling: { n: 2000, seed: 9 } });
+    expect(x.sampling).toMatchObject({ ok: true, value: { seed: 9, samples: 2000 } });
+  });
+
   it('without a posted limit there is no limit comparison', () => {
     const c = caseOf({ analyses: [skid], sampling: { seed: 3, samples: 2000 } });
     const x = analysisExtras(c, solved(c));
@@ -39,7 +65,7 @@ describe('analysisExtras: what applies to an analysis, and only that', () => {
     expect(x.sampling).toMatchObject({ ok: true, value: { seed: 3, samples: 2000 } });
   });
 
-  it('a yaw analysis: the offsets fit when given', () => {
+  it('a yaw analysis: no limit comparison; the offsets fit is on the solution itself', () => {
     const c = caseOf({
       analyses: [
         {
@@ -50,10 +76,12 @@ describe('analysisExtras: what applies to an analysis, and only that', () => {
         },
       ],
     });
-    const x = analysisExtras(c, solved(c));
+    const s = solved(c);
+    const x = analysisExtras(c, s, { reactionTime: 2 });
     expect(x.limit).toBeUndefined();
     // R = 40²/(8 × 2) + 2/2 = 101 ft (circle geometry): one station at the middle is
     // the middle ordinate.
-    expect(x.offsets?.ok && x.offsets.value.radius.value).toBeCloseTo(101, 9);
+    expect(s.offsetsFit?.radius.value).toBeCloseTo(101, 9);
+    expect(s.offsetsFit?.fit.middleOrdinate).toBeCloseTo(2, 9);
   });
 });

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { sensitivity } from '../../src/extras/sensitivity.js';
-import { sensitivityBars } from '../../src/extras/sensitivity-bars.js';
-import { textWidth } from '../../src/extras/text-fit.js';
+import { sensitivityBars } from '../../src/pictures/sensitivity-bars.js';
+import { textWidth } from '../../src/pictures/text-fit.js';
 import { caseOf, clean, slideToStopModel, solved } from './helpers.js';
 
 // Reference formula: slide to stop S = sqrt(30 d f n) (docs/physics.md, "Slide to stop"), evaluated here by hand.

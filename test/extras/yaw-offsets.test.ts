@@ -1,6 +1,25 @@
 import { describe, expect, it } from 'vitest';
-import { yawFromOffsets } from '../../src/extras/yaw-offsets.js';
+import type { Case } from '../../src/case/load.js';
+import { solveCase } from '../../src/engine/index.js';
 import { caseOf } from './helpers.js';
+
+/** The engine's yaw chain on a case measured by offsets: the one path every output reads. */
+function yawFromOffsets(c: Case, id: string) {
+  const i = c.analyses.findIndex((a) => a.id === id);
+  const o = solveCase(c).analyses[i];
+  if (!o) throw new Error(`no analysis ${id}`);
+  if (!o.ok) return { ok: false as const, reason: o.reason, path: o.path };
+  const s = o.solution;
+  return {
+    ok: true as const,
+    value: s.offsetsFit && {
+      radius: s.offsetsFit.radius,
+      speed: s.speed,
+      steps: s.steps,
+      warnings: s.offsetsFit.fit.warnings,
+    },
+  };
+}
 
 // Invented yaw mark on a 101 ft circle, chord 40 ft: middle ordinate 2.0 ft (R = 40²/(8 × 2) + 2/2
 // = 101, circle geometry); offsets at 10 and 30 ft from Pythagoras: sqrt(101² − 10²) − 99.
@@ -42,7 +61,7 @@ describe('critical speed from offsets', () => {
     expect(r.value.speed.value).toBeCloseTo(Math.sqrt(15 * 0.7 * 98), 9);
   });
 
-  it('no offsets field: nothing to do; a bad station: its full path', () => {
+  it('no offsets field: no fit on the solution; a bad station: its full path', () => {
     const none = caseOf({
       analyses: [{ ...yaw(), offsets: undefined, chord: 40, middleOrdinate: 2 }],
     });

@@ -29,6 +29,8 @@ interface Traits {
   pairs?: boolean;
   /** Pairs `along offset` (stations along a chord). */
   stations?: boolean;
+  /** Signed: a minus sign is part of the answer (a drop onto higher ground, a downward take-off). */
+  signed?: boolean;
 }
 
 const TRAITS: Record<string, Traits> = {
@@ -55,6 +57,9 @@ const TRAITS: Record<string, Traits> = {
   'a#.bank.pct': { unsigned: true },
   'a#.offsets.chord': {},
   'a#.offsets.stations': { stations: true },
+  'a#.air.distance': {},
+  'a#.air.drop': { signed: true, zeroOk: true },
+  'a#.air.grade': { signed: true, zeroOk: true, emptyOk: true },
   'a#.conflict': { emptyOk: true, zeroOk: true, single: true },
   // Perception-reaction time: published values (Green 2000, AASHTO) run from about 0.7 s to 2.5 s;
   // 0 s is not one.
@@ -81,11 +86,13 @@ const CATALOGUE: [string, (t: Traits) => Expect][] = [
     (t) =>
       t.pairs
         ? /speed\/distance/
-        : t.unsigned
-          ? /minus sign.*(uphill or downhill|toward or away)/
-          : t.count
-            ? /whole number from \d+/
-            : /greater than 0|at least 0/,
+        : t.signed
+          ? 'accepted'
+          : t.unsigned
+            ? /minus sign.*(uphill or downhill|toward or away)/
+            : t.count
+              ? /whole number from \d+/
+              : /greater than 0|at least 0/,
   ],
   [
     '0',

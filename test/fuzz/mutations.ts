@@ -119,10 +119,13 @@ export function applyMutation(doc: Json, m: Mutation): string {
       analyses.push(structuredClone(a));
       return `duplicated analyses[${m.pick % analyses.length}] (same id twice)`;
     }
-    const first = analyses[0] as { id?: Json };
+    // An earlier mutation may have made analyses[0] null or a number: it then has no id.
+    const first = analyses[0];
+    const firstId =
+      first !== null && typeof first === 'object' ? (first as { id?: Json }).id : null;
     analyses.push({
       ...(structuredClone(analyses[analyses.length - 1]) as object),
-      id: first.id ?? null,
+      id: firstId ?? null,
     } as Json);
     return `added an analysis with the id of analyses[0]`;
   }

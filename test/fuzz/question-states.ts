@@ -27,7 +27,26 @@ export interface AtQuestion {
   state: InterviewState;
 }
 
-const SCRIPTS: Script[] = [TWO_SURFACES_AND_YAW, OTHER_SOURCES, SLIDE_ONLY_FAST];
+/** An invented fall off a bank: the airborne questions (distance, signed drop, take-off slope). */
+const FALL_OFF_BANK: Script = {
+  'details.reference': 'FUZZ-BANK-3',
+  'details.occurred': '',
+  'details.location': '',
+  'details.investigator': '',
+  'details.notes': '',
+  units: '',
+  limit: '',
+  'vehicle.label': '',
+  'a0.look': 'airborne',
+  'a0.label': '',
+  'a0.air.distance': '62 ± 2',
+  'a0.air.drop': '8.5',
+  'a0.air.grade': '-2',
+  'a0.more': '',
+  'sampling.shape': '',
+};
+
+const SCRIPTS: Script[] = [TWO_SURFACES_AND_YAW, OTHER_SOURCES, SLIDE_ONLY_FAST, FALL_OFF_BANK];
 
 /** The first state of each script in which `id` is the current question. */
 export function stateAt(id: string): AtQuestion {

@@ -10,11 +10,13 @@ import { solveCommand } from '../../src/commands/solve.js';
 import { BINARY } from '../e2e/harness.js';
 import { childEnv } from '../e2e/env.js';
 import { SEEDS } from './seeds.js';
+import { soakCount } from '../soak.js';
 import { mutatedCaseArb, type MutatedCase } from './mutations.js';
 import { solveProblems, type SolveRun } from './solve-checks.js';
 
-const IN_PROCESS_RUNS = 1000;
-const BINARY_RUNS = 40;
+// `npm test` runs the small counts, `npm run soak` the full ones (test/soak.ts).
+const IN_PROCESS_RUNS = soakCount('SKIDCASE_FUZZ_RUNS', 200, 1000);
+const BINARY_RUNS = soakCount('SKIDCASE_FUZZ_BINARY_RUNS', 10, 40);
 
 let dir = '';
 let n = 0;

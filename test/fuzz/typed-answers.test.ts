@@ -5,8 +5,9 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { contextOf, reduce } from '../../src/interview/index.js';
 import { numericQuestions } from './question-states.js';
+import { soakCount } from '../soak.js';
 
-const RUNS = 3000;
+const RUNS = soakCount('SKIDCASE_TYPED_RUNS', 1000, 3000);
 const questions = numericQuestions();
 
 /** Pieces people type, glued at random: numbers, signs, units, separators, typos. */

@@ -57,7 +57,9 @@ describe('a half-answered interview gives a clear message, never a throw or a wr
     expect(c.analyses).toEqual([]);
     const view = panel(s);
     expect(view.result).toBeUndefined();
-    expect(view.note).toBe('No figure yet: still to answer: Braking share, rear right.');
+    expect(view.note).toBe('The speed follows: still to answer: Braking share, rear right.');
+    // The drag factor's own inputs are in, so it shows; nothing that needs the brakes does.
+    expect(view.steps.map((x) => x.name)).toEqual([expect.stringMatching(/^Drag factor/)]);
   });
 
   it('a share that no longer reads: named as such, and no share or figure goes to the engine', () => {
@@ -66,7 +68,10 @@ describe('a half-answered interview gives a clear message, never a throw or a wr
     const c = buildCase(s, { id: 'half' });
     expect(c.vehicle.frontAxleShare).toBeUndefined();
     expect(c.analyses).toEqual([]);
-    expect(panel(s).note).toBe('No figure yet: still to answer: Front axle share (does not read).');
+    expect(panel(s).note).toBe(
+      'The speed follows: still to answer: Front axle share (does not read).',
+    );
+    expect(panel(s).steps.map((x) => x.name)).toEqual([expect.stringMatching(/^Drag factor/)]);
   });
 
   it('a posted limit that does not read is left out of the case, not passed on as typed', () => {

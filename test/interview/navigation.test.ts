@@ -190,7 +190,7 @@ describe('modes and rejected answers', () => {
   it('a choice outside the list is refused', () => {
     const s = fillUntil(start(), SLIDE, 'a0.look');
     expect(act(s, { type: 'choose', value: 'zz' }).error?.message).toBe(
-      '"zz" is not one of the choices here: press d, a, s, g or y',
+      '"zz" is not one of the choices here: press d, a, s, g, y or j',
     );
     expect(act(s, { type: 'choose', value: 'yaw' }).answers['a0.look']?.value).toBe('yaw');
   });

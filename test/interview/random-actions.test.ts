@@ -1,6 +1,7 @@
 import { defaultTextOf, explainOf } from '../../src/interview/answer-values.js';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
+import { soakCount } from '../soak.js';
 import {
   buildCase,
   currentQuestion,
@@ -13,6 +14,8 @@ import {
   type InterviewState,
 } from '../../src/interview/index.js';
 import { loadCase } from '../../src/case/load.js';
+/** Random walks: a small count in `npm test`, the full one in `npm run soak` (test/soak.ts). */
+const WALKS = soakCount('SKIDCASE_WALKS', 30, 300);
 
 // Answers an investigator might type anywhere, good and bad, and key presses.
 const TYPED = [
@@ -202,9 +205,9 @@ describe('random action sequences', () => {
           for (const t of screenTexts(s)) expect(ours(t)).not.toMatch(/NaN|Infinity|undefined/);
         },
       ),
-      { numRuns: 60 },
+      { numRuns: WALKS },
     );
     // The walks must reach whole analyses often enough for the checks above to mean something.
-    expect(withAnalyses).toBeGreaterThan(6);
+    expect(withAnalyses).toBeGreaterThan(WALKS / 10);
   }, 120_000);
 });

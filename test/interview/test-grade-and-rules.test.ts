@@ -6,7 +6,7 @@ import { defaultTextOf } from '../../src/interview/answer-values.js';
 import { describe, expect, it } from 'vitest';
 import type { SkidV1 } from '../../src/case/v1/schema.js';
 import { currentQuestion } from '../../src/interview/index.js';
-import { fill, fillUntil, start, type } from './drive.js';
+import { fill, fillUntil, start } from './drive.js';
 import { reviewText, savedCase } from './review-of.js';
 
 const skid = (s: ReturnType<typeof start>) => savedCase(s).analyses[0] as SkidV1;

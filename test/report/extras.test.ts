@@ -27,7 +27,7 @@ describe('report sections from the extras', () => {
       (await runReport(demo('demo-orchard-hill.json'), { format: 'txt', reactionTime: 2.5 })).out,
     );
     expect(pref).toContain(
-      "Perception-reaction time 2.5 s (the investigator's preference; AASHTO design value",
+      'Perception-reaction time 2.5 s (from the preferences; AASHTO design value',
     );
     expect(pref).toMatch(/At the limit: distance during perception-reaction 128\.3 ft/);
   });

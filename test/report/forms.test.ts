@@ -1,5 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
+import { caseResult } from '../../src/extras/analysis-extras.js';
 import { loadCaseText, type Case } from '../../src/case/load.js';
 import { solveCase } from '../../src/engine/solve-case.js';
 import { CAUTIONS } from '../../src/format/cautions.js';
@@ -26,7 +27,7 @@ const FILES = [
 ];
 const docOf = (file: string) => {
   const c = load(file);
-  return buildReport(c, solveCase(c), { ...META, caseFile: file });
+  return buildReport(caseResult(c, solveCase(c)), { ...META, caseFile: file });
 };
 
 const VOID = new Set(['meta', 'br', 'hr', 'img', 'link', 'input', 'col', 'wbr']);
@@ -121,7 +122,7 @@ describe('parseReportJson', () => {
 describe('drafts and failures (the review screen builds reports from unfinished cases)', () => {
   it('an analysis that cannot be computed says why and states no figure for it', () => {
     const c = load(fixture('steep-shoulder.json'));
-    const doc = buildReport(c, solveCase(c), META);
+    const doc = buildReport(caseResult(c, solveCase(c)), META);
     const text = flat(renderText(doc));
     expect(text).toMatch(/Not computed: .*segment 2/);
     expect(text).not.toMatch(/At least \d/);
@@ -133,9 +134,9 @@ describe('drafts and failures (the review screen builds reports from unfinished 
 
   it('a case with no analysis yet still gives a complete report with its cautions', () => {
     const c = { ...load(fixture('birchfield-yaw.json')), analyses: [] };
-    const text = flat(renderText(buildReport(c, solveCase(c), META)));
+    const text = flat(renderText(buildReport(caseResult(c, solveCase(c)), META)));
     expect(text).toContain('The case holds no analysis yet.');
     expect(text).toContain('This tool does not state fault.');
-    expect(tagProblem(renderHtml(buildReport(c, solveCase(c), META)))).toBeUndefined();
+    expect(tagProblem(renderHtml(buildReport(caseResult(c, solveCase(c)), META)))).toBeUndefined();
   });
 });

@@ -1,6 +1,7 @@
 import { readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { caseResult } from '../../src/extras/analysis-extras.js';
 import { loadCaseText } from '../../src/case/load.js';
 import { solveCase } from '../../src/engine/solve-case.js';
 import { formatChainText } from '../../src/format/chain-text.js';
@@ -28,7 +29,7 @@ describe('one verdict in every output', () => {
         .map((l) => l.text)
         .join(' '),
     );
-    const text = flat(formatChainText(solution, c));
+    const text = flat(formatChainText(caseResult(c, solution)));
     const fromReview = verdicts(review);
     expect(fromReview).toHaveLength(2);
     expect(fromReview[0]).toMatch(/^the end of the marks at /);

@@ -52,6 +52,7 @@ async function json(d: unknown) {
   expect(r.err).toBe('');
   expect(r.code).toBe(0);
   return JSON.parse(r.out) as {
+    // eslint-disable-next-line @typescript-eslint/no-explicit-any -- the JSON output, read field by field
     analyses: Record<string, any>[];
     postedLimit: unknown;
     warnings: string[];

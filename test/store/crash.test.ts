@@ -2,9 +2,12 @@ import { spawn } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { uniformInt } from 'pure-rand/distribution/uniformInt';
+import { xoroshiro128plus } from 'pure-rand/generator/xoroshiro128plus';
 import { loadCaseText } from '../../src/case/load.js';
 import { buildStoreBundle, fixture } from './bundle.js';
 import { tempDir } from './helpers.js';
+import { soakCount } from '../soak.js';
 
 /**
  * The crash test: a child saves a growing case in a loop and is killed with SIGKILL at random
@@ -12,9 +15,22 @@ import { tempDir } from './helpers.js';
  * save had returned (the child prints the count only after a save returned). Kills run in a few
  * lanes at once, each on its own case; every new child resumes the same case, so it also clears
  * the stale lock its killed predecessor left behind.
+ *
+ * `npm test` runs 30 kills, `npm run soak` 300 (SKIDCASE_CRASH_KILLS sets another count). Every
+ * random choice comes from one seeded generator per lane; the seed is printed, and
+ * SKIDCASE_CRASH_SEED replays a run's choices (the moments themselves still move with the machine).
  */
-const KILLS = Number(process.env.SKIDCASE_CRASH_KILLS ?? 300);
+const KILLS = soakCount('SKIDCASE_CRASH_KILLS', 30, 300);
 const LANES = 3;
+const SEED = Number(process.env.SKIDCASE_CRASH_SEED ?? Date.now() % 2 ** 31);
+console.log(`crash test seed ${SEED} (SKIDCASE_CRASH_SEED=${SEED} replays it)`);
+
+/** A seeded source of numbers in [0, 1), one per lane. */
+type Random = () => number;
+const seeded = (seed: number): Random => {
+  const rng = xoroshiro128plus(seed);
+  return () => uniformInt(rng, 0, 2 ** 30 - 1) / 2 ** 30;
+};
 const markValue = (i: number) => 40 + (i % 50) / 4; // the same rule as fixtures/save-loop.mjs
 
 let bundle: string;
@@ -32,7 +48,7 @@ interface Round {
 }
 
 /** Runs one child and kills it at a random moment: mostly mid-loop, sometimes during start-up. */
-function round(dir: string, id: string): Promise<Round> {
+function round(dir: string, id: string, random: Random): Promise<Round> {
   return new Promise((resolve, reject) => {
     const child = spawn(process.execPath, [fixture('save-loop.mjs'), bundle, dir, id], {
       stdio: ['ignore', 'pipe', 'pipe'],
@@ -44,11 +60,11 @@ function round(dir: string, id: string): Promise<Round> {
     const kill = () => child.kill('SIGKILL');
     // 15%: at any moment of start-up (open, stale lock clearing, first save). Otherwise after
     // 0 to 3 returned saves, a few milliseconds later: inside the next save.
-    if (Math.random() < 0.15) {
+    if (random() < 0.15) {
       scheduled = true;
-      setTimeout(kill, Math.random() * 150);
+      setTimeout(kill, random() * 150);
     }
-    const afterSaves = Math.floor(Math.random() * 4);
+    const afterSaves = Math.floor(random() * 4);
     child.stdout.setEncoding('utf8');
     child.stdout.on('data', (d: string) => {
       output += d;
@@ -58,7 +74,7 @@ function round(dir: string, id: string): Promise<Round> {
       }
       if (!scheduled && output.includes('READY') && savesThisRound >= afterSaves) {
         scheduled = true;
-        setTimeout(kill, Math.random() * 8);
+        setTimeout(kill, random() * 8);
       }
     });
     child.stderr.on('data', (d) => (output += String(d)));
@@ -97,6 +113,7 @@ function check(dir: string, id: string, mustHold: number): number {
 }
 
 async function lane(n: number, kills: number) {
+  const random = seeded(SEED + n);
   const dir = tempDir(`crash${n}`);
   const id = `crash-lane-${n}`;
   let done = 0;
@@ -105,7 +122,7 @@ async function lane(n: number, kills: number) {
   let midLoop = 0;
   const problems: string[] = [];
   while (done < kills) {
-    const r = await round(dir, id);
+    const r = await round(dir, id, random);
     if (!r.killed) {
       problems.push(`child ended by itself: ${r.output.slice(-300)}`);
       break;
@@ -138,11 +155,14 @@ describe('crash test', () => {
       const saved = lanes.reduce((s, l) => s + l.held, 0);
       const midLoop = lanes.reduce((s, l) => s + l.midLoop, 0);
       console.log(
-        `crash test: ${kills} kills (${midLoop} inside the save loop), ${broken} broken files, ${saved} marks kept across ${LANES} cases`,
+        `crash test (seed ${SEED}): ${kills} kills (${midLoop} inside the save loop), ${broken} broken files, ${saved} marks kept across ${LANES} cases`,
       );
-      expect(lanes.flatMap((l) => l.problems)).toEqual([]);
+      expect(
+        lanes.flatMap((l) => l.problems),
+        `seed ${SEED}`,
+      ).toEqual([]);
       expect(kills).toBe(KILLS);
-      expect(broken).toBe(0);
+      expect(broken, `seed ${SEED}`).toBe(0);
       // Most kills must land while saves are going on, or the test would prove little.
       expect(midLoop).toBeGreaterThan(kills / 3);
       for (const l of lanes) fs.rmSync(l.dir, { recursive: true, force: true });

@@ -1,10 +1,34 @@
+import { execFileSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import { listCases, releaseAllLocks, saveCase } from '../../src/store/index.js';
 import { sampleCase, tempDir } from './helpers.js';
+import { buildStoreBundle } from './bundle.js';
+import { NOBODY, assertPassableForNobody, runsAsRoot } from '../as-nobody.js';
 
 afterEach(() => releaseAllLocks());
+
+/** listCases(dir) in a child process run as the user nobody, the folder opened for reading. */
+async function listAsNobody(
+  dir: string,
+): Promise<{ id: string; problem?: string; case?: unknown }[]> {
+  const bundle = await buildStoreBundle('list');
+  try {
+    fs.chmodSync(dir, 0o755);
+    assertPassableForNobody(dir);
+    assertPassableForNobody(bundle);
+    const script =
+      'const m = await import(process.argv[1]); process.stdout.write(JSON.stringify(await m.listCases(process.argv[2])));';
+    const out = execFileSync(process.execPath, ['--input-type=module', '-e', script, bundle, dir], {
+      ...NOBODY,
+      encoding: 'utf8',
+    });
+    return JSON.parse(out);
+  } finally {
+    fs.rmSync(bundle, { force: true });
+  }
+}
 
 const write = (dir: string, name: string, content: unknown) =>
   fs.writeFileSync(
@@ -38,14 +62,6 @@ describe('listCases', () => {
     const unreadable = path.join(dir, 'locked-away.json');
     write(dir, 'locked-away.json', sampleCase('locked-away'));
     fs.chmodSync(unreadable, 0o000);
-    const rootCanRead = (() => {
-      try {
-        fs.readFileSync(unreadable);
-        return true;
-      } catch {
-        return false;
-      }
-    })();
 
     const list = await listCases(dir);
     const byId = Object.fromEntries(list.map((e) => [e.id, e]));
@@ -64,7 +80,12 @@ describe('listCases', () => {
     expect(byId['bad-mark']!.case).toBeUndefined();
     expect(byId.package!.problem).toMatch(/^format: /);
     expect(byId.folder!.problem).toBe('not a file');
-    if (!rootCanRead) expect(byId['locked-away']!.problem).toMatch(/cannot be read \(EACCES\)/);
+    // Root reads the file anyway: there the folder is listed by a child run as nobody.
+    const unreadableEntry = runsAsRoot()
+      ? (await listAsNobody(dir)).find((e) => e.id === 'locked-away')
+      : byId['locked-away'];
+    expect(unreadableEntry?.problem).toMatch(/cannot be read \(EACCES\)/);
+    expect(unreadableEntry?.case).toBeUndefined();
     // side files are not cases of their own
     expect(list.map((e) => path.basename(e.path)).sort()).toEqual(
       [

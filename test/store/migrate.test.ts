@@ -1,7 +1,8 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
-import { loadCase, loadCaseText, type LoadResult } from '../../src/case/load.js';
+import { loadCaseText, type LoadResult } from '../../src/case/load.js';
+import type { MigrationTable } from '../../src/case/migrate.js';
 import { listCases, openCase, releaseAllLocks, saveCase } from '../../src/store/index.js';
 import { readJson, tempDir } from './helpers.js';
 
@@ -9,11 +10,12 @@ afterEach(() => releaseAllLocks());
 
 /**
  * A test-only "version 0" (invented for this test: one skid with its marks and one drag factor
- * at the top level) and its migration to version 1, injected through openCase's `load` option.
+ * at the top level) and its migration to version 1. The real loader runs it: loadCaseText with
+ * this table in place of the (still empty) MIGRATIONS, injected through openCase's `load` option.
  * The store's part is what is tested: migrate in memory, write only on save, keep the original.
  */
-function fromV0(o: Record<string, any>): Record<string, unknown> {
-  const { skid, ...rest } = o;
+function fromV0(o: Record<string, unknown>): Record<string, unknown> {
+  const { skid, ...rest } = o as { skid: { marks: number[]; drag: number } };
   return {
     ...rest,
     version: 1,
@@ -27,17 +29,8 @@ function fromV0(o: Record<string, any>): Record<string, unknown> {
     ],
   };
 }
-function loadWithV0(text: string): LoadResult {
-  let json: any;
-  try {
-    json = JSON.parse(text);
-  } catch {
-    return loadCaseText(text);
-  }
-  if (json?.version !== 0) return loadCase(json);
-  const r = loadCase(fromV0(json));
-  return r.ok ? { ...r, migratedFrom: 0 } : r;
-}
+const WITH_V0: MigrationTable = { 0: fromV0 };
+const loadWithV0 = (text: string): LoadResult => loadCaseText(text, WITH_V0);
 
 const V0 = {
   format: 'skidcase-case',

@@ -3,7 +3,7 @@ import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import { loadCaseText } from '../../src/case/load.js';
 import { openCase, releaseAllLocks, restoreBackup, saveCase } from '../../src/store/index.js';
-import { readJson, sampleCase, tempDir } from './helpers.js';
+import { sampleCase, tempDir } from './helpers.js';
 
 afterEach(() => releaseAllLocks());
 
@@ -19,6 +19,7 @@ async function brokenCase(id: string, broken: (goodText: string) => string) {
   return { dir, file, text };
 }
 
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- edits a parsed JSON case at any depth
 const edit = (f: (o: any) => void) => (good: string) => {
   const o = JSON.parse(good);
   f(o);
@@ -142,7 +143,9 @@ describe('versions', () => {
     expect(r.ok).toBe(false);
     if (!r.ok) {
       expect(r.kind).toBe('newer');
-      expect(r.message).toMatch(/version: written by a newer skidcase \(file version 2; this one reads up to version 1\)/);
+      expect(r.message).toMatch(
+        /version: written by a newer skidcase \(file version 2; this one reads up to version 1\)/,
+      );
       expect(r.message).toContain(file);
     }
     expect(fs.readFileSync(file, 'utf8')).toBe(text);

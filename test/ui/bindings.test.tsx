@@ -40,6 +40,7 @@ async function exited(app: App) {
  * then an answer given here: the save finds the outside change and waits for a choice.
  */
 async function conflicted(): Promise<
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- a saved case file, read field by field
   App & { file: string; read(name?: string): Record<string, any> }
 > {
   const app = await home({

@@ -8,10 +8,9 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup } from 'ink-testing-library';
 import { BACKSPACE, ENTER, ESC, ctrl, renderApp } from './render-app.js';
 import { finishedSlide } from './fixtures.js';
+import { toDragSource, toLook, type App } from './walks.js';
 
 afterEach(() => cleanup());
-
-type App = ReturnType<typeof renderApp>;
 
 /** The question column of a frame as one line of text (the chain panel beside it cut off). */
 const said = (f: string): string =>
@@ -20,31 +19,6 @@ const said = (f: string): string =>
     .map((l) => l.split(/[│┌└]/)[0]!.trim())
     .join(' ')
     .replace(/\s+/g, ' ');
-
-/** A new case, through the case questions (imperial, posted 45 mph), to the look of the marks. */
-async function toLook(o: Parameters<typeof renderApp>[0] = {}, limit = '45'): Promise<App> {
-  const app = renderApp({ rows: 40, ...o });
-  await app.waitText('No cases here yet');
-  await app.press('n', 'Case or report reference');
-  for (let i = 0; i < 5; i++) await app.press(ENTER);
-  await app.waitText('Which units');
-  await app.press('f', 'Posted speed limit');
-  await app.answer(limit, 'Which vehicle');
-  await app.press(ENTER, 'What do the marks look like?');
-  return app;
-}
-
-/** On to the first segment's drag factor source of a one-surface slide of 4 marks of 60 ft. */
-async function toDragSource(app: App) {
-  await app.press('d', 'Were all four brakes working?');
-  await app.press('a', 'A short label');
-  await app.press(ENTER, 'Did the vehicle slide over one surface');
-  await app.press('o', 'How many tire marks');
-  await app.answer('4', 'Length of each mark');
-  await app.answer('4 x 60', 'Which slide distance');
-  await app.press(ENTER, 'A name for the surface');
-  await app.press(ENTER, 'Where does the drag factor');
-}
 
 /** The interview answers in the saved case file (none before the first save). */
 function savedAnswers(app: App): Record<string, { text: string } | undefined> {
@@ -72,7 +46,8 @@ describe('typing at a choice question', () => {
     await app.waitText('> zebra');
     const f = await app.press(ENTER, '✗');
     expect(f).toContain('"zebra" is not one of the choices: press d (straight,');
-    expect(f).toContain('y (curved, sideways, striated (yaw))');
+    // The list wraps beside the panel: read as one line.
+    expect(said(f)).toContain('y (curved, sideways, striated (yaw)), j (left the ground');
     expect(f).toContain('What do the marks look like?');
     // Esc clears the typed words and the message; typed again, Backspace edits them.
     app.stdin.write(ESC);

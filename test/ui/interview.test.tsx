@@ -142,15 +142,28 @@ describe('interview screen', () => {
     expect(input[0]).toContain(`${paste.slice(-20)}_`);
   });
 
-  it('keeps answers in memory and says so when a save fails', async () => {
+  it('keeps answers in memory, says so and stays on the question when a save fails', async () => {
+    let full = true;
     const app = renderApp({
-      services: (s) => ({ ...s, saveCase: () => ({ ok: false, message: 'disk is full' }) }),
+      services: (s) => ({
+        ...s,
+        saveCase: (...args) =>
+          full ? { ok: false, message: 'disk is full' } : s.saveCase(...args),
+      }),
     });
     await app.waitText('No cases here yet');
     await app.press('n', 'Case or report reference');
     const f = await app.answer('UI-8', 'disk is full');
+    // The answer is taken (counted) but the screen has not moved past it: it is not on disk.
     expect(f).toMatch(/Case · 1 of \d+ answered/);
-    await app.press(ctrl('b'), '> UI-8');
+    expect(f).toContain('Case or report reference');
+    expect(f).toContain('UI-8');
+    // Space freed: the save key writes it, and Enter goes on from the question.
+    full = false;
+    const saved = await app.press(ctrl('s'), 'saved');
+    expect(saved).not.toContain('disk is full');
+    const next = await app.press(ENTER, 'Date and time');
+    expect(next).not.toContain('Case or report reference');
   });
 
   it('does not leave with unsaved answers until asked twice', async () => {
@@ -247,12 +260,14 @@ describe('NO_COLOR', () => {
       chalk.level = 3;
       const coloured = renderApp({ color: true });
       await coloured.waitText('No cases here yet');
+      // eslint-disable-next-line no-control-regex -- a colour code begins with ESC [
       expect(coloured.lastFrame()).toMatch(/\u001B\[/);
       cleanup();
       expect(applyColorPolicy({ NO_COLOR: '1' })).toBe(false);
       const plain = renderApp({ color: false });
       await plain.waitText('No cases here yet');
       await plain.press('n', 'Case or report reference');
+      // eslint-disable-next-line no-control-regex -- no escape code at all
       expect(plain.lastFrame()).not.toMatch(/\u001B/);
     } finally {
       chalk.level = level;

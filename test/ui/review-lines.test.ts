@@ -29,7 +29,7 @@ const simple = load({
 });
 
 describe('reviewLines', () => {
-  const text = reviewLines(solveCase(simple), 80).map((l) => l.text);
+  const text = reviewLines(solveCase(simple), 80, { case: simple }).map((l) => l.text);
   const all = text.join('\n');
 
   it('shows the start speed and its range from S = sqrt(30 d f n)', () => {
@@ -69,7 +69,7 @@ describe('reviewLines', () => {
 
   it('keeps every line within the width', () => {
     for (const w of [60, 80])
-      for (const l of reviewLines(solveCase(simple), w))
+      for (const l of reviewLines(solveCase(simple), w, { case: simple }))
         expect([...l.text].length).toBeLessThanOrEqual(w);
   });
 });

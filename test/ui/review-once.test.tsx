@@ -1,6 +1,7 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { cleanup } from 'ink-testing-library';
-import { ENTER, ctrl, renderApp } from './render-app.js';
+import { ENTER, ctrl } from './render-app.js';
+import { toDragSource, toLook } from './walks.js';
 
 // Counts the review's heavy work (the limit comparison, the sampled speeds, the sensitivity)
 // while the screen renders again: after a resize, a scroll or a mode switch the answers are the
@@ -41,22 +42,8 @@ afterEach(() => cleanup());
 
 // Invented slide: 4 marks of 100 ft, f 0.70 entered, limit 40 mph, a distribution of 2000 draws.
 async function toReview() {
-  const app = renderApp({ rows: 40 });
-  await app.waitText('No cases here yet');
-  await app.press('n', 'Case or report reference');
-  for (let i = 0; i < 5; i++) await app.press(ENTER);
-  await app.waitText('Which units');
-  await app.press('f', 'Posted speed limit');
-  await app.answer('40', 'Which vehicle');
-  await app.press(ENTER, 'What do the marks look like?');
-  await app.press('d', 'Were all four brakes working?');
-  await app.press('a', 'A short label');
-  await app.press(ENTER, 'Did the vehicle slide over one surface');
-  await app.press('o', 'How many tire marks');
-  await app.answer('4', 'Length of each mark');
-  await app.answer('4 x 100', 'Which slide distance');
-  await app.press(ENTER, 'A name for the surface');
-  await app.press(ENTER, 'Where does the drag factor');
+  const app = await toLook({}, '40');
+  await toDragSource(app, { lengths: '4 x 100' });
   await app.press('e', 'Drag factor');
   await app.answer('0.70', 'Grade, the slide');
   await app.press('l', 'How did the slide end?');

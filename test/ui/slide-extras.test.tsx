@@ -1,34 +1,21 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup } from 'ink-testing-library';
-import { ENTER, ctrl, renderApp } from './render-app.js';
+import { ENTER, renderApp } from './render-app.js';
+import { toDragSource, toLook } from './walks.js';
 
 afterEach(() => cleanup());
 
 // Invented scenario: faint dashed marks, 4 marks of 100 ft, f 0.70 entered, limit 40 mph.
 async function toReaction(o: Parameters<typeof renderApp>[0] = {}) {
-  const app = renderApp({ rows: 40, ...o });
-  await app.waitText('No cases here yet');
-  await app.press('n', 'Case or report reference');
-  for (let i = 0; i < 5; i++) await app.press(ENTER);
-  await app.waitText('Which units');
-  await app.press('f', 'Posted speed limit');
-  await app.answer('40', 'Which vehicle');
-  await app.press(ENTER, 'What do the marks look like?');
+  const app = await toLook(o, '40');
   // Anti-lock marks are a slide: the brakes come next, saying why they matter.
-  let f = await app.press('a', 'Were all four brakes working?');
-  expect(f).toContain('scales the friction');
-  await app.press('a', 'A short label');
-  await app.press(ENTER, 'Did the vehicle slide over one surface');
-  await app.press('o', 'How many tire marks');
-  await app.answer('4', 'Length of each mark');
-  await app.answer('4 x 100', 'Which slide distance');
-  await app.press(ENTER, 'A name for the surface');
-  await app.press(ENTER, 'Where does the drag factor');
+  const brakes = await toDragSource(app, { look: 'a', lengths: '4 x 100' });
+  expect(brakes).toContain('scales the friction');
   await app.press('e', 'Drag factor');
   await app.answer('0.70', 'Grade, the slide');
   await app.press('l', 'How did the slide end?');
   await app.press('r', 'Where was the conflict point');
-  f = await app.answer('50', 'Perception-reaction time for this case');
+  const f = await app.answer('50', 'Perception-reaction time for this case');
   return { app, f };
 }
 

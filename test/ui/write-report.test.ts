@@ -5,6 +5,7 @@ import { trackedTempDir } from '../temp-dirs.js';
 import { loadCaseText } from '../../src/case/load.js';
 import { writeCaseReport } from '../../src/ui/write-report.js';
 import type { OpenCase } from '../../src/ui/services.js';
+import { sha256Of } from '../../src/io/sha256.js';
 
 const DEMO = path.join(__dirname, '../../sessions/demo-orchard-hill.json');
 
@@ -25,10 +26,27 @@ describe('"write report" from the review', () => {
     // The demo has a posted limit (35 mph), so the report compares stopping at the limit, with the
     // reaction time of the preference passed in (2 s), not the default 1.5 s:
     // 35 mph × 5280/3600 ft/s per mph × 2 s = 102.7 ft during perception-reaction at the limit.
-    expect(md).toContain("Perception-reaction time 2 s (the investigator's preference");
+    expect(md).toContain('Perception-reaction time 2 s (from the preferences');
     expect(md).toMatch(/At the limit: distance during perception-reaction \| 102\.7 ft/);
+    // The report records the file it was made from: the case file's bytes on disk.
+    expect(md).toContain(`case file SHA-256 ${sha256Of(readFileSync(file))}`);
     // Never over an existing file: the same moment again is refused.
     const again = await writeCaseReport(open, loaded.case, new Date('2026-12-01T10:00:00Z'), 2);
     expect(again.ok).toBe(false);
+  });
+
+  it('claims no file when the file on disk holds another version of the case', async () => {
+    const dir = trackedTempDir('skidcase-review-report-');
+    const file = path.join(dir, 'demo-orchard-hill.json');
+    copyFileSync(DEMO, file);
+    const loaded = loadCaseText(readFileSync(file, 'utf8'));
+    if (!loaded.ok) throw new Error('demo case must load');
+    const open = { case: loaded.case, file, release: async () => {} } as unknown as OpenCase;
+    // The screen's case differs from the file (as after a save that failed).
+    const shown = { ...loaded.case, postedLimit: 40 };
+    const r = await writeCaseReport(open, shown, new Date('2026-12-01T11:00:00Z'));
+    const md = readFileSync(r.ok ? r.path : '', 'utf8');
+    expect(md).not.toContain('SHA-256');
+    expect(md).toContain('Posted limit: 40 mph');
   });
 });

@@ -66,7 +66,5 @@ export const offsetsFieldV1 = z.looseObject(
   { error: 'offsets must be an object { "chord": n, "stations": [...] }' },
 );
 
-export type SamplingFieldV1 = z.infer<typeof samplingFieldV1>;
 export type TimeDistanceFieldV1 = z.infer<typeof timeDistanceFieldV1>;
-export type OffsetStationV1 = z.infer<typeof offsetStationV1>;
 export type OffsetsFieldV1 = z.infer<typeof offsetsFieldV1>;

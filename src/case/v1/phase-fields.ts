@@ -62,7 +62,6 @@ export const airborneV1 = z.looseObject({
 });
 
 export type AirborneV1 = z.infer<typeof airborneV1>;
-export type EndAnalysisV1 = z.infer<typeof endAnalysisV1>;
 
 type Linked = { id: string; kind: string; end?: { mode: string; analysis?: string } | undefined };
 type Issue = { path: (string | number)[]; message: string };

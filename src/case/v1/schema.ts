@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { finiteNumber, quantity, RULES } from '../quantity.js';
+import { decimalsIssue, finiteNumber, quantity, RULES } from '../quantity.js';
 import { MAX_ITEMS, tooManyMessage } from '../limits.js';
 import { offsetsFieldV1, samplingFieldV1, timeDistanceFieldV1 } from './extras-fields.js';
 import {
@@ -19,6 +19,13 @@ const need = (what: string, expected: string) => ({
     iss.input === undefined ? `${what} is required` : `${what} must be ${expected}`,
 });
 const q = quantity;
+/** How many decimals a figure was typed with (`0.70`: 2): for the record, never for the figures. */
+const typedDecimals = finiteNumber('decimals', 'a whole number from 0 to 9').superRefine(
+  (n, ctx) => {
+    const issue = decimalsIssue(n);
+    if (issue) ctx.addIssue({ code: 'custom', message: issue });
+  },
+);
 
 /** value/low/high of a quantity that may not have passed its own checks; undefined if unusable. */
 function endsOf(q: unknown): { value: number; low: number; high?: number } | undefined {
@@ -42,6 +49,7 @@ export const dragV1 = z
         low: finiteNumber('drag factor (low)').optional(),
         high: finiteNumber('drag factor (high)').optional(),
         note: text('note').optional(),
+        decimals: typedDecimals.optional(),
       }),
       z.looseObject({
         source: z.literal('table'),
@@ -52,6 +60,7 @@ export const dragV1 = z
         high: finiteNumber('drag factor (high)').optional(),
         band: z.enum(['under-30mph', 'over-30mph']).optional(),
         note: text('note').optional(),
+        decimals: typedDecimals.optional(),
       }),
       z.looseObject({
         source: z.literal('test-skids'),
@@ -394,11 +403,6 @@ export type VehicleV1 = z.infer<typeof vehicleV1>;
 export type SegmentV1 = z.infer<typeof segmentV1>;
 export type SkidV1 = z.infer<typeof skidV1>;
 export type YawV1 = z.infer<typeof yawV1>;
-export type {
-  SamplingFieldV1,
-  TimeDistanceFieldV1,
-  OffsetsFieldV1,
-  OffsetStationV1,
-} from './extras-fields.js';
+export type { TimeDistanceFieldV1, OffsetsFieldV1 } from './extras-fields.js';
 export type AnalysisV1 = z.infer<typeof analysisV1>;
-export type { AirborneV1, EndAnalysisV1 } from './phase-fields.js';
+export type { AirborneV1 } from './phase-fields.js';

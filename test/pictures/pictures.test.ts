@@ -2,11 +2,11 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { segmentLabels } from '../../src/extras/limit-inputs.js';
 import { sensitivity } from '../../src/extras/sensitivity.js';
-import { speedAlongSlideChart } from '../../src/extras/slide-chart.js';
-import { speedAlongSlideSvg, sensitivitySvg, yawArcSvg } from '../../src/extras/pictures-svg.js';
-import { textWidth } from '../../src/extras/text-fit.js';
-import { arcOffset, yawArcSketch } from '../../src/extras/yaw-sketch.js';
-import { caseOf, clean, solved } from './helpers.js';
+import { speedAlongSlideChart } from '../../src/pictures/slide-chart.js';
+import { speedAlongSlideSvg, sensitivitySvg, yawArcSvg } from '../../src/pictures/pictures-svg.js';
+import { textWidth } from '../../src/pictures/text-fit.js';
+import { arcOffset, yawArcSketch } from '../../src/pictures/yaw-sketch.js';
+import { caseOf, clean, solved } from '../extras/helpers.js';
 
 // Invented slide: 60 ft of asphalt at f 0.70 then 20 ft of gravel at f 0.50, level, n 1.
 // By hand: gravel alone S² = 30 × 20 × 0.5 = 300 (17.3 mph at the boundary); start

@@ -1,5 +1,5 @@
 import type { AnalysisSolution } from '../engine/types.js';
-import type { SensitivityRow } from './sensitivity.js';
+import type { SensitivityRow } from '../extras/sensitivity.js';
 import { profileOf, speedAlong } from './slide-profile.js';
 import { arcOffset } from './yaw-sketch.js';
 import { line, px, svgDocument, text } from './svg.js';

@@ -2,9 +2,7 @@
 
 /** Number of characters as a terminal shows them (code points; the pictures use no wide glyphs). */
 export function textWidth(s: string): number {
-  let n = 0;
-  for (const _ of s) n++;
-  return n;
+  return [...s].length;
 }
 
 /** Cuts `s` to at most `width` characters, ending in "…" when something was cut. */

@@ -1,4 +1,4 @@
-import type { SensitivityRow } from './sensitivity.js';
+import type { SensitivityRow } from '../extras/sensitivity.js';
 import { clip, padEnd, padStart, signed, textWidth } from './text-fit.js';
 
 export interface BarOptions {
