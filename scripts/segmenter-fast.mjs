@@ -8,6 +8,7 @@
 
 /** Characters that never join a neighbour into one grapheme cluster (UAX #29). */
 const SIMPLE =
+  // eslint-disable-next-line no-control-regex -- ESC is one of the characters that never joins
   /^[\n\u001B\u0020-\u007E\u00A0-\u02FF\u2010-\u2027\u2030-\u205E\u2190-\u21FF\u2200-\u22FF\u2500-\u25FF]*$/;
 
 class SimpleSegments {

@@ -73,6 +73,7 @@ function launch(): void {
     fresh = cachedData === undefined || script.cachedDataRejected === true;
   } catch {
     // Anything wrong with the cache machinery: run the bundle the ordinary way.
+    // eslint-disable-next-line @typescript-eslint/no-require-imports -- the launcher is CommonJS
     require(MAIN);
     return;
   }

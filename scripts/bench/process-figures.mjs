@@ -1,6 +1,6 @@
 // Figures measured on whole processes: the start screen in a pty, and `solve --json`.
 import { spawn } from 'node:child_process';
-import { copyFileSync, existsSync, mkdirSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
+import { copyFileSync, mkdirSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { interleaved, median } from './stats.mjs';
 import { benchEnv, spawnTimed, timeToSettledScreen } from './pty-timer.mjs';
@@ -41,6 +41,11 @@ async function quitAfterStart(ctx, env) {
   } finally {
     await s.kill();
   }
+}
+
+function ensureDir(d) {
+  mkdirSync(d, { recursive: true });
+  return d;
 }
 
 /** The start screen is settled once the list (or "No cases here yet") replaced its placeholder. */

@@ -71,8 +71,8 @@ export function spawnTimed(
 
 const tick = (ms) => new Promise((r) => setTimeout(r, ms));
 
-// eslint-disable-next-line no-control-regex
 const stripAnsi = (d) =>
+  // eslint-disable-next-line no-control-regex
   d.replace(/\u001B(\[[0-9;?]*[ -/]*[@-~]|\][^\u0007\u001B]*(\u0007|\u001B\\)|[@-Z\\-_])/g, '');
 
 /**
@@ -103,37 +103,4 @@ export async function timeToSettledScreen(argv, opts = {}) {
   const screen = s.screen();
   await s.kill();
   return { ms, first, screen };
-}
-
-/**
- * Key press to repainted frame: sends `key`, then times the first complete frame it causes (the
- * end of a synchronized-output frame, or else the first output), and the end of the whole burst
- * of output (to the last chunk before `quietMs` of silence: a renderer's trailing frame counts
- * there). Keys are spaced by the quiet wait, as a person's are, so each gets its own frame.
- */
-export async function keyToFrame(s, key, { quietMs = 60, timeoutMs = 5_000 } = {}) {
-  const before = s.chunks;
-  const frameBefore = s.lastFrameEnd;
-  let firstChunk;
-  const t0 = performance.now();
-  s.pty.write(key);
-  const deadline = t0 + timeoutMs;
-  for (;;) {
-    await tick(1);
-    const now = performance.now();
-    if (firstChunk === undefined && s.chunks > before) firstChunk = s.lastData;
-    if (s.chunks > before && now - s.lastData >= quietMs) {
-      const frame =
-        s.lastFrameEnd !== frameBefore && s.lastFrameEnd !== undefined
-          ? firstFrameEnd(s, t0)
-          : firstChunk;
-      return { frame: frame - t0, burst: s.lastData - t0 };
-    }
-    if (now > deadline) return undefined;
-  }
-}
-
-/** The first frame end recorded after t0 (frame ends are kept in order). */
-function firstFrameEnd(s, t0) {
-  return s.frameEnds?.find((t) => t >= t0) ?? s.lastFrameEnd;
 }
