@@ -27,8 +27,29 @@ export const MAX_SEGMENTS = 64;
 /** Analyses in play: the first, and one more for each "add another" answered yes in a row. */
 export function analysisCount(answers: Answers): number {
   let i = 0;
-  while (i < MAX_ANALYSES - 1 && choiceOf(answers, `a${i}.more`) === 'yes') i++;
+  while (
+    i < MAX_ANALYSES - 1 &&
+    (choiceOf(answers, `a${i}.more`) === 'yes' || fedByChain(answers, i))
+  )
+    i++;
   return i + 1;
+}
+
+/** The analysis (0-based) slide `i` runs on into, when its end says so. */
+export function endsInto(a: Answers, i: number): number | undefined {
+  if (choiceOf(a, `a${i}.end`) !== 'next') return undefined;
+  const n = Number(choiceOf(a, `a${i}.end.into`));
+  return Number.isInteger(n) && n >= 1 && n <= MAX_ANALYSES && n - 1 !== i ? n - 1 : undefined;
+}
+
+/**
+ * Whether an analysis up to `i` runs on into analysis `i + 1`: the marks it went on into are then
+ * part of the case whatever "Another analysis?" says, so they are asked for and never silently
+ * dropped with the slide that leads into them.
+ */
+export function fedByChain(a: Answers, i: number): boolean {
+  for (let k = 0; k <= i; k++) if (endsInto(a, k) === i + 1) return true;
+  return false;
 }
 
 /** What the marks look like. */

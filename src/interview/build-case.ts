@@ -5,10 +5,9 @@
 import type { Case } from '../case/load.js';
 import { APPEARANCE_NOTES } from '../engine/index.js';
 import { airborneV1, chainIssues } from '../case/v1/phase-fields.js';
-import { endsInto } from './questions-end.js';
 import { skidV1, yawV1, type AnalysisV1, type VehicleV1 } from '../case/v1/schema.js';
 import type { AnswerReader, CaseMeta, InterviewState, SavedInterview } from './types.js';
-import { analysisCount, choiceOf, markLook, unitsOf } from './answers-read.js';
+import { analysisCount, choiceOf, endsInto, markLook, unitsOf } from './answers-read.js';
 import { readAnswers } from './answer-values.js';
 import { analysisKeep, CASE_KEEP, kept, measuredByOffsets, VEHICLE_KEEP } from './kept-fields.js';
 import { brakesOf, dragOf, quantityOf, segmentsOf, slopeOf, text } from './build-parts.js';

@@ -5,14 +5,7 @@
 import { RULES } from '../case/quantity.js';
 import type { Answers, AnswerContext, Choice, ParseResult, Question } from './types.js';
 import { choiceQuestion, quantityQuestion, textQuestion } from './question-kinds.js';
-import { analysisCount, choiceOf, MAX_ANALYSES } from './answers-read.js';
-
-/** The analysis (0-based) slide `i` runs on into, when its end says so. */
-export function endsInto(a: Answers, i: number): number | undefined {
-  if (choiceOf(a, `a${i}.end`) !== 'next') return undefined;
-  const n = Number(choiceOf(a, `a${i}.end.into`));
-  return Number.isInteger(n) && n >= 1 && n <= MAX_ANALYSES && n - 1 !== i ? n - 1 : undefined;
-}
+import { analysisCount, choiceOf, endsInto, MAX_ANALYSES } from './answers-read.js';
 
 /** Analysis `k` named for a message: "analysis 2 (first arc)". */
 function named(a: Answers, k: number): string {

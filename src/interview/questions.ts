@@ -8,6 +8,7 @@ import {
   slideInParts,
   analysisCount,
   choiceOf,
+  fedByChain,
   isSlideLook,
   markLook,
   MAX_ANALYSES,
@@ -21,7 +22,6 @@ import { brakeQuestions, vehicleQuestions } from './questions-vehicle.js';
 import { slideQuestions } from './questions-slide.js';
 import { yawQuestions } from './questions-yaw.js';
 import { airborneQuestions } from './questions-airborne.js';
-import { endsInto } from './questions-end.js';
 import { samplingQuestions } from './questions-extras.js';
 
 /** Heading of analysis `i`'s section, naming the chain picked. */
@@ -130,12 +130,10 @@ function analysisQuestions(i: number, now: Answers, segments: number): Question[
       help: {
         why: 'A case may hold several analyses, e.g. a slide before an impact and yaw marks after it.',
       },
-      appliesWhen: (a) => inPlay(a) && i < MAX_ANALYSES - 1,
-      // Yes when an analysis already answered runs on into the next one, still to be entered.
-      defaultText: (a) => {
-        for (let k = 0; k <= i; k++) if (endsInto(a, k) === i + 1) return 'yes';
-        return 'no';
-      },
+      // Not asked when an analysis up to this one runs on into the next: those marks are part of
+      // the case already, and a "no" would leave the slide that leads into them without an end.
+      appliesWhen: (a) => inPlay(a) && i < MAX_ANALYSES - 1 && !fedByChain(a, i),
+      defaultText: () => 'no',
     }),
   ];
 }

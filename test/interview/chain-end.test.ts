@@ -49,7 +49,7 @@ describe('a slide that went on into the next set of marks', () => {
     expect(first.solution.speed.value).toBeGreaterThan(second.solution.speed.value);
   });
 
-  it('the next analysis is offered by default, and "Another analysis?" then defaults to yes', () => {
+  it('the next analysis is offered by default, and its questions follow without "Another analysis?"', () => {
     let s = start();
     const upTo = { ...TWO_SLIDES };
     delete (upTo as Record<string, string | undefined>)['a0.more'];
@@ -60,9 +60,27 @@ describe('a slide that went on into the next set of marks', () => {
     expect(s.cursor).toBe('a0.end.into');
     s = reduce(s, { type: 'accept-default' });
     expect(s.answers['a0.end.into']?.value).toBe('2');
-    expect(s.cursor).toBe('a0.more');
+    expect(s.cursor).toBe('a1.look');
+  });
+
+  it('a "no" to "Another analysis?" kept from before cannot drop the slide that runs on', () => {
+    // Answered "no more analyses" first, then changed the end to "went on into the next marks":
+    // the next analysis is asked for, and the slide is in the case once those marks are in.
+    const before = { ...TWO_SLIDES, 'a0.end': 'r', 'a0.more': 'n' };
+    let s = fill(start(), before);
+    expect(s.cursor).toBe('review');
+    expect(buildCase(s, { id: 'chain-t1' }).analyses).toHaveLength(1);
+    s = act(s, { type: 'jump', id: 'a0.end' }, { type: 'answer', text: 'o' });
+    expect(s.cursor).toBe('a0.end.into');
     s = reduce(s, { type: 'accept-default' });
-    expect(s.answers['a0.more']?.value).toBe('yes');
+    expect(s.cursor).toBe('a1.look');
+    s = fill(s, TWO_SLIDES);
+    const c = buildCase(s, { id: 'chain-t1' });
+    expect(c.analyses.map((a) => a.id)).toEqual(['skid-1', 'skid-2']);
+    expect((c.analyses[0] as { end?: unknown }).end).toEqual({
+      mode: 'analysis',
+      analysis: 'skid-2',
+    });
   });
 
   it('a loop is refused with a message naming it, and the earlier answer stays', () => {
