@@ -10,26 +10,15 @@ import { cleanup } from 'ink-testing-library';
 import { loadCaseText } from '../../src/case/load.js';
 import { solveCase } from '../../src/engine/index.js';
 import { formatRange } from '../../src/format/numbers.js';
-import { ENTER, renderApp } from './render-app.js';
+import { ENTER } from './render-app.js';
+import { toLook as toLookShared, type App } from './walks.js';
 
 afterEach(() => cleanup());
-
-type App = ReturnType<typeof renderApp>;
 
 const said = (f: string) => f.replace(/\s+/g, ' ');
 
 /** A new imperial case without a posted limit, on to the look of the marks. */
-async function toLook(): Promise<App> {
-  const app = renderApp({ rows: 60, columns: 120 });
-  await app.waitText('No cases here yet');
-  await app.press('n', 'Case or report reference');
-  for (let i = 0; i < 5; i++) await app.press(ENTER);
-  await app.waitText('Which units');
-  await app.press('f', 'Posted speed limit');
-  await app.press(ENTER, 'Which vehicle');
-  await app.press(ENTER, 'What do the marks look like?');
-  return app;
-}
+const toLook = (): Promise<App> => toLookShared({ rows: 60, columns: 120 }, '');
 
 function savedCase(app: App) {
   const file = fs.readdirSync(app.dir).find((n) => n.endsWith('.json'))!;

@@ -1,6 +1,7 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup } from 'ink-testing-library';
-import { ENTER, renderApp } from './render-app.js';
+import { ENTER } from './render-app.js';
+import { toLook } from './walks.js';
 
 afterEach(() => cleanup());
 
@@ -10,14 +11,7 @@ afterEach(() => cleanup());
 
 describe('the chain panel fills in as answers come', () => {
   it('a yaw: the radius after chord and ordinate, before the drag factor is asked', async () => {
-    const app = renderApp({ rows: 40, columns: 110 });
-    await app.waitText('No cases here yet');
-    await app.press('n', 'Case or report reference');
-    for (let i = 0; i < 5; i++) await app.press(ENTER);
-    await app.waitText('Which units');
-    await app.press('f', 'Posted speed limit');
-    await app.press(ENTER, 'Which vehicle');
-    await app.press(ENTER, 'What do the marks look like?');
+    const app = await toLook({ rows: 40, columns: 110 }, '');
     await app.press('y', 'A short label');
     await app.press(ENTER, 'How was the radius');
     let f = await app.press('c', 'Chord length');

@@ -4,7 +4,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup } from 'ink-testing-library';
 import { loadCaseText } from '../../src/case/load.js';
 import { reportCommand } from '../../src/commands/report.js';
-import { ENTER, renderApp } from './render-app.js';
+import { toDragSource, toLook } from './walks.js';
 
 afterEach(() => cleanup());
 
@@ -13,22 +13,8 @@ afterEach(() => cleanup());
 // the report's measurements as entered show the figure as it was typed.
 
 async function typedCase(drag: string) {
-  const app = renderApp({ rows: 40 });
-  await app.waitText('No cases here yet');
-  await app.press('n', 'Case or report reference');
-  for (let i = 0; i < 5; i++) await app.press(ENTER);
-  await app.waitText('Which units');
-  await app.press('f', 'Posted speed limit');
-  await app.press(ENTER, 'Which vehicle');
-  await app.press(ENTER, 'What do the marks look like?');
-  await app.press('a', 'Were all four brakes working?');
-  await app.press('a', 'A short label');
-  await app.press(ENTER, 'Did the vehicle slide over one surface');
-  await app.press('o', 'How many tire marks');
-  await app.answer('4', 'Length of each mark');
-  await app.answer('4 x 100', 'Which slide distance');
-  await app.press(ENTER, 'A name for the surface');
-  await app.press(ENTER, 'Where does the drag factor');
+  const app = await toLook({}, '');
+  await toDragSource(app, { look: 'a', lengths: '4 x 100' });
   await app.press('e', 'Drag factor');
   await app.answer(drag, 'Grade, the slide');
   await app.press('l', 'How did the slide end?');
