@@ -61,12 +61,21 @@ export function DraftPanel({
           </Box>
         ),
       )}
-      {view.result ? (
-        <Text color={TONE.result} bold>
-          {view.result}
-        </Text>
-      ) : null}
-      {view.note ? <Text color={TONE.muted}>{view.note}</Text> : null}
+      {/* Wrapped here as the step names are: Ink's own wrap keeps a space at a line's start. */}
+      {view.result
+        ? wrap(view.result, Math.max(10, inner)).map((l, k) => (
+            <Text key={`r${k}`} color={TONE.result} bold>
+              {l}
+            </Text>
+          ))
+        : null}
+      {view.note
+        ? wrap(view.note, Math.max(10, inner)).map((l, k) => (
+            <Text key={`n${k}`} color={TONE.muted}>
+              {l}
+            </Text>
+          ))
+        : null}
     </Box>
   );
 }

@@ -1,6 +1,6 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup } from 'ink-testing-library';
-import { ENTER } from './render-app.js';
+import { ENTER, renderApp } from './render-app.js';
 import { toLook } from './walks.js';
 
 afterEach(() => cleanup());
@@ -27,5 +27,22 @@ describe('the chain panel fills in as answers come', () => {
     f = (await app.answer('0.72 (0.68-0.76)', 'the surface tilts')).replace(/\s+/g, ' ');
     expect(f).toMatch(/Drag factor:[\s│]*0\.72 \(0\.68 to 0\.76\)/);
     expect(f).not.toContain('Analysis 1:');
+  });
+});
+
+describe('the chain panel wraps its note between words', () => {
+  it('no line of the panel starts with a space carried over from the wrap (90 columns)', async () => {
+    // At 90 columns the note "... Units; Marks; Another analysis?, and 1 more." breaks after
+    // "Another": Ink's own wrap moved the space to the start of the next line.
+    const app = renderApp({ rows: 30, columns: 90 });
+    await app.waitText('No cases here yet');
+    await app.press('n', 'Case or report reference');
+    const f = await app.answer('WALK-19', 'When did the crash happen?');
+    const inside = f
+      .split('\n')
+      .map((l) => /│ (.*?)\s*│$/.exec(l)?.[1])
+      .filter((l): l is string => l !== undefined);
+    expect(inside.join(' ')).toContain('Units; Marks; Another');
+    for (const l of inside) expect(l).not.toMatch(/^ /);
   });
 });
