@@ -18,10 +18,15 @@ const shared = {
   // and points the user cache folder of the programs they start at a temporary one
   setupFiles: ['test/setup/temp-cleanup.ts', 'test/setup/cache-dir.ts'],
   testTimeout: 30_000,
+  env: { NODE_ENV: 'production' },
   hookTimeout: 60_000,
 };
 
 export default defineConfig({
+  // React as it ships: the bundle is built with NODE_ENV=production (scripts/build-options.mjs),
+  // so the tests render with React's production build and the JSX transform that goes with it
+  // (the development build re-checks every element and costs about a tenth of a screen test).
+  oxc: { jsx: { runtime: 'automatic', development: false } },
   test: {
     // vitest's summary, then one plain line: N passed, N failed, N skipped
     reporters: ['default', './test/setup/count-reporter.ts'],
@@ -29,6 +34,7 @@ export default defineConfig({
     maxWorkers: 2,
     projects: [
       {
+        extends: true,
         // The pure and in-process tests share their workers' module cache (loading Ink, mathjs
         // and fast-check once per worker, not once per file): none of them changes a module.
         test: {
@@ -42,6 +48,7 @@ export default defineConfig({
         },
       },
       {
+        extends: true,
         test: {
           ...shared,
           name: 'mocking',
@@ -51,6 +58,7 @@ export default defineConfig({
         },
       },
       {
+        extends: true,
         test: {
           ...shared,
           name: 'processes',

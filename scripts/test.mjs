@@ -5,6 +5,7 @@
 import { spawn } from 'node:child_process';
 
 const bin = (name) => new URL(`../node_modules/.bin/${name}`, import.meta.url).pathname;
+const TSC7 = new URL('../node_modules/typescript7/bin/tsc', import.meta.url).pathname;
 
 /** Runs a command, keeping its output, resolving with its exit code and output. */
 function run(name, cmd, args, { echo }) {
@@ -26,7 +27,9 @@ function run(name, cmd, args, { echo }) {
 /** The code checks, one after another (each is short; together they fit beside the tests). */
 async function checks() {
   const steps = [
-    ['type check', bin('tsc'), ['--noEmit']],
+    // TypeScript 7 (the native compiler) type-checks in a fifth of the time; eslint and knip keep
+    // TypeScript 5 for its JavaScript API, which TypeScript 7 does not have.
+    ['type check', process.execPath, [TSC7, '--noEmit']],
     ['eslint', bin('eslint'), ['.']],
     [
       'prettier --check',

@@ -8,7 +8,7 @@ import {
   type Step,
 } from './types.js';
 
-export type { OffsetsFit, OffsetResidual } from './types.js';
+export type { OffsetsFit } from './types.js';
 
 /** Fixed decimals for the step's text ("—" for a number that is not finite). */
 function num(n: number, dp: number): string {

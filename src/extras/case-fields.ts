@@ -17,13 +17,7 @@ import {
  * are defined once, in src/case/v1/extras-fields.ts, and checked when the case loads; the readers
  * re-check a value (cheap) so that a hand-built Case gets the same path-naming failure.
  */
-export {
-  offsetsFieldV1,
-  samplingFieldV1,
-  timeDistanceFieldV1,
-  type OffsetsFieldV1,
-  type TimeDistanceFieldV1,
-} from '../case/v1/extras-fields.js';
+export { type OffsetsFieldV1, type TimeDistanceFieldV1 } from '../case/v1/extras-fields.js';
 
 function read<T>(schema: z.ZodType<T>, value: unknown, path: string): Outcome<T | undefined> {
   if (value === undefined) return ok(undefined);

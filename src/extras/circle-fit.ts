@@ -1,10 +1,2 @@
 /** Moved to the engine (the yaw solver fits circles too); kept here so existing imports work. */
-export {
-  circleThroughThree,
-  kasaFit,
-  geometricFit,
-  geometricSsr,
-  type Circle,
-  type GeometricFit,
-  type Point,
-} from '../engine/circle-fit.js';
+export { circleThroughThree, kasaFit, geometricFit, type Point } from '../engine/circle-fit.js';

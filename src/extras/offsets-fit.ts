@@ -8,12 +8,7 @@ import {
 } from '../engine/offsets-fit.js';
 import type { Outcome } from '../engine/types.js';
 
-export type {
-  OffsetStation,
-  OffsetsFit,
-  OffsetsFitOptions,
-  OffsetResidual,
-} from '../engine/offsets-fit.js';
+export type { OffsetStation, OffsetsFit, OffsetsFitOptions } from '../engine/offsets-fit.js';
 
 /**
  * The least-squares circle through a chord's ends and its offset stations (the fit itself now

@@ -9,8 +9,6 @@ import { firstOpenIn, REVIEW } from './navigate.js';
 import { buildCase } from './build-case.js';
 import { answersFromCase } from './answers-from-case.js';
 
-export { answersFromCase } from './answers-from-case.js';
-
 const savedSchema = z.object({
   version: z.literal(1),
   answers: z.record(z.string(), z.object({ text: z.string(), value: z.unknown().optional() })),

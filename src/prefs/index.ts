@@ -1,4 +1,4 @@
 /** User preferences (conf): units, reaction time, sessions folder, hints, mode. Never cases. */
-export { loadPrefs, prefsFile, CONFIG_DIR_ENV, type PrefsOptions } from './prefs.js';
+export { loadPrefs, prefsFile, CONFIG_DIR_ENV } from './prefs.js';
 export { savePref } from './save.js';
 export { DEFAULT_PREFS } from './schema.js';

@@ -3,9 +3,11 @@
  * right for the characters the report uses (letters, digits, ×, ±, √, box-drawing blocks).
  */
 
-/** Display width of a line, in columns. */
+const SURROGATE = /[\uD800-\uDFFF]/;
+
+/** Display width of a line, in columns (code points; one per UTF-16 unit when none is astral). */
 export function width(s: string): number {
-  return [...s].length;
+  return SURROGATE.test(s) ? [...s].length : s.length;
 }
 
 /** Pads (or leaves) `s` to `w` columns, on the right or on the left. */

@@ -17,7 +17,7 @@ import { fileURLToPath } from 'node:url';
 import { childEnv } from './env.js';
 import { Term } from './term.js';
 
-export { Term, type ExitInfo, type ScreenTest, type WaitOptions } from './term.js';
+export { Term } from './term.js';
 
 /**
  * The built CLI the tests drive (`npm test` builds it before vitest starts). SKIDCASE_E2E_BINARY

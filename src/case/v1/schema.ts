@@ -403,6 +403,5 @@ export type VehicleV1 = z.infer<typeof vehicleV1>;
 export type SegmentV1 = z.infer<typeof segmentV1>;
 export type SkidV1 = z.infer<typeof skidV1>;
 export type YawV1 = z.infer<typeof yawV1>;
-export type { TimeDistanceFieldV1, OffsetsFieldV1 } from './extras-fields.js';
 export type AnalysisV1 = z.infer<typeof analysisV1>;
 export type { AirborneV1 } from './phase-fields.js';
