@@ -6,6 +6,7 @@
 import type { Case } from '../case/load.js';
 import { canonicalJson, caseFieldsOf, diffCases } from '../case/revision-diff.js';
 import type { ChangeV1, RevisionV1 } from '../case/v1/schema.js';
+import { CREATED_NOTE } from '../case/v1/revision-fields.js';
 import { sha256Of } from '../io/sha256.js';
 
 /** The newest entries a file keeps; older ones are dropped and counted in `revisionsDropped`. */
@@ -13,8 +14,6 @@ export const REVISIONS_KEPT = 500;
 /** The most changes one entry lists; the rest are counted in its `changesDropped`. */
 export const CHANGES_KEPT = 200;
 
-/** The note of a new case's first entry. */
-export const CREATED_NOTE = 'created';
 /** The note of a hand edit whose changes cannot be listed. */
 export const HAND_EDIT_UNKNOWN_NOTE =
   'the file was changed outside skidcase; what changed is unknown (the fields skidcase last wrote are not on record)';

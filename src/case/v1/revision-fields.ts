@@ -11,6 +11,9 @@ import { MAX_ITEMS, tooManyMessage } from '../limits.js';
 /** Who made a revision: skidcase's own save, or a change to the file it found and did not make. */
 export const REVISION_BY = ['interview', 'hand edit'] as const;
 
+/** The note of a new case's first entry (it lists no changes). */
+export const CREATED_NOTE = 'created';
+
 /** An ISO 8601 time as JavaScript writes it, with a zone: `2026-12-01T10:00:00.000Z`. */
 const isoTime = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d+)?)?(Z|[+-]\d{2}:\d{2})$/;
 
