@@ -4,7 +4,7 @@ import path from 'node:path';
 import { promisify } from 'node:util';
 import { afterEach, describe, expect, it } from 'vitest';
 import { releaseAllLocks, saveCase } from '../../src/store/index.js';
-import { runReport } from './helpers.js';
+import { runReport, runSolve } from './helpers.js';
 import { readJson, sampleCase, tempDir } from '../store/helpers.js';
 
 // Through the built program, as a user calls it (`npm test` builds dist/ first).
@@ -95,6 +95,18 @@ describe('skidcase history', () => {
     expect(r.code).toBe(2);
     expect(r.err.split('\n')[0]).toBe('revisions[0].by: by must be "interview" or "hand edit"');
     expect(r.err).toContain('revisions[0].changes');
+  });
+
+  it('solve reads no figure from the trail and warns nothing about it', async () => {
+    const { file } = await caseWithTrail('ash-5');
+    const withTrail = await runSolve(file, true);
+    const bare = path.join(path.dirname(file), 'bare.json');
+    const { revisions: _r, ...rest } = readJson(file);
+    fs.writeFileSync(bare, JSON.stringify(rest));
+    const without = await runSolve(bare, true);
+    expect(withTrail.code).toBe(0);
+    expect(JSON.parse(withTrail.out)).toEqual(JSON.parse(without.out));
+    expect(JSON.parse(withTrail.out).warnings).toEqual([]);
   });
 
   it('is in --help', async () => {
