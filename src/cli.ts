@@ -18,6 +18,7 @@ const NO_TTY = [
   'Without a terminal, work with case files directly:',
   '  skidcase solve FILE [--json]      the formula chain (or JSON) for a case file',
   '  skidcase report FILE [--out PATH] the case report',
+  "  skidcase history FILE|ID          the case's trail of changes",
   'The case file format is in docs/case-file.md.',
 ].join('\n');
 
@@ -121,6 +122,15 @@ function program({ Command, Option }: typeof import('commander')): Command {
         setExit(await reportCommand(target, opts, io));
       },
     );
+  p.command('history <case>')
+    .description(
+      'list the trail of changes of a case file or a case id: each revision, who made it, each field from → to',
+    )
+    .action(async (target: string) => {
+      const where = await sessions(p.opts().sessions);
+      const { historyCommand } = await import('./commands/history.js');
+      setExit(await historyCommand(target, where.dir, io));
+    });
   p.command('verify <report> [case]')
     .description(
       'say whether a report was made from a case file (exit 0 it was, 1 it differs, 2 unreadable)',

@@ -19,6 +19,8 @@ export const KNOWN = {
     'vehicle',
     'analyses',
     'interview',
+    'revisions',
+    'revisionsDropped',
   ],
   details: ['reference', 'occurred', 'location', 'investigator', 'notes'],
   vehicle: ['label', 'frontAxleShare', 'trackWidth', 'brakes'],
@@ -66,6 +68,8 @@ export const KNOWN = {
   timeDistance: ['reactionTime', 'conflictAt'],
   offsets: ['chord', 'stations'],
   station: ['at', 'offset'],
+  revision: ['at', 'by', 'changes', 'note', 'changesDropped', 'sha256'],
+  change: ['field', 'from', 'to'],
 } as const;
 
 type Obj = Record<string, unknown>;
@@ -144,6 +148,10 @@ export function unknownFields(c: CaseV1): string[] {
       }
       drag(a.drag as Obj, `${p}.drag`, out);
     }
+  });
+  c.revisions?.forEach((r, i) => {
+    extra(r, KNOWN.revision, `revisions[${i}]`, out);
+    r.changes.forEach((ch, j) => extra(ch, KNOWN.change, `revisions[${i}].changes[${j}]`, out));
   });
   return out;
 }

@@ -8,6 +8,7 @@ import type { Answers, InterviewState } from './types.js';
 import { firstOpenIn, REVIEW } from './navigate.js';
 import { buildCase } from './build-case.js';
 import { answersFromCase } from './answers-from-case.js';
+import { canonicalJson, caseFieldsOf } from '../case/revision-diff.js';
 
 const savedSchema = z.object({
   version: z.literal(1),
@@ -16,20 +17,8 @@ const savedSchema = z.object({
   mode: z.enum(['guided', 'brisk']),
 });
 
-/** JSON with object keys sorted, so two cases compare by content and not by key order. */
-function canonical(x: unknown): string {
-  return JSON.stringify(x, (_k, v: unknown) =>
-    v && typeof v === 'object' && !Array.isArray(v)
-      ? Object.fromEntries(
-          Object.entries(v as Record<string, unknown>).sort(([a], [b]) => (a < b ? -1 : 1)),
-        )
-      : v,
-  );
-}
-
-/** What the case says, apart from the interview and the timestamps. */
-const figuresOf = (c: Case) =>
-  canonical({ ...c, interview: undefined, created: undefined, updated: undefined });
+/** What the case says, apart from the interview, the timestamps and its trail of revisions. */
+const figuresOf = (c: Case) => canonicalJson({ ...caseFieldsOf(c), created: undefined });
 
 export const EDITED_NOTICE =
   'The file was changed outside the interview since it was saved: the answers are read again from its fields.';
@@ -40,20 +29,36 @@ export const EDITED_NOTICE =
  * `solve` reads) and the answers are derived from them, with a notice.
  */
 export function stateFromCase(c: Case): InterviewState {
-  const saved = savedSchema.safeParse(c.interview);
-  if (saved.success) {
-    const { answers, cursor, mode } = saved.data as {
-      answers: Answers;
-      cursor: string;
-      mode: 'guided' | 'brisk';
-    };
-    const st: InterviewState = { answers, cursor, undo: [], mode, explain: mode === 'guided' };
-    const meta = { id: c.id, units: c.units, ...(c.created ? { created: c.created } : {}) };
-    if (figuresOf(buildCase(st, meta)) === figuresOf(c)) return st;
+  const saved = savedState(c);
+  if (saved) {
+    const { st, rebuilt } = saved;
+    if (figuresOf(rebuilt) === figuresOf(c)) return st;
+    const { mode } = st;
     return { ...fromFields(c), mode, explain: mode === 'guided', notice: EDITED_NOTICE };
   }
   return fromFields(c);
 }
+
+/** The saved interview's state and the case its answers build, when the case has one. */
+function savedState(c: Case): { st: InterviewState; rebuilt: Case } | undefined {
+  const saved = savedSchema.safeParse(c.interview);
+  if (!saved.success) return undefined;
+  const { answers, cursor, mode } = saved.data as {
+    answers: Answers;
+    cursor: string;
+    mode: 'guided' | 'brisk';
+  };
+  const st: InterviewState = { answers, cursor, undo: [], mode, explain: mode === 'guided' };
+  const meta = { id: c.id, units: c.units, ...(c.created ? { created: c.created } : {}) };
+  return { st, rebuilt: buildCase(st, meta) };
+}
+
+/**
+ * The case the saved interview answers build: what skidcase last wrote, when the fields were
+ * since edited by hand (the store checks it against the trail's SHA-256 before it uses it as the
+ * from-values of a hand edit). Undefined for a case without a saved interview.
+ */
+export const caseFromSavedAnswers = (c: Case): Case | undefined => savedState(c)?.rebuilt;
 
 function fromFields(c: Case): InterviewState {
   const answers = answersFromCase(c);

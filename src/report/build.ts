@@ -20,6 +20,7 @@ import { extrasSections } from './extras-section.js';
 import { speedText } from './figures-text.js';
 import { formatNumber } from '../engine/number-text.js';
 import { measurementTables } from './measurements.js';
+import { revisionHeading, revisionLines, trailSummary } from '../format/revision-text.js';
 
 /** What the report says about itself, and settings of its further sections. */
 export interface ReportMeta {
@@ -108,10 +109,23 @@ function limitSection(sol: CaseSolution): Section | undefined {
   ]);
 }
 
+/** The case's trail of revisions, oldest first: one heading and its changes per revision. */
+function revisionsSection(c: Case): Section {
+  const first = (c.revisionsDropped ?? 0) + 1;
+  return section('revisions', 'Revisions', [
+    para(trailSummary(c)),
+    ...(c.revisions ?? []).flatMap((r, i): Block[] => [
+      para(revisionHeading(r, first + i), 'strong'),
+      list(revisionLines(r)),
+    ]),
+  ]);
+}
+
 /**
  * The case report as a document: details, results, measurements as entered, each analysis step by
  * step (with sensitivity, sampling, time and distance and pictures where they apply), the posted
- * limit comparison, file warnings, the cautions and where the figures come from. Pure: every
+ * limit comparison, file warnings, the cautions, where the figures come from and, last, the
+ * case's trail of revisions. Pure: every
  * figure is read from the result document (the engine's steps and ranges, and the extras built
  * once by caseResult); nothing is computed here.
  * @example
@@ -156,6 +170,7 @@ export function buildReport(result: CaseResult, meta: ReportMeta): ReportDoc {
         : []),
     ]),
   );
+  sections.push(revisionsSection(c));
   return {
     format: REPORT_FORMAT,
     version: REPORT_VERSION,

@@ -1,5 +1,6 @@
 import { sha256Of } from '../io/sha256.js';
 import type { Stats } from 'node:fs';
+import type { Case } from '../case/load.js';
 
 /**
  * What this process knows about case files it has read or written: the identity of the last
@@ -20,6 +21,8 @@ interface Known {
   migratedFrom?: number;
   /** The case's `created`, so a caller that drops it does not reset it. */
   created?: string;
+  /** The case in those bytes: what the next save's revision compares with. */
+  case?: Case;
   /** Opened read-only: saves are refused. */
   readOnly?: string;
 }

@@ -126,6 +126,7 @@ export async function openCase(dirOrPath: string, opts: OpenOptions = {}): Promi
   known.hash = hash;
   known.readOnly = readOnlyReason;
   known.created = loaded.case.created;
+  known.case = loaded.case;
   if (loaded.migratedFrom !== undefined) known.migratedFrom = loaded.migratedFrom;
   else delete known.migratedFrom;
 

@@ -64,6 +64,7 @@ export async function restoreBackup(dir: string, id: string): Promise<RestoreRes
       const known = getKnown(file);
       known.sig = sigOf(await fs.stat(file));
       known.hash = hashOf(bytes);
+      known.case = loaded.case;
       delete known.readOnly;
       return result;
     } catch (e) {

@@ -12,12 +12,13 @@ import { errCode } from './errno.js';
 import { disk } from './disk.js';
 import { writeVerifiedSync } from './verified-write.js';
 import { describeWriteError, type WriteProblem } from '../io/write-error.js';
+import { withRevision, type Before } from './revisions.js';
 
 export type SaveResult =
   | {
       ok: true;
       path: string;
-      /** The case as written (with `updated`, and `created` when it had none). */
+      /** The case as written (with `updated`, `created` when it had none, and its trail). */
       case: Case;
       /** Where the previous good version was kept, when there was one. */
       backup?: string;
@@ -50,11 +51,17 @@ export interface SaveOptions {
    * `<id>.outside-<time>.json` and as the backup.
    */
   overwriteChanged?: boolean;
+  /**
+   * The case skidcase last wrote, rebuilt by the caller (the interview, from its saved answers):
+   * asked for only when the file's fields are not the ones its trail says skidcase wrote, to list
+   * what a hand edit changed (docs/case-file.md, "Revisions").
+   */
+  lastWritten?: () => Case | undefined;
 }
 
 /**
  * Saves a case as `<dir>/<id>.json`: validates it (an invalid case is never written), sets
- * `updated`, keeps the previous good version as `<id>.json.bak`, and writes the new one through a
+ * `updated`, adds to its trail of revisions what changed since the file on disk (revisions.ts), keeps the previous good version as `<id>.json.bak`, and writes the new one through a
  * checked temp file (see verified-write.ts), so a kill, a full disk or a short write at any instant
  * leaves the old or the new file whole. Takes the case's write lock on first save; refuses while
  * another skidcase holds it. The input is not changed; the saved case is returned.
@@ -105,14 +112,15 @@ export function saveCaseSync(dir: string, c: Case, opts: SaveOptions = {}): Save
 interface Prepared {
   file: string;
   next: Case;
-  bytes: Buffer;
+  at: string;
 }
 
 function prepare(dir: string, c: Case, exact?: string): Prepared | (SaveResult & { ok: false }) {
   const where = caseFilePath(dir, (c as { id: string }).id);
   if (!where.ok) return { ok: false, kind: 'path', message: where.message };
   const file = exact ? path.resolve(exact) : where.path;
-  const next = stamp(c, new Date().toISOString(), getKnown(file).created);
+  const at = new Date().toISOString();
+  const next = stamp(c, at, getKnown(file).created);
   const parsed = caseV1.safeParse(next);
   if (!parsed.success) {
     const issues = fromZod(parsed.error);
@@ -123,7 +131,7 @@ function prepare(dir: string, c: Case, exact?: string): Prepared | (SaveResult &
       message: `not saved, the case is not valid: ${issues.map(describeIssue).join('; ')}`,
     };
   }
-  return { file, next, bytes: Buffer.from(JSON.stringify(next, null, 2) + '\n', 'utf8') };
+  return { file, next, at };
 }
 
 const readOnly = (file: string, why: string): SaveResult & { ok: false } => ({
@@ -154,10 +162,16 @@ function writeLocked(file: string, p: Prepared, opts: SaveOptions): SaveResult {
     const result: SaveResult = { ok: true, path: file, case: p.next };
     const onDisk = lookAtPrevious(file, known, result, opts);
     if (onDisk && 'ok' in onDisk) return onDisk;
-    writeVerifiedSync(file, p.bytes, () => onDisk?.keep());
+    // No file (a new case): the case this process last knew, if it vanished while open.
+    const before: Before = onDisk?.before ?? (known.case ? { onDisk: known.case } : {});
+    const next = withRevision(p.next, before, p.at);
+    const bytes = Buffer.from(JSON.stringify(next, null, 2) + '\n', 'utf8');
+    result.case = next;
+    writeVerifiedSync(file, bytes, () => onDisk?.keep());
     known.sig = sigOf(disk.lstatSync(file));
-    known.hash = hashOf(p.bytes);
-    known.created = p.next.created;
+    known.hash = hashOf(bytes);
+    known.created = next.created;
+    known.case = next;
     return result;
   } catch (e) {
     return ioFailure(e);
@@ -177,7 +191,7 @@ function lookAtPrevious(
   known: ReturnType<typeof getKnown>,
   out: SaveResult & { ok: true },
   opts: SaveOptions,
-): (SaveResult & { ok: false }) | { keep(): void } | undefined {
+): (SaveResult & { ok: false }) | { keep(): void; before: Before } | undefined {
   let bytes: Buffer;
   try {
     bytes = disk.readFileSync(file);
@@ -192,9 +206,20 @@ function lookAtPrevious(
       message: `not saved: ${file} already exists and was not opened here; open it first, or use another id`,
     };
   const ours = known.hash !== undefined && hashOf(bytes) === known.hash;
-  if (!ours) {
+  const lastWritten = opts.lastWritten ? { lastWritten: opts.lastWritten } : {};
+  let before: Before;
+  if (ours) before = { onDisk: known.case ?? caseIn(bytes), ...lastWritten };
+  else {
     const theirs = loadCaseText(bytes.toString('utf8'));
-    if (!theirs.ok) return { keep: () => void (out.keptBroken = moveAsideSync(file)) };
+    // Not a case: moved aside, and the trail goes on from the last good version known here.
+    if (!theirs.ok)
+      return {
+        keep: () => void (out.keptBroken = moveAsideSync(file)),
+        before: known.case ? { onDisk: known.case } : {},
+      };
+    before = known.case
+      ? { onDisk: theirs.case, ours: known.case }
+      : { onDisk: theirs.case, ...lastWritten };
     if (!opts.overwriteChanged)
       return {
         ok: false,
@@ -205,6 +230,7 @@ function lookAtPrevious(
   }
   // Run once the new copy is written and checked, just before it replaces this one.
   return {
+    before,
     keep() {
       if (!ours)
         out.keptOutside = linkUnderFreeNameSync(file, (n) =>
@@ -220,6 +246,12 @@ function lookAtPrevious(
       out.backup = bak;
     },
   };
+}
+
+/** The case in bytes this process wrote or read as a good case (so they load). */
+function caseIn(bytes: Buffer): Case | undefined {
+  const r = loadCaseText(bytes.toString('utf8'));
+  return r.ok ? r.case : undefined;
 }
 
 /** Moves a broken case file to `<id>.broken-<time>.json` (or -2, -3 ...) and returns where. */

@@ -27,6 +27,7 @@ import type { InterviewPort } from './interview-port.js';
 import type { CaseRow, Opened, OpenCase, Saved, Services } from './services.js';
 import { atLeast } from './review-lines.js';
 import { writeCaseReport } from './write-report.js';
+import { caseFromSavedAnswers } from '../interview/from-case.js';
 
 export interface LiveOptions {
   sessionsDir: string;
@@ -194,7 +195,12 @@ export function liveServices(o: LiveOptions): Services {
     },
     saveCase(open, c, opts = {}) {
       // Back to the file it was opened from (its lock and backup), whatever the file is called.
-      const r = saveCaseSync(path.dirname(open.file), c, { ...opts, file: open.file });
+      const r = saveCaseSync(path.dirname(open.file), c, {
+        ...opts,
+        file: open.file,
+        // For a hand edit found in the file as opened: what the interview last wrote to it.
+        lastWritten: () => caseFromSavedAnswers(open.case),
+      });
       if (!r.ok) {
         const failed: Saved = { ok: false, message: r.message };
         if (r.problem) failed.problem = r.problem;

@@ -14,18 +14,20 @@ import { writeFailureText } from '../report/write-files.js';
 import { solveAsFile } from './interview-live.js';
 import type { OpenCase } from './services.js';
 
-/** The same case apart from the save's own stamps (`created`, `updated`), in any key order. */
+/**
+ * The same case apart from the save's own stamps (`created`, `updated`) and the trail of
+ * revisions the save keeps (the screen's case never carries it), in any key order.
+ */
 function sameContent(a: Case, b: Case): boolean {
   const plain = (c: Case) => {
-    const {
-      created: _c,
-      updated: _u,
-      ...rest
-    } = c as Case & { created?: string; updated?: string };
+    const { created: _c, updated: _u, revisions: _r, revisionsDropped: _d, ...rest } = c;
     return stable(rest);
   };
   return plain(a) === plain(b);
 }
+
+const withoutUndefined = <T extends object>(o: T): Partial<T> =>
+  Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as Partial<T>;
 
 /** JSON with object keys sorted, so that key order does not count. */
 function stable(v: unknown): string {
@@ -59,14 +61,21 @@ export async function writeCaseReport(
   const settings = reactionTime !== undefined ? { reactionTime } : {};
   // The file's fingerprint, only when the file on disk holds this very case (a failed save
   // leaves an older one there: a report must not claim a file it was not made from).
-  const sha = await readFile(open.file).then(
+  const disk = await readFile(open.file).then(
     (bytes) => {
-      const disk = loadCaseText(bytes.toString('utf8'));
-      return disk.ok && sameContent(disk.case, c) ? sha256Of(bytes) : undefined;
+      const loaded = loadCaseText(bytes.toString('utf8'));
+      if (!loaded.ok) return undefined;
+      return { case: loaded.case, sha: sameContent(loaded.case, c) ? sha256Of(bytes) : undefined };
     },
     () => undefined,
   );
-  const doc = buildReport(caseResult(c, solveAsFile(c), settings), {
+  const sha = disk?.sha;
+  // The trail is the file's: the save keeps it, the screen's case does not carry it.
+  const trail = disk
+    ? { revisions: disk.case.revisions, revisionsDropped: disk.case.revisionsDropped }
+    : {};
+  const reported = { ...c, ...withoutUndefined(trail) } as Case;
+  const doc = buildReport(caseResult(reported, solveAsFile(reported), settings), {
     toolVersion: toolVersion(),
     generatedAt: at.toISOString(),
     caseFile: open.file,

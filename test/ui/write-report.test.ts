@@ -6,6 +6,7 @@ import { loadCaseText } from '../../src/case/load.js';
 import { writeCaseReport } from '../../src/ui/write-report.js';
 import type { OpenCase } from '../../src/ui/services.js';
 import { sha256Of } from '../../src/io/sha256.js';
+import { releaseAllLocks, saveCase } from '../../src/store/index.js';
 
 const DEMO = path.join(__dirname, '../../sessions/demo-orchard-hill.json');
 
@@ -48,5 +49,26 @@ describe('"write report" from the review', () => {
     const md = readFileSync(r.ok ? r.path : '', 'utf8');
     expect(md).not.toContain('SHA-256');
     expect(md).toContain('Posted limit: 40 mph');
+  });
+
+  it('ends with the file’s trail of revisions, which the screen’s case does not carry, and still records the file', async () => {
+    const dir = trackedTempDir('skidcase-review-report-');
+    const loaded = loadCaseText(readFileSync(DEMO, 'utf8'));
+    if (!loaded.ok) throw new Error('demo case must load');
+    const first = { ...loaded.case, id: 'trail-1' };
+    await saveCase(dir, first);
+    const saved = await saveCase(dir, { ...first, postedLimit: 40 });
+    await releaseAllLocks();
+    if (!saved.ok) throw new Error(saved.message);
+    const file = path.join(dir, 'trail-1.json');
+    // What the screen holds: the case the answers build, without the trail the save added.
+    const { revisions: _r, ...shown } = saved.case;
+    const open = { case: saved.case, file, release: async () => {} } as unknown as OpenCase;
+    const r = await writeCaseReport(open, shown, new Date('2026-12-01T12:00:00Z'));
+    const md = readFileSync(r.ok ? r.path : '', 'utf8');
+    expect(md).toContain(`case file SHA-256 ${sha256Of(readFileSync(file))}`);
+    const tail = md.slice(md.lastIndexOf('Revisions'));
+    expect(tail).toContain('2 revisions recorded');
+    expect(tail).toContain('postedLimit: 35 → 40');
   });
 });

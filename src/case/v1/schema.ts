@@ -9,6 +9,7 @@ import {
   endAnalysisV1,
   pointsFieldV1,
 } from './phase-fields.js';
+import { revisionsDroppedFieldV1, revisionsFieldV1 } from './revision-fields.js';
 
 /** Case file version 1: the contract in docs/case-file.md. Unknown fields are kept (loose objects). */
 
@@ -318,6 +319,8 @@ export const caseV1 = z
       .array(analysisV1, need('analyses', 'a list'))
       .max(MAX_ITEMS, tooManyMessage('analyses')),
     interview: z.unknown().optional(),
+    revisions: revisionsFieldV1.optional(),
+    revisionsDropped: revisionsDroppedFieldV1.optional(),
   })
   .superRefine((c, ctx) => {
     // Cross-field rules: each names the field that is wrong.
@@ -405,3 +408,4 @@ export type SkidV1 = z.infer<typeof skidV1>;
 export type YawV1 = z.infer<typeof yawV1>;
 export type AnalysisV1 = z.infer<typeof analysisV1>;
 export type { AirborneV1 } from './phase-fields.js';
+export type { RevisionV1, ChangeV1 } from './revision-fields.js';
