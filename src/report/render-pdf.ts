@@ -18,24 +18,25 @@ export const PAPERS: readonly Paper[] = ['a4', 'letter'];
 // margins on A4 (595 × 842 pt) and Letter (612 × 792 pt) leave a text column of 487 and 504 pt.
 const MARGINS = { top: 62, bottom: 62, left: 54, right: 54 };
 
-/** The DejaVu faces (they hold the θ, Σ and − the formulas use, which PDF's base fonts lack). */
-const FACES = {
-  body: 'DejaVuSans.ttf',
-  bold: 'DejaVuSans-Bold.ttf',
-  italic: 'DejaVuSans-Oblique.ttf',
-  mono: 'DejaVuSansMono.ttf',
-} as const;
+// The project is ESM; this finds PDFKit and the fonts from here (or from the bundle's folder).
+const require = createRequire(import.meta.url);
 
 type Pdf = PDFKit.PDFDocument;
 
-type Face = keyof typeof FACES;
-
 /**
- * A face's file. PDFKit's tables open the current font again by its source unless a font is
- * known by that very source, so every face is set by its file's path, never by an alias.
+ * The DejaVu faces' files (they hold the θ, Σ and − the formulas use, which PDF's base fonts
+ * lack), found in node_modules when a PDF is made. PDFKit's tables open the current font again
+ * by its source unless a font is known by that very source, so every face is set by its file's
+ * path, never by an alias.
  */
-const faceFile = (face: Face) =>
-  createRequire(import.meta.url).resolve(`dejavu-fonts-ttf/ttf/${FACES[face]}`);
+const FACES = {
+  body: () => require.resolve('dejavu-fonts-ttf/ttf/DejaVuSans.ttf'),
+  bold: () => require.resolve('dejavu-fonts-ttf/ttf/DejaVuSans-Bold.ttf'),
+  italic: () => require.resolve('dejavu-fonts-ttf/ttf/DejaVuSans-Oblique.ttf'),
+  mono: () => require.resolve('dejavu-fonts-ttf/ttf/DejaVuSansMono.ttf'),
+};
+type Face = keyof typeof FACES;
+const faceFile = (face: Face) => FACES[face]();
 
 const font = (pdf: Pdf, face: Face) => pdf.font(faceFile(face));
 
@@ -206,7 +207,7 @@ function drawFurniture(pdf: Pdf, doc: ReportDoc): void {
 export async function renderPdf(doc: ReportDoc, paper: Paper): Promise<Buffer> {
   // Loaded only for a PDF, from node_modules (the build leaves it out of the bundle), so that no
   // other command pays for PDFKit. A require, as the bundle may hold no import().
-  const PDFDocument = createRequire(import.meta.url)('pdfkit') as typeof import('pdfkit');
+  const PDFDocument = require('pdfkit') as typeof import('pdfkit');
   const made = new Date(doc.generatedAt);
   const pdf = new PDFDocument({
     size: paper === 'a4' ? 'A4' : 'LETTER',
