@@ -133,9 +133,11 @@ function drawBlock(pdf: Pdf, b: Block): void {
       labelled(pdf, 'Why', b.why, 'body');
       break;
     case 'figure': {
-      const w = columnWidth(pdf);
       if (b.svg) {
+        // Across the column, or smaller when that would be taller than a page can hold.
         const size = svgSize(b.svg);
+        const room = pdf.page.maxY() - MARGINS.top - 30;
+        const w = Math.min(columnWidth(pdf), (room * size.width) / size.height);
         const h = (size.height * w) / size.width;
         need(pdf, h + 30);
         const top = pdf.y;

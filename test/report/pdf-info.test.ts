@@ -80,3 +80,29 @@ describe('pictures in the PDF', () => {
     );
   });
 });
+
+describe('pictures in the PDF, drawn to fit', () => {
+  const figureDoc = (svg: string, textLines: string[]): ReportDoc => ({
+    ...doc,
+    sections: [
+      section('pictures', 'Pictures', [
+        { kind: 'figure', name: 'tall', caption: 'A tall picture', svg, textLines },
+      ]),
+    ],
+  });
+
+  it('draws a picture taller than a page on one page, scaled down, its label kept', async () => {
+    const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="600" height="3000" viewBox="0 0 600 3000"><rect x="0" y="0" width="600" height="3000" fill="#fff"/><line x1="0" y1="0" x2="600" y2="3000" stroke="#000" stroke-width="1"/><text x="300" y="2990" font-size="40" text-anchor="middle">bottom label</text></svg>`;
+    const pdf = await readPdf(await renderPdf(figureDoc(svg, []), 'letter'));
+    const at = pdf.pages.findIndex((p) => p.includes('Figure: A tall picture'));
+    expect(at).toBeGreaterThanOrEqual(0);
+    expect(pdf.pages[at]).toContain('bottom label');
+  });
+
+  it('sets a picture that exists only as text lines in the monospaced face, box characters kept', async () => {
+    const lines = ['40.0 ┤█████', '20.0 ┤██▌', '     └──┴──'];
+    const pdf = await readPdf(await renderPdf(figureDoc('', lines), 'a4'));
+    const all = pdf.pages.join(' ');
+    for (const l of lines) expect(all).toContain(l.trim());
+  });
+});

@@ -1,3 +1,4 @@
+import { spawnSync } from 'node:child_process';
 import { readFileSync, readdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -6,6 +7,7 @@ import { sha256Of } from '../../src/io/sha256.js';
 import { figuresOf, provenanceOf } from '../../src/report/doc.js';
 import { parseReportJson } from '../../src/report/render-json.js';
 import {
+  ROOT,
   decimalsOf,
   demo,
   escapeRe,
@@ -224,5 +226,27 @@ describe('PDF refusals', () => {
     expect(readdirSync(t.dir).filter((n) => n.startsWith('kept') || n.startsWith('.'))).toEqual([
       'kept.pdf',
     ]);
+  });
+
+  it('takes --paper on the command line of the built program, and names the choices for a wrong one', () => {
+    const bin = path.join(ROOT, 'dist', 'skidcase.js');
+    const run = (...args: string[]) =>
+      spawnSync(process.execPath, [bin, 'report', demo('demo-orchard-hill.json'), ...args], {
+        cwd: t.dir,
+        encoding: 'utf8',
+        env: { ...process.env, SKIDCASE_CONFIG_DIR: path.join(t.dir, 'conf') },
+      });
+    const out = path.join(t.dir, 'cli-a4.pdf');
+    const ok = run('--format', 'pdf', '--paper', 'a4', '--out', out);
+    expect(ok.status, ok.stderr).toBe(0);
+    expect(readFileSync(out, 'latin1')).toMatch(/\/MediaBox \[0 0 595\.28 841\.89\]/);
+    const bad = run('--format', 'pdf', '--paper', 'a5', '--out', path.join(t.dir, 'no.pdf'));
+    expect(bad.status).not.toBe(0);
+    expect(bad.stderr).toMatch(/a5.*a4, letter/s);
+    const help = run('--help').stdout.replace(/\s+/g, ' ');
+    expect(help).toContain(
+      '--paper <size> page size of a PDF (default: letter for an imperial case, a4 for a metric one)',
+    );
+    expect(help).toContain('"pdf"');
   });
 });
