@@ -152,7 +152,9 @@ export function bundleOptions({ outdir = 'dist', version, buildId }) {
       __SKIDCASE_VERSION__: JSON.stringify(version),
       __SKIDCASE_BUILD__: JSON.stringify(buildId),
     },
-    external: ['react-devtools-core'],
+    // PDFKit (with its font engine, some 2 MB) is loaded from node_modules only when a PDF is
+    // made, as are the DejaVu font files it embeds: bundled, every start would parse it.
+    external: ['react-devtools-core', 'pdfkit'],
     plugins: [
       zodEnglishOnly,
       yogaWithoutFetch,

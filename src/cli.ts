@@ -96,9 +96,15 @@ function program({ Command, Option }: typeof import('commander')): Command {
   p.command('report <case>')
     .description('write the case report for a case file or a case id in the sessions folder')
     .addOption(
-      new Option('--format <format>', 'report format')
-        .choices(['md', 'txt', 'html', 'json'])
+      new Option('--format <format>', 'report format (pdf needs --out)')
+        .choices(['md', 'txt', 'html', 'json', 'pdf'])
         .default('md'),
+    )
+    .addOption(
+      new Option(
+        '--paper <size>',
+        'page size of a PDF (default: letter for an imperial case, a4 for a metric one)',
+      ).choices(['a4', 'letter']),
     )
     .option(
       '--out <path>',
@@ -108,7 +114,12 @@ function program({ Command, Option }: typeof import('commander')): Command {
     .action(
       async (
         target: string,
-        o: { format: 'md' | 'txt' | 'html' | 'json'; out?: string; force?: boolean },
+        o: {
+          format: 'md' | 'txt' | 'html' | 'json' | 'pdf';
+          paper?: 'a4' | 'letter';
+          out?: string;
+          force?: boolean;
+        },
       ) => {
         const where = await sessions(p.opts().sessions);
         const { reportCommand } = await import('./commands/report.js');
@@ -118,6 +129,7 @@ function program({ Command, Option }: typeof import('commander')): Command {
           sessionsDir: where.dir,
           reactionTime: where.prefs.reactionTime,
           ...(o.out ? { out: o.out } : {}),
+          ...(o.paper ? { paper: o.paper } : {}),
         };
         setExit(await reportCommand(target, opts, io));
       },

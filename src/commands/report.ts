@@ -8,6 +8,7 @@ import type { CaseSolution } from '../engine/types.js';
 import { caseResult } from '../extras/analysis-extras.js';
 import { buildReport } from '../report/build.js';
 import { REPORT_FORMATS, renderReport, type ReportFormat } from '../report/render.js';
+import { PAPERS, type Paper } from '../report/render-pdf.js';
 import { toolVersion } from '../report/version.js';
 import { writeReport } from '../report/write-report.js';
 import { writeFailureText } from '../report/write-files.js';
@@ -24,6 +25,8 @@ export interface ReportOptions {
   out?: string;
   /** Replace existing files. */
   force: boolean;
+  /** The PDF's page size; default Letter for an imperial case, A4 for a metric one. */
+  paper?: Paper;
   /** Where a case id is looked up. */
   sessionsDir: string;
   /** Perception-reaction time for the time-distance section, seconds (the user's preference). */
@@ -98,9 +101,9 @@ async function loadAndSolve(target: string, sessionsDir: string, io: ReportIo): 
 }
 
 /**
- * `skidcase report FILE|ID [--format md|txt|json|html] [--out PATH] [--force]`. Recomputes every
- * figure from the case file and prints the report, or writes it (and its SVG pictures beside it)
- * atomically. Never replaces an existing file without `force`: exit 1 naming the file, nothing
+ * `skidcase report FILE|ID [--format md|txt|json|html|pdf] [--paper a4|letter] [--out PATH]
+ * [--force]`. Recomputes every figure from the case file and prints the report, or writes it (and
+ * its SVG pictures beside it) atomically; a PDF is binary, so it is only written to --out. Never replaces an existing file without `force`: exit 1 naming the file, nothing
  * written. Exit 2 for a missing or invalid case file, 3 when a figure cannot be computed.
  * @example
  * await reportCommand('harbor-road-0412', { format: 'html', out: 'harbor.html', force: false, sessionsDir: 'sessions' }, io) // 0
@@ -115,6 +118,14 @@ export async function reportCommand(
     io.err(`skidcase: --format must be one of ${REPORT_FORMATS.join(', ')}\n`);
     return REPORT_EXIT.refused;
   }
+  if (opts.paper !== undefined && !PAPERS.includes(opts.paper)) {
+    io.err(`skidcase: --paper must be one of ${PAPERS.join(', ')}\n`);
+    return REPORT_EXIT.refused;
+  }
+  if (opts.format === 'pdf' && opts.out === undefined) {
+    io.err('skidcase: a PDF is not printed to standard output: name its file with --out\n');
+    return REPORT_EXIT.refused;
+  }
   const loaded = await loadAndSolve(target, opts.sessionsDir, io);
   if (!loaded.ok) return loaded.code;
   const settings = opts.reactionTime !== undefined ? { reactionTime: opts.reactionTime } : {};
@@ -125,10 +136,19 @@ export async function reportCommand(
     caseSha256: loaded.sha256,
   });
   if (opts.out === undefined) {
-    io.out(renderReport(doc, opts.format));
+    if (opts.format !== 'pdf') io.out(renderReport(doc, opts.format));
     return REPORT_EXIT.done;
   }
-  const r = await writeReport(doc, opts.format, opts.out, opts.force);
+  const paper = opts.paper ?? (loaded.case.units === 'imperial' ? 'letter' : 'a4');
+  const r = await writeReport(doc, opts.format, opts.out, opts.force, paper).catch(
+    (e: unknown) => ({ ok: false as const, made: e instanceof Error ? e.message : String(e) }),
+  );
+  if ('made' in r) {
+    // The document could not be drawn (a PDF whose fonts are missing): nothing was written.
+    io.err(`skidcase: the ${opts.format.toUpperCase()} could not be made: ${r.made}\n`);
+    io.err('skidcase: no report written\n');
+    return REPORT_EXIT.refused;
+  }
   if (!r.ok && r.kind === 'exists') {
     for (const p of r.paths)
       io.err(`skidcase: ${p} already exists; not replaced (use --force to replace it)\n`);

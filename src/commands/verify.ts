@@ -4,6 +4,7 @@ import { loadCaseText } from '../case/load.js';
 import { MAX_CASE_BYTES, tooLargeMessage } from '../case/limits.js';
 import { printable, printableIo } from '../case/printable.js';
 import { provenanceOf } from '../report/doc.js';
+import { isPdf, pdfInfoString } from '../report/pdf-info.js';
 import { readCaseFile } from './read-case.js';
 import { resolveTarget } from './report.js';
 
@@ -15,7 +16,7 @@ export interface VerifyIo {
   err(s: string): void;
 }
 
-/** The text of a report file, or why it cannot be read. */
+/** The text of a report file (of a PDF, its Subject), or why it cannot be read. */
 async function readReport(file: string): Promise<{ text: string } | { message: string }> {
   try {
     const st = await stat(file);
@@ -23,7 +24,10 @@ async function readReport(file: string): Promise<{ text: string } | { message: s
     // A report is far smaller than the largest case it can be made from, with its pictures.
     if (st.size > MAX_CASE_BYTES * 4)
       return { message: `${printable(file)}: ${tooLargeMessage(st.size)}` };
-    return { text: (await readFile(file)).toString('utf8') };
+    const bytes = await readFile(file);
+    // A PDF's page text is compressed: its provenance sentence is kept in its Subject.
+    if (isPdf(bytes)) return { text: pdfInfoString(bytes, 'Subject') ?? '' };
+    return { text: bytes.toString('utf8') };
   } catch (e) {
     const code = (e as { code?: string }).code;
     return {

@@ -4,19 +4,21 @@ import { renderJson } from './render-json.js';
 import { renderMarkdown } from './render-markdown.js';
 import { renderText } from './render-text.js';
 
-/** The forms a report is rendered in: Markdown, plain text, JSON, printable HTML. */
-export type ReportFormat = 'md' | 'txt' | 'json' | 'html';
+/** The forms a report is rendered in: Markdown, plain text, JSON, printable HTML, PDF. */
+export type ReportFormat = 'md' | 'txt' | 'json' | 'html' | 'pdf';
 /** Every form, in the order the help lists them. */
-export const REPORT_FORMATS: readonly ReportFormat[] = ['md', 'txt', 'json', 'html'];
+export const REPORT_FORMATS: readonly ReportFormat[] = ['md', 'txt', 'json', 'html', 'pdf'];
+/** The forms that are text (every one but the PDF, which is binary: see render-pdf.ts). */
+export type TextFormat = Exclude<ReportFormat, 'pdf'>;
 
 /**
- * The report in one of its forms. `figureFile` names each picture's file beside the report (a
+ * The report in one of its text forms. `figureFile` names each picture's file beside the report (a
  * relative name), for the forms that link or mention it; HTML inlines the pictures and JSON
  * carries them in the document.
  */
 export function renderReport(
   doc: ReportDoc,
-  format: ReportFormat,
+  format: TextFormat,
   figureFile?: (f: Figure) => string | undefined,
 ): string {
   const opts = figureFile ? { figureFile } : {};

@@ -4,10 +4,10 @@ import path from 'node:path';
 import writeFileAtomic from 'write-file-atomic';
 import { describeWriteError } from '../io/write-error.js';
 
-/** One file to write: where, and its whole content. */
+/** One file to write: where, and its whole content (text, written as UTF-8, or bytes). */
 export interface OutFile {
   path: string;
-  content: string;
+  content: string | Buffer;
 }
 
 /** Written (the paths, in order), refused because files exist (their paths), or an I/O failure. */
@@ -62,7 +62,10 @@ async function exists(p: string): Promise<boolean> {
  * fails when the name is taken, even when another process takes it in the meantime. Where hard
  * links are not supported, falls back to a rename after a last check.
  */
-async function writeNew(target: string, content: string): Promise<'written' | 'exists'> {
+async function writeNew(
+  target: string,
+  content: OutFile['content'],
+): Promise<'written' | 'exists'> {
   const tmp = path.join(
     path.dirname(target),
     `.${path.basename(target)}.${process.pid}.${Date.now()}.part`,

@@ -18,7 +18,7 @@ const run = (args: string[], cwd: string) => {
 };
 
 describe('a report proves its source', () => {
-  it.each(['md', 'txt', 'html', 'json'])(
+  it.each(['md', 'txt', 'html', 'json', 'pdf'])(
     '%s: carries the file SHA-256; verify says it matches, and says how it differs after an edit',
     (format) => {
       const t = tempDir();
