@@ -8,7 +8,7 @@ import type { CaseSolution } from '../engine/types.js';
 import { caseResult } from '../extras/analysis-extras.js';
 import { buildReport } from '../report/build.js';
 import { REPORT_FORMATS, renderReport, type ReportFormat } from '../report/render.js';
-import { PAPERS, type Paper } from '../report/render-pdf.js';
+import { PAPERS, paperFor, type Paper } from '../report/render-pdf.js';
 import { toolVersion } from '../report/version.js';
 import { writeReport } from '../report/write-report.js';
 import { writeFailureText } from '../report/write-files.js';
@@ -139,7 +139,7 @@ export async function reportCommand(
     if (opts.format !== 'pdf') io.out(renderReport(doc, opts.format));
     return REPORT_EXIT.done;
   }
-  const paper = opts.paper ?? (loaded.case.units === 'imperial' ? 'letter' : 'a4');
+  const paper = opts.paper ?? paperFor(loaded.case);
   const r = await writeReport(doc, opts.format, opts.out, opts.force, paper).catch(
     (e: unknown) => ({ ok: false as const, made: e instanceof Error ? e.message : String(e) }),
   );

@@ -14,6 +14,11 @@ export type Paper = 'a4' | 'letter';
 /** Every paper size, in the order the help lists them. */
 export const PAPERS: readonly Paper[] = ['a4', 'letter'];
 
+/** The paper a case is printed on unless told: US Letter for a case in feet and mph, else A4. */
+export function paperFor(c: { units: string }): Paper {
+  return c.units === 'imperial' ? 'letter' : 'a4';
+}
+
 // 0.75 in at the sides, room for the running header and footer at the top and bottom: the same
 // margins on A4 (595 × 842 pt) and Letter (612 × 792 pt) leave a text column of 487 and 504 pt.
 const MARGINS = { top: 62, bottom: 62, left: 54, right: 54 };

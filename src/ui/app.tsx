@@ -2,6 +2,7 @@ import React, { useEffect, useMemo, useState } from 'react';
 import { Box, useApp, useStdout } from 'ink';
 import type { InterviewPort } from './interview-port.js';
 import type { Services } from './services.js';
+import type { ReportFormat } from '../report/render.js';
 import { useAppModel, type Start } from './use-app-model.js';
 import { contextOf, useAppInput } from './use-app-input.js';
 import { HomeScreen } from './home-screen.js';
@@ -116,16 +117,23 @@ export function App(props: AppProps) {
     [s?.state.answers, question?.id],
   );
 
-  const onReport = () => {
+  const onReport = (form?: ReportFormat) => {
     // Read at the moment of the key, not from this render: a key may arrive before the next one.
     const s = app.current().session;
     if (!s) return;
     const built = port.build(s.state, s.open.case);
     if (!built.ok) return;
-    const say = (reportMessage: string) =>
-      app.update((m) => (m.session ? { ...m, session: { ...m.session, reportMessage } } : m));
+    const say = (reportMessage: string, choosingReport = false) =>
+      app.update((m) =>
+        m.session ? { ...m, session: { ...m.session, reportMessage, choosingReport } } : m,
+      );
+    if (form === undefined)
+      return say(
+        'Write the report as: [m] Markdown (Enter)  [t] text  [h] HTML  [p] PDF  [j] JSON  ·  Esc: none',
+        true,
+      );
     say('Writing the report…');
-    props.services.writeReport(s.open, built.case).then(
+    props.services.writeReport(s.open, built.case, form).then(
       (r) => say(r.ok ? `Report written to ${r.path}` : `No report written: ${r.message}`),
       (e: unknown) => say(`No report written: ${e instanceof Error ? e.message : String(e)}`),
     );

@@ -16,6 +16,7 @@ const PLACES: Record<KeyContext, string> = {
   help: 'this list',
   path: 'file name',
   conflict: 'changed-file choice',
+  'report-form': 'report form choice',
 };
 
 const ALL = Object.keys(PLACES).filter((k) => k !== 'help') as KeyContext[];

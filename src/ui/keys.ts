@@ -15,7 +15,9 @@ export type KeyContext =
   | 'help'
   | 'path'
   /** The case file was changed outside skidcase: the three ways on. */
-  | 'conflict';
+  | 'conflict'
+  /** "Write report" was pressed in the review: which form to write. */
+  | 'report-form';
 
 /** What a key asks for; the app maps each command to an action. */
 export type Command =
@@ -44,6 +46,12 @@ export type Command =
   | 'demo'
   | 'restore'
   | 'report'
+  | 'report-md'
+  | 'report-txt'
+  | 'report-html'
+  | 'report-pdf'
+  | 'report-json'
+  | 'report-cancel'
   | 'to-question'
   | 'to-list'
   | 'pick'
@@ -94,6 +102,7 @@ const EVERYWHERE: KeyContext[] = [
   'jump',
   'path',
   'conflict',
+  'report-form',
 ];
 /** Where a line of text is being typed: an answer, the go-to filter, a file's path. */
 const TEXT: KeyContext[] = ['question', 'jump', 'path'];
@@ -287,10 +296,67 @@ export const KEY_TABLE: readonly KeyBinding[] = [
     command: 'report',
     keys: [plain('w')],
     label: 'write report',
-    description: 'Write the case report beside the case file',
+    description:
+      'Write the case report beside the case file: then pick its form (Markdown, text, HTML, PDF or JSON)',
     when: ['review'],
     footer: ['review'],
     rank: 1,
+  },
+  {
+    command: 'report-md',
+    keys: [plain('m'), plain('return')],
+    label: 'Markdown',
+    description:
+      'Report form: Markdown, its pictures as SVG files beside it (Enter takes this one)',
+    when: ['report-form'],
+    footer: ['report-form'],
+    rank: 1,
+  },
+  {
+    command: 'report-txt',
+    keys: [plain('t')],
+    label: 'text',
+    description: 'Report form: plain text, 80 columns',
+    when: ['report-form'],
+    footer: ['report-form'],
+    rank: 1,
+  },
+  {
+    command: 'report-html',
+    keys: [plain('h')],
+    label: 'HTML',
+    description: 'Report form: one printable HTML page, its pictures inside it',
+    when: ['report-form'],
+    footer: ['report-form'],
+    rank: 1,
+  },
+  {
+    command: 'report-pdf',
+    keys: [plain('p')],
+    label: 'PDF',
+    description:
+      'Report form: PDF for printing and filing (US Letter for a case in feet, A4 for one in metres)',
+    when: ['report-form'],
+    footer: ['report-form'],
+    rank: 1,
+  },
+  {
+    command: 'report-json',
+    keys: [plain('j')],
+    label: 'JSON',
+    description: 'Report form: the report document as JSON',
+    when: ['report-form'],
+    footer: ['report-form'],
+    rank: 2,
+  },
+  {
+    command: 'report-cancel',
+    keys: [plain('escape')],
+    label: 'no report',
+    description: 'Report form: write no report after all, back to the review',
+    when: ['report-form'],
+    footer: ['report-form'],
+    rank: 2,
   },
   {
     command: 'to-question',

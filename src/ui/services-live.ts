@@ -233,7 +233,8 @@ export function liveServices(o: LiveOptions): Services {
       return r.ok ? { ok: true } : { ok: false, message: r.message };
     },
     writeReport:
-      o.writeReport ?? ((open, c) => writeCaseReport(open, c, now(), prefs.reactionTime)),
+      o.writeReport ??
+      ((open, c, form) => writeCaseReport(open, c, now(), prefs.reactionTime, form)),
     saveMode(mode: InterviewMode) {
       // conf (and its validator) is loaded only when a preference is written, not at start-up.
       void import('../prefs/save.js').then(({ savePref }) => savePref('mode', mode, o.prefs ?? {}));

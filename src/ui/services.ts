@@ -3,6 +3,7 @@
  * and the clock. run.tsx passes the real ones; tests pass the same ones on a temp folder. Keeping
  * them behind this port leaves the screens free of file handling.
  */
+import type { ReportFormat } from '../report/render.js';
 import type { Case } from '../case/load.js';
 import type { FieldIssue } from '../case/issues.js';
 import type { InterviewMode } from '../interview/types.js';
@@ -80,6 +81,7 @@ export interface Services {
   writeReport(
     open: OpenCase,
     c: Case,
+    form?: ReportFormat,
   ): Promise<{ ok: true; path: string } | { ok: false; message: string }>;
   initialMode: InterviewMode;
   /** The preferred perception-reaction time, s, for the comparison at the posted limit. */

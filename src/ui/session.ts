@@ -24,6 +24,8 @@ export interface Session {
   conflict?: { theirs: Case };
   reviewTop: number;
   reportMessage?: string;
+  /** "Write report" was pressed: the review waits for the form to write (keys.ts, report-form). */
+  choosingReport?: boolean;
   /** What was already done, shown on resume until the first key that changes something. */
   summary?: string[];
 }

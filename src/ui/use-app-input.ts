@@ -14,6 +14,15 @@ import { inputFor, submitAction } from './session.js';
 import type { AppModel } from './use-app-model.js';
 import type { InterviewPort } from './interview-port.js';
 import type { Services } from './services.js';
+import type { ReportFormat } from '../report/render.js';
+
+const REPORT_FORMS = {
+  'report-md': 'md',
+  'report-txt': 'txt',
+  'report-html': 'html',
+  'report-pdf': 'pdf',
+  'report-json': 'json',
+} as const satisfies Record<string, ReportFormat>;
 
 /** Which part of the key table is live, from what is on screen. */
 export function contextOf(app: AppModel, port: InterviewPort): KeyContext {
@@ -23,6 +32,7 @@ export function contextOf(app: AppModel, port: InterviewPort): KeyContext {
   const s = model.session;
   if (!s) return model.home.path ? 'path' : 'home';
   if (s.conflict) return 'conflict';
+  if (s.choosingReport) return 'report-form';
   const q = port.current(s.state);
   if (!q) return 'review';
   return isChoice(q) ? 'choice' : 'question';
@@ -36,7 +46,8 @@ export interface InputDeps {
   page: number;
   /** The largest first line the review and the help can scroll to. */
   maxTop: { review: number; help: number };
-  onReport(): void;
+  /** "Write report": asks for the form first (undefined), then writes it. */
+  onReport(form?: ReportFormat): void;
 }
 
 export function useAppInput(deps: InputDeps) {
@@ -231,6 +242,18 @@ function run(command: Command, ctx: KeyContext, d: InputDeps) {
     }
     case 'report':
       return d.onReport();
+    case 'report-md':
+    case 'report-txt':
+    case 'report-html':
+    case 'report-pdf':
+    case 'report-json':
+      return d.onReport(REPORT_FORMS[command]);
+    case 'report-cancel':
+      return app.update((m) =>
+        m.session
+          ? { ...m, session: { ...m.session, choosingReport: false, reportMessage: undefined } }
+          : m,
+      );
     case 'to-list':
       return void app.closeCase();
     case 'pick':

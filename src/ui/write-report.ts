@@ -1,6 +1,6 @@
 /**
- * "Write report" from the review: the report module's Markdown report, written beside the case
- * file under a new name each time (never over an existing file).
+ * "Write report" from the review: the report module's report in the form picked (Markdown unless
+ * told), written beside the case file under a new name each time (never over an existing file).
  */
 import { readFile } from 'node:fs/promises';
 import path from 'node:path';
@@ -10,6 +10,8 @@ import { caseResult } from '../extras/analysis-extras.js';
 import { buildReport } from '../report/build.js';
 import { toolVersion } from '../report/version.js';
 import { writeReport } from '../report/write-report.js';
+import { paperFor } from '../report/render-pdf.js';
+import type { ReportFormat } from '../report/render.js';
 import { writeFailureText } from '../report/write-files.js';
 import { solveAsFile } from './interview-live.js';
 import type { OpenCase } from './services.js';
@@ -41,14 +43,15 @@ function stable(v: unknown): string {
   return JSON.stringify(v);
 }
 
-/** `<id>-report-20261201-215203.md` in the case file's folder. */
-export function reportPath(open: OpenCase, c: Case, at: Date): string {
+/** `<id>-report-20261201-215203.md` (or `.txt`, `.html`, `.pdf`, `.json`) in the case file's folder. */
+export function reportPath(open: OpenCase, c: Case, at: Date, form: ReportFormat = 'md'): string {
   const stamp = at.toISOString().slice(0, 19).replace(/[-:]/g, '').replace('T', '-');
-  return path.join(path.dirname(open.file), `${c.id}-report-${stamp}.md`);
+  return path.join(path.dirname(open.file), `${c.id}-report-${stamp}.${form}`);
 }
 
 /**
- * Writes the Markdown report and its pictures (SVG, beside it), never over an existing file. The
+ * Writes the report in `form` (Markdown and text with their pictures as SVG beside them; a PDF on
+ * the paper the case's units suggest, as `skidcase report` chooses it), never over an existing file. The
  * reaction time is the preference, as for `skidcase report`; a case's own wins inside the report.
  */
 export async function writeCaseReport(
@@ -56,6 +59,7 @@ export async function writeCaseReport(
   c: Case,
   at = new Date(),
   reactionTime?: number,
+  form: ReportFormat = 'md',
 ) {
   // The same result document the review shows: the same case and the same settings.
   const settings = reactionTime !== undefined ? { reactionTime } : {};
@@ -81,8 +85,8 @@ export async function writeCaseReport(
     caseFile: open.file,
     ...(sha ? { caseSha256: sha } : {}),
   });
-  const file = reportPath(open, c, at);
-  const r = await writeReport(doc, 'md', file, false);
+  const file = reportPath(open, c, at, form);
+  const r = await writeReport(doc, form, file, false, paperFor(c));
   if (r.ok) return { ok: true as const, path: file };
   return {
     ok: false as const,

@@ -196,12 +196,16 @@ describeInTerminal(
       expect(shownResults(fast.lines)).toEqual(asShown(f));
       expect(fast.keys).toBeLessThan(guided.keys * 0.6);
 
-      // w on the review writes the report beside the case file; its "at least" is the solved one.
+      // w on the review, then h for HTML, writes the report beside the case file; its "at least"
+      // is the solved one.
       await fast.t.type('w');
+      await fast.t.waitFor(/Write the report as/, { what: 'the choice of report form' });
+      await fast.t.type('h');
       const screen = await fast.t.waitFor(/Report written to (\S+)/, {
         what: 'the report confirmation',
       });
       const path = squash(screen).match(/Report written to (\S+)/)![1]!;
+      expect(path.endsWith('.html')).toBe(true);
       expect(existsSync(path)).toBe(true);
       expect(readFileSync(path, 'utf8')).toContain(`at least ${f.analyses[0]!.minimum} mph`);
     }, 180_000);

@@ -7,6 +7,7 @@ import { KEY_TABLE, bindingKeys, keyLabel, type Command } from '../../src/ui/key
 import { QUICK_ENTRY_HELP } from '../../src/input/index.js';
 import { DOWN, ENTER, ESC, PAGE_DOWN, UP, ctrl, renderApp } from './render-app.js';
 import { finishedSlide, halfDone, truncated } from './fixtures.js';
+import { readPdf } from '../report/pdf-read.js';
 
 afterEach(() => cleanup());
 
@@ -62,6 +63,16 @@ async function conflicted(): Promise<
   const read = (name = 'half-done.json') =>
     JSON.parse(fs.readFileSync(path.join(app.dir, name), 'utf8'));
   return Object.assign(app, { file, read });
+}
+
+/** Picks a report form with `key` and returns the file written, checking its extension. */
+async function written(app: App, key: string, ext: string): Promise<string> {
+  await app.press(key, 'Writing the report');
+  // The report runs the sampling extras: give it longer than a key press.
+  const f = await app.waitText('Report written to', 30_000);
+  const name = /Report written to (\S+)/.exec(f)![1]!;
+  expect(path.extname(name)).toBe(ext);
+  return name;
 }
 
 /** What each command must do, checked through the keys the table gives it. */
@@ -268,11 +279,55 @@ const CHECKS: Record<Command, (keys: string) => Promise<void>> = {
   },
   async report(k) {
     const app = await review();
-    await app.press(k, 'Writing the report');
-    // The report runs the sampling extras: give it longer than a key press.
-    const f = await app.waitText('Report written to', 30_000);
-    const name = /Report written to (\S+)/.exec(f)![1]!;
+    const f = await app.press(k, 'Write the report as');
+    expect(f).toMatch(/\[m\] Markdown \(Enter\) +\[t\] text +\[h\] HTML +\[p\] PDF +\[j\] JSON/);
+    // Enter takes Markdown, as the line says
+    const name = await written(app, ENTER, '.md');
     expect(fs.readFileSync(name, 'utf8')).toContain('at least 42 mph');
+  },
+  async 'report-md'(k) {
+    const app = await review();
+    await app.press('w', 'Write the report as');
+    const text = fs.readFileSync(await written(app, k, '.md'), 'utf8');
+    expect(text).toMatch(/^# /);
+    expect(text).toContain('at least 42 mph');
+  },
+  async 'report-txt'(k) {
+    const app = await review();
+    await app.press('w', 'Write the report as');
+    const text = fs.readFileSync(await written(app, k, '.txt'), 'utf8');
+    expect(text).not.toMatch(/^# /m);
+    expect(text).toContain('at least 42 mph');
+  },
+  async 'report-html'(k) {
+    const app = await review();
+    await app.press('w', 'Write the report as');
+    const text = fs.readFileSync(await written(app, k, '.html'), 'utf8');
+    expect(text).toMatch(/^<!doctype html>/i);
+    expect(text).toContain('at least 42 mph');
+  },
+  async 'report-pdf'(k) {
+    const app = await review();
+    await app.press('w', 'Write the report as');
+    const pdf = await readPdf(fs.readFileSync(await written(app, k, '.pdf')));
+    // a case in feet is laid out on US Letter
+    expect(pdf.sizes[0]).toEqual([612, 792]);
+    expect(pdf.pages.join(' ')).toContain('at least 42 mph');
+  },
+  async 'report-json'(k) {
+    const app = await review();
+    await app.press('w', 'Write the report as');
+    const doc = JSON.parse(fs.readFileSync(await written(app, k, '.json'), 'utf8'));
+    expect(doc.format).toBe('skidcase-report');
+    expect(JSON.stringify(doc)).toContain('at least 42 mph');
+  },
+  async 'report-cancel'(k) {
+    const app = await review();
+    await app.press('w', 'Write the report as');
+    const f = await app.press(k);
+    expect(f).not.toContain('Write the report as');
+    expect(f).toContain('w write report');
+    expect(fs.readdirSync(app.dir).filter((n) => n.includes('-report-'))).toEqual([]);
   },
   async 'to-list'(k) {
     const app = await fresh();
