@@ -128,10 +128,7 @@ export function App(props: AppProps) {
         m.session ? { ...m, session: { ...m.session, reportMessage, choosingReport } } : m,
       );
     if (form === undefined)
-      return say(
-        'Write the report as: [m] Markdown (Enter)  [t] text  [h] HTML  [p] PDF  [j] JSON  ·  Esc: none',
-        true,
-      );
+      return say('Write the report as which form? Its keys are below; Enter takes Markdown.', true);
     say('Writing the report…');
     props.services.writeReport(s.open, built.case, form).then(
       (r) => say(r.ok ? `Report written to ${r.path}` : `No report written: ${r.message}`),

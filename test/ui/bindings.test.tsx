@@ -280,7 +280,8 @@ const CHECKS: Record<Command, (keys: string) => Promise<void>> = {
   async report(k) {
     const app = await review();
     const f = await app.press(k, 'Write the report as');
-    expect(f).toMatch(/\[m\] Markdown \(Enter\) +\[t\] text +\[h\] HTML +\[p\] PDF +\[j\] JSON/);
+    expect(f).toContain('Its keys are below; Enter takes Markdown.');
+    expect(f).toMatch(/m Markdown +t text +h HTML +p PDF +j JSON +Esc no report/);
     // Enter takes Markdown, as the line says
     const name = await written(app, ENTER, '.md');
     expect(fs.readFileSync(name, 'utf8')).toContain('at least 42 mph');
