@@ -19,9 +19,14 @@ export function changeText(ch: ChangeV1): string {
   return `${ch.field}: ${revisionValue(ch.from)} → ${revisionValue(ch.to)}`;
 }
 
-/** `3. 2026-12-01T10:05:00.000Z, hand edit` */
+/**
+ * `3. 2026-12-01T10:05:00.000Z, hand edit (found at this save; made at some time before it)`.
+ * A hand edit's time is when skidcase found it, not when it was made: the heading says so.
+ */
 export function revisionHeading(r: RevisionV1, number: number): string {
-  return `${number}. ${r.at}, ${r.by}`;
+  const by =
+    r.by === 'hand edit' ? 'hand edit (found at this save; made at some time before it)' : r.by;
+  return `${number}. ${r.at}, ${by}`;
 }
 
 /** The revision's changes, one line each, then its note and the changes not listed. */

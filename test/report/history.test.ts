@@ -61,6 +61,38 @@ describe('skidcase history', () => {
     ]);
   });
 
+  it('a hand edit found at a save says it was found then, made at some time before', async () => {
+    const { dir, file } = await caseWithTrail('ash-3');
+    // edited in a text editor: the limit changed without skidcase
+    const edited = readJson(file);
+    edited.postedLimit = 55;
+    fs.writeFileSync(file, JSON.stringify(edited, null, 2));
+    await saveCase(
+      dir,
+      {
+        ...sampleCase('ash-3', [62, 59.8]),
+        postedLimit: 50,
+        details: { reference: 'Test renamed' },
+      },
+      { overwriteChanged: true },
+    );
+    const trail = readJson(file).revisions as { at: string; by: string }[];
+    expect(trail.map((t) => t.by)).toEqual([
+      'interview',
+      'interview',
+      'interview',
+      'hand edit',
+      'interview',
+    ]);
+    const r = await skidcase('--sessions', dir, 'history', 'ash-3');
+    const blocks = r.out.trim().split('\n\n');
+    expect(blocks[4]!.split('\n')[0]).toBe(
+      `4. ${trail[3]!.at}, hand edit (found at this save; made at some time before it)`,
+    );
+    expect(blocks[4]).toContain('postedLimit: 40 → 55');
+    expect(blocks[5]).toContain('postedLimit: 55 → 50');
+  });
+
   it('takes a file path as well as an id', async () => {
     const { file } = await caseWithTrail('ash-2');
     const r = await skidcase('history', file);
