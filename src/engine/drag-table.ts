@@ -26,7 +26,7 @@ export interface DragTableRow {
 const BAKER =
   'Northwestern University Traffic Institute table (J. S. Baker, Traffic Accident Investigation Manual, 1975; reprinted in L. B. Fricke, Traffic Accident Reconstruction, 1990)';
 const NOON =
-  'D. Noon, Engineering Analysis of Vehicular Accidents (CRC, 1994), single values seen second-hand';
+  'R. K. Noon, Engineering Analysis of Vehicular Accidents (CRC, 1994), single values seen second-hand';
 
 const b = (low: number, high: number): DragBand => ({ low, high });
 

@@ -124,7 +124,7 @@ describe('drag factor reference table: the Baker 1975 rows (via Fricke 1990) and
       known: 'from-memory',
     });
   });
-  it('single values quoted from D. Noon (1994), seen second-hand', () => {
+  it('single values quoted from R. K. Noon (1994), seen second-hand', () => {
     const noon = DRAG_TABLE.filter((r) => r.known === 'single-value-second-hand');
     expect(noon.map((r) => [r.surface, r.any!.low, r.any!.high])).toEqual([
       ['asphalt, dry', 0.65, 0.65],

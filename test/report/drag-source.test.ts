@@ -30,7 +30,7 @@ describe('where the drag factor comes from, in the report', () => {
     // R. K. Noon, Engineering Analysis of Vehicular Accidents (CRC, 1994), seen second-hand: wet grass 0.20.
     const t = table('noon-grass-wet');
     expect(t).toContain('0.20 at any speed');
-    expect(t).toContain('D. Noon, Engineering Analysis of Vehicular Accidents (CRC, 1994)');
+    expect(t).toContain('R. K. Noon, Engineering Analysis of Vehicular Accidents (CRC, 1994)');
     expect(t).toContain('a single value seen second-hand');
   });
 
