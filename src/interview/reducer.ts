@@ -142,6 +142,10 @@ export function reduce(state: InterviewState, action: Action): InterviewState {
       return { ...s, mode: action.mode, explain: action.mode === 'guided' };
     case 'toggle-explain':
       return { ...s, explain: !s.explain };
+    case 'refuse':
+      return here
+        ? { ...quiet(s), error: { id: here.id, text: action.text, message: action.message } }
+        : quiet(s);
     case 'clear-error': {
       const { error: _e, ...rest } = s;
       return rest;

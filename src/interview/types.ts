@@ -110,6 +110,11 @@ export interface Question {
   defaultText?(answers: Answers, read: AnswerReader): string | undefined;
   /** A sentence saying what the current answer implies (e.g. which formula chain and why). */
   explainChoice?(answers: Answers, read: AnswerReader): string | undefined;
+  /**
+   * The answer may hold several lines (surveyed points pasted from an export): a pasted block's
+   * line breaks stay in the answer instead of ending it.
+   */
+  lines?: boolean;
   /** An empty answer keeps this preference (the screen shows its value as what Enter gives). */
   usesPreference?: 'reactionTime';
 }
@@ -165,7 +170,9 @@ export type Action =
   | { type: 'open-review' }
   | { type: 'set-mode'; mode: InterviewMode }
   | { type: 'toggle-explain' }
-  | { type: 'clear-error' };
+  | { type: 'clear-error' }
+  /** An answer the screen could not take (a points file it could not read): shown, answers kept. */
+  | { type: 'refuse'; text: string; message: string };
 
 /** Progress through the questions that currently apply. */
 export interface Progress {

@@ -50,3 +50,22 @@ export function editLine(line: Line, input: string, key: Key): Line {
     cursor: cursor + text.length,
   };
 }
+
+/**
+ * Inserts a pasted block at the cursor. On a question that takes lines (`keepLines`: surveyed
+ * points) its line breaks stay, as `\n`, without the blank ones at either end; elsewhere each
+ * break becomes a space, so a paste never ends an answer half-way. Other control characters go.
+ * @example pasteText(EMPTY_LINE, '0 0\r8 0.2\r', true) // { value: '0 0\n8 0.2', cursor: 9 }
+ */
+export function pasteText(line: Line, pasted: string, keepLines: boolean): Line {
+  const lines = pasted.replace(/\r\n|\r/g, '\n');
+  const kept = keepLines ? lines.replace(/^\n+|\n+$/g, '') : lines.replace(/\n+/g, ' ');
+  // eslint-disable-next-line no-control-regex -- these are the control characters to strip
+  const text = kept.replace(/[\u0000-\u0009\u000b-\u001f\u007f]/g, '');
+  if (!text) return line;
+  const { value, cursor } = line;
+  return {
+    value: value.slice(0, cursor) + text + value.slice(cursor),
+    cursor: cursor + text.length,
+  };
+}
