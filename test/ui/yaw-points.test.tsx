@@ -2,6 +2,7 @@
 // a pasted block, points typed on one line, a CSV file, points left out. The figures on screen
 // are compared with the engine's solve of the saved file, and with circle geometry. The
 // scenario and its points are invented.
+import { execFileSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -78,6 +79,21 @@ describe('yaw radius from surveyed points', () => {
     expect(step.result).toBeCloseTo(160, 1);
     expect(flat(f)).toContain(flat(step.substituted));
     expect(flat(f)).toContain('Radius from surveyed points');
+    // And as the built program's `solve --json` gives it for the file on disk.
+    const file = fs.readdirSync(app.dir).find((n) => n.endsWith('.json'))!;
+    const json = JSON.parse(
+      execFileSync(
+        process.execPath,
+        ['dist/skidcase.js', 'solve', path.join(app.dir, file), '--json'],
+        {
+          encoding: 'utf8',
+        },
+      ),
+    ) as { analyses: { steps: { name: string; substituted: string; result: number }[] }[] };
+    const fromSolve = json.analyses[0]!.steps[0]!;
+    expect(fromSolve.name).toBe('Radius from surveyed points (least-squares circle)');
+    expect(fromSolve.result).toBe(step.result);
+    expect(flat(f)).toContain(flat(fromSolve.substituted));
   });
 
   it('reads points typed on one line with ; between them, and leaving points out changes the radius', async () => {
@@ -93,7 +109,20 @@ describe('yaw radius from surveyed points', () => {
     await toReview(app);
     const { c } = saved(app);
     expect(c.analyses[0]).toMatchObject({ points: typed.slice(0, 6), pointsLeftOut: [[60, 14]] });
-    expect(radiusStep(app).result).toBeCloseTo(160, 1);
+    const step = radiusStep(app);
+    expect(step.result).toBeCloseTo(160, 1);
+    // The report: the fit's step as solve gives it, and the point left out listed as such.
+    await app.press('w', 'Writing the report');
+    await app.waitText('Report written to', 30_000);
+    const md = fs.readFileSync(
+      path.join(
+        app.dir,
+        fs.readdirSync(app.dir).find((n) => n.endsWith('.md'))!,
+      ),
+      'utf8',
+    );
+    expect(flat(md)).toContain(flat(step.substituted));
+    expect(md).toMatch(/Point 7 \(x, y\), left out of the fit\s*\|\s*60, 14/);
   });
 
   it('reads a CSV file with a header, in the columns named, and refuses a bad line naming it, keeping the answer', async () => {
@@ -134,5 +163,49 @@ describe('yaw radius from surveyed points', () => {
     const step = radiusStep(app);
     expect(step.result).toBeCloseTo(50 * 3.28084, 1);
     expect(flat(f)).toContain(flat(step.substituted));
+  });
+
+  it('takes a bracketed paste (ESC[200~ ... ESC[201~) with its line breaks as one answer, and a missing file is refused naming it', async () => {
+    const app = await toPoints();
+    const block = ['E,N', ...ARC.map(([x, y]) => `${x},${y}`)].join('\r');
+    let f = await app.press(`\u001b[200~${block}\r\u001b[201~`, '8 lines pasted');
+    expect(f).not.toContain('[200~');
+    expect(f).not.toContain('Points to leave out');
+    f = await app.press(ENTER, 'Points to leave out');
+    expect(flat(f)).toContain('line 1 ("E,N") taken as a header; 7 points read');
+    // Back, and name a file that is not there: refused, naming it; the points stay answered.
+    await app.press('\u0002', 'Points surveyed along the mark');
+    app.stdin.write('\u0015');
+    f = await app.answer('@no-such-points.csv', 'no such file');
+    expect(flat(f)).toContain('no-such-points.csv: no such file');
+    f = await app.press('\u001b');
+    await app.press(ENTER, 'Points to leave out');
+  });
+});
+
+describe('the help documents the points syntax', () => {
+  it('gives the forms, and the examples it gives are read as written', async () => {
+    const { helpLines } = await import('../../src/ui/help-overlay.js');
+    const { readPoints } = await import('../../src/interview/read-points.js');
+    const { fileRequest } = await import('../../src/interview/read-points-file.js');
+    const text = flat(
+      helpLines(76, [])
+        .map((l) => l.text)
+        .join(' '),
+    );
+    expect(text).toContain('Surveyed points of a yaw mark');
+    expect(text).toContain('press p (surveyed points)');
+    const typed = /put a semicolon between points \(([^)]+)\)/.exec(text)?.[1];
+    expect(readPoints(typed!, 'imperial')).toMatchObject({
+      ok: true,
+      value: [
+        [0, 0],
+        [8, 0.2],
+        [16, 0.81],
+      ],
+    });
+    expect(text).toContain('(@yaw-1.csv E N)');
+    expect(fileRequest('@yaw-1.csv E N')).toEqual({ path: 'yaw-1.csv', columns: ['E', 'N'] });
+    expect(text).toContain('Points to leave out');
   });
 });
