@@ -166,9 +166,14 @@ function pointsQuestion(
         if (!r.ok) return r;
         const numbered =
           r.value.length > 3 ? ' Leave points out at the next question, by number.' : '';
+        // A pasted block is kept as one line of its points (in the case's unit), as typed by hand.
+        const oneLine = /[\r\n]/.test(text.trim())
+          ? { text: r.value.map(([x, y]) => `${x} ${y}`).join('; ') }
+          : {};
         return {
           ok: true,
           value: r.value,
+          ...oneLine,
           notice: `${r.notice}. ${fitLine(r.value, ctx.answers)}${numbered}`,
         };
       },

@@ -53,7 +53,7 @@ function submit(state: InterviewState, q: Question, typed: string): InterviewSta
   const r = q.parse(text, contextOf(state.answers));
   if (!r.ok) return { ...quiet(state), error: { id: q.id, text: typed, message: r.message } };
   // A choice is stored by its value, not the key pressed, so a later change of keys cannot re-read it.
-  const stored = q.choices && typeof r.value === 'string' ? r.value : text.trim();
+  const stored = q.choices && typeof r.value === 'string' ? r.value : (r.text ?? text.trim());
   let answers: Answers = { ...state.answers, [q.id]: { text: stored, value: r.value } };
   if (r.fills) answers = withFills(answers, r.fills);
   const changes = r.fills ? fillChanges(state.answers, answers, Object.keys(r.fills)) : [];

@@ -66,6 +66,8 @@ export type ParseResult =
       value: unknown;
       notice?: string;
       fills?: Answers;
+      /** The answer's text as stored, when not as typed (a pasted block of lines, as one line). */
+      text?: string;
       /**
        * Something that looks like a slip (a list mixing feet and metres): the answer is taken only
        * when the same text is entered again after this message was shown.

@@ -6,7 +6,7 @@
 import { useRef } from 'react';
 import { useInput, type Key } from 'ink';
 import { findBinding, type Command, type KeyContext } from './keys.js';
-import { editLine, lineCommand, pasteText, type Line } from './line-edit.js';
+import { EMPTY_LINE, editLine, lineCommand, pasteText, type Line } from './line-edit.js';
 import { splitKeys } from './split-keys.js';
 import { filterQuestions } from './jump-filter.js';
 import { isChoice } from './question-view.js';
@@ -99,7 +99,13 @@ function isLinesQuestion(d: InputDeps): boolean {
 function pasted(text: string, d: InputDeps) {
   const ctx = contextOf(d.app, d.port);
   const lines = ctx === 'question' && isLinesQuestion(d);
-  editField(ctx, d, (l) => pasteText(l, text, lines));
+  const s = d.app.current().session;
+  const id = s && d.port.current(s.state)?.id;
+  // A block pasted over the answer given before, unedited, replaces it (a new export).
+  const given = lines && id !== undefined ? s?.state.answers[id]?.text : undefined;
+  editField(ctx, d, (l) =>
+    pasteText(given !== undefined && l.value === given ? EMPTY_LINE : l, text, lines),
+  );
 }
 
 /** Ctrl+U, which empties the line being typed (line-edit.ts). */

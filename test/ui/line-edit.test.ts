@@ -73,6 +73,10 @@ describe('a pasted block', () => {
     });
     expect(pasteText(lineOf('12 '), '34\r56\r', false)).toEqual({ value: '12 34 56 ', cursor: 9 });
     expect(pasteText(lineOf('ab'), '\u0007', true)).toEqual(lineOf('ab'));
+    // A block after points already there starts its own line; a single word goes where it is put.
+    expect(pasteText(lineOf('0 0'), '8 0.2\r16 1', true).value).toBe('0 0\n8 0.2\n16 1');
+    expect(pasteText(lineOf('0 0; '), '8 0.2\r16 1', true).value).toBe('0 0; 8 0.2\n16 1');
+    expect(pasteText(lineOf('12.'), '5', true).value).toBe('12.5');
   });
 
   it('is drawn on one row with ; between its lines, the cursor moved with them', () => {

@@ -53,7 +53,11 @@ async function toReview(app: App): Promise<string> {
   await app.answer('0.75', /bank|superelevation/i);
   await app.press('n', 'Which path should the radius describe?');
   await app.press('m', /Any other marks|another analysis|more marks/i);
-  await app.press('n', 'Also show a distribution');
+  const last = await app.press('n', 'Also show a distribution');
+  // The chain panel beside the question: the radius step from the points, with its figure.
+  const step = radiusStep(app);
+  expect(last).toContain('Chain so far');
+  expect(last).toContain(`${step.name}: ${formatNumber(step.result, 'length')} ft`);
   return app.press('n', 'Review');
 }
 
@@ -173,6 +177,19 @@ describe('yaw radius from surveyed points', () => {
     expect(f).not.toContain('Points to leave out');
     f = await app.press(ENTER, 'Points to leave out');
     expect(flat(f)).toContain('line 1 ("E,N") taken as a header; 7 points read');
+    // Kept as one line of its points: back at the question, a new block replaces it unedited.
+    await app.press('\u0002', 'Points surveyed along the mark');
+    const again = ARC.slice(0, 5)
+      .map(([x, y]) => `${x}\t${y}`)
+      .join('\r');
+    f = await app.press(`\u001b[200~${again}\u001b[201~`, '5 lines pasted');
+    expect(flat(f)).toContain(
+      `> ${ARC.slice(0, 5)
+        .map((p) => p.join(' '))
+        .join('; ')}_`,
+    );
+    f = await app.press(ENTER, 'Points to leave out');
+    expect(flat(f)).toContain('5 points read');
     // Back, and name a file that is not there: refused, naming it; the points stay answered.
     await app.press('\u0002', 'Points surveyed along the mark');
     app.stdin.write('\u0015');
