@@ -195,7 +195,9 @@ export function fileAnswer(
   units: UnitSystem,
   read: (path: string) => { ok: true; text: string } | { ok: false; message: string },
 ):
-  { type: 'answer'; text: string } | { type: 'refuse'; text: string; message: string } | undefined {
+  | { type: 'answer'; text: string; note: string }
+  | { type: 'refuse'; text: string; message: string }
+  | undefined {
   const req = fileRequest(typed);
   if (!req) return undefined;
   if ('message' in req) return { type: 'refuse', text: typed, message: req.message };
@@ -203,6 +205,6 @@ export function fileAnswer(
   if (!got.ok) return { type: 'refuse', text: typed, message: got.message };
   const r = readPointsCsv(req.path, got.text, req, units);
   return r.ok
-    ? { type: 'answer', text: r.text }
+    ? { type: 'answer', text: r.text, note: r.notice }
     : { type: 'refuse', text: typed, message: r.message };
 }

@@ -47,7 +47,7 @@ function withFills(answers: Answers, fills: Answers): Answers {
 const UNITS_NOTE =
   'Units changed: numbers already typed without a unit are now read in the new units; numbers typed with a unit are converted.';
 
-function submit(state: InterviewState, q: Question, typed: string): InterviewState {
+function submit(state: InterviewState, q: Question, typed: string, note?: string): InterviewState {
   let text = typed;
   if (text.trim() === '' && !q.optional) text = defaultTextOf(q, state.answers) ?? '';
   const r = q.parse(text, contextOf(state.answers));
@@ -72,7 +72,7 @@ function submit(state: InterviewState, q: Question, typed: string): InterviewSta
   const applied = changes.length ? `Changed: ${changes.join('; ')}.` : undefined;
   const notice = unitsChanged
     ? UNITS_NOTE
-    : [r.notice, applied].filter(Boolean).join(' ') || explainOf(q, answers);
+    : [note && `${note}.`, r.notice, applied].filter(Boolean).join(' ') || explainOf(q, answers);
   return notice ? { ...next, notice } : next;
 }
 
@@ -85,7 +85,7 @@ export function reduce(state: InterviewState, action: Action): InterviewState {
   switch (action.type) {
     case 'answer':
       return here
-        ? submit(s, here, action.text)
+        ? submit(s, here, action.text, action.note)
         : { ...quiet(s), notice: 'The review is open: choose a question to change an answer.' };
     case 'accept-default': {
       if (!here) return quiet(s);

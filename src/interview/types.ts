@@ -162,7 +162,8 @@ export interface InterviewState {
 }
 
 export type Action =
-  | { type: 'answer'; text: string }
+  /** `note`: where the text came from (the file it was read from), said before the answer's notice. */
+  | { type: 'answer'; text: string; note?: string }
   | { type: 'accept-default' }
   | { type: 'choose'; value: string }
   | { type: 'back' }

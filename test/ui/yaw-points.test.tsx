@@ -142,7 +142,7 @@ describe('yaw radius from surveyed points', () => {
     fs.writeFileSync(bad, 'pt,E_m,N_m\n1,0,0\n2,3,0.09\n3,six,0.36\n4,9,0.81\n');
     const app = await toPoints();
     let f = await app.answer(`@${good} E_m N_m`, 'Points to leave out');
-    expect(flat(f)).toContain('6 points read');
+    expect(flat(f)).toContain(`6 points read from ${good} (columns "E_m", "N_m", converted to ft)`);
     // Back to the points: a bad file is refused naming its line; the answer stays as it was.
     await app.press('\u0002', 'Points surveyed along the mark');
     for (let k = 0; k < 200; k++) app.stdin.write('\u007f');
