@@ -56,6 +56,7 @@ export const KNOWN = {
     'middleOrdinate',
     'offsets',
     'points',
+    'pointsLeftOut',
     'drag',
     'superelevation',
     'pathAdjustment',

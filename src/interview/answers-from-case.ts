@@ -196,7 +196,16 @@ export function answersFromCase(c: Case): Answers {
     put(`${p}.more`, i < asked.length - 1 ? 'yes' : 'no');
     if (a.kind === 'yaw') {
       put(`${p}.look`, 'yaw');
-      put(`${p}.measure`, a.offsets ? 'offsets' : 'ordinate');
+      put(`${p}.measure`, a.offsets ? 'offsets' : a.points ? 'points' : 'ordinate');
+      if (a.points) {
+        // The points left out follow those fitted, numbered on from them.
+        const all = [...a.points, ...(a.pointsLeftOut ?? [])];
+        put(`${p}.points`, all.map(([x, y]) => `${x} ${y}`).join('; '));
+        const n = a.points.length;
+        const k = a.pointsLeftOut?.length ?? 0;
+        if (all.length > 3)
+          put(`${p}.points.drop`, k === 0 ? '' : k === 1 ? `${n + 1}` : `${n + 1}-${n + k}`);
+      }
       if (a.offsets) {
         put(`${p}.offsets.chord`, quantityText(a.offsets.chord));
         put(

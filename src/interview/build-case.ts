@@ -9,13 +9,22 @@ import { skidV1, yawV1, type AnalysisV1, type VehicleV1 } from '../case/v1/schem
 import type { AnswerReader, CaseMeta, InterviewState, SavedInterview } from './types.js';
 import { analysisCount, choiceOf, endsInto, markLook, unitsOf } from './answers-read.js';
 import { readAnswers } from './answer-values.js';
-import { analysisKeep, CASE_KEEP, kept, measuredByOffsets, VEHICLE_KEEP } from './kept-fields.js';
+import {
+  analysisKeep,
+  CASE_KEEP,
+  kept,
+  measuredByOffsets,
+  measuredByPoints,
+  VEHICLE_KEEP,
+} from './kept-fields.js';
 import { brakesOf, dragOf, quantityOf, segmentsOf, slopeOf, text } from './build-parts.js';
 import { RULES } from '../case/quantity.js';
 import { samplingFieldV1 } from '../case/v1/extras-fields.js';
 import { restoreNotes } from './kept-notes.js';
 import { testGradeNotes } from './test-grade-notes.js';
 import { withKept } from './kept-analyses.js';
+import { keptPoints, leftOutOf } from './questions-yaw.js';
+import type { PointValue } from './read-points.js';
 
 /** Distance rules a slide's marks may take (the file's `distanceRule`). */
 const DISTANCE_RULES = ['average', 'longest', 'shortest', 'spread'];
@@ -68,10 +77,27 @@ function skidOf(
   return parsed.success ? parsed.data : undefined;
 }
 
+/** The radius's measurement of yaw `i` as the file holds it: one way only (the file refuses two). */
+function yawMeasure(r: AnswerReader, i: number): Record<string, unknown> {
+  const p = `a${i}`;
+  if (measuredByOffsets(r.answers, i))
+    return {
+      offsets: { chord: r.value(`${p}.offsets.chord`), stations: r.value(`${p}.offsets.stations`) },
+    };
+  if (measuredByPoints(r.answers, i)) {
+    if (r.value(`${p}.points`) === undefined) return {};
+    const all = r.value(`${p}.points`) as PointValue[];
+    const out = new Set(leftOutOf(r.answers, p));
+    const left = all.filter((_, k) => out.has(k + 1));
+    return { points: keptPoints(r.answers, p), ...(left.length ? { pointsLeftOut: left } : {}) };
+  }
+  return { chord: r.value(`${p}.chord`), middleOrdinate: r.value(`${p}.ordinate`) };
+}
+
 /** Yaw `i` read with the file's schema; undefined when its answers do not make one. */
 function yawOf(r: AnswerReader, i: number, id: string): AnalysisV1 | undefined {
   const p = `a${i}`;
-  const { offsets: _o, ...keep } = kept(r.answers, analysisKeep(i));
+  const { offsets: _o, points: _p, pointsLeftOut: _l, ...keep } = kept(r.answers, analysisKeep(i));
   const label = text(r, `${p}.label`);
   const e = slopeOf(r, `${p}.bank`, 'away', 'none');
   const parsed = yawV1.safeParse({
@@ -80,15 +106,7 @@ function yawOf(r: AnswerReader, i: number, id: string): AnalysisV1 | undefined {
     kind: 'yaw',
     drag: dragOf(r, p),
     pathAdjustment: r.value(`${p}.path`) === 'half-track' ? 'half-track' : 'none',
-    // One way of measuring the radius only: the file refuses both.
-    ...(measuredByOffsets(r.answers, i)
-      ? {
-          offsets: {
-            chord: r.value(`${p}.offsets.chord`),
-            stations: r.value(`${p}.offsets.stations`),
-          },
-        }
-      : { chord: r.value(`${p}.chord`), middleOrdinate: r.value(`${p}.ordinate`) }),
+    ...yawMeasure(r, i),
     ...(label ? { label } : {}),
     ...(e !== undefined ? { superelevation: e } : {}),
   });

@@ -1,8 +1,7 @@
 /**
  * Analyses the interview cannot ask about: kept from the file exactly as they are, in a hidden
  * answer, and put back at their place when the case is built again. The interview never drops
- * what it cannot show: a slide that runs into an analysis it keeps, a yaw
- * measured by surveyed points, or more marks, surfaces or analyses than its questions take.
+ * what it cannot show: a slide that runs into an analysis it keeps, or more marks, surfaces or analyses than its questions take.
  */
 import type { AnalysisV1 } from '../case/v1/schema.js';
 import type { Answers } from './types.js';
@@ -21,8 +20,6 @@ export interface KeptAnalysis {
 
 /** Why the interview cannot ask about this analysis, or undefined when it can. */
 export function beyondInterview(a: AnalysisV1): string | undefined {
-  if (a.kind === 'yaw' && a.points !== undefined)
-    return 'the interview does not ask for surveyed points';
   if (a.kind === 'skid') {
     if ((a.marks?.length ?? 0) > MAX_MARKS)
       return `it has ${a.marks!.length} marks; the interview takes up to ${MAX_MARKS}`;

@@ -44,6 +44,10 @@ export function kept(answers: Answers, id: string): Record<string, unknown> {
 export const measuredByOffsets = (answers: Answers, i: number): boolean =>
   answers[`a${i}.measure`]?.value === 'offsets';
 
+/** True for a yaw whose radius comes from surveyed points (`points` in the file). */
+export const measuredByPoints = (answers: Answers, i: number): boolean =>
+  answers[`a${i}.measure`]?.value === 'points';
+
 /** Answers that are not questions (kept ids and fields). */
 export const isMetaAnswer = (id: string): boolean =>
   /^a\d+\.(id|keep)$/.test(id) ||

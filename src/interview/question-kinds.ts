@@ -31,6 +31,7 @@ export interface QuestionBase {
   metricExample?: string;
   optional?: boolean;
   usesPreference?: 'reactionTime';
+  lines?: boolean;
 }
 
 function finish(

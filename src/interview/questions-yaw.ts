@@ -6,7 +6,16 @@ import { RULES } from '../case/quantity.js';
 import type { Answers, AnswerContext, Question } from './types.js';
 import { choiceQuestion, customQuestion, quantityQuestion } from './question-kinds.js';
 import { choiceOf, unitsOf } from './answers-read.js';
-import { measuredByOffsets } from './kept-fields.js';
+import { measuredByOffsets, measuredByPoints } from './kept-fields.js';
+import { radiusFromPoints } from '../engine/radius-points.js';
+import {
+  dropPoints,
+  pointNumbers,
+  readPoints,
+  POINTS_SYNTAX,
+  type PointValue,
+} from './read-points.js';
+import { FILE_SYNTAX } from './read-points-file.js';
 import { spread } from '../engine/spread.js';
 import { radiusFromChord, unitsOf as engineUnits } from '../engine/index.js';
 import { radiusFromOffsets } from '../engine/radius-offsets.js';
@@ -90,6 +99,125 @@ function offsetsLine(a: Answers, p: string): string | undefined {
   return r.ok ? [r.value.step.substituted, ...r.value.warnings].join('. ') : r.reason;
 }
 
+/** The engine's fit of `points`, as one line: radius, residuals, largest and where, warnings. */
+function fitLine(points: readonly PointValue[], a: Answers): string {
+  const units = unitsOf(a);
+  const r = radiusFromPoints(points, units, engineUnits(units));
+  const text = r.ok ? [`${r.value.step.substituted}.`, ...r.value.warnings].join(' ') : r.reason;
+  return /[.!?]$/.test(text) ? text : `${text}.`;
+}
+
+/** The surveyed points answered for analysis `p`, if they read. */
+const pointsOf = (a: Answers, p: string): PointValue[] | undefined => {
+  const answer = a[`${p}.points`];
+  if (!answer) return undefined;
+  if (Array.isArray(answer.value)) return answer.value as PointValue[];
+  // Not read yet (answers made from a file are read in turn): read its text.
+  const r = readPoints(answer.text, unitsOf(a));
+  return r.ok ? r.value : undefined;
+};
+
+/** The point numbers left out of the fit (1-based), none when the answer is blank. */
+export const leftOutOf = (a: Answers, p: string): number[] => {
+  const v = a[`${p}.points.drop`]?.value;
+  return Array.isArray(v) ? (v as number[]) : [];
+};
+
+/** The points the fit uses: those answered, less the ones left out. */
+export function keptPoints(a: Answers, p: string): PointValue[] | undefined {
+  const all = pointsOf(a, p);
+  if (!all) return undefined;
+  const out = new Set(leftOutOf(a, p));
+  return all.filter((_, k) => !out.has(k + 1));
+}
+
+/** The points question: pasted lines, `;`-separated points on one line, or `@file` (read by the screen). */
+function pointsQuestion(
+  p: string,
+  section: string,
+  appliesWhen: (a: Answers) => boolean,
+): Question[] {
+  return [
+    customQuestion(
+      {
+        id: `${p}.points`,
+        section,
+        title: 'Surveyed points',
+        prompt:
+          'Points surveyed along the mark (x y): paste the lines, type them with ; between points, or @ and a CSV file',
+        help: {
+          why: 'A least-squares circle is fitted through every point; how far the points lie off it (the residuals) shows whether the mark really is one arc, and which point does not belong.',
+          how: `Survey the outside front tire's mark from where the yaw starts, at even steps, on its outer edge. Give ${POINTS_SYNTAX}. A unit may be glued to a number (12.5m). Or read an export: ${FILE_SYNTAX}.`,
+        },
+        appliesWhen,
+        lines: true,
+        example: '0 0; 20 1.26; 40 5.06; 60 11.46',
+        metricExample: '0 0; 6 0.38; 12 1.53; 18 3.47',
+        explainChoice: (a) => {
+          const pts = keptPoints(a, p);
+          return pts ? fitLine(pts, a) : undefined;
+        },
+      },
+      'list',
+      (text, ctx) => {
+        if (text.trim().startsWith('@'))
+          return { ok: false, message: `the file could not be read here: ${FILE_SYNTAX}` };
+        const r = readPoints(text, ctx.units);
+        if (!r.ok) return r;
+        const numbered =
+          r.value.length > 3 ? ' Leave points out at the next question, by number.' : '';
+        // A pasted block is kept as one line of its points (in the case's unit), as typed by hand.
+        const oneLine = /[\r\n]/.test(text.trim())
+          ? { text: r.value.map(([x, y]) => `${x} ${y}`).join('; ') }
+          : {};
+        return {
+          ok: true,
+          value: r.value,
+          ...oneLine,
+          notice: `${r.notice}. ${fitLine(r.value, ctx.answers)}${numbered}`,
+        };
+      },
+    ),
+    customQuestion(
+      {
+        id: `${p}.points.drop`,
+        section,
+        title: 'Points left out',
+        prompt: 'Points to leave out of the fit, by number (e.g. 1, 12-14); blank for none',
+        help: {
+          why: 'A point past where the yaw mark turns into a scuff, or a misread one, pulls the circle off the rest; the largest residual shows which. The points left out are kept in the case file beside the ones fitted.',
+          how: 'Give the numbers the fit shows (point 1 is the first line), separated by commas or spaces, a range as 12-14. Leave it blank to fit every point.',
+        },
+        appliesWhen: (a) => appliesWhen(a) && (pointsOf(a, p)?.length ?? 0) > 3,
+        optional: true,
+        example: '12-14',
+        explainChoice: (a) => {
+          const pts = keptPoints(a, p);
+          const n = leftOutOf(a, p).length;
+          return pts && n
+            ? `Without point${n === 1 ? '' : 's'} ${leftOutOf(a, p).join(', ')}: ${fitLine(pts, a)}`
+            : undefined;
+        },
+      },
+      'list',
+      (text, ctx) => {
+        const all = pointsOf(ctx.answers, p);
+        if (text.trim() === '') return { ok: true, value: [] };
+        if (!all) return { ok: false, message: 'give the surveyed points first' };
+        const nums = pointNumbers(text, all.length);
+        if (!nums.ok) return nums;
+        const kept = dropPoints(all, text);
+        if (!kept.ok) return kept;
+        return {
+          ok: true,
+          value: nums.value,
+          notice: `Left out ${nums.value.join(', ')}; ${kept.value.length} points fitted. ${fitLine(kept.value, ctx.answers)}`,
+        };
+      },
+    ),
+  ];
+}
+
 /**
  * Yaw questions of analysis `i`. `askTrack` says whether this analysis is where the track width
  * is asked (the first yaw analysis using the centre-of-mass path).
@@ -97,7 +225,9 @@ function offsetsLine(a: Answers, p: string): string | undefined {
 export function yawQuestions(...args: Parameters<typeof yawQuestionsOf>): Question[] {
   const [i, section, applies] = args;
   const p = `a${i}`;
-  const byOrdinate = (a: Answers) => applies(a) && !measuredByOffsets(a, i);
+  const byOrdinate = (a: Answers) =>
+    applies(a) && !measuredByOffsets(a, i) && !measuredByPoints(a, i);
+  const byPoints = (a: Answers) => applies(a) && measuredByPoints(a, i);
   const byOffsets = (a: Answers) => applies(a) && measuredByOffsets(a, i);
   const [chord, ordinate, ...rest] = yawQuestionsOf(...args);
   return [
@@ -108,8 +238,8 @@ export function yawQuestions(...args: Parameters<typeof yawQuestionsOf>): Questi
         title: 'Radius measured by',
         prompt: 'How was the radius of the mark measured?',
         help: {
-          why: 'The radius comes from one chord and its middle ordinate, or from a circle fitted to offsets read at several stations along one chord; several offsets show how well the mark follows a circle.',
-          how: 'Offsets: stretch one chord along the mark and read, at stations measured from its start, the distance square to the tape to the mark.',
+          why: 'The radius comes from one chord and its middle ordinate, from a circle fitted to offsets read at several stations along one chord, or from a circle fitted to points surveyed along the mark; several offsets or points show how well the mark follows a circle.',
+          how: "Offsets: stretch one chord along the mark and read, at stations measured from its start, the distance square to the tape to the mark. Surveyed points: take x and y of points along the mark's outer edge with a total station, a laser scanner or from a drone survey, and paste them or name the exported CSV file.",
         },
         appliesWhen: applies,
         defaultText: () => 'ordinate',
@@ -118,11 +248,18 @@ export function yawQuestions(...args: Parameters<typeof yawQuestionsOf>): Questi
             ? undefined
             : measuredByOffsets(a, i)
               ? 'The radius will be the circle fitted through the chord ends and the offsets (least squares), with its scatter.'
-              : 'The radius will be R = C²/(8M) + M/2 from the chord and its middle ordinate.',
+              : measuredByPoints(a, i)
+                ? "The radius will be the least-squares circle through the surveyed points, with each point's residual; points that do not belong can be left out."
+                : 'The radius will be R = C²/(8M) + M/2 from the chord and its middle ordinate.',
       },
       [
         { value: 'ordinate', key: 'c', label: 'one chord and its middle ordinate' },
         { value: 'offsets', key: 'o', label: 'offsets at stations along one chord' },
+        {
+          value: 'points',
+          key: 'p',
+          label: 'surveyed points (total station, scanner or drone export)',
+        },
       ],
     ),
     { ...chord!, appliesWhen: byOrdinate },
@@ -164,6 +301,7 @@ export function yawQuestions(...args: Parameters<typeof yawQuestionsOf>): Questi
       'list',
       (text, ctx) => readStations(text, ctx.units, chordLow(`${p}.offsets.chord`, ctx)),
     ),
+    ...pointsQuestion(p, section, byPoints),
     ...rest,
   ];
 }

@@ -15,7 +15,7 @@ export type PointsRead =
 
 /** How the syntax is explained in the help and the error messages. */
 export const POINTS_SYNTAX =
-  'one point a line, x then y, separated by a space, a comma, a semicolon or a tab (e.g. 0 0, then 8 0.2, then 16 0.81)';
+  'one point a line, x then y, separated by a space, a comma, a semicolon or a tab (e.g. 0 0, then 8 0.2, then 16 0.81); typed on one line, put a semicolon between points (0 0; 8 0.2; 16 0.81)';
 
 /** Largest coordinate, as the case file allows it. */
 const LIMIT = 10_000_000;
@@ -33,17 +33,29 @@ function partsOf(line: string): string[] {
 }
 
 /**
+ * The lines of a text as points are read from them: a line holding semicolons whose every part
+ * has two numbers (`0 0; 8 0.2; 16 0.81`, typed by hand) is one point per part, each part keeping
+ * the line's number; any other line is one point (`8;0.2` is x;y).
+ */
+function pointLines(text: string): { n: number; raw: string }[] {
+  return text.split(/\r\n|\r|\n/).flatMap((raw, n) => {
+    const parts = raw.split(';');
+    const several = parts.length > 1 && parts.every((x) => x.trim().split(/[\s,\t]+/).length === 2);
+    return several ? parts.map((x) => ({ n, raw: x })) : [{ n, raw }];
+  });
+}
+
+/**
  * Reads pasted points. Fails naming the line (its number in the text, counting blank ones) and
  * what is wrong there; fewer than 3 points is refused.
  * @example readPoints('x,y\n0,0\n8,0.2\n16,0.81', 'imperial')
  * // { ok: true, value: [[0, 0], [8, 0.2], [16, 0.81]], notice: 'line 1 ("x,y") taken as a header; 3 points read' }
  */
 export function readPoints(text: string, units: UnitSystem): PointsRead {
-  const lines = text.split(/\r\n|\r|\n/);
   const value: PointValue[] = [];
   const notes: string[] = [];
   let first = true;
-  for (const [n, raw] of lines.entries()) {
+  for (const { n, raw } of pointLines(text)) {
     if (raw.trim() === '') continue;
     const where = `line ${n + 1} ("${raw.trim()}")`;
     if (first && !/\d/.test(raw)) {
@@ -75,25 +87,42 @@ export function readPoints(text: string, units: UnitSystem): PointsRead {
 }
 
 /**
- * The points left after dropping those numbered in `drop` (1-based, as shown), e.g. `3 7` or
- * `3, 7`. Fails naming a number that is no point, or when fewer than 3 would remain.
+ * The point numbers (1-based, as shown) named in `drop`: `3 7`, `3, 7` or a range `12-14`, in
+ * order and once each. Fails naming a word that is no point number among `count` points.
+ * @example pointNumbers('1, 4-6', 8) // { ok: true, value: [1, 4, 5, 6] }
+ */
+export function pointNumbers(
+  drop: string,
+  count: number,
+): { ok: true; value: number[] } | { ok: false; message: string } {
+  const out = new Set<number>();
+  const words = drop
+    .replace(/\s*-\s*/g, '-')
+    .split(/[\s,;]+/)
+    .filter(Boolean);
+  for (const w of words) {
+    const m = /^(\d+)(?:-(\d+))?$/.exec(w);
+    const a = m ? Number(m[1]) : NaN;
+    const b = m?.[2] !== undefined ? Number(m[2]) : a;
+    if (!m || a < 1 || b > count || b < a)
+      return {
+        ok: false,
+        message: `"${w}" is not a point number: give numbers from 1 to ${count}, e.g. 3 7 or 12-14`,
+      };
+    for (let k = a; k <= b; k++) out.add(k);
+  }
+  return { ok: true, value: [...out].sort((x, y) => x - y) };
+}
+
+/**
+ * The points left after dropping those numbered in `drop` (1-based, as shown), e.g. `3 7`,
+ * `3, 7` or `12-14`. Fails naming a number that is no point, or when fewer than 3 would remain.
  * @example dropPoints([[0, 0], [1, 1], [2, 0], [3, 5]], '4') // { ok: true, value: [[0, 0], [1, 1], [2, 0]] }
  */
 export function dropPoints(points: readonly PointValue[], drop: string): PointsRead {
-  const words = drop
-    .split(/[\s,;]+/)
-    .map((w) => w.trim())
-    .filter(Boolean);
-  const out = new Set<number>();
-  for (const w of words) {
-    const n = Number(w);
-    if (!Number.isInteger(n) || n < 1 || n > points.length)
-      return {
-        ok: false,
-        message: `"${w}" is not a point number: give numbers from 1 to ${points.length}, e.g. 3 7`,
-      };
-    out.add(n - 1);
-  }
+  const numbers = pointNumbers(drop, points.length);
+  if (!numbers.ok) return numbers;
+  const out = new Set(numbers.value.map((n) => n - 1));
   const value = points.filter((_, k) => !out.has(k));
   if (value.length < 3)
     return {

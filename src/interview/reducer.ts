@@ -47,13 +47,13 @@ function withFills(answers: Answers, fills: Answers): Answers {
 const UNITS_NOTE =
   'Units changed: numbers already typed without a unit are now read in the new units; numbers typed with a unit are converted.';
 
-function submit(state: InterviewState, q: Question, typed: string): InterviewState {
+function submit(state: InterviewState, q: Question, typed: string, note?: string): InterviewState {
   let text = typed;
   if (text.trim() === '' && !q.optional) text = defaultTextOf(q, state.answers) ?? '';
   const r = q.parse(text, contextOf(state.answers));
   if (!r.ok) return { ...quiet(state), error: { id: q.id, text: typed, message: r.message } };
   // A choice is stored by its value, not the key pressed, so a later change of keys cannot re-read it.
-  const stored = q.choices && typeof r.value === 'string' ? r.value : text.trim();
+  const stored = q.choices && typeof r.value === 'string' ? r.value : (r.text ?? text.trim());
   let answers: Answers = { ...state.answers, [q.id]: { text: stored, value: r.value } };
   if (r.fills) answers = withFills(answers, r.fills);
   const changes = r.fills ? fillChanges(state.answers, answers, Object.keys(r.fills)) : [];
@@ -72,7 +72,7 @@ function submit(state: InterviewState, q: Question, typed: string): InterviewSta
   const applied = changes.length ? `Changed: ${changes.join('; ')}.` : undefined;
   const notice = unitsChanged
     ? UNITS_NOTE
-    : [r.notice, applied].filter(Boolean).join(' ') || explainOf(q, answers);
+    : [note && `${note}.`, r.notice, applied].filter(Boolean).join(' ') || explainOf(q, answers);
   return notice ? { ...next, notice } : next;
 }
 
@@ -85,7 +85,7 @@ export function reduce(state: InterviewState, action: Action): InterviewState {
   switch (action.type) {
     case 'answer':
       return here
-        ? submit(s, here, action.text)
+        ? submit(s, here, action.text, action.note)
         : { ...quiet(s), notice: 'The review is open: choose a question to change an answer.' };
     case 'accept-default': {
       if (!here) return quiet(s);
@@ -142,6 +142,10 @@ export function reduce(state: InterviewState, action: Action): InterviewState {
       return { ...s, mode: action.mode, explain: action.mode === 'guided' };
     case 'toggle-explain':
       return { ...s, explain: !s.explain };
+    case 'refuse':
+      return here
+        ? { ...quiet(s), error: { id: here.id, text: action.text, message: action.message } }
+        : quiet(s);
     case 'clear-error': {
       const { error: _e, ...rest } = s;
       return rest;

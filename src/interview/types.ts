@@ -66,6 +66,8 @@ export type ParseResult =
       value: unknown;
       notice?: string;
       fills?: Answers;
+      /** The answer's text as stored, when not as typed (a pasted block of lines, as one line). */
+      text?: string;
       /**
        * Something that looks like a slip (a list mixing feet and metres): the answer is taken only
        * when the same text is entered again after this message was shown.
@@ -110,6 +112,11 @@ export interface Question {
   defaultText?(answers: Answers, read: AnswerReader): string | undefined;
   /** A sentence saying what the current answer implies (e.g. which formula chain and why). */
   explainChoice?(answers: Answers, read: AnswerReader): string | undefined;
+  /**
+   * The answer may hold several lines (surveyed points pasted from an export): a pasted block's
+   * line breaks stay in the answer instead of ending it.
+   */
+  lines?: boolean;
   /** An empty answer keeps this preference (the screen shows its value as what Enter gives). */
   usesPreference?: 'reactionTime';
 }
@@ -155,7 +162,8 @@ export interface InterviewState {
 }
 
 export type Action =
-  | { type: 'answer'; text: string }
+  /** `note`: where the text came from (the file it was read from), said before the answer's notice. */
+  | { type: 'answer'; text: string; note?: string }
   | { type: 'accept-default' }
   | { type: 'choose'; value: string }
   | { type: 'back' }
@@ -165,7 +173,9 @@ export type Action =
   | { type: 'open-review' }
   | { type: 'set-mode'; mode: InterviewMode }
   | { type: 'toggle-explain' }
-  | { type: 'clear-error' };
+  | { type: 'clear-error' }
+  /** An answer the screen could not take (a points file it could not read): shown, answers kept. */
+  | { type: 'refuse'; text: string; message: string };
 
 /** Progress through the questions that currently apply. */
 export interface Progress {

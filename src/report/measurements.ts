@@ -109,6 +109,14 @@ function yawRows(a: YawV1, speed: string, length: string): Row[] {
       length,
       '',
     ]),
+    // Surveyed but left out of the fit: listed after the fitted ones, numbered on from them.
+    ...(a.pointsLeftOut ?? []).map(([x, y], k): Row => [
+      `Point ${(a.points?.length ?? 0) + k + 1} (x, y), left out of the fit`,
+      `${x}, ${y}`,
+      NO_RANGE,
+      length,
+      '',
+    ]),
     ...(a.superelevation !== undefined ? [q('Superelevation', a.superelevation, '%')] : []),
     ...dragRows('', a.drag, speed, length),
     choice('Path adjustment', a.pathAdjustment === 'half-track' ? 'half-track' : 'none'),

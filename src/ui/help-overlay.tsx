@@ -4,6 +4,8 @@ import { KEY_TABLE, bindingKeys, keysFor, type KeyContext } from './keys.js';
 import type { ShownLine } from './review-step.js';
 import { wrap } from '../report/wrap.js';
 import { STATIONS_SYNTAX } from '../interview/read-stations.js';
+import { POINTS_SYNTAX } from '../interview/read-points.js';
+import { FILE_SYNTAX } from '../interview/read-points-file.js';
 import { ScrollView } from './scroll-view.js';
 import { TONE } from './theme.js';
 
@@ -51,6 +53,13 @@ export function helpLines(width: number, quickEntry: readonly string[]): ShownLi
     `When the radius is measured by offsets along one chord, type the ${STATIONS_SYNTAX}: the distance along the chord from its start, then the offset from the chord to the mark. A unit may be glued to a number (3.1m:0.12m).`,
     Math.max(20, width),
   ))
+    out.push({ text: l });
+  out.push({ text: '' }, { text: 'Surveyed points of a yaw mark', bold: true, tone: 'heading' });
+  for (const l of [
+    `At "How was the radius of the mark measured?" press p (surveyed points). Paste the points as exported, ${POINTS_SYNTAX}: the pasted lines stay one answer, and Enter reads them. A unit may be glued to a number (12.5m).`,
+    `Or read a CSV file: ${FILE_SYNTAX}. The header's unit (x_m, E (ft)) is used; without one the numbers are in the case's unit, and the notice says so.`,
+    'The notice gives the fitted radius, the RMS residual and the largest residual with its point number. The next question, Points to leave out, takes point numbers (1, 12-14) to fit without them, e.g. where the mark turns into a scuff; they are kept in the case file as pointsLeftOut.',
+  ].flatMap((t) => wrap(t, Math.max(20, width))))
     out.push({ text: l });
   out.push({ text: '' }, { text: 'A vehicle that left the ground', bold: true, tone: 'heading' });
   for (const l of wrap(

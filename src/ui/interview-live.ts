@@ -19,6 +19,8 @@ import { earlySteps, solveDraft, type EarlyStep } from '../interview/draft.js';
 import { defaultTextOf, explainOf } from '../interview/answer-values.js';
 import { stateFromCase } from '../interview/from-case.js';
 import type { InterviewState } from '../interview/types.js';
+import { fileAnswer } from '../interview/read-points-file.js';
+import { unitsOf } from '../interview/answers-read.js';
 import type { DraftView } from './draft-panel.js';
 import type { InterviewPort } from './interview-port.js';
 import { atLeast } from './review-lines.js';
@@ -107,4 +109,8 @@ export const liveInterview: InterviewPort = {
     draftView(solveDraft(state, base.id), stillToAnswer(state), earlySteps(state)),
   solve: solveAsFile,
   notes: lookNotes,
+  fileAnswer(state, typed, read) {
+    const q = currentQuestion(state);
+    return q?.lines ? fileAnswer(typed, unitsOf(state.answers), read) : undefined;
+  },
 };

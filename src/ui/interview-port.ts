@@ -39,6 +39,15 @@ export interface InterviewPort {
   /** The running chain for the side panel. */
   draft(state: InterviewState, base: Case): DraftView;
   solve(c: Case): CaseSolution;
+  /**
+   * An answer naming a file (`@points.csv`) on a question that takes lines: the action it makes
+   * once `read` has read the file, or undefined when the answer names none.
+   */
+  fileAnswer(
+    state: InterviewState,
+    typed: string,
+    read: (path: string) => { ok: true; text: string } | { ok: false; message: string },
+  ): Action | undefined;
   /** Notes by analysis id that the case file cannot hold (anti-lock marks), for the review. */
   notes(state: InterviewState): Record<string, string[]>;
 }

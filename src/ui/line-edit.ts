@@ -50,3 +50,28 @@ export function editLine(line: Line, input: string, key: Key): Line {
     cursor: cursor + text.length,
   };
 }
+
+/**
+ * Inserts a pasted block at the cursor. On a question that takes lines (`keepLines`: surveyed
+ * points) its line breaks stay, as `\n`, without the blank ones at either end; elsewhere each
+ * break becomes a space, so a paste never ends an answer half-way. Other control characters go.
+ * @example pasteText(EMPTY_LINE, '0 0\r8 0.2\r', true) // { value: '0 0\n8 0.2', cursor: 9 }
+ */
+export function pasteText(line: Line, pasted: string, keepLines: boolean): Line {
+  // A tab between columns (a spreadsheet's copy) reads as the space it stands for.
+  const lines = pasted.replace(/\r\n|\r/g, '\n').replace(/\t/g, ' ');
+  const kept = keepLines ? lines.replace(/^\n+|\n+$/g, '') : lines.replace(/\n+/g, ' ');
+  // eslint-disable-next-line no-control-regex -- these are the control characters to strip
+  const text = kept.replace(/[\u0000-\u0009\u000b-\u001f\u007f]/g, '');
+  if (!text) return line;
+  const { value, cursor } = line;
+  // A block of lines pasted after text already there starts a line of its own.
+  const join =
+    keepLines && text.includes('\n') && cursor > 0 && !/[\n;]\s*$/.test(value.slice(0, cursor))
+      ? '\n'
+      : '';
+  return {
+    value: value.slice(0, cursor) + join + text + value.slice(cursor),
+    cursor: cursor + join.length + text.length,
+  };
+}

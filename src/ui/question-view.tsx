@@ -152,6 +152,14 @@ export function QuestionView(p: QuestionViewProps) {
           <TextField line={p.line} color={p.color} width={p.width - 2} />
         </Box>
       )}
+      {p.line.value.includes('\n') ? (
+        <Para
+          text={`${p.line.value.split('\n').filter((l) => l.trim() !== '').length} lines pasted (shown with ; between them): Enter reads them; Ctrl+U clears`}
+          width={p.width}
+          color={TONE.muted}
+          indent="  "
+        />
+      ) : null}
       {enterGives ? (
         <Para
           text={`Enter accepts: ${enterGives}`}

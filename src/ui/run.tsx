@@ -56,6 +56,14 @@ export async function runInteractive(opts: RunOptions): Promise<number> {
       : {}),
   });
   let code = 0;
+  // Bracketed paste: the terminal marks a paste, so a pasted block of lines (surveyed points)
+  // arrives as text and not as answers ended by its line breaks (use-app-input.ts).
+  const bracket = process.stdout.isTTY && process.stdin.isTTY;
+  if (bracket) process.stdout.write(BRACKETED_PASTE_ON);
+  const pasteOff = () => {
+    if (bracket) process.stdout.write(BRACKETED_PASTE_OFF);
+  };
+  process.once('exit', pasteOff);
   const instance = render(
     <App
       services={services}
@@ -71,10 +79,15 @@ export async function runInteractive(opts: RunOptions): Promise<number> {
   );
   const stop = onEndSignals(() => instance.unmount());
   await instance.waitUntilExit();
+  pasteOff();
+  process.off('exit', pasteOff);
   stop();
   await releaseAllLocks();
   return code;
 }
+
+const BRACKETED_PASTE_ON = '\u001b[?2004h';
+const BRACKETED_PASTE_OFF = '\u001b[?2004l';
 
 /** How long keys already typed may keep arriving after a hang-up before the program ends. */
 const DRAIN_MS = 80;

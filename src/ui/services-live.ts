@@ -28,6 +28,7 @@ import type { CaseRow, Opened, OpenCase, Saved, Services } from './services.js';
 import { atLeast } from './review-lines.js';
 import { writeCaseReport } from './write-report.js';
 import { caseFromSavedAnswers } from '../interview/from-case.js';
+import { readTextFile } from '../io/read-text.js';
 
 export interface LiveOptions {
   sessionsDir: string;
@@ -160,6 +161,7 @@ export function liveServices(o: LiveOptions): Services {
     sessionsDir: dir,
     sessionsFrom: o.sessionsFrom,
     initialMode: prefs.mode,
+    readTextFile: (file) => readTextFile(file),
     reactionTime: prefs.reactionTime,
     now,
     async listCases() {

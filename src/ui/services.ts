@@ -83,6 +83,11 @@ export interface Services {
     c: Case,
     form?: ReportFormat,
   ): Promise<{ ok: true; path: string } | { ok: false; message: string }>;
+  /**
+   * A text file the investigator names in an answer (surveyed points exported as CSV), read in
+   * full before it returns; refused over a size cap or when it is not text, naming the file.
+   */
+  readTextFile(file: string): { ok: true; text: string } | { ok: false; message: string };
   initialMode: InterviewMode;
   /** The preferred perception-reaction time, s, for the comparison at the posted limit. */
   reactionTime?: number;

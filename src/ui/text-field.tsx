@@ -22,6 +22,17 @@ export function visiblePart(line: Line, width: number | undefined): Line {
 }
 
 /**
+ * A line that holds line breaks (a pasted block of points) as one row: each break shown as `; `,
+ * the cursor moved with it.
+ * @example oneRow({ value: '0 0\n8 0.2', cursor: 9 }) // { value: '0 0; 8 0.2', cursor: 10 }
+ */
+export function oneRow(line: Line): Line {
+  if (!line.value.includes('\n')) return line;
+  const before = line.value.slice(0, line.cursor).split('\n').length - 1;
+  return { value: line.value.replace(/\n/g, '; '), cursor: line.cursor + before };
+}
+
+/**
  * Draws a line being typed with its cursor. With colour the cursor is an inverted cell; without
  * (NO_COLOR) it is a `_` at the end or a `|` inside the text, so it still shows. With `width`, a
  * longer line scrolls within one row.
@@ -37,7 +48,7 @@ export function TextField({
   placeholder?: string | undefined;
   width?: number | undefined;
 }) {
-  const { value, cursor } = visiblePart(line, width);
+  const { value, cursor } = visiblePart(oneRow(line), width);
   if (!color) {
     const mark = cursor >= value.length ? '_' : '|';
     return (

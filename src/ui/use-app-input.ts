@@ -6,7 +6,7 @@
 import { useRef } from 'react';
 import { useInput, type Key } from 'ink';
 import { findBinding, type Command, type KeyContext } from './keys.js';
-import { editLine, lineCommand, type Line } from './line-edit.js';
+import { EMPTY_LINE, editLine, lineCommand, pasteText, type Line } from './line-edit.js';
 import { splitKeys } from './split-keys.js';
 import { filterQuestions } from './jump-filter.js';
 import { isChoice } from './question-view.js';
@@ -55,6 +55,8 @@ export function useAppInput(deps: InputDeps) {
   // the handler of the render that just happened.
   const latest = useRef(deps);
   latest.current = deps;
+  // The text of a bracketed paste (between ESC[200~ and ESC[201~) while it arrives, else undefined.
+  const pasting = useRef<string | undefined>(undefined);
   useInput(
     (chunk, chunkKey) => {
       // One read can hold several keys (typing ahead, a paste); each is handled in turn against
@@ -62,6 +64,19 @@ export function useAppInput(deps: InputDeps) {
       // While leaving, keys are dropped here rather than by turning the handler off: turning it
       // off leaves raw mode, and a second Ctrl+C would then reach the process as a signal.
       if (latest.current.app.current().leaving) return;
+      // Bracketed paste: Ink hands the start marker, the text and the end marker one by one.
+      if (chunk === PASTE_START) return void (pasting.current = '');
+      if (pasting.current !== undefined) {
+        if (chunk !== PASTE_END) return void (pasting.current += chunk);
+        const text = pasting.current;
+        pasting.current = undefined;
+        return pasted(text, latest.current);
+      }
+      // A block of lines pasted into a question that takes lines, without the markers (a
+      // terminal that does not bracket pastes): its line breaks stay in the answer. Text then one
+      // Enter is typing ahead, and is split into keys as usual.
+      if (isLinesQuestion(latest.current) && /[\r\n]/.test(chunk.replace(/[\r\n]+$/, '')))
+        return pasted(chunk, latest.current);
       const keys = splitKeys(chunk, chunkKey);
       while (keys.length) {
         const [input, key] = keys.shift()!;
@@ -78,6 +93,29 @@ export function useAppInput(deps: InputDeps) {
       }
     },
     { isActive: true },
+  );
+}
+
+/** The markers a terminal puts around a paste once bracketed paste is on, as Ink hands them. */
+const PASTE_START = '[200~';
+const PASTE_END = '[201~';
+
+/** True when the question on screen takes several lines (surveyed points). */
+function isLinesQuestion(d: InputDeps): boolean {
+  const s = d.app.current().session;
+  return !!s && !d.app.current().overlay && !!d.port.current(s.state)?.lines;
+}
+
+/** A pasted block: into the field on screen, its line breaks kept only where lines are taken. */
+function pasted(text: string, d: InputDeps) {
+  const ctx = contextOf(d.app, d.port);
+  const lines = ctx === 'question' && isLinesQuestion(d);
+  const s = d.app.current().session;
+  const id = s && d.port.current(s.state)?.id;
+  // A block pasted over the answer given before, unedited, replaces it (a new export).
+  const given = lines && id !== undefined ? s?.state.answers[id]?.text : undefined;
+  editField(ctx, d, (l) =>
+    pasteText(given !== undefined && l.value === given ? EMPTY_LINE : l, text, lines),
   );
 }
 
@@ -269,7 +307,13 @@ function submit(ctx: KeyContext, d: InputDeps) {
   const { app, port, services } = d;
   const m = app.current();
   if (ctx === 'question' || ctx === 'choice') {
-    if (m.session) app.act(submitAction(port, m.session));
+    if (!m.session) return;
+    // `@file`: the file is read here (a service), and the interview gets its points as typed.
+    const fromFile =
+      ctx === 'question'
+        ? port.fileAnswer(m.session.state, m.session.line.value, services.readTextFile)
+        : undefined;
+    app.act(fromFile ?? submitAction(port, m.session));
   } else if (ctx === 'jump' && m.overlay?.kind === 'jump' && m.session) {
     const hit = filterQuestions(port.states(m.session.state), m.overlay.filter.value)[
       m.overlay.selected

@@ -29,6 +29,10 @@ interface Traits {
   pairs?: boolean;
   /** Pairs `along offset` (stations along a chord). */
   stations?: boolean;
+  /** Surveyed points, `x y` a line or `;` between them. */
+  points?: boolean;
+  /** Point numbers to leave out (`1, 12-14`). */
+  pointNumbers?: boolean;
   /** Signed: a minus sign is part of the answer (a drop onto higher ground, a downward take-off). */
   signed?: boolean;
 }
@@ -57,6 +61,8 @@ const TRAITS: Record<string, Traits> = {
   'a#.bank.pct': { unsigned: true },
   'a#.offsets.chord': {},
   'a#.offsets.stations': { stations: true },
+  'a#.points': { points: true },
+  'a#.points.drop': { emptyOk: true, pointNumbers: true },
   'a#.air.distance': {},
   'a#.air.drop': { signed: true, zeroOk: true },
   'a#.air.grade': { signed: true, zeroOk: true, emptyOk: true },
@@ -126,8 +132,24 @@ const CATALOGUE: [string, (t: Traits) => Expect][] = [
 
 /** Stations are typed as pairs: any malformed entry is answered with how to write a pair. */
 const STATION_HELP = /along offset|not a number/;
+/** Points: a malformed entry is answered with how to write a point, or that 3 are needed. */
+const POINTS_HELP = /as x y|not a number|at least 3 are needed/;
+/** Point numbers: anything but blank or numbers of points is refused, saying which word. */
+const NUMBERS_HELP = /is not a point number: give numbers from 1 to \d+/;
 const rule = (f: (t: Traits) => Expect) => (t: Traits) =>
-  t.stations ? (f({}) === 'accepted' ? 'accepted' : STATION_HELP) : f(t);
+  t.stations
+    ? f({}) === 'accepted'
+      ? 'accepted'
+      : STATION_HELP
+    : t.points
+      ? f({}) === 'accepted'
+        ? 'accepted'
+        : POINTS_HELP
+      : t.pointNumbers
+        ? f({ emptyOk: true }) === 'accepted'
+          ? 'accepted'
+          : NUMBERS_HELP
+        : f(t);
 
 const questions = numericQuestions();
 

@@ -46,7 +46,27 @@ const FALL_OFF_BANK: Script = {
   'sampling.shape': '',
 };
 
-const SCRIPTS: Script[] = [TWO_SURFACES_AND_YAW, OTHER_SOURCES, SLIDE_ONLY_FAST, FALL_OFF_BANK];
+/** An invented yaw mark surveyed as five points: the points and points-to-leave-out questions. */
+const SURVEYED_YAW: Script = {
+  ...FALL_OFF_BANK,
+  'details.reference': 'FUZZ-ARC-5',
+  'a0.look': 'yaw',
+  'a0.measure': 'points',
+  'a0.points': '0 0; 10 0.31; 20 1.25; 30 2.84; 40 5.08',
+  'a0.points.drop': '',
+  'a0.drag.source': 'entered',
+  'a0.drag.value': '0.72',
+  'a0.bank.dir': '',
+  'a0.path': '',
+};
+
+const SCRIPTS: Script[] = [
+  TWO_SURFACES_AND_YAW,
+  OTHER_SOURCES,
+  SLIDE_ONLY_FAST,
+  FALL_OFF_BANK,
+  SURVEYED_YAW,
+];
 
 /** The first state of each script in which `id` is the current question. */
 export function stateAt(id: string): AtQuestion {

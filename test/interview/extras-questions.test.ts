@@ -33,12 +33,13 @@ const ARC = {
 };
 
 describe('a yaw radius measured by offsets', () => {
-  it('offers one chord and its middle ordinate by default, or offsets', () => {
+  it('offers one chord and its middle ordinate by default, or offsets, or surveyed points', () => {
     const s = fillUntil(start(), { units: 'f', 'a0.look': 'y' }, 'a0.measure');
     const q = currentQuestion(s)!;
     expect(q.choices!.map((c) => c.label)).toEqual([
       'one chord and its middle ordinate',
       'offsets at stations along one chord',
+      'surveyed points (total station, scanner or drone export)',
     ]);
     expect(defaultTextOf(q, s.answers)).toBe('ordinate');
     expect(ids(type(s, ''))).toContain('a0.ordinate');

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { dropPoints, readPoints } from '../../src/interview/read-points.js';
+import { dropPoints, pointNumbers, readPoints } from '../../src/interview/read-points.js';
 import { fitCircleToPoints } from '../../src/engine/radius-points.js';
 
 // Invented points on a circle of radius 150 ft centred at (0, 150), every 10 ft of x.
@@ -77,6 +77,42 @@ describe('dropping points by number', () => {
     expect(dropPoints(onCircle, '1 2 3')).toMatchObject({
       ok: false,
       message: expect.stringContaining('leaves 2 of 5 points'),
+    });
+  });
+});
+
+describe('points typed on one line, and ranges of point numbers', () => {
+  it('reads `;` between points on one line, and still reads `x;y` as one point a line', () => {
+    const typed = onCircle.map(([x, y]) => `${x} ${y}`).join('; ');
+    expect(readPoints(typed, 'imperial')).toMatchObject({ ok: true, value: onCircle });
+    expect(readPoints('0,0; 8,0.2; 16,0.81', 'imperial')).toMatchObject({
+      ok: true,
+      value: [
+        [0, 0],
+        [8, 0.2],
+        [16, 0.81],
+      ],
+    });
+    expect(readPoints('0;0\n8;0.2\n16;0.81', 'imperial')).toMatchObject({
+      ok: true,
+      value: [
+        [0, 0],
+        [8, 0.2],
+        [16, 0.81],
+      ],
+    });
+  });
+
+  it('takes ranges like 12-14 among the point numbers', () => {
+    expect(pointNumbers('1, 3-4', 5)).toEqual({ ok: true, value: [1, 3, 4] });
+    expect(pointNumbers('4 - 5 1', 5)).toEqual({ ok: true, value: [1, 4, 5] });
+    expect(pointNumbers('4-6', 5)).toMatchObject({
+      ok: false,
+      message: expect.stringContaining('"4-6" is not a point number'),
+    });
+    expect(dropPoints(onCircle, '2-3')).toEqual({
+      ok: true,
+      value: [onCircle[0], onCircle[3], onCircle[4]],
     });
   });
 });

@@ -1,8 +1,8 @@
-import { visiblePart } from '../../src/ui/text-field.js';
+import { oneRow, visiblePart } from '../../src/ui/text-field.js';
 import { describe, expect, it } from 'vitest';
 import type { Key } from 'ink';
 import { NO_KEY } from '../../src/ui/split-keys.js';
-import { EMPTY_LINE, editLine, lineCommand, lineOf } from '../../src/ui/line-edit.js';
+import { EMPTY_LINE, editLine, lineCommand, lineOf, pasteText } from '../../src/ui/line-edit.js';
 
 const none = NO_KEY;
 const k = (x: Partial<Key>) => ({ ...none, ...x });
@@ -62,5 +62,28 @@ describe('a long line scrolls within its row', () => {
       cursor: 0,
     });
     expect(visiblePart({ value: 'abc', cursor: 3 }, 6)).toEqual({ value: 'abc', cursor: 3 });
+  });
+});
+
+describe('a pasted block', () => {
+  it('keeps its line breaks on a question that takes lines, without blank ends; elsewhere they become spaces', () => {
+    expect(pasteText(EMPTY_LINE, '\r0 0\r\n8 0.2\r16 0.81\r', true)).toEqual({
+      value: '0 0\n8 0.2\n16 0.81',
+      cursor: 17,
+    });
+    expect(pasteText(lineOf('12 '), '34\r56\r', false)).toEqual({ value: '12 34 56 ', cursor: 9 });
+    expect(pasteText(lineOf('ab'), '\u0007', true)).toEqual(lineOf('ab'));
+    // A block after points already there starts its own line; a single word goes where it is put.
+    expect(pasteText(lineOf('0 0'), '8 0.2\r16 1', true).value).toBe('0 0\n8 0.2\n16 1');
+    expect(pasteText(lineOf('0 0; '), '8 0.2\r16 1', true).value).toBe('0 0; 8 0.2\n16 1');
+    expect(pasteText(lineOf('12.'), '5', true).value).toBe('12.5');
+  });
+
+  it('is drawn on one row with ; between its lines, the cursor moved with them', () => {
+    expect(oneRow({ value: '0 0\n8 0.2\n16 1', cursor: 9 })).toEqual({
+      value: '0 0; 8 0.2; 16 1',
+      cursor: 10,
+    });
+    expect(oneRow(lineOf('0 0; 8 0.2'))).toEqual(lineOf('0 0; 8 0.2'));
   });
 });

@@ -51,6 +51,16 @@ export const pointsFieldV1 = z
   .min(3, 'at least 3 points are needed for a circle')
   .max(MAX_ITEMS, tooManyMessage('points'));
 
+/**
+ * Points surveyed along a yaw mark but left out of the fit (past where the mark turns into a
+ * scuff, a misread point), `[x, y]` as in `points`: kept so the case shows every point taken.
+ */
+export const pointsLeftOutFieldV1 = z
+  .array(z.tuple([coordinate, coordinate], { error: 'a point must be [x, y]: two numbers' }), {
+    error: 'pointsLeftOut must be a list of [x, y] pairs',
+  })
+  .max(MAX_ITEMS, tooManyMessage('pointsLeftOut'));
+
 /** A vehicle that left the ground: horizontal distance, drop and take-off grade of its centre of mass. */
 export const airborneV1 = z.looseObject({
   id: analysisId,

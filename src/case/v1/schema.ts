@@ -8,6 +8,7 @@ import {
   chainIssues,
   endAnalysisV1,
   pointsFieldV1,
+  pointsLeftOutFieldV1,
 } from './phase-fields.js';
 import { revisionsDroppedFieldV1, revisionsFieldV1 } from './revision-fields.js';
 
@@ -226,6 +227,7 @@ export const yawV1 = z.looseObject({
   middleOrdinate: q({ ...RULES.length, what: 'middle ordinate' }).optional(),
   offsets: offsetsFieldV1.optional(),
   points: pointsFieldV1.optional(),
+  pointsLeftOut: pointsLeftOutFieldV1.optional(),
   drag: dragV1,
   superelevation: q(RULES.superelevation).optional(),
   pathAdjustment: z
@@ -250,6 +252,12 @@ function yawMeasureIssues(a: z.infer<typeof yawV1>, i: number, ctx: Ctx) {
   const path = (...rest: (string | number)[]) => ['analyses', i, ...rest];
   const hasC = a.chord !== undefined;
   const hasM = a.middleOrdinate !== undefined;
+  if (a.pointsLeftOut !== undefined && a.points === undefined)
+    ctx.addIssue({
+      code: 'custom',
+      path: path('pointsLeftOut'),
+      message: 'pointsLeftOut goes with points (the points fitted)',
+    });
   if (a.points !== undefined) {
     if (hasC || hasM || a.offsets !== undefined)
       ctx.addIssue({ code: 'custom', path: path('points'), message: ONE_WAY });
