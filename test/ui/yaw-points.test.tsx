@@ -116,7 +116,8 @@ describe('yaw radius from surveyed points', () => {
     const step = radiusStep(app);
     expect(step.result).toBeCloseTo(160, 1);
     // The report: the fit's step as solve gives it, and the point left out listed as such.
-    await app.press('w', 'Writing the report');
+    await app.press('w', 'Write the report as');
+    await app.press('m', 'Writing the report');
     await app.waitText('Report written to', 30_000);
     const md = fs.readFileSync(
       path.join(
