@@ -32,6 +32,7 @@ export { slideSpeed, type SlideSegment } from './slide.js';
 export { radiusFromChord, pathRadius, criticalSpeed, ordinateSensitivity } from './yaw.js';
 export { reactionDistance, brakingDistance, slideDuration } from './time-distance.js';
 export { solveCase, solveAnalysis } from './solve-case.js';
+export { yawRadius } from './solve-yaw.js';
 export { APPEARANCE_NOTES } from './solve-skid.js';
 
 export { exact } from './step.js';

@@ -113,10 +113,11 @@ export function solveYaw(c: CaseInput, i: number, a: YawInput): AnalysisOutcome 
 
 /**
  * Radius of the mark, measured either way: chord + middle ordinate (R = C²/(8M) + M/2), or the
- * least-squares circle through offsets. Paths are relative to the analysis.
+ * least-squares circle through offsets, or through surveyed points. Paths are relative to the
+ * analysis. The running chain calls it too, with the measure answered so far.
  */
-function yawRadius(
-  a: YawInput,
+export function yawRadius(
+  a: Pick<YawInput, 'chord' | 'middleOrdinate' | 'offsets' | 'points'>,
   system: CaseInput['units'],
   u: Units,
 ): Outcome<{

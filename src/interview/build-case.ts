@@ -78,7 +78,7 @@ function skidOf(
 }
 
 /** The radius's measurement of yaw `i` as the file holds it: one way only (the file refuses two). */
-function yawMeasure(r: AnswerReader, i: number): Record<string, unknown> {
+export function yawMeasure(r: AnswerReader, i: number): Record<string, unknown> {
   const p = `a${i}`;
   if (measuredByOffsets(r.answers, i))
     return {

@@ -1,20 +1,20 @@
 /** The running chain: the engine's solution of the analyses completed so far. */
 import { loadCase } from '../case/load.js';
 import { describeIssue } from '../case/issues.js';
-import { spread } from '../engine/spread.js';
 import {
   dragFactor,
-  radiusFromChord,
   solveCase,
+  yawRadius,
   unitsOf as engineUnits,
   type CaseSolution,
 } from '../engine/index.js';
 import type { Step } from '../engine/types.js';
 import { RULES } from '../case/quantity.js';
 import type { InterviewState } from './types.js';
-import { analysisId, buildCase } from './build-case.js';
+import { analysisId, buildCase, yawMeasure } from './build-case.js';
 import { analysisCount, markLook, segmentCount, unitsOf } from './answers-read.js';
 import { readAnswers } from './answer-values.js';
+import type { AnswerReader } from './types.js';
 import { dragOf, quantityOf } from './build-parts.js';
 
 /**
@@ -46,6 +46,20 @@ function solveFresh(state: InterviewState, id: string): CaseSolution {
   return solveCase(loaded.case, loaded.unknownFields);
 }
 
+/**
+ * The yaw's radius measure as the file would hold it (chord and ordinate, offsets, or points),
+ * once every value of it is answered; undefined before.
+ */
+function radiusMeasure(r: AnswerReader, i: number): Parameters<typeof yawRadius>[0] | undefined {
+  const m = yawMeasure(r, i) as Parameters<typeof yawRadius>[0];
+  if (m.points !== undefined) return m.points.length >= 3 ? m : undefined;
+  if (m.offsets !== undefined)
+    return m.offsets.chord !== undefined && m.offsets.stations !== undefined ? m : undefined;
+  const C = quantityOf(r, `a${i}.chord`, RULES.length);
+  const M = quantityOf(r, `a${i}.ordinate`, { ...RULES.length, what: 'middle ordinate' });
+  return C !== undefined && M !== undefined ? { chord: C, middleOrdinate: M } : undefined;
+}
+
 /** A figure of an analysis still being answered, with the analysis it belongs to. */
 export interface EarlyStep {
   analysis: number;
@@ -54,7 +68,7 @@ export interface EarlyStep {
 
 /**
  * The figures of the analyses not yet complete whose own inputs are all answered: a yaw mark's
- * radius once its chord and middle ordinate are in, each drag factor once its source's answers
+ * radius once its chord and middle ordinate (or its offsets, or its points) are in, each drag factor once its source's answers
  * are (the mean of the test skids, the sled's pulls, ...). Each comes from the engine's own
  * function, the one the finished chain calls; the panel shows them before the chain is whole.
  */
@@ -68,10 +82,9 @@ export function earlySteps(state: InterviewState): EarlyStep[] {
     const look = markLook(state.answers, i);
     if (!look || solved.has(analysisId(state, i, look === 'yaw' ? 'yaw' : 'skid'))) continue;
     if (look === 'yaw') {
-      const C = quantityOf(r, `a${i}.chord`, RULES.length);
-      const M = quantityOf(r, `a${i}.ordinate`, { ...RULES.length, what: 'middle ordinate' });
-      if (C !== undefined && M !== undefined) {
-        const radius = radiusFromChord(spread(C), spread(M), u);
+      const measure = radiusMeasure(r, i);
+      if (measure) {
+        const radius = yawRadius(measure, system, u);
         if (radius.ok) out.push({ analysis: i, step: radius.value.step });
       }
       const d = dragOf(r, `a${i}`);
