@@ -57,6 +57,20 @@ export function useAppInput(deps: InputDeps) {
   latest.current = deps;
   // The text of a bracketed paste (between ESC[200~ and ESC[201~) while it arrives, else undefined.
   const pasting = useRef<string | undefined>(undefined);
+  const pasteTimer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
+  /** Ends the paste: what arrived goes into the field. */
+  const endPaste = () => {
+    clearTimeout(pasteTimer.current);
+    const text = pasting.current;
+    pasting.current = undefined;
+    if (text !== undefined) pasted(text, latest.current);
+  };
+  // A paste whose end marker never comes (a terminal that drops it) must not swallow every key
+  // after it: it ends after a pause, or at a key that saves and leaves.
+  const waitForPasteEnd = () => {
+    clearTimeout(pasteTimer.current);
+    pasteTimer.current = setTimeout(endPaste, PASTE_PAUSE_MS);
+  };
   useInput(
     (chunk, chunkKey) => {
       // One read can hold several keys (typing ahead, a paste); each is handled in turn against
@@ -65,12 +79,18 @@ export function useAppInput(deps: InputDeps) {
       // off leaves raw mode, and a second Ctrl+C would then reach the process as a signal.
       if (latest.current.app.current().leaving) return;
       // Bracketed paste: Ink hands the start marker, the text and the end marker one by one.
-      if (chunk === PASTE_START) return void (pasting.current = '');
+      if (chunk === PASTE_START) {
+        pasting.current = '';
+        return waitForPasteEnd();
+      }
       if (pasting.current !== undefined) {
-        if (chunk !== PASTE_END) return void (pasting.current += chunk);
-        const text = pasting.current;
-        pasting.current = undefined;
-        return pasted(text, latest.current);
+        if (chunk === PASTE_END) return endPaste();
+        if (!(chunkKey.ctrl && (chunk === 'q' || chunk === 'c'))) {
+          pasting.current += chunk;
+          return waitForPasteEnd();
+        }
+        // Ctrl+Q or Ctrl+C inside a paste with no end: the paste ends, and the key is handled.
+        endPaste();
       }
       // A block of lines pasted into a question that takes lines, without the markers (a
       // terminal that does not bracket pastes): its line breaks stay in the answer. Text then one
@@ -99,6 +119,8 @@ export function useAppInput(deps: InputDeps) {
 /** The markers a terminal puts around a paste once bracketed paste is on, as Ink hands them. */
 const PASTE_START = '[200~';
 const PASTE_END = '[201~';
+/** How long a paste may pause before it is taken as ended without its end marker. */
+const PASTE_PAUSE_MS = 400;
 
 /** True when the question on screen takes several lines (surveyed points). */
 function isLinesQuestion(d: InputDeps): boolean {

@@ -206,7 +206,9 @@ export function useAppModel(
     const held = s && draft === s.state.answers[s.state.cursor]?.text.trim();
     if (s && draft && !held && !draftArmed.current) {
       draftArmed.current = true;
-      const shown = draft.length > 30 ? `${draft.slice(0, 30)}…` : draft;
+      // pasted lines (surveyed points) shown on one line, as the field shows them
+      const one = draft.split('\n').join('; ');
+      const shown = one.length > 30 ? `${one.slice(0, 30)}…` : one;
       const saveNote = `"${shown}" is typed but not accepted: Enter accepts it; ${keysFor('save-leave')} again leaves without it.`;
       update((m) => (m.session ? { ...m, session: { ...m.session, saveNote } } : m));
       return;

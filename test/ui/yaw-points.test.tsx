@@ -201,6 +201,28 @@ describe('yaw radius from surveyed points', () => {
   });
 });
 
+describe('a paste whose end marker never comes', () => {
+  it('ends after a pause: the points are in the line, and the keys after it work', async () => {
+    const app = await toPoints();
+    const block = ARC.map(([x, y]) => `${x},${y}`).join('\r');
+    // the start marker and the points, but no ESC[201~ (a terminal that dropped it)
+    await app.press(`\u001b[200~${block}`, `${ARC.length} lines pasted`);
+    const f = await app.press(ENTER, 'Points to leave out');
+    expect(flat(f)).toContain(`${ARC.length} points read`);
+  });
+
+  it('ends at Ctrl+Q, which then saves and leaves as it always does', async () => {
+    const app = await toPoints();
+    app.stdin.write(`\u001b[200~0,0\r8,0.2`);
+    // the paste ends into the line; leaving then says the lines are typed but not accepted
+    const f = await app.press('\u0011', 'is typed but not accepted');
+    expect(f).toContain('"0,0; 8,0.2" is typed but not accepted');
+    await app.press('\u0011', 'Saving and leaving');
+    await app.waitFor(() => app.exits.length > 0, 'the app to exit');
+    expect(app.exits).toEqual([0]);
+  });
+});
+
 describe('the help documents the points syntax', () => {
   it('gives the forms, and the examples it gives are read as written', async () => {
     const { helpLines } = await import('../../src/ui/help-overlay.js');
