@@ -82,7 +82,7 @@ export function readTestSkids(
   const items = text.split(/\s*[,;]\s*/).filter((s) => s.trim() !== '');
   const how =
     'give each test as speed/distance (e.g. 30/42, 35/57.5), or the drag factors worked out from the tests (e.g. 0.68, 0.71, 0.70)';
-  if (items.length === 0) return { ok: false, message: how };
+  if (items.length === 0) return { ok: false, message: `test skids: the answer is empty; ${how}` };
   if (!text.includes('/')) return readFactors(text, units, rules.factor, how);
   const out: TestSkid[] = [];
   const notes: string[] = [];
