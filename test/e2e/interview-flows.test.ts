@@ -2,7 +2,8 @@
 // kill, the fast path): the figures on the review screen must equal `skidcase solve --json` on the
 // file the program saved.
 import { afterAll, afterEach, expect, it } from 'vitest';
-import { existsSync, readFileSync } from 'node:fs';
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { disposeAll, ptySupport, startTerm, type Term } from './harness.js';
 import { makeWorkspace, type Workspace } from './env.js';
 import { describeInTerminal } from './pty-gate.js';
@@ -27,6 +28,7 @@ import {
 import { stateFromCase } from '../../src/interview/from-case.js';
 import { firstOpenQuestion, currentQuestion } from '../../src/interview/derived.js';
 import { loadCaseText } from '../../src/case/load.js';
+import type { InterviewMode } from '../../src/interview/types.js';
 
 const pty = await ptySupport();
 
@@ -56,8 +58,11 @@ async function typeWhole(
   script: Script,
   onAnswer?: (id: string, keys: number) => void,
   typingDelayMs?: number,
+  mode: InterviewMode = 'guided',
 ) {
   const ws = workspace();
+  // The interview's mode is the investigator's preference: brisk keeps the explanations closed.
+  if (mode !== 'guided') writeFileSync(join(ws.config, 'config.json'), JSON.stringify({ mode }));
   const t = await startTerm({
     cwd: ws.root,
     env: ws.env,
@@ -66,7 +71,7 @@ async function typeWhole(
     ...(typingDelayMs === undefined ? {} : { typingDelayMs }),
   });
   await openNewCase(t, ws);
-  await typeInterview(t, script, onAnswer ? { onAnswer } : {});
+  await typeInterview(t, script, onAnswer ? { onAnswer } : {}, undefined, mode);
   await t.waitFor(REVIEW, { what: 'the review' });
   const lines = await readReview(t);
   const files = caseFiles(ws.sessions);
@@ -177,13 +182,15 @@ describeInTerminal(
         (id, k) => (slideKeys.guided += isSlide(id) ? k : 0),
         0,
       );
-      // The same content (details, labels, vehicle, marks, segments, grades), the segments on one
-      // line typed at the surfaces question.
+      // The same content (details, labels, vehicle, marks, segments, grades), in brisk mode, the
+      // segments on one line typed at the surfaces question.
       const quick = await typeWhole(
         SLIDE_ONLY_QUICK,
         (id, k) => (slideKeys.quick += isSlide(id) ? k : 0),
         0,
+        'brisk',
       );
+      await quick.t.waitFor(/brisk mode/, { what: 'brisk mode named in the header' });
       // Enter for every default and optional text (no labels), the segments on one line.
       const fast = await typeWhole(SLIDE_ONLY_FAST, undefined, 0);
       const [g, q, f] = await Promise.all([
