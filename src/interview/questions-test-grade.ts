@@ -22,9 +22,12 @@ function gradeWords(a: Answers, prefix: string): string {
 /** What "same stretch" does with the grade, for the notice after the answer. */
 function sameNote(a: Answers, prefix: string): string {
   const g = gradeWords(a, prefix);
-  return g === 'level'
-    ? 'The tests ran on this level stretch: the test ratio is the level drag factor.'
-    : `The test ratio S²/(C d) already holds this stretch's ${g} grade: it is recorded as the tests' grade and taken off to give the level drag factor, and the segment's grade is applied once after it (with every wheel braking the two cancel).`;
+  if (g === 'level')
+    return 'The tests ran on this level stretch: the test ratio is the level drag factor.';
+  const note = `The test ratio S²/(C d) already holds this stretch's ${g} grade: it is recorded as the tests' grade and taken off to give the level drag factor, and the segment's grade is applied once after it (with every wheel braking the two cancel).`;
+  return testsAsFactors(a, prefix)
+    ? `${note} Whether the factors you typed still hold it is asked next.`
+    : note;
 }
 
 /**

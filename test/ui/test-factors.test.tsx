@@ -117,6 +117,25 @@ describe('test skids typed as the drag factors worked out from them', () => {
     expect(step.why).toContain("the tests' -2% grade was taken off");
   });
 
+  it('on the slide’s own sloped stretch, factors that hold its grade give the test ratio back as the effective drag', async () => {
+    const app = await toLook();
+    await toDragSource(app);
+    await app.press('k', 'Test skids for the slide');
+    await app.answer('0.68, 0.71, 0.70', 'Grade, the slide');
+    let f = said(await app.answer('-2', 'same stretch'));
+    expect(f).toContain('Whether the factors you typed still hold it is asked next.');
+    await app.press('s', 'Test factors and the grade');
+    f = said(await app.press('g', 'How did the slide end'));
+    expect(f).toContain('its grade is taken off once');
+    await endToReview(app);
+    const r = await runSolve(savedFile(app), true);
+    const steps = JSON.parse(r.out).analyses[0].steps as { name: string; result: number }[];
+    const m = mean([0.68, 0.71, 0.7]);
+    // Level f = ratio + 0.02; with every wheel braking, f × 1 − 0.02 is the ratio again.
+    expect(steps.find((s) => s.name.startsWith('Drag factor'))!.result).toBeCloseTo(m + 0.02, 12);
+    expect(steps.find((s) => s.name.startsWith('Effective drag'))!.result).toBeCloseTo(m, 12);
+  });
+
   it('level-ground factors keep their figures: no grade is taken off them', async () => {
     const app = await toLook();
     await toDragSource(app);
