@@ -137,6 +137,8 @@ export const RULES = {
   sledWeight: { what: 'sled weight', gt: 0 },
   sledPull: { what: 'sled pull', gt: 0 },
   decel: { what: 'decelerometer reading', gt: 0, max: 2 },
+  /** A drag factor worked out from one test skid (`factors` of test skids). */
+  testFactor: { what: 'test drag factor', gt: 0, max: 2 },
   /** Height of take-off above landing; negative when the vehicle landed higher. */
   drop: { what: 'drop', min: -100_000, max: 100_000 },
   /** Take-off path as a signed percent grade (+ upward); ±100% is ±45°. */

@@ -32,7 +32,7 @@ export const KNOWN = {
   drag: {
     entered: ['source', 'value', 'low', 'high', 'note', 'decimals'],
     table: ['source', 'surface', 'value', 'low', 'high', 'band', 'note', 'decimals'],
-    'test-skids': ['source', 'tests', 'testGrade', 'note'],
+    'test-skids': ['source', 'tests', 'factors', 'gradeTakenOut', 'testGrade', 'note'],
     sled: ['source', 'weight', 'pulls', 'note'],
     decelerometer: ['source', 'readings', 'note'],
   },

@@ -129,5 +129,19 @@ export function testSkidDrag(
   system: UnitSystem,
   testGradePercent = 0,
 ): number {
-  return (speed * speed) / (tradeConstants(system).slide * distance) - testGradePercent / 100;
+  return levelTestDrag(
+    (speed * speed) / (tradeConstants(system).slide * distance),
+    testGradePercent,
+  );
+}
+
+/**
+ * The test-skid grade rule: a test on a grade G_t (signed percent, + uphill in its direction)
+ * gives the ratio f + G_t/100, so the level drag factor is ratio − G_t/100. Every factor from a
+ * test, worked out here from speed and distance or typed as already worked out, passes here
+ * once. Rising in the ratio, falling in G_t.
+ * @example levelTestDrag(0.75, 5) // 0.70
+ */
+export function levelTestDrag(ratio: number, testGradePercent: number): number {
+  return ratio - testGradePercent / 100;
 }

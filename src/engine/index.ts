@@ -27,6 +27,7 @@ export {
   criticalSpeedOf,
   wheelsBraking,
   testSkidDrag,
+  levelTestDrag,
 } from './formulas.js';
 export { slideSpeed, type SlideSegment } from './slide.js';
 export { radiusFromChord, pathRadius, criticalSpeed, ordinateSensitivity } from './yaw.js';

@@ -26,7 +26,12 @@ export type DragInput =
     }
   | {
       source: 'test-skids';
-      tests: { speed: QuantityInput; distance: QuantityInput }[];
+      /** Each test's speed and distance; or else `factors`. */
+      tests?: { speed: QuantityInput; distance: QuantityInput }[];
+      /** Drag factors already worked out from the tests, one per test; or else `tests`. */
+      factors?: QuantityInput[];
+      /** `factors` only: true when their test grade was taken out already (level-ground factors). */
+      gradeTakenOut?: boolean;
       /** Grade the tests were run on, signed percent, + uphill in their direction; default level. */
       testGrade?: QuantityInput;
       note?: string;

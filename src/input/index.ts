@@ -11,5 +11,6 @@ export { formatSegmentLine } from './format-segment-line.js';
 export { QUICK_ENTRY_HELP, UNIT_SUFFIX_HELP, unitSuffixes } from './help.js';
 export { caseUnitOf } from './units.js';
 export { showNumber } from './show.js';
+export { withTypedDecimals } from './typed-decimals.js';
 
 export type { QuantityKind, QuantitySpec, ListSpec } from './types.js';

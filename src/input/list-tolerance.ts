@@ -30,6 +30,7 @@ export function tolerancesForAll(
     );
   const ctx: ReadContext = { field: spec.field, kind: spec.kind, units: spec.units, inList: true };
   const values = [...list.values];
+  const asTyped = [...list.asTyped];
   // Conversion notes of the re-read items are written again below, with their tolerance.
   const reread = bare.map((_, i) => `${spec.item} ${i + 1}: `);
   const notes = list.notes.filter((n) => !reread.some((p) => n.startsWith(p)));
@@ -45,9 +46,16 @@ export function tolerancesForAll(
     const checked = checkItem(tol, spec, ctx);
     if (checked instanceof ReadError) return new ReadError(`${label}: ${checked.message}`);
     values[i] = checked.value;
+    asTyped[i] = !checked.converted;
     if (checked.converted) notes.push(`${label}: ${checked.converted}`);
   }
   const at = (n: string) => Number(/^\S+ (\d+):/.exec(n)?.[1] ?? 0);
   notes.sort((a, b) => at(a) - at(b));
-  return { ...list, values, notes, shared: `± ${last.tol.text} taken for every ${spec.item}` };
+  return {
+    ...list,
+    values,
+    asTyped,
+    notes,
+    shared: `± ${last.tol.text} taken for every ${spec.item}`,
+  };
 }

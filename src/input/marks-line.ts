@@ -9,7 +9,8 @@ import { Cursor, ReadError } from './cursor.js';
 import { readItem } from './item.js';
 import { isOp, lex, type Token } from './lexer.js';
 import { badTokenMessage } from './parse-quantity.js';
-import { readList } from './parse-list.js';
+import { readList, typedValues } from './parse-list.js';
+import { withTypedDecimals } from './typed-decimals.js';
 import { tolerancesForAll } from './list-tolerance.js';
 import { mixedUnitsMessage } from './mixed-units.js';
 import type { QuantitySpec } from './types.js';
@@ -81,7 +82,7 @@ export function parseMarksLine(text: string, ctx: MarksContext): MarksResult {
   const mixed = mixedUnitsMessage(r.raws, ctx.units, 'mark');
   return {
     ok: true,
-    marks: r.values,
+    marks: typedValues(r),
     ...(r.notes.length ? { converted: r.notes.join('; ') } : {}),
     ...(r.shared ? { shared: r.shared } : {}),
     ...(mixed ? { mixed } : {}),
@@ -127,7 +128,7 @@ function equalMarks(
     };
   const checked = checkItem(raw, spec, ctx);
   if (checked instanceof ReadError) return { ok: false, message: `marks: ${checked.message}` };
-  const v = checked.value;
+  const v = checked.converted ? checked.value : withTypedDecimals(checked.value, raw.text);
   const marks = Array.from({ length: n }, () => (typeof v === 'number' ? v : { ...v }));
   return checked.converted
     ? { ok: true, marks, converted: checked.converted }

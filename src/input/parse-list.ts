@@ -10,6 +10,7 @@ import { isOp, lex, type Token } from './lexer.js';
 import type { ReadContext } from './measure.js';
 import { badTokenMessage, emptyMessage } from './parse-quantity.js';
 import type { Quantity } from '../case/quantity.js';
+import { withTypedDecimals } from './typed-decimals.js';
 import type { CountResult, CountSpec, ListResult, ListSpec, QuantitySpec } from './types.js';
 
 /** Items read from tokens, before the count limits. Used by the marks line as well. */
@@ -18,6 +19,15 @@ export interface ListRead {
   notes: string[];
   /** Each item as read, in the order typed (for a tolerance written once after the list). */
   raws: RawItem[];
+  /** Per item: typed in the case's own units (not converted), so its typed decimals are kept. */
+  asTyped: boolean[];
+}
+
+/** The values with the decimals each was typed with (`52.0` stays `52.0` in the record). */
+export function typedValues(r: ListRead): Quantity[] {
+  return r.values.map((v, i) =>
+    r.asTyped[i] && r.raws[i] ? withTypedDecimals(v, r.raws[i].text) : v,
+  );
 }
 
 const isSep = (t: Token | undefined) => isOp(t, 'comma', 'semi');
@@ -27,6 +37,7 @@ export function readList(cur: Cursor, spec: QuantitySpec & { item: string }): Re
   const values: Quantity[] = [];
   const notes: string[] = [];
   const raws: RawItem[] = [];
+  const asTyped: boolean[] = [];
   while (!cur.done()) {
     const label = `${spec.item} ${values.length + 1}`;
     if (isSep(cur.peek()))
@@ -43,6 +54,7 @@ export function readList(cur: Cursor, spec: QuantitySpec & { item: string }): Re
     if (checked instanceof ReadError) return new ReadError(`${label}: ${checked.message}`);
     values.push(checked.value);
     raws.push(raw);
+    asTyped.push(!checked.converted);
     if (checked.converted) notes.push(`${label}: ${checked.converted}`);
     const t = cur.peek();
     if (isSep(t)) {
@@ -54,7 +66,7 @@ export function readList(cur: Cursor, spec: QuantitySpec & { item: string }): Re
     const why = t.t === 'bad' ? t.why : `cannot read '${cur.rest()}' after '${raw.text}'`;
     return new ReadError(`${label}: ${spec.field}: ${why}`);
   }
-  return { values, notes, raws };
+  return { values, notes, raws, asTyped };
 }
 
 /**
@@ -72,9 +84,10 @@ export function parseList(text: string, spec: ListSpec): ListResult {
   if (r instanceof ReadError) return { ok: false, message: r.message };
   const limits = countLimits(r.values.length, spec);
   if (limits) return { ok: false, message: limits };
+  const values = typedValues(r);
   return r.notes.length
-    ? { ok: true, values: r.values, converted: r.notes.join('; ') }
-    : { ok: true, values: r.values };
+    ? { ok: true, values, converted: r.notes.join('; ') }
+    : { ok: true, values };
 }
 
 function countLimits(n: number, spec: ListSpec): string | undefined {

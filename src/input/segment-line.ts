@@ -3,16 +3,19 @@
  *
  * ```
  * line     = segment { ("," | ";") segment }
- * segment  = [LENGTH] ["@" DRAG] [GRADE] ["[" label "]"]
+ * segment  = [LENGTH] ["@" DRAG] [GRADE] ["[" label "]" | label]
  * LENGTH   = a length in the case's unit or with a suffix: 48, 15 m, 48 ft 6 in, 47-49, 48 ± 0.5
  * DRAG     = a decimal, optionally with its range: 0.74, 0.70-0.78, 0.74 (0.70-0.80), 0.74 ± 0.04
  *          | a reference table key, optionally its band and your own pick:
  *            gravel-loose, asphalt-dry-travelled/over30, gravel-loose=0.5, gravel-loose=0.45-0.6
  * GRADE    = signed percent, + uphill in the direction of travel: +2%, -3%, -3% ± 0.5,
- *            -3% (-4 to -2); no grade means level (0)
+ *            -3% (-4 to -2); no grade means level (0). After a drag factor that is complete in
+ *            itself (a range, a tolerance, a table key) the % may be left out: @0.70-0.80 -3
+ * label    = free text in brackets, or without them at the end of the segment, starting with a
+ *            letter: 21 @0.45-0.55 -3% gravel shoulder
  * ```
  *
- * Example (invented): `48 @0.74 +2%, 31 @0.55 [gravel], 22 @0.40 -3%`. Only a slide of one
+ * Example (invented): `48 @0.74 +2%, 31 @0.55 [gravel], 22 @0.40-0.50 -3 grass verge`. Only a slide of one
  * segment may leave out the length (it then comes from the marks). A comma directly between two
  * digits is never a separator: `0,55` is a comma decimal and gets a message.
  */

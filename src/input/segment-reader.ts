@@ -9,7 +9,7 @@ import type { UnitSystem } from '../engine/types.js';
 import { checkItem, type Checked } from './check.js';
 import { Cursor, ReadError, type Read } from './cursor.js';
 import { gradeAhead, measures, readItem, type RawItem } from './item.js';
-import { isOp } from './lexer.js';
+import { isOp, type Token } from './lexer.js';
 import { findUnit } from './units.js';
 import { lookupTableKey, tableDrag, type SpeedBand } from './table-drag.js';
 
@@ -28,8 +28,14 @@ const FIELDS = {
 } as const;
 type Field = keyof typeof FIELDS;
 
+/** A word that begins a label: starts with a letter and is no percent sign (`%`, `pct`). */
+const isLabelWord = (t: Token | undefined): boolean =>
+  t?.t === 'word' && /^\p{L}/u.test(t.text) && !findUnit('percent', t.text);
+
 export class SegmentReader {
   private readonly seg: Partial<SegmentV1> = {};
+  /** True once the drag factor read is complete in itself: a range, a tolerance or a table key. */
+  private dragComplete = false;
 
   constructor(
     private readonly cur: Cursor,
@@ -42,7 +48,13 @@ export class SegmentReader {
   read(): Read<SegmentV1> {
     const { cur, seg } = this;
     const problem =
-      this.label() ?? this.length() ?? this.drag() ?? this.grade() ?? this.label() ?? this.label();
+      this.label() ??
+      this.length() ??
+      this.drag() ??
+      this.grade() ??
+      this.label() ??
+      this.label() ??
+      this.bareLabel();
     if (problem) return problem;
     if (!cur.done()) return new ReadError(this.unreadable());
     return seg as SegmentV1;
@@ -50,11 +62,25 @@ export class SegmentReader {
 
   private item(field: Field, stopBeforeGrade: boolean): Read<RawItem> {
     const { kind } = FIELDS[field];
-    return readItem(
-      this.cur,
+    const { cur } = this;
+    // A drag factor takes no unit: a word after it begins the label (`@0.45 gravel shoulder`).
+    let stop = cur.stop;
+    if (field === 'drag factor')
+      for (let i = cur.pos; i < cur.stop; i++)
+        if (isLabelWord(cur.tokens[i]) && cur.tokens[i]!.text.toLowerCase() !== 'to') {
+          stop = i;
+          break;
+        }
+    const sub = new Cursor(cur.tokens, cur.source, stop);
+    sub.pos = cur.pos;
+    const raw = readItem(
+      sub,
       { field, kind, units: this.ctx.units },
       { allowRange: true, stopBeforeGrade },
     );
+    cur.pos = sub.pos;
+    cur.itemStart = sub.itemStart;
+    return raw;
   }
 
   private check(field: Field, raw: RawItem): Read<Checked> {
@@ -73,6 +99,21 @@ export class SegmentReader {
     if (t.text.trim() === '')
       return new ReadError('the [label] is empty; write a surface name in it, e.g. [gravel]');
     this.seg.label = t.text.trim();
+    return undefined;
+  }
+
+  /**
+   * A label typed without brackets at the end of the segment (`21 @0.5 -3% gravel shoulder`):
+   * the rest of the segment, when it begins with a word. Brackets are still needed for a label
+   * that holds a comma or comes before the figures.
+   */
+  private bareLabel(): ReadError | undefined {
+    const { cur } = this;
+    const t = cur.peek();
+    if (!isLabelWord(t)) return undefined;
+    if (this.seg.label !== undefined) return new ReadError('give one label per segment');
+    this.seg.label = cur.rest().trim();
+    cur.pos = cur.stop;
     return undefined;
   }
 
@@ -107,6 +148,7 @@ export class SegmentReader {
       const d = this.tableDrag(t.text);
       if (d instanceof ReadError) return d;
       this.seg.drag = d;
+      this.dragComplete = true;
       return undefined;
     }
     if (t === undefined || isOp(t, 'minus', 'plus') || t.t === 'label')
@@ -123,6 +165,7 @@ export class SegmentReader {
       );
     }
     const q = d.value;
+    this.dragComplete = raw.form !== 'single';
     this.seg.drag =
       typeof q === 'number'
         ? { source: 'entered', value: q }
@@ -156,10 +199,14 @@ export class SegmentReader {
     this.seg.grade = 0;
     const g = cur.peek();
     if (isOp(g, 'minus', 'plus')) {
+      const bare = this.bareGrade();
+      if (bare !== undefined) return bare === true ? undefined : bare;
       const raw = this.item('grade', false);
       if (raw instanceof ReadError) return raw;
-      // The % is required so that a grade never passes for part of a drag factor range.
-      if (!measures(raw).some((m) => m.parts[0]!.unit))
+      // The % is required so that a grade never passes for part of a drag factor range, except
+      // after a drag factor that is complete in itself (a range, a tolerance, a table key): a
+      // signed number after `@0.70-0.80` can be nothing but the grade.
+      if (!measures(raw).some((m) => m.parts[0]!.unit) && !this.dragComplete)
         return new ReadError(`write the grade with %, e.g. ${raw.text.replace(/\s+/g, '')}%`);
       const grade = this.check('grade', raw);
       if (grade instanceof ReadError) return grade;
@@ -180,6 +227,28 @@ export class SegmentReader {
     cur.take();
     cur.take();
     return undefined;
+  }
+
+  /**
+   * A signed grade without its % right after a complete drag factor (`@0.70-0.80 -3`), followed by
+   * nothing, a label or the next segment: true when read, a ReadError when out of bounds,
+   * undefined when this is not such a grade (the usual reading with % then applies).
+   */
+  private bareGrade(): true | ReadError | undefined {
+    const { cur } = this;
+    const sign = cur.peek();
+    const n = cur.peek(1);
+    const after = cur.peek(2);
+    if (!this.dragComplete || n?.t !== 'num' || !sign || sign.end !== n.at) return undefined;
+    if (after && !(after.t === 'label' || (after.t === 'word' && !findUnit('percent', after.text))))
+      return undefined;
+    const v = isOp(sign, 'minus') ? -n.value : n.value;
+    const { gt, lt } = RULES.grade;
+    if (!(v > gt && v < lt)) return new ReadError(`grade must be between ${gt} and ${lt} percent`);
+    cur.take();
+    cur.take();
+    this.seg.grade = v;
+    return true;
   }
 
   /** What cannot be read at the cursor: a stray character's reason, or the text itself. */

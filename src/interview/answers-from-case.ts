@@ -67,10 +67,17 @@ function dragAnswers(
       }
     }
   } else if (d.source === 'test-skids') {
-    put(
-      `${p}.drag.tests`,
-      d.tests.map((t) => `${quantityText(t.speed)}/${quantityText(t.distance)}`).join(', '),
-    );
+    if (d.factors) {
+      put(`${p}.drag.tests`, d.factors.map(quantityText).join(', '));
+      if (d.gradeTakenOut !== undefined)
+        put(`${p}.drag.factorsGrade`, d.gradeTakenOut ? 'level' : 'on-grade');
+    } else
+      put(
+        `${p}.drag.tests`,
+        (d.tests ?? [])
+          .map((t) => `${quantityText(t.speed)}/${quantityText(t.distance)}`)
+          .join(', '),
+      );
   } else if (d.source === 'sled') {
     put(`${p}.drag.weight`, quantityText(d.weight));
     put(`${p}.drag.pulls`, list(d.pulls));

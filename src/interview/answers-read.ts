@@ -121,3 +121,13 @@ export const isSegment = (prefix: string): boolean => /^a\d+\.seg\d+$/.test(pref
 /** Where the tests were run, for segment `prefix`: `same` stretch and direction, or `elsewhere`. */
 export const testWhere = (a: Answers, prefix: string): string | undefined =>
   choiceOf(a, `${prefix}.drag.testWhere`);
+
+/** True when the tests under `prefix` were typed as drag factors worked out from them. */
+export const testsAsFactors = (a: Answers, prefix: string): boolean => {
+  const v = a[`${prefix}.drag.tests`]?.value;
+  return typeof v === 'object' && v !== null && 'factors' in v;
+};
+
+/** True when typed test factors were said to be level-ground (their test grade taken out). */
+export const factorsLevel = (a: Answers, prefix: string): boolean =>
+  choiceOf(a, `${prefix}.drag.factorsGrade`) === 'level';

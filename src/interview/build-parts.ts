@@ -14,7 +14,7 @@ import {
 } from '../case/v1/schema.js';
 import type { AnswerReader } from './types.js';
 import { formatSegmentLine } from '../input/index.js';
-import { isSegment, segmentCount, slideInParts, testWhere } from './answers-read.js';
+import { factorsLevel, isSegment, segmentCount, slideInParts, testWhere } from './answers-read.js';
 import { OTHER_SURFACE } from './drag-table.js';
 import { signed } from './signed.js';
 import { WHEELS } from './wheels.js';
@@ -39,9 +39,15 @@ function rawDrag(r: AnswerReader, p: string, withTestGrade: boolean): Record<str
   const source = r.value(`${p}.drag.source`);
   if (source === 'test-skids') {
     const testGrade = withTestGrade ? testGradeOf(r, p) : undefined;
+    const tests = r.value(`${p}.drag.tests`);
+    // Typed as the factors worked out from the tests, or as each test's speed and distance.
+    const factors =
+      typeof tests === 'object' && tests !== null && 'factors' in tests ? tests.factors : undefined;
+    const level = factors !== undefined && factorsLevel(r.answers, p);
     return {
       source,
-      tests: r.value(`${p}.drag.tests`),
+      ...(factors !== undefined ? { factors } : { tests }),
+      ...(level ? { gradeTakenOut: true } : {}),
       ...(testGrade !== undefined ? { testGrade } : {}),
     };
   }

@@ -27,7 +27,7 @@ export function measuredDragLine(r: AnswerReader, prefix: string): string | unde
   if (!drag || drag.source === 'entered' || drag.source === 'table') return undefined;
   const count =
     drag.source === 'test-skids'
-      ? drag.tests.length
+      ? (drag.factors ?? drag.tests ?? []).length
       : drag.source === 'sled'
         ? drag.pulls.length
         : drag.readings.length;
@@ -35,7 +35,7 @@ export function measuredDragLine(r: AnswerReader, prefix: string): string | unde
   if (!out.ok) return undefined;
   const { value, low, high } = out.value.f;
   const d = (x: number) => formatNumber(x, 'drag');
-  const what = WHAT[source]!;
+  const what = drag.source === 'test-skids' && drag.factors ? 'test factor' : WHAT[source]!;
   if (count === 1) return `f = ${d(value)}: from 1 ${what}.`;
   if (d(low) === d(high))
     return `f = ${d(value)}: the mean of ${count} ${what}s, which agree to two decimals.`;

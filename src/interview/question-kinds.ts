@@ -11,7 +11,8 @@ import type {
   ParseResult,
   Question,
 } from './types.js';
-import { readQuantity, withTypedDecimals, type QuantitySpec } from './read-quantity.js';
+import { readQuantity, type QuantitySpec } from './read-quantity.js';
+import { withTypedDecimals } from '../input/index.js';
 import { readMarks, readValues } from './read-list.js';
 import { caseUnitOf, parseCount, type QuantityKind } from '../input/index.js';
 import type { UnitSystem } from '../engine/types.js';

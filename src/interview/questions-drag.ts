@@ -9,7 +9,7 @@ import {
   textQuestion,
 } from './question-kinds.js';
 import { choiceOf } from './answers-read.js';
-import { readTestSkids } from './read-list.js';
+import { readTestSkids, testsReadAs } from './read-list.js';
 import {
   defaultDragText,
   OTHER_SURFACE,
@@ -32,7 +32,7 @@ const VALUE_HOW = {
   table:
     'From the table, choose the band for the speed in question and narrow the range only with a reason you can state.',
   entered:
-    'Type the figure you have with the range it carries, e.g. 0.72 (0.65-0.80) or 0.70 ± 0.05: from tests worked out elsewhere, or a figure your agency uses. Say where it comes from in the case notes, since the report names the source as entered.',
+    'Type the figure you have with the range it carries, e.g. 0.72 (0.65-0.80) or 0.70 ± 0.05: a figure your agency uses, or one from a source you can name. Say where it comes from in the case notes, since the report names the source as entered. Drag factors worked out from test skids go under test skids instead, where the grade of the tests is asked.',
 } as const;
 
 /**
@@ -128,20 +128,30 @@ export function dragQuestions(
         ...base(
           'tests',
           'Test skids',
-          `Test skids for ${what}: each test as speed/distance, separated by commas (a unit may follow a number: 50 km/h / 14 m)`,
+          `Test skids for ${what}: each test as speed/distance, separated by commas (a unit may follow a number: 50 km/h / 14 m); or the drag factors already worked out from the tests (0.68, 0.71, 0.70), which are taken as worked out on the test stretch, its grade still in them, unless you say they are level-ground (asked when the tests ran on a slope)`,
         ),
         help: {
           why: 'Each test gives f = S² / (30 d) (mph, ft) or S² / (254 d) (km/h, m); several tests show the spread.',
-          how: 'Skid a similar vehicle at a known speed on the same surface and measure the skid. A test at low speed tends to give a slightly higher f than at crash speed (common practice).',
+          how: 'Skid a similar vehicle at a known speed on the same surface and measure the skid. A test at low speed tends to give a slightly higher f than at crash speed (common practice). Factors you worked out already go in as they are, with no slash: their mean is the drag factor, the smallest to largest its range.',
         },
         appliesWhen: when('test-skids'),
-        explainChoice: (_a, r) => measuredDragLine(r, prefix),
+        explainChoice: (a, r) => {
+          const read = testsReadAs(a[`${p}.tests`]?.value);
+          const line = measuredDragLine(r, prefix);
+          return read
+            ? `${read[0]!.toUpperCase()}${read.slice(1)}.${line ? ` ${line}` : ''}`
+            : line;
+        },
         example: '30/42, 35/57.5',
         metricExample: '50/13, 55/16',
       },
       'list',
       (text, ctx) =>
-        readTestSkids(text, ctx.units, { speed: RULES.testSpeed, distance: RULES.length }),
+        readTestSkids(text, ctx.units, {
+          speed: RULES.testSpeed,
+          distance: RULES.length,
+          factor: RULES.testFactor,
+        }),
     ),
     quantityQuestion(
       {

@@ -22,7 +22,7 @@ import {
 import { dragQuestions } from './questions-drag.js';
 import { gradeQuestions } from './questions-grade.js';
 import { testGradeQuestions } from './questions-test-grade.js';
-import { quickFills } from './quick-fills.js';
+import { quickFills, quickLineAtChoice } from './quick-fills.js';
 import { endQuestions } from './questions-end.js';
 import { timeDistanceQuestions } from './questions-extras.js';
 // A cycle (build-case reads the questions), safe because it is only called at run time.
@@ -109,6 +109,9 @@ export function slideQuestions(
           label: gap(now) ? 'the marked parts on one line' : 'several segments on one line',
         },
       ],
+      'choice',
+      // The segments' line typed straight here is the quick choice with its line answered.
+      (text, ctx) => quickLineAtChoice(text, ctx, p),
     ),
     countQuestion(
       {

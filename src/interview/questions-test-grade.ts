@@ -8,8 +8,9 @@
  */
 import type { Answers, Question } from './types.js';
 import { choiceQuestion, quantityQuestion } from './question-kinds.js';
-import { choiceOf, isSegment, testWhere } from './answers-read.js';
+import { choiceOf, factorsLevel, isSegment, testsAsFactors, testWhere } from './answers-read.js';
 import { SLOPE_CHOICES, sloped } from './questions-grade.js';
+import { measuredDragLine } from './drag-line.js';
 
 /** The segment's grade as answered, in words: "level", "3% downhill". */
 function gradeWords(a: Answers, prefix: string): string {
@@ -21,9 +22,12 @@ function gradeWords(a: Answers, prefix: string): string {
 /** What "same stretch" does with the grade, for the notice after the answer. */
 function sameNote(a: Answers, prefix: string): string {
   const g = gradeWords(a, prefix);
-  return g === 'level'
-    ? 'The tests ran on this level stretch: the test ratio is the level drag factor.'
-    : `The test ratio S²/(C d) already holds this stretch's ${g} grade: it is recorded as the tests' grade and taken off to give the level drag factor, and the segment's grade is applied once after it (with every wheel braking the two cancel).`;
+  if (g === 'level')
+    return 'The tests ran on this level stretch: the test ratio is the level drag factor.';
+  const note = `The test ratio S²/(C d) already holds this stretch's ${g} grade: it is recorded as the tests' grade and taken off to give the level drag factor, and the segment's grade is applied once after it (with every wheel braking the two cancel).`;
+  return testsAsFactors(a, prefix)
+    ? `${note} Whether the factors you typed still hold it is asked next.`
+    : note;
 }
 
 /**
@@ -40,6 +44,9 @@ export function testGradeQuestions(
   const segment = isSegment(prefix);
   const elsewhere = (a: Answers) => tests(a) && (!segment || testWhere(a, prefix) === 'elsewhere');
   const dir = `${p}.testGrade.dir`;
+  // The tests ran on a slope: their own stretch's grade, or the grade answered for them.
+  const testsSloped = (a: Answers) =>
+    segment && testWhere(a, prefix) === 'same' ? sloped(a, `${prefix}.grade.dir`) : sloped(a, dir);
   return [
     choiceQuestion(
       {
@@ -97,6 +104,37 @@ export function testGradeQuestions(
         range: true,
         noMinus: 'choose uphill or downhill above instead of typing a sign',
       },
+    ),
+    choiceQuestion(
+      {
+        id: `${p}.factorsGrade`,
+        section,
+        title: `Test factors and the grade, ${what}`,
+        prompt:
+          'The drag factors you typed: are they as worked out on the sloped test stretch (its grade still in them), or level-ground factors (the grade already taken out)?',
+        help: {
+          why: 'On a slope a test gives f + G/100. Worked out on the test stretch, the grade is still in the factors and is taken off once here; level-ground factors have it out already, and taking it off again would count it twice.',
+          how: 'If you worked each out as S² / (C d) from the test, they hold the grade; if you took the grade off yourself, they are level-ground.',
+        },
+        appliesWhen: (a) => tests(a) && testsAsFactors(a, prefix) && testsSloped(a),
+        explainChoice: (a, r) =>
+          [
+            factorsLevel(a, prefix)
+              ? "Taken as level-ground factors: no grade is taken off them; the slide's own grade is applied after."
+              : 'Taken as worked out on the test stretch: its grade is taken off once to give the level drag factor.',
+            measuredDragLine(r, prefix),
+          ]
+            .filter(Boolean)
+            .join(' '),
+      },
+      [
+        {
+          value: 'on-grade',
+          key: 'g',
+          label: 'worked out on the test stretch: its grade is still in them',
+        },
+        { value: 'level', key: 'l', label: 'level-ground: the grade was already taken out' },
+      ],
     ),
   ];
 }

@@ -6,6 +6,7 @@ import type { Answers, Question } from './types.js';
 import { choiceQuestion, confirmQuestion, textQuestion, unitHintOf } from './question-kinds.js';
 import {
   slideInParts,
+  surfaceMode,
   analysisCount,
   choiceOf,
   fedByChain,
@@ -36,7 +37,8 @@ export function analysisSection(a: Answers, i: number): string {
           ? ' - airborne'
           : look === 'gap'
             ? ' - slide in parts'
-            : slideInParts(a, i)
+            : // A quick line not typed yet may still be one surface (`@0.74 -1%`): not said yet.
+              slideInParts(a, i) && !(surfaceMode(a, i) === 'quick' && !a[`a${i}.quick`])
               ? ' - slide, several surfaces'
               : ' - slide';
   return `Analysis ${i + 1}${chain}`;

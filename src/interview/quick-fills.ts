@@ -64,3 +64,25 @@ export function quickFills(text: string, ctx: AnswerContext, p: string): ParseRe
     notice: r.converted ? `${filled} Converted: ${r.converted}` : filled,
   };
 }
+
+/**
+ * A segments line typed at the "one surface, or several" question (`52 @0.7 -3% asphalt, ...`):
+ * read as the quick choice with its line answered, so the line question is not asked again.
+ * Undefined for text that is no such line (words for a choice), so the choice's own message
+ * stands; a line that starts like one but does not read gets the line's message.
+ */
+export function quickLineAtChoice(
+  text: string,
+  ctx: AnswerContext,
+  p: string,
+): ParseResult | undefined {
+  if (!/^\s*[@\d.]/.test(text)) return undefined;
+  const r = quickFills(text, ctx, p);
+  if (!r.ok) return r;
+  return {
+    ok: true,
+    value: 'quick',
+    fills: { ...r.fills, [`${p}.quick`]: answer(text.trim(), r.value) },
+    ...(r.notice ? { notice: r.notice } : {}),
+  };
+}

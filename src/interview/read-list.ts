@@ -1,11 +1,12 @@
 /**
  * Lists typed on one line, read through src/input/: mark lengths (`94 92 95 93`, `4 x 80.5`),
- * sled pulls and decelerometer readings, and test skids as `speed/distance` pairs.
+ * sled pulls and decelerometer readings, and test skids as `speed/distance` pairs or as the drag
+ * factors worked out from them.
  */
 import type { UnitSystem } from '../engine/types.js';
 import type { Quantity, QuantityRule } from '../case/quantity.js';
-import { parseList, parseMarksLine } from '../input/index.js';
-import { readQuantity, type QuantitySpec } from './read-quantity.js';
+import { parseList, parseMarksLine, withTypedDecimals } from '../input/index.js';
+import { quantityText, readQuantity, type QuantitySpec } from './read-quantity.js';
 
 export type ListRead =
   | { ok: true; value: Quantity[]; notice?: string; confirm?: string }
@@ -63,25 +64,26 @@ export interface TestSkid {
   distance: Quantity;
 }
 
+/** Test skids as typed: each test's speed and distance, or the factors worked out from them. */
+export type TestSkidsRead = TestSkid[] | { factors: Quantity[] };
+
+const plural = (n: number, what: string) => `${n} ${what}${n === 1 ? '' : 's'}`;
+
 /**
- * Reads test skids as `speed/distance` pairs separated by commas: `30/42, 35/57.5`; units may be
- * typed (`50 km/h / 13 m`).
+ * Reads test skids either as `speed/distance` pairs separated by commas (`30/42, 35/57.5`; units
+ * may be typed: `50 km/h / 13 m`), or as the drag factors already worked out from them
+ * (`0.68, 0.71, 0.70`: no slash, every figure a drag factor). The notice says which was read.
  */
 export function readTestSkids(
   text: string,
   units: UnitSystem,
-  rules: { speed: QuantityRule; distance: QuantityRule },
-): { ok: true; value: TestSkid[]; notice?: string } | { ok: false; message: string } {
+  rules: { speed: QuantityRule; distance: QuantityRule; factor: QuantityRule },
+): { ok: true; value: TestSkidsRead; notice?: string } | { ok: false; message: string } {
   const items = text.split(/\s*[,;]\s*/).filter((s) => s.trim() !== '');
-  if (items.length === 0)
-    return { ok: false, message: 'give at least one test as speed/distance, e.g. 30/42' };
-  // Drag factors already worked out from the tests (`0.68, 0.71, 0.70`) are no speed/distance
-  // pairs: say where such figures go instead of asking for a slash.
-  if (items.every((t) => /^\s*(?:0?\.\d+|[01](?:\.\d*)?)\s*$/.test(t)))
-    return {
-      ok: false,
-      message: `${items.join(', ')} read as drag factors, not tests: this question takes each test as speed/distance (e.g. 30/42). For drag factors already worked out from the tests, go back to the drag factor source and choose "a value I enter, with its range", e.g. 0.70 (0.68-0.71)`,
-    };
+  const how =
+    'give each test as speed/distance (e.g. 30/42, 35/57.5), or the drag factors worked out from the tests (e.g. 0.68, 0.71, 0.70)';
+  if (items.length === 0) return { ok: false, message: `test skids: the answer is empty; ${how}` };
+  if (!text.includes('/')) return readFactors(text, units, rules.factor, how);
   const out: TestSkid[] = [];
   const notes: string[] = [];
   for (const [i, item] of items.entries()) {
@@ -89,15 +91,63 @@ export function readTestSkids(
     const parts = item.split(/\s+\/\s+|(?<![a-z])\/|\/(?![a-z])/i);
     const where = items.length > 1 ? `test ${i + 1} ("${item.trim()}"): ` : '';
     if (parts.length !== 2)
-      return { ok: false, message: `${where}write each test as speed/distance, e.g. 30/42` };
+      return {
+        ok: false,
+        message: `${where}write each test as speed/distance, e.g. 30/42 (or give only drag factors, with no slash: 0.68, 0.71)`,
+      };
     const s = readQuantity(parts[0]!, { kind: 'speed', rule: rules.speed, range: true }, units);
     if (!s.ok) return { ok: false, message: where + s.message };
     const d = readQuantity(parts[1]!, { kind: 'length', rule: rules.distance, range: true }, units);
     if (!d.ok) return { ok: false, message: where + d.message };
     for (const n of [s.notice, d.notice]) if (n) notes.push(n);
-    out.push({ speed: s.value, distance: d.value });
+    // Kept as typed (`42.0`) for the record, unless converted from another unit.
+    out.push({
+      speed: s.notice ? s.value : withTypedDecimals(s.value, parts[0]!),
+      distance: d.notice ? d.value : withTypedDecimals(d.value, parts[1]!),
+    });
   }
+  // Which form was read is said with the drag factor they give (`testsReadAs`); a conversion
+  // notice takes that line's place, so it says it too.
   return notes.length
-    ? { ok: true, value: out, notice: notes.join('; ') }
+    ? { ok: true, value: out, notice: `${testsReadAs(out)}; ${notes.join('; ')}` }
     : { ok: true, value: out };
+}
+
+/** The factors-worked-out form: every item a drag factor (at most 2), no unit. */
+function readFactors(
+  text: string,
+  units: UnitSystem,
+  rule: QuantityRule,
+  how: string,
+): { ok: true; value: TestSkidsRead } | { ok: false; message: string } {
+  const r = parseList(text, {
+    field: rule.what,
+    item: 'drag factor',
+    kind: 'factor',
+    units,
+    rule,
+    allowRange: false,
+  });
+  if (!r.ok) {
+    // The reader's percent hint ("0.3 for 30%") misleads here: `30 42` is a test without its slash.
+    const cut = r.message.indexOf('; write it as a decimal');
+    const why = cut >= 0 ? r.message.slice(0, cut) : r.message;
+    return {
+      ok: false,
+      message: `${why} (with no slash, the figures are read as drag factors): ${how}`,
+    };
+  }
+  return { ok: true, value: { factors: r.values } };
+}
+
+/**
+ * Which form the test skids were read in: "read as 3 drag factors: 0.68, 0.71, 0.70" or "read
+ * as 3 test skids (speed, distance)". Undefined for a value that is neither.
+ */
+export function testsReadAs(value: unknown): string | undefined {
+  if (Array.isArray(value)) return `read as ${plural(value.length, 'test skid')} (speed, distance)`;
+  if (typeof value !== 'object' || value === null || !('factors' in value)) return undefined;
+  const f = (value as { factors: unknown }).factors;
+  if (!Array.isArray(f)) return undefined;
+  return `read as ${plural(f.length, 'drag factor')}: ${(f as Quantity[]).map(quantityText).join(', ')}`;
 }

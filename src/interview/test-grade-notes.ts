@@ -9,7 +9,9 @@ import type { AnswerReader } from './types.js';
 import {
   slideInParts,
   choiceOf,
+  factorsLevel,
   isSegment,
+  testsAsFactors,
   markLook,
   segmentCount,
   testWhere,
@@ -24,6 +26,8 @@ function noteFor(r: AnswerReader, p: string, where: string): string | undefined 
   const g = testGradeOf(r, p);
   if (g === undefined) return undefined;
   const G = spread(g).value;
+  if (testsAsFactors(r.answers, p) && factorsLevel(r.answers, p) && G !== 0)
+    return `${where}: the drag factors typed are level-ground factors (the tests' ${pct(G)} grade already taken out): no grade is taken off them.`;
   if (isSegment(p) && testWhere(r.answers, p) === 'same')
     return G === 0
       ? `${where}: the test skids ran on this level stretch, in the slide's direction.`

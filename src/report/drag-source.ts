@@ -56,7 +56,9 @@ export function dragSourceLines(d: DragV1, where: string): string[] {
     }
     case 'test-skids':
       return [
-        `${where}: ${d.tests.length} test skid${d.tests.length === 1 ? '' : 's'} at known speed on the scene (each test's speed and distance are in the measurements table)${d.note ? `; ${d.note}` : ''}.`,
+        d.factors
+          ? `${where}: ${d.factors.length} drag factor${d.factors.length === 1 ? '' : 's'} worked out from test skids at known speed on the scene and entered as such, ${d.gradeTakenOut ? 'as level-ground factors (the test grade already taken out)' : 'as worked out on the test stretch (its grade, if any, taken off once)'} (each factor is in the measurements table)${d.note ? `; ${d.note}` : ''}.`
+          : `${where}: ${d.tests?.length ?? 0} test skid${d.tests?.length === 1 ? '' : 's'} at known speed on the scene (each test's speed and distance are in the measurements table)${d.note ? `; ${d.note}` : ''}.`,
         'A test skid at a lower speed than the crash tends to give a slightly higher drag factor (common practice).',
       ];
     case 'sled':

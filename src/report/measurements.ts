@@ -51,8 +51,13 @@ function dragRows(prefix: string, d: DragV1, speed: string, length: string): Row
       return [[`${prefix}drag factor (${d.source})`, t(d.value), range, '', note]];
     }
     case 'test-skids':
+      if (d.factors)
+        return withNote(
+          d.factors.map((f, i) => q(`${prefix}test skid ${i + 1} drag factor`, f, '')),
+          d.note ?? '',
+        );
       return withNote(
-        d.tests.flatMap((t, i) => [
+        (d.tests ?? []).flatMap((t, i) => [
           q(`${prefix}test skid ${i + 1} speed`, t.speed, speed),
           q(`${prefix}test skid ${i + 1} distance`, t.distance, length),
         ]),

@@ -39,6 +39,10 @@ export const promptMark = (q: Question) => squash(q.prompt).slice(0, 26);
 const isChoice = (q: Question) =>
   (q.kind === 'choice' || q.kind === 'confirm') && (q.choices?.length ?? 0) > 0;
 
+/** A choice answered by its key: the script names a choice (a quick line typed there is text). */
+const byKey = (q: Question, answer: string) =>
+  isChoice(q) && answer !== '' && q.choices!.some((c) => c.value === answer || c.key === answer);
+
 function choiceFor(q: Question, answer: string) {
   const c = q.choices!.find((c) => c.value === answer) ?? q.choices!.find((c) => c.key === answer);
   if (!c)
@@ -51,7 +55,7 @@ function choiceFor(q: Question, answer: string) {
 /** One answer fed to the mirror, as the screen would turn it into an action. */
 function mirrorStep(state: InterviewState, q: Question, answer: string): InterviewState {
   if (answer === '') return reduce(state, { type: 'accept-default' });
-  if (isChoice(q)) return reduce(state, { type: 'choose', value: choiceFor(q, answer).value });
+  if (byKey(q, answer)) return reduce(state, { type: 'choose', value: choiceFor(q, answer).value });
   return reduce(state, { type: 'answer', text: answer });
 }
 
@@ -151,7 +155,7 @@ export async function typeInterview(
       ...wait,
     });
     const keysBefore = t.keyCount;
-    if (isChoice(q) && answer !== '') await t.type(choiceFor(q, answer).key);
+    if (byKey(q, answer)) await t.type(choiceFor(q, answer).key);
     else {
       if (answer !== '') {
         // Enter only once the whole answer shows on the input line, as a person watching the

@@ -53,10 +53,12 @@ const SLIDE_GUIDED: Script = {
   'a0.seg1.grade.pct': '3',
 };
 
-/** The same two surfaces on one line, in the quick-entry syntax of src/input/. */
+/**
+ * The same two surfaces, labels and grades on one line, in the quick-entry syntax of src/input/,
+ * typed straight at the "one surface, or several" question.
+ */
 const SLIDE_QUICK: Script = {
-  'a0.surfaces': 'quick',
-  'a0.quick': '52.5 @0.70-0.80 -3% [asphalt lane], 21 @0.45-0.55 -3% [gravel shoulder]',
+  'a0.surfaces': '52.5 @0.70-0.80 -3 asphalt lane, 21 @0.45-0.55 -3 gravel shoulder',
 };
 
 const SLIDE_END: Script = { 'a0.end': 'rest' };

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { dragFactor, solveCase, testSkidDrag } from '../../src/engine/index.js';
+import { dragFactor, levelTestDrag, solveCase, testSkidDrag } from '../../src/engine/index.js';
 import { caseOf } from './helpers.js';
 
 // Physics of a test skid on a slope (work of friction and of gravity along the path, all wheels
@@ -89,5 +89,40 @@ describe('test skids run on a grade', () => {
       expect(d.path).toBe('testGrade');
       expect(d.reason).toMatch(/test grade/);
     }
+  });
+});
+
+describe('drag factors already worked out from test skids', () => {
+  // The same two tests as factors: 0.75 and 0.711111 (by hand, above).
+  const factors = [0.75, 1024 / 1440];
+
+  it('give the same drag factor as the tests they were worked out from, grade and all', () => {
+    const testGrade = { value: 2, low: 1, high: 3 };
+    const fromTests = value(dragFactor({ source: 'test-skids', tests, testGrade }, 'imperial'));
+    const typed = value(dragFactor({ source: 'test-skids', factors, testGrade }, 'imperial'));
+    expect(typed.f.value).toBeCloseTo(fromTests.f.value, 12);
+    expect(typed.f.low).toBeCloseTo(fromTests.f.low, 12);
+    expect(typed.f.high).toBeCloseTo(fromTests.f.high, 12);
+    expect(typed.step.name).toBe('Drag factor from test skids (factors entered)');
+    expect(typed.step.why).toMatch(/grade was taken off/);
+    expect(typed.source).toBe('2 drag factors from test skids on a 2% grade');
+  });
+
+  it('level-ground factors have no grade taken off, even with the test grade on record', () => {
+    const d = value(
+      dragFactor({ source: 'test-skids', factors, testGrade: 3, gradeTakenOut: true }, 'imperial'),
+    );
+    expect(d.f.value).toBeCloseTo((0.75 + 1024 / 1440) / 2, 12);
+    expect(d.f.low).toBeCloseTo(1024 / 1440, 12);
+    expect(d.f.high).toBeCloseTo(0.75, 12);
+    expect(d.step.why).toMatch(
+      /taken as level-ground factors \(the tests' 3% grade already taken out\)/,
+    );
+    expect(d.step.inputs.G_t?.source).toBe('grade of the tests, already taken out');
+  });
+
+  it('the grade rule is the one scalar function: levelTestDrag(0.75, 5) is 0.70', () => {
+    expect(levelTestDrag(0.75, 5)).toBeCloseTo(0.7, 12);
+    expect(levelTestDrag(0.75, -4)).toBeCloseTo(0.79, 12);
   });
 });

@@ -35,10 +35,11 @@ describe('QUICK_ENTRY_HELP', () => {
   });
 
   it('shows a segment example that the segment parser reads as three segments', () => {
-    const example = QUICK_ENTRY_HELP.find((l) => l.includes('[gravel]'))!.trim();
+    const example = QUICK_ENTRY_HELP.find((l) => l.includes('[grass, wet]'))!.trim();
     const r = parseSegmentLine(example, { units: 'imperial' });
     expect(r.ok).toBe(true);
     if (r.ok) expect(r.segments.map((s) => s.grade)).toEqual([2, 0, -3]);
+    if (r.ok) expect(r.segments.map((s) => s.label)).toEqual([undefined, 'gravel', 'grass, wet']);
   });
 
   it('shows drag factor forms that are all accepted', () => {

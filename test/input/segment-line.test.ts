@@ -229,11 +229,8 @@ describe('parseSegmentLine: malformed lines name the segment and the part', () =
     ['48 @0.9-0.6', 'the low end comes first; write 0.6-0.9'],
     ['48 mph @0.7', "'mph' is a unit of speed"],
     ['48 @0.7 +120%', 'grade must be less than 100'],
-    [
-      '48 @0.7 xyz',
-      "drag factor: unknown unit 'xyz'; a drag factor is a plain decimal such as 0.72",
-    ],
-    ['48 @0.7 +2% xyz', "cannot read 'xyz'"],
+    // Words after the figures are a label (`48 @0.7 gravel`); a number there is not.
+    ['48 @0.7 +2% 5', "cannot read '5'"],
     ['48 xyz @0.7', "unknown unit 'xyz'"],
     ['48 @gravl', "'gravl' is not a row of the reference table"],
     ['48 @gravel', 'rows like it: gravel-loose'],
@@ -337,5 +334,55 @@ describe('formatSegmentLine', () => {
     expect(
       formatSegmentLine([{ drag: entered(0.5) }, { length: 3, drag: entered(0.5) }] as never),
     ).toBeUndefined();
+  });
+});
+
+describe('parseSegmentLine: labels without brackets and a grade without % after a drag range', () => {
+  it('takes the words that end a segment as its label', () => {
+    const r = parseSegmentLine(
+      '52.5 @0.70-0.80 -3% asphalt lane, 21 @0.45 gravel shoulder',
+      imperial,
+    );
+    expect(r).toEqual({
+      ok: true,
+      segments: [
+        { length: 52.5, drag: entered(0.75, 0.7, 0.8), grade: -3, label: 'asphalt lane' },
+        { length: 21, drag: entered(0.45), grade: 0, label: 'gravel shoulder' },
+      ],
+    });
+  });
+
+  it('reads a signed number after a complete drag factor as the grade, % or not', () => {
+    const r = parseSegmentLine('52.5 @0.70-0.80 -3 asphalt, 21 @gravel-loose +2', imperial);
+    if (!r.ok) throw new Error(r.message);
+    expect(r.segments.map((s) => s.grade)).toEqual([-3, 2]);
+    expect(r.segments[0]!.label).toBe('asphalt');
+    expect(parseSegmentLine('40 @0.70 (0.65-0.75) -2', imperial)).toMatchObject({
+      ok: true,
+      segments: [{ grade: -2 }],
+    });
+  });
+
+  it('still wants the % after a single drag factor, where -3 would read as part of a range', () => {
+    const r = parseSegmentLine('48 @0.7 -3', imperial);
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.message).toContain('a grade is written with its sign and %');
+    const big = parseSegmentLine('48 @0.70-0.80 -130', imperial);
+    expect(big).toEqual({
+      ok: false,
+      message: "segment 1, '48 @0.70-0.80 -130': grade must be between -100 and 100 percent",
+    });
+  });
+
+  it('keeps brackets for a label before the figures, and refuses two labels', () => {
+    expect(parseSegmentLine('[lane] 48 @0.74', imperial)).toMatchObject({
+      ok: true,
+      segments: [{ label: 'lane', length: 48 }],
+    });
+    const two = parseSegmentLine('48 @0.74 [lane] gravel', imperial);
+    expect(two).toEqual({
+      ok: false,
+      message: "segment 1, '48 @0.74 [lane] gravel': give one label per segment",
+    });
   });
 });

@@ -36,7 +36,7 @@ describe('a measured drag factor is shown as soon as its figures are in', () => 
     // 40²/(30 × 80) = 0.667 and 42²/(30 × 84) = 0.700; mean 0.683 (worked by hand)
     const after = type(s, 'k', '40/80, 42/84');
     expect(after.notice).toBe(
-      'f = 0.68 (0.67 to 0.70): the mean of 2 test skids, the range from the smallest to the largest.',
+      'Read as 2 test skids (speed, distance). f = 0.68 (0.67 to 0.70): the mean of 2 test skids, the range from the smallest to the largest.',
     );
   });
 
@@ -44,7 +44,7 @@ describe('a measured drag factor is shown as soon as its figures are in', () => 
     const s = fillUntil(start(), IMPERIAL, 'a0.seg0.drag.source');
     // 32²/(30 × 48) = 0.711 and 31²/(30 × 45) = 0.712 (worked by hand)
     expect(type(s, 'k', '32/48, 31/45').notice).toBe(
-      'f = 0.71: the mean of 2 test skids, which agree to two decimals.',
+      'Read as 2 test skids (speed, distance). f = 0.71: the mean of 2 test skids, which agree to two decimals.',
     );
   });
 

@@ -93,11 +93,12 @@ describe('messages for bad input', () => {
 
   it('test skids without a slash say how to write them', () => {
     const before = { ...SLIDE, 'a0.marks': '4 x 60', 'a0.seg0.drag.source': 'k' };
+    // With no slash the figures are read as drag factors; 30 is none, so both forms are named.
     expect(rejection(before, 'a0.seg0.drag.tests', '30 42')).toBe(
-      'write each test as speed/distance, e.g. 30/42',
+      'drag factor 1: test drag factor must be at most 2 (with no slash, the figures are read as drag factors): give each test as speed/distance (e.g. 30/42, 35/57.5), or the drag factors worked out from the tests (e.g. 0.68, 0.71, 0.70)',
     );
     expect(rejection(before, 'a0.seg0.drag.tests', '30/42, 35')).toBe(
-      'test 2 ("35"): write each test as speed/distance, e.g. 30/42',
+      'test 2 ("35"): write each test as speed/distance, e.g. 30/42 (or give only drag factors, with no slash: 0.68, 0.71)',
     );
   });
 

@@ -289,15 +289,13 @@ describe('what the review and the written report say', () => {
 });
 
 describe('the test skids question', () => {
-  it('points drag factors typed at it to the way to enter them', async () => {
+  it('takes drag factors typed at it, saying they were read as factors', async () => {
     const app = await toLook();
     await toDragSource(app);
     await app.press('k', 'Test skids for the slide');
-    const f = said(await app.answer('0.68, 0.71, 0.70', '✗'));
-    expect(f).toContain(
-      '0.68, 0.71, 0.70 read as drag factors, not tests: this question takes each test as speed/distance (e.g. 30/42).',
-    );
-    expect(f).toContain('choose "a value I enter, with its range", e.g. 0.70 (0.68-0.71)');
+    const f = said(await app.answer('0.68, 0.71, 0.70', 'Grade, the slide'));
+    expect(f).toContain('Read as 3 drag factors: 0.68, 0.71, 0.70.');
+    expect(f).not.toContain('✗');
   });
 
   it('gives the entered value its own "how", not the table’s', async () => {

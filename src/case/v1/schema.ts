@@ -41,6 +41,27 @@ function endsOf(q: unknown): { value: number; low: number; high?: number } | und
     : { value: o.value, low };
 }
 
+/** Test skids come as `tests` or as `factors`; `gradeTakenOut` says what the factors' grade is. */
+function testSkidsIssues(
+  d: { tests?: unknown; factors?: unknown; gradeTakenOut?: boolean },
+  ctx: z.RefinementCtx,
+): void {
+  const issue = (path: string, message: string) =>
+    ctx.addIssue({ code: 'custom', path: [path], message });
+  if (d.tests !== undefined && d.factors !== undefined)
+    issue('factors', 'give either tests or factors, not both');
+  else if (d.tests === undefined && d.factors === undefined)
+    issue(
+      'tests',
+      'give tests (speed and distance) or factors (drag factors worked out from them)',
+    );
+  if (d.gradeTakenOut !== undefined && d.factors === undefined)
+    issue(
+      'gradeTakenOut',
+      'gradeTakenOut goes with factors only (tests always have their grade taken off)',
+    );
+}
+
 export const dragV1 = z
   .discriminatedUnion(
     'source',
@@ -80,7 +101,19 @@ export const dragV1 = z
             },
           )
           .min(1, 'at least one test skid is needed')
-          .max(MAX_ITEMS, tooManyMessage('tests')),
+          .max(MAX_ITEMS, tooManyMessage('tests'))
+          .optional(),
+        /** Drag factors already worked out from the tests, instead of `tests` (docs/case-file.md). */
+        factors: z
+          .array(q(RULES.testFactor), { error: 'factors must be a list of numbers' })
+          .min(1, 'at least one drag factor is needed')
+          .max(MAX_ITEMS, tooManyMessage('factors'))
+          .optional(),
+        /**
+         * `factors` only: true when the factors are level-ground already (the test grade was taken
+         * out when they were worked out); `testGrade` is then a record, never taken off again.
+         */
+        gradeTakenOut: z.boolean({ error: 'gradeTakenOut must be true or false' }).optional(),
         /** Grade the tests were run on (signed percent, + uphill in their direction); default level. */
         testGrade: q({ ...RULES.grade, what: 'test grade' }).optional(),
         note: text('note').optional(),
@@ -111,6 +144,7 @@ export const dragV1 = z
     },
   )
   .superRefine((d, ctx) => {
+    if (d.source === 'test-skids') return testSkidsIssues(d, ctx);
     if (d.source !== 'entered' && d.source !== 'table') return;
     for (const [k, n] of [
       ['value', d.value],
