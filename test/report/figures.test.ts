@@ -1,13 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import {
   decimalsOf,
-  demo,
   escapeRe,
-  fixture,
   flat,
   runReport,
   shownAs,
   solveJson,
+  REPORT_CASES,
+  NUM,
 } from './helpers.js';
 
 /**
@@ -16,14 +16,7 @@ import {
  * Cases: the shipped demo cases (imperial two-surface downhill slide, metric banked yaw) and two
  * invented fixtures of our own (an imperial two-surface slide, a metric yaw with half-track).
  */
-const CASES = [
-  ['demo slide (sessions/demo-orchard-hill.json)', demo('demo-orchard-hill.json')],
-  ['demo yaw, metric (sessions/demo-kestrel-bend.json)', demo('demo-kestrel-bend.json')],
-  ['imperial two-surface slide fixture', fixture('quarry-lane-skid.json')],
-  ['metric yaw fixture', fixture('birchfield-yaw.json')],
-] as const;
-
-const NUM = '(-?\\d+(?:\\.\\d+)?)';
+const CASES = REPORT_CASES;
 
 describe.each(CASES)('report figures equal solve --json: %s', (_name, file) => {
   for (const format of ['md', 'txt', 'html'] as const) {

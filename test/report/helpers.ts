@@ -10,6 +10,21 @@ export const ROOT = path.resolve(HERE, '../..');
 export const fixture = (name: string) => path.join(HERE, 'fixtures', name);
 export const demo = (name: string) => path.join(ROOT, 'sessions', name);
 
+/**
+ * The cases every report form is checked on against `solve --json`: the two shipped demo cases
+ * (imperial two-surface downhill slide, metric banked yaw) and two invented fixtures of our own
+ * (an imperial two-surface slide, a metric yaw with half-track).
+ */
+export const REPORT_CASES = [
+  ['demo slide, imperial (sessions/demo-orchard-hill.json)', demo('demo-orchard-hill.json')],
+  ['demo yaw, metric (sessions/demo-kestrel-bend.json)', demo('demo-kestrel-bend.json')],
+  ['imperial two-surface slide fixture', fixture('quarry-lane-skid.json')],
+  ['metric yaw fixture', fixture('birchfield-yaw.json')],
+] as const;
+
+/** A number as a report prints it, captured (for reading figures back out of a report). */
+export const NUM = '(-?\\d+(?:\\.\\d+)?)';
+
 export interface Run {
   code: number;
   out: string;

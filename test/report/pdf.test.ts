@@ -11,12 +11,13 @@ import {
   decimalsOf,
   demo,
   escapeRe,
-  fixture,
   runReport,
   shownAs,
   solveJson,
   tempDir,
   type SolveJson,
+  REPORT_CASES,
+  NUM,
 } from './helpers.js';
 import { readPdf, type ReadPdf } from './pdf-read.js';
 
@@ -26,14 +27,8 @@ import { readPdf, type ReadPdf } from './pdf-read.js';
  * Letter, and the pictures are drawn as paths and text, never as images.
  * Cases: the two shipped demo cases (imperial slide, metric yaw) and two invented fixtures.
  */
-const CASES = [
-  ['demo slide, imperial (sessions/demo-orchard-hill.json)', demo('demo-orchard-hill.json')],
-  ['demo yaw, metric (sessions/demo-kestrel-bend.json)', demo('demo-kestrel-bend.json')],
-  ['imperial two-surface slide fixture', fixture('quarry-lane-skid.json')],
-  ['metric yaw fixture', fixture('birchfield-yaw.json')],
-] as const;
+const CASES = REPORT_CASES;
 
-const NUM = '(-?\\d+(?:\\.\\d+)?)';
 const A4 = [595.28, 841.89];
 const LETTER = [612, 792];
 

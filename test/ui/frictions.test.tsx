@@ -8,17 +8,9 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup } from 'ink-testing-library';
 import { BACKSPACE, ENTER, ESC, ctrl, renderApp } from './render-app.js';
 import { finishedSlide } from './fixtures.js';
-import { toDragSource, toLook, type App } from './walks.js';
+import { toDragSource, toLook, type App, said } from './walks.js';
 
 afterEach(() => cleanup());
-
-/** The question column of a frame as one line of text (the chain panel beside it cut off). */
-const said = (f: string): string =>
-  f
-    .split('\n')
-    .map((l) => l.split(/[│┌└]/)[0]!.trim())
-    .join(' ')
-    .replace(/\s+/g, ' ');
 
 /** The interview answers in the saved case file (none before the first save). */
 function savedAnswers(app: App): Record<string, { text: string } | undefined> {

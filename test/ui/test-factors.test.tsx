@@ -9,19 +9,11 @@ import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup } from 'ink-testing-library';
 import { ENTER } from './render-app.js';
-import { toDragSource, toLook, type App } from './walks.js';
+import { toDragSource, toLook, type App, said } from './walks.js';
 import { runSolve } from '../solve/run-solve.js';
 import { runReport } from '../report/helpers.js';
 
 afterEach(() => cleanup());
-
-/** The question column of a frame as one line of text (the chain panel beside it cut off). */
-const said = (f: string): string =>
-  f
-    .split('\n')
-    .map((l) => l.split(/[│┌└]/)[0]!.trim())
-    .join(' ')
-    .replace(/\s+/g, ' ');
 
 function savedFile(app: App): string {
   const file = fs.readdirSync(app.dir).find((n) => n.endsWith('.json'))!;

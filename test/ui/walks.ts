@@ -37,3 +37,11 @@ export async function toDragSource(
   await app.press(ENTER, 'Where does the drag factor');
   return brakes;
 }
+
+/** The question column of a frame as one line of text (the chain panel beside it cut off). */
+export const said = (f: string): string =>
+  f
+    .split('\n')
+    .map((l) => l.split(/[│┌└]/)[0]!.trim())
+    .join(' ')
+    .replace(/\s+/g, ' ');
