@@ -1,4 +1,5 @@
 import fs from 'node:fs/promises';
+import path from 'node:path';
 import { describeIssue } from '../case/issues.js';
 import { loadCaseText, type Case } from '../case/load.js';
 import { caseFilePath } from './case-path.js';
@@ -8,6 +9,7 @@ import { writeVerifiedSync } from './verified-write.js';
 import { describeWriteError } from '../io/write-error.js';
 import { acquireLock } from './lock.js';
 import { moveToFreeName } from './keep-aside.js';
+import { withNote } from './revisions.js';
 
 export type RestoreResult =
   | {
@@ -19,8 +21,9 @@ export type RestoreResult =
   | { ok: false; message: string };
 
 /**
- * Puts the backup `<id>.json.bak` back as `<id>.json`. The file it replaces is kept as
- * `<id>.broken-<time>.json`, never deleted; the backup stays too. Refused when the backup itself
+ * Puts the backup `<id>.json.bak` back as `<id>.json`, its trail of revisions ending with an entry
+ * that says so. The file it replaces is kept as `<id>.broken-<time>.json`, never deleted; the
+ * backup stays too. Refused when the backup itself
  * does not load, or when another skidcase has the case open. Takes the write lock, like a save.
  *
  * @example
@@ -59,12 +62,22 @@ export async function restoreBackup(dir: string, id: string): Promise<RestoreRes
       } catch (e) {
         if ((e as NodeJS.ErrnoException).code !== 'ENOENT') throw e;
       }
-      const bytes = Buffer.from(text, 'utf8');
+      // The trail says the backup was put back, and where the file it replaced went.
+      const restored = withNote(
+        loaded.case,
+        new Date().toISOString(),
+        `restored from the backup copy ${path.basename(bak)}` +
+          (result.keptBroken
+            ? `; the file it replaced was kept as ${path.basename(result.keptBroken)}`
+            : ''),
+      );
+      result.case = restored;
+      const bytes = Buffer.from(JSON.stringify(restored, null, 2) + '\n', 'utf8');
       writeVerifiedSync(file, bytes);
       const known = getKnown(file);
       known.sig = sigOf(await fs.stat(file));
       known.hash = hashOf(bytes);
-      known.case = loaded.case;
+      known.case = restored;
       delete known.readOnly;
       return result;
     } catch (e) {

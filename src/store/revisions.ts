@@ -99,6 +99,20 @@ function withoutSeal(r: RevisionV1): RevisionV1 {
   return rest;
 }
 
+/**
+ * The case with one more entry by skidcase that changes no field but records an act on the file
+ * (a backup put back): its note says what was done; it carries the SHA-256 of the fields, so the
+ * next open does not take the act for a hand edit.
+ * @example withNote(backup, '2026-12-01T10:00:00.000Z', 'restored from the backup copy').revisions?.at(-1)?.note
+ */
+export function withNote(c: Case, at: string, note: string): Case {
+  const { revisions: _r, revisionsDropped: _d, ...rest } = c;
+  const added = { ...entry(at, 'interview', [], note), sha256: fieldsSha256(c) };
+  const all = [...(c.revisions ?? []).map(withoutSeal), added];
+  const cut = Math.max(0, all.length - REVISIONS_KEPT);
+  return withTrail(rest as Case, all.slice(cut), (c.revisionsDropped ?? 0) + cut);
+}
+
 function withTrail(c: Case, trail: RevisionV1[], dropped: number): Case {
   const out: Case = { ...c };
   if (trail.length) out.revisions = trail;

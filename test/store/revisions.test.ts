@@ -2,7 +2,13 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import { loadCaseText, type Case } from '../../src/case/load.js';
-import { openCase, releaseAllLocks, saveCase, saveCaseSync } from '../../src/store/index.js';
+import {
+  openCase,
+  releaseAllLocks,
+  restoreBackup,
+  saveCase,
+  saveCaseSync,
+} from '../../src/store/index.js';
 import { readJson, sampleCase, tempDir } from './helpers.js';
 
 afterEach(() => releaseAllLocks());
@@ -93,6 +99,34 @@ describe('the trail of revisions a save records', () => {
     expect(c.revisionsDropped).toBe(8);
     expect(trail[0]!.changes).toEqual([{ field: 'postedLimit', from: 1, to: 2 }]);
     expect(trail.at(-1)!.changes).toEqual([{ field: 'analyses[0].marks[0]', from: 40, to: 44 }]);
+  });
+});
+
+describe('a backup put back', () => {
+  it('ends the trail with an entry saying so, and the next save finds no hand edit', async () => {
+    const dir = tempDir('rev');
+    const file = path.join(dir, 'oak-9.json');
+    expect((await saveCase(dir, sampleCase('oak-9', [40]))).ok).toBe(true);
+    expect((await saveCase(dir, sampleCase('oak-9', [41]))).ok).toBe(true);
+    releaseAllLocks();
+    // the file cut short (a disk fault); its backup holds the first save
+    fs.writeFileSync(file, fs.readFileSync(file, 'utf8').slice(0, 40));
+    const r = await restoreBackup(dir, 'oak-9');
+    if (!r.ok) throw new Error(r.message);
+    const trail = trailOf(file);
+    expect(trail.map((t) => t.note)).toEqual([
+      'created',
+      `restored from the backup copy oak-9.json.bak; the file it replaced was kept as ${path.basename(r.keptBroken!)}`,
+    ]);
+    expect(readJson(file).analyses[0].marks).toEqual([40]);
+    // opened and saved with a change: one interview entry, no hand edit
+    releaseAllLocks();
+    const opened = await openCase(file);
+    if (!opened.ok) throw new Error(opened.message);
+    expect(saveCaseSync(dir, sampleCase('oak-9', [42]), { file }).ok).toBe(true);
+    const after = trailOf(file);
+    expect(after.map((t) => t.by)).toEqual(['interview', 'interview', 'interview']);
+    expect(after.at(-1)!.changes).toEqual([{ field: 'analyses[0].marks[0]', from: 40, to: 42 }]);
   });
 });
 
