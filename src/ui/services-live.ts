@@ -222,6 +222,14 @@ export function liveServices(o: LiveOptions): Services {
         notes.push(
           `The original of the older format was kept beside it as ${path.basename(r.keptOriginal)}.`,
         );
+      // This save found the file changed outside skidcase: its trail now says so.
+      const saved = r.case.revisions ?? [];
+      const at = saved.at(-1)?.at;
+      const edit = saved.find((e) => e.at === at && e.by === 'hand edit');
+      if (edit)
+        notes.push(
+          `The file had been changed outside skidcase (${edit.changes.length ? `${edit.changes.length} field${edit.changes.length === 1 ? '' : 's'}` : 'what changed is not known'}): recorded as a hand edit in the case's trail (skidcase history ${r.case.id}).`,
+        );
       return { ok: true, at: now(), notes };
     },
     async saveCopy(c) {

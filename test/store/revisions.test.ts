@@ -118,7 +118,7 @@ describe('a backup put back', () => {
       'created',
       `restored from the backup copy oak-9.json.bak; the file it replaced was kept as ${path.basename(r.keptBroken!)}`,
     ]);
-    expect(readJson(file).analyses[0].marks).toEqual([40]);
+    expect((readJson(file) as { analyses: { marks: unknown }[] }).analyses[0]!.marks).toEqual([40]);
     // opened and saved with a change: one interview entry, no hand edit
     releaseAllLocks();
     const opened = await openCase(file);

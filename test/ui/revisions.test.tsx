@@ -69,7 +69,11 @@ describe('the trail of revisions, from the interview', () => {
     fs.writeFileSync(file, JSON.stringify(json, null, 2));
     await app.press(ENTER, 'changed outside');
     await app.press(ctrl('p'), 'Which vehicle');
-    await app.answer('Unit 9, green hatchback', 'What do the marks look like?');
+    const f = await app.answer('Unit 9, green hatchback', 'What do the marks look like?');
+    // the screen says the outside change went into the trail, and how to see it
+    expect(f.replace(/\s+/g, ' ')).toContain(
+      "The file had been changed outside skidcase (1 field): recorded as a hand edit in the case's trail (skidcase history",
+    );
     const trail = trailOf(file);
     expect(trail.at(-2)).toEqual(
       expect.objectContaining({
