@@ -12,6 +12,7 @@ import { gradeAhead, measures, readItem, type RawItem } from './item.js';
 import { isOp, type Token } from './lexer.js';
 import { findUnit } from './units.js';
 import { lookupTableKey, tableDrag, type SpeedBand } from './table-drag.js';
+import { withTypedDecimals } from './typed-decimals.js';
 
 export interface SegmentContext {
   units: UnitSystem;
@@ -126,7 +127,8 @@ export class SegmentReader {
       if (raw instanceof ReadError) return raw;
       const len = this.check('length', raw);
       if (len instanceof ReadError) return len;
-      this.seg.length = len.value;
+      // typed in the case's units: kept with its typed decimals (`52.0`), as a single answer is
+      this.seg.length = len.converted ? len.value : withTypedDecimals(len.value, raw.text);
       typed = raw.text;
     }
     if (isOp(cur.peek(), 'at')) return undefined;
@@ -164,12 +166,19 @@ export class SegmentReader {
         `${d.message}; '${raw.text}' reads as a drag factor range; a grade is written with its sign and %, e.g. -${raw.form === 'range' ? raw.hi.text : ''}%`,
       );
     }
-    const q = d.value;
+    const q = withTypedDecimals(d.value, raw.text);
     this.dragComplete = raw.form !== 'single';
     this.seg.drag =
       typeof q === 'number'
         ? { source: 'entered', value: q }
-        : { source: 'entered', value: q.value, low: q.low ?? q.value, high: q.high ?? q.value };
+        : {
+            source: 'entered',
+            value: q.value,
+            ...(q.low !== undefined || q.high !== undefined
+              ? { low: q.low ?? q.value, high: q.high ?? q.value }
+              : {}),
+            ...(q.decimals !== undefined ? { decimals: q.decimals } : {}),
+          };
     return undefined;
   }
 

@@ -17,7 +17,13 @@ function dragFills(fills: Answers, p: string, d: DragV1): void {
   if (d.source !== 'entered' && d.source !== 'table') return;
   fills[`${p}.drag.source`] = answer(d.source);
   fills[`${p}.drag.value`] = answer(
-    quantityText({ value: d.value, low: d.low ?? d.value, high: d.high ?? d.value }),
+    quantityText({
+      value: d.value,
+      low: d.low ?? d.value,
+      high: d.high ?? d.value,
+      // the decimals it was typed with (`@0.70`), so the answer's text keeps them
+      ...(d.decimals !== undefined ? { decimals: d.decimals } : {}),
+    }),
   );
   if (d.source === 'table') {
     const surface = d.surface;

@@ -16,9 +16,21 @@ describe('parseSegmentLine: accepted lines', () => {
       [
         { length: 48, drag: entered(0.74), grade: 2 },
         { length: 31, drag: entered(0.55), grade: 0 },
-        { length: 22, drag: entered(0.4), grade: -3 },
+        // typed as 0.40: kept with its two decimals for the record
+        { length: 22, drag: { ...entered(0.4), decimals: 2 }, grade: -3 },
       ],
     ],
+    [
+      '52.0 @0.70 -2%',
+      [
+        {
+          length: { value: 52, decimals: 1 },
+          drag: { ...entered(0.7), decimals: 2 },
+          grade: -2,
+        },
+      ],
+    ],
+    ['52.50 @0.7', [{ length: { value: 52.5, decimals: 2 }, drag: entered(0.7), grade: 0 }]],
     [
       '48 @0.74 +2%; 31 @0.55',
       [

@@ -9,6 +9,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup } from 'ink-testing-library';
 import { ENTER } from './render-app.js';
 import { toLook, type App } from './walks.js';
+import { runReport } from '../report/helpers.js';
 
 afterEach(() => cleanup());
 
@@ -78,6 +79,29 @@ describe('the segments on one line', () => {
     const a = savedCase(app).analyses[0];
     expect(a.marks).toEqual([61, 63]);
     expect(a.segments).toEqual([{ drag: { source: 'entered', value: 0.74 }, grade: -1 }]);
+  });
+
+  it('keeps the decimals each figure was typed with (52.0, 0.70) in the file and the report', async () => {
+    const app = await toLook();
+    await toSurfaces(app);
+    await typeLine(app, '52.0 @0.70 -2% lane, 21.50 @0.45-0.55 -2% shoulder');
+    await app.press(ENTER, 'How many tire marks');
+    await app.answer('2', 'Length of each mark');
+    await app.answer('73.5 74.5', 'Which slide distance');
+    await app.press(ENTER, 'How did the slide end');
+    await app.press('r', 'Where was the conflict point');
+    const segs = savedCase(app).analyses[0].segments;
+    expect(segs[0].length).toEqual({ value: 52, decimals: 1 });
+    expect(segs[0].drag).toEqual({ source: 'entered', value: 0.7, decimals: 2 });
+    expect(segs[1].length).toEqual({ value: 21.5, decimals: 2 });
+    const file = path.join(
+      app.dir,
+      fs.readdirSync(app.dir).find((n) => n.endsWith('.json'))!,
+    );
+    const report = await runReport(file, { format: 'txt' });
+    expect(report.out).toMatch(/Segment 1 length\s+52\.0\s/);
+    expect(report.out).toMatch(/Segment 1 drag factor \(entered\)\s+0\.70\s/);
+    expect(report.out).toMatch(/Segment 2 length\s+21\.50\s/);
   });
 
   it('one surface without a length by the quick choice: after the line, no segment length and no "several surfaces"', async () => {
