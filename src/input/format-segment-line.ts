@@ -9,15 +9,25 @@ import { DRAG_TABLE, type DragTableRow } from '../engine/drag-table.js';
 import { tidy } from './show.js';
 import { BAND_SUFFIX, lookupTableKey } from './table-drag.js';
 
-/** `0.74`, `0.70-0.78` (value at the midpoint) or `0.74 (0.70-0.80)`. Numbers are written exactly. */
-export function formatRangeText(value: number, low = value, high = value, sep = '-'): string {
-  if (low === value && high === value) return String(value);
-  if (value === tidy((low + high) / 2) && sep === '-') return `${low}-${high}`;
-  return `${value} (${low}${sep}${high})`;
+/**
+ * `0.74`, `0.70-0.78` (value at the midpoint) or `0.74 (0.70-0.80)`. Numbers are written exactly,
+ * or with `decimals` when the figure was typed with them (`0.70` stays `0.70`).
+ */
+export function formatRangeText(
+  value: number,
+  low = value,
+  high = value,
+  sep = '-',
+  decimals?: number,
+): string {
+  const n = (x: number) => (decimals === undefined ? String(x) : x.toFixed(decimals));
+  if (low === value && high === value) return n(value);
+  if (value === tidy((low + high) / 2) && sep === '-') return `${n(low)}-${n(high)}`;
+  return `${n(value)} (${n(low)}${sep}${n(high)})`;
 }
 
 const quantityText = (q: Quantity): string =>
-  typeof q === 'number' ? String(q) : formatRangeText(q.value, q.low, q.high);
+  typeof q === 'number' ? String(q) : formatRangeText(q.value, q.low, q.high, '-', q.decimals);
 
 /** `+2%`, `-3%`, `-3% (-4 to -2)`; an empty text for a level segment. */
 function gradeText(q: Quantity | undefined): string {
@@ -29,7 +39,7 @@ function gradeText(q: Quantity | undefined): string {
 }
 
 function dragText(d: DragV1, table: readonly DragTableRow[]): string | undefined {
-  if (d.source === 'entered') return `@${formatRangeText(d.value, d.low, d.high)}`;
+  if (d.source === 'entered') return `@${formatRangeText(d.value, d.low, d.high, '-', d.decimals)}`;
   if (d.source !== 'table' || d.surface === undefined) return undefined;
   const key = d.band ? `${d.surface}/${BAND_SUFFIX[d.band]}` : d.surface;
   const choice = lookupTableKey(key, table);

@@ -81,7 +81,8 @@ describe('quick entry of segments', () => {
     expect(skid(s).segments).toEqual([
       { length: 48, drag: { source: 'entered', value: 0.74 }, grade: 2 },
       { label: 'gravel', length: 31, drag: { source: 'entered', value: 0.55 } },
-      { length: 22, drag: { source: 'entered', value: 0.4 }, grade: -3 },
+      // typed as 0.40: its two decimals kept for the record
+      { length: 22, drag: { source: 'entered', value: 0.4, decimals: 2 }, grade: -3 },
     ]);
     s = type(act(s, { type: 'jump', id: 'a0.seg1.drag.value' }), '0.50-0.60');
     expect(skid(s).segments[1]!.drag).toEqual({

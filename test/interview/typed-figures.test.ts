@@ -70,7 +70,7 @@ describe('the one-line segment entry, revisited after a later edit', () => {
     expect(skid(s).segments[0]!.grade).toBe(-5);
     const after = reviewText(s);
     s = act(s, { type: 'jump', id: 'a0.quick' });
-    expect(shownLine(s)).toBe('79 @0.7 (0.68-0.71) -5% [dry asphalt]');
+    expect(shownLine(s)).toBe('79 @0.70 (0.68-0.71) -5% [dry asphalt]');
     s = type(s, shownLine(s));
     expect(skid(s).segments[0]!.grade).toBe(-5);
     // Level drag f n + G/100 = 0.70 - 0.05 = 0.65 at the value: sqrt(30 × 79 × 0.65) = 39.25 mph.
@@ -87,7 +87,7 @@ describe('the one-line segment entry, revisited after a later edit', () => {
     s = act(s, { type: 'jump', id: 'a0.quick' });
     // Test skids cannot be written on the line: it keeps the last segments it could say (the
     // grade edit is in it), and entering it would put the entered drag factor back.
-    const last = '79 @0.7 (0.68-0.71) -5% [dry asphalt]';
+    const last = '79 @0.70 (0.68-0.71) -5% [dry asphalt]';
     expect(shownLine(s)).toBe(last);
     s = act(s, { type: 'answer', text: shownLine(s) });
     expect(s.answers).toBe(before);
@@ -103,6 +103,8 @@ describe('the one-line segment entry, revisited after a later edit', () => {
       value: 0.7,
       low: 0.68,
       high: 0.71,
+      // the line says 0.70: kept as typed
+      decimals: 2,
     });
     expect(skid(s).segments[0]!.grade).toBe(-5);
     expect(s.notice).toContain('Changed: ');
