@@ -173,3 +173,55 @@ export function sensitivitySvg(rows: readonly SensitivityRow[], opts: SvgOptions
   });
   return svgDocument(W, H, title, body);
 }
+
+/** One phase of a chain as the picture names it: what it is, and the speed where it begins. */
+export interface PhaseBox {
+  /** `skid-1, slide` */
+  name: string;
+  /** `50.2 mph (48.6 to 51.8)` */
+  speed: string;
+}
+
+/**
+ * The phases of a chain in order of travel as a self-contained SVG (default 640 wide): one box a
+ * phase, an arrow from each to the next, and under each box's left edge the speed where that
+ * phase begins (the speed at the junction with the one before). The labels come formatted.
+ * @example phasesSvg([{ name: 'skid-1, slide', speed: '50.2 mph' }, { name: 'yaw-1, critical speed', speed: '41.0 mph' }])
+ */
+export function phasesSvg(phases: readonly PhaseBox[], opts: SvgOptions = {}): string {
+  const W = opts.width ?? 640;
+  const H = opts.height ?? 150;
+  const title = 'Phases in order of travel';
+  const n = Math.max(1, phases.length);
+  const L = 20,
+    R = 20,
+    gap = 36,
+    top = 40,
+    boxH = 40;
+  const boxW = (W - L - R - gap * (n - 1)) / n;
+  const body = [text(L, 18, title, 'start', 13)];
+  phases.forEach((p, k) => {
+    const x = L + k * (boxW + gap);
+    body.push(
+      `<rect x="${px(x)}" y="${top}" width="${px(boxW)}" height="${boxH}" fill="#eee"/>`,
+      line(x, top, x + boxW, top),
+      line(x, top + boxH, x + boxW, top + boxH),
+      line(x, top, x, top + boxH),
+      line(x + boxW, top, x + boxW, top + boxH),
+      text(x + boxW / 2, top + boxH / 2 + 4, p.name, 'middle', 11),
+      // the speed where this phase begins, at its left edge
+      line(x, top + boxH, x, top + boxH + 14, true),
+      text(x, top + boxH + 28, `begins ${p.speed}`, 'start', 11),
+    );
+    if (k < phases.length - 1) {
+      const ax = x + boxW + 4;
+      const bx = x + boxW + gap - 4;
+      const y = top + boxH / 2;
+      body.push(
+        line(ax, y, bx, y),
+        `<polyline points="${px(bx - 7)},${px(y - 4)} ${px(bx)},${px(y)} ${px(bx - 7)},${px(y + 4)}" fill="none" stroke="#000" stroke-width="1"/>`,
+      );
+    }
+  });
+  return svgDocument(W, H, title, body);
+}

@@ -3,6 +3,7 @@ import type {
   AnalysisKind,
   AnalysisOutcome,
   AnalysisSolution,
+  Phase,
   Step,
   Units,
 } from '../engine/types.js';
@@ -10,7 +11,18 @@ import { KIND_NAMES } from '../format/kind-names.js';
 import { phasesLines } from '../format/phases-text.js';
 import { formatRange } from '../format/numbers.js';
 import { formatNumber } from '../engine/number-text.js';
-import { para, list, section, table, type Block, type Section, type StepBlock } from './doc.js';
+import {
+  fileSafe,
+  para,
+  list,
+  section,
+  table,
+  type Block,
+  type Figure,
+  type Section,
+  type StepBlock,
+} from './doc.js';
+import { phasesSvg } from '../pictures/pictures-svg.js';
 import { dragSourceLines } from './drag-source.js';
 import { atLeastText } from './figures-text.js';
 import { stepResultText } from '../format/step-text.js';
@@ -64,6 +76,26 @@ function boundaryTable(s: AnalysisSolution, units: Units): Block[] {
 }
 
 /**
+ * The chain drawn: a box a phase, in order of travel, with the speed where each begins. The text
+ * forms have the list above it; the picture is the SVG (Markdown and text beside them, HTML and
+ * PDF inside).
+ */
+function phasesFigure(id: string, phases: readonly Phase[], units: Units): Figure {
+  return {
+    kind: 'figure',
+    name: fileSafe(`${id}-phases`),
+    caption: `Phases in order of travel, from ${id}: each box a phase, with the speed where it begins`,
+    svg: phasesSvg(
+      phases.map((p) => ({
+        name: `${p.id}, ${KIND_NAMES[p.kind].short}`,
+        speed: formatRange(p.speed, 'speed', units.speed),
+      })),
+    ),
+    textLines: [],
+  };
+}
+
+/**
  * One analysis: the "at least" statement, the chain step by step, the speed along the slide, the
  * drag factor's sources, any further sections (`more`: pictures, sensitivity, ...), assumptions
  * and warnings. A failed
@@ -107,6 +139,7 @@ export function analysisSection(
               'note',
             ),
             list(phasesLines(s.phases, units)),
+            phasesFigure(s.id, s.phases, units),
           ]),
         ]
       : []),
