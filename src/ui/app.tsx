@@ -8,7 +8,7 @@ import { contextOf, useAppInput } from './use-app-input.js';
 import { HomeScreen } from './home-screen.js';
 import { Header } from './header.js';
 import { InterviewScreen } from './interview-screen.js';
-import { ReviewScreen } from './review-screen.js';
+import { ReviewScreen, reviewMessageLines } from './review-screen.js';
 import { HelpOverlay, helpLines } from './help-overlay.js';
 import { JumpList } from './jump-list.js';
 import { Footer } from './footer.js';
@@ -136,7 +136,7 @@ export function App(props: AppProps) {
     );
   };
   // Window heights as ReviewScreen and HelpOverlay lay them out (title, border, position line).
-  const reviewWindow = body - 1 - (s?.reportMessage ? 1 : 0);
+  const reviewWindow = body - 1 - reviewMessageLines(s?.reportMessage, width).length;
   const helpWindow = body + (s ? 2 : 0) - 3;
   const maxTop = {
     review: Math.max(0, review.length - reviewWindow),
@@ -190,7 +190,13 @@ export function App(props: AppProps) {
     );
   } else if (s) {
     main = (
-      <ReviewScreen lines={review} top={s.reviewTop} height={body} message={s.reportMessage} />
+      <ReviewScreen
+        lines={review}
+        top={s.reviewTop}
+        height={body}
+        width={width}
+        message={s.reportMessage}
+      />
     );
   } else {
     main = (
