@@ -10,6 +10,7 @@ import { describeWriteError } from '../io/write-error.js';
 import { acquireLock } from './lock.js';
 import { moveToFreeName } from './keep-aside.js';
 import { withNote } from './revisions.js';
+import { caseFileBytes } from './save.js';
 
 export type RestoreResult =
   | {
@@ -72,7 +73,7 @@ export async function restoreBackup(dir: string, id: string): Promise<RestoreRes
             : ''),
       );
       result.case = restored;
-      const bytes = Buffer.from(JSON.stringify(restored, null, 2) + '\n', 'utf8');
+      const bytes = caseFileBytes(restored);
       writeVerifiedSync(file, bytes);
       const known = getKnown(file);
       known.sig = sigOf(await fs.stat(file));

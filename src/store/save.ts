@@ -165,7 +165,7 @@ function writeLocked(file: string, p: Prepared, opts: SaveOptions): SaveResult {
     // No file (a new case): the case this process last knew, if it vanished while open.
     const before: Before = onDisk?.before ?? (known.case ? { onDisk: known.case } : {});
     const next = withRevision(p.next, before, p.at);
-    const bytes = Buffer.from(JSON.stringify(next, null, 2) + '\n', 'utf8');
+    const bytes = caseFileBytes(next);
     result.case = next;
     writeVerifiedSync(file, bytes, () => onDisk?.keep());
     known.sig = sigOf(disk.lstatSync(file));
@@ -246,6 +246,11 @@ function lookAtPrevious(
       out.backup = bak;
     },
   };
+}
+
+/** A case as its file holds it: JSON indented by two spaces, one newline at the end, UTF-8. */
+export function caseFileBytes(c: Case): Buffer {
+  return Buffer.from(JSON.stringify(c, null, 2) + '\n', 'utf8');
 }
 
 /** The case in bytes this process wrote or read as a good case (so they load). */

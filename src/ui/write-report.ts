@@ -6,6 +6,7 @@ import { readFile } from 'node:fs/promises';
 import path from 'node:path';
 import { sha256Of } from '../io/sha256.js';
 import { loadCaseText, type Case } from '../case/load.js';
+import { canonicalJson } from '../case/revision-diff.js';
 import { caseResult } from '../extras/analysis-extras.js';
 import { buildReport } from '../report/build.js';
 import { toolVersion } from '../report/version.js';
@@ -23,25 +24,13 @@ import type { OpenCase } from './services.js';
 function sameContent(a: Case, b: Case): boolean {
   const plain = (c: Case) => {
     const { created: _c, updated: _u, revisions: _r, revisionsDropped: _d, ...rest } = c;
-    return stable(rest);
+    return canonicalJson(rest);
   };
   return plain(a) === plain(b);
 }
 
 const withoutUndefined = <T extends object>(o: T): Partial<T> =>
   Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as Partial<T>;
-
-/** JSON with object keys sorted, so that key order does not count. */
-function stable(v: unknown): string {
-  if (Array.isArray(v)) return `[${v.map(stable).join(',')}]`;
-  if (v && typeof v === 'object')
-    return `{${Object.keys(v)
-      .filter((k) => (v as Record<string, unknown>)[k] !== undefined)
-      .sort()
-      .map((k) => `${JSON.stringify(k)}:${stable((v as Record<string, unknown>)[k])}`)
-      .join(',')}}`;
-  return JSON.stringify(v);
-}
 
 /** `<id>-report-20261201-215203.md` (or `.txt`, `.html`, `.pdf`, `.json`) in the case file's folder. */
 export function reportPath(open: OpenCase, c: Case, at: Date, form: ReportFormat = 'md'): string {
