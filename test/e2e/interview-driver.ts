@@ -121,15 +121,26 @@ export function dryRun(
   throw new Error('script: more than 500 answers without reaching the review (a loop?)');
 }
 
-/** The question ids in the order the script answers them, from a fresh interview to the review. */
-export function answerOrder(script: Script): string[] {
-  const ids: string[] = [];
-  let state = initialState();
-  for (let q = currentQuestion(state); q; q = currentQuestion(state)) {
-    ids.push(q.id);
+/**
+ * Every state of the script's walk, one answer at a time, from a fresh interview to the review:
+ * element k is the state after k answers (what `dryRun(script, { maxAnswers: k })` returns),
+ * made in one walk instead of one walk per k.
+ */
+export function walkStates(script: Script): InterviewState[] {
+  const states = [initialState()];
+  for (let state = states[0]!; currentQuestion(state); states.push(state)) {
+    if (states.length > 500)
+      throw new Error('script: more than 500 answers without reaching the review (a loop?)');
     state = dryRun(script, { maxAnswers: 1 }, state);
   }
-  return ids;
+  return states;
+}
+
+/** The question ids in the order the script answers them, from a fresh interview to the review. */
+export function answerOrder(script: Script): string[] {
+  return walkStates(script)
+    .map((s) => currentQuestion(s)?.id)
+    .filter((id): id is string => id !== undefined);
 }
 
 /**

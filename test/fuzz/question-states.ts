@@ -5,7 +5,7 @@
  */
 import { allQuestions, currentQuestion } from '../../src/interview/index.js';
 import type { InterviewState, Question } from '../../src/interview/types.js';
-import { dryRun, type Script } from '../e2e/interview-driver.js';
+import { dryRun, walkStates, type Script } from '../e2e/interview-driver.js';
 import { OTHER_SOURCES, SLIDE_ONLY_FAST, TWO_SURFACES_AND_YAW } from '../e2e/scripts.js';
 
 export const NUMERIC_KINDS = new Set(['quantity', 'list', 'segments']);
@@ -69,14 +69,22 @@ const SCRIPTS: Script[] = [
 ];
 
 /** The first state of each script in which `id` is the current question. */
-export function stateAt(id: string): AtQuestion {
-  for (const script of SCRIPTS) {
-    for (let n = 0; n < 300; n++) {
-      const state = dryRun(script, { maxAnswers: n });
+/** Each script's walk, question by question (made once: states are never changed). */
+let walks: AtQuestion[][] | undefined;
+function walked(): AtQuestion[][] {
+  walks ??= SCRIPTS.map((script) =>
+    walkStates(script).flatMap((state) => {
       const q = currentQuestion(state);
-      if (!q) break;
-      if (q.id === id) return { q, state };
-    }
+      return q ? [{ q, state }] : [];
+    }),
+  );
+  return walks;
+}
+
+export function stateAt(id: string): AtQuestion {
+  for (const walk of walked()) {
+    const at = walk.find((x) => x.q.id === id);
+    if (at) return at;
   }
   throw new Error(`no script reaches question ${id}`);
 }
@@ -84,14 +92,9 @@ export function stateAt(id: string): AtQuestion {
 /** One state per numeric question family met on the way through the scripts. */
 export function numericQuestions(): AtQuestion[] {
   const out = new Map<string, AtQuestion>();
-  for (const script of SCRIPTS) {
-    for (let n = 0; n < 300; n++) {
-      const state = dryRun(script, { maxAnswers: n });
-      const q = currentQuestion(state);
-      if (!q) break;
-      if (isNumeric(q) && !out.has(family(q.id))) out.set(family(q.id), { q, state });
-    }
-  }
+  for (const walk of walked())
+    for (const at of walk)
+      if (isNumeric(at.q) && !out.has(family(at.q.id))) out.set(family(at.q.id), at);
   return [...out.values()];
 }
 

@@ -110,7 +110,7 @@ export function renderApp(o: RenderOptions = {}) {
 
   /** Types an answer and presses Enter, waiting for the next frame. */
   async function answer(text: string, expect?: string | RegExp): Promise<string> {
-    for (const ch of text) r.stdin.write(ch);
+    r.stdin.write(text);
     await waitText(text.slice(-Math.min(text.length, 10)));
     return press(ENTER, expect);
   }
