@@ -135,12 +135,14 @@ export function App(props: AppProps) {
       (e: unknown) => say(`No report written: ${e instanceof Error ? e.message : String(e)}`),
     );
   };
+  // The help's lines change only with the width: built once per width, not on every key.
+  const help = useMemo(() => helpLines(width - 4, props.quickEntry), [width, props.quickEntry]);
   // Window heights as ReviewScreen and HelpOverlay lay them out (title, border, position line).
   const reviewWindow = body - 1 - reviewMessageLines(s?.reportMessage, width).length;
   const helpWindow = body + (s ? 2 : 0) - 3;
   const maxTop = {
     review: Math.max(0, review.length - reviewWindow),
-    help: Math.max(0, helpLines(width - 4, props.quickEntry).length - helpWindow),
+    help: Math.max(0, help.length - helpWindow),
   };
   useAppInput({
     app,
@@ -155,14 +157,7 @@ export function App(props: AppProps) {
   const overlay = model.overlay;
   let main: React.ReactNode;
   if (overlay?.kind === 'help') {
-    main = (
-      <HelpOverlay
-        width={width}
-        height={body + (s ? 2 : 0)}
-        top={overlay.top}
-        quickEntry={props.quickEntry}
-      />
-    );
+    main = <HelpOverlay width={width} height={body + (s ? 2 : 0)} top={overlay.top} lines={help} />;
   } else if (overlay?.kind === 'jump' && s) {
     const matches = filterQuestions(port.states(s.state), overlay.filter.value);
     main = (

@@ -88,9 +88,10 @@ export function HelpOverlay(props: {
   width: number;
   height: number;
   top: number;
-  quickEntry: readonly string[];
+  /** `helpLines(width - 4, quickEntry)`, built by the caller once per width. */
+  lines: ShownLine[];
 }) {
-  const lines = helpLines(props.width - 4, props.quickEntry);
+  const { lines } = props;
   return (
     <Box
       flexDirection="column"

@@ -7,7 +7,8 @@ import { describe, expect, it } from 'vitest';
 import { trackedTempDir } from '../temp-dirs.js';
 
 // Ink's frame writer is patched (patches/ink+6.8.0.patch, applied by patch-package at install)
-// to keep its line caches from frame to frame and to skip the ANSI tokenizer for plain lines.
+// to keep its line caches from frame to frame, to skip the ANSI tokenizer for plain lines and to
+// write a row's escape codes only where its style changes.
 // A frame must come out exactly as the unpatched writer makes it: the same characters, styles
 // and escape codes, whatever was drawn in the frames before.
 
@@ -89,9 +90,22 @@ const word = fc.constantFrom(
   'e\u0301',
   '',
 );
+// styles that nest, share an end code (bold and dim), or stay open into the next word
 const styled = fc
-  .tuple(word, fc.constantFrom('\u001B[1m', '\u001B[31m', '\u001B[7m', '\u001B[38;5;244m'))
-  .map(([w, code]) => `${code}${w}\u001B[0m`);
+  .tuple(
+    fc.constantFrom(
+      '\u001B[1m',
+      '\u001B[2m',
+      '\u001B[1m\u001B[2m',
+      '\u001B[31m',
+      '\u001B[1m\u001B[31m',
+      '\u001B[7m',
+      '\u001B[38;5;244m',
+    ),
+    word,
+    fc.constantFrom('\u001B[0m', '\u001B[22m', '\u001B[39m', '\u001B[27m', ''),
+  )
+  .map(([code, w, end]) => `${code}${w}${end}`);
 const line = fc.array(fc.oneof(word, styled), { maxLength: 6 }).map((xs) => xs.join(''));
 const text = fc.array(line, { minLength: 1, maxLength: 4 }).map((ls) => ls.join('\n'));
 const op: fc.Arbitrary<Op> = fc.oneof(
