@@ -67,7 +67,8 @@ async function conflicted(): Promise<
 
 /** Picks a report form with `key` and returns the file written, checking its extension. */
 async function written(app: App, key: string, ext: string): Promise<string> {
-  await app.press(key, 'Writing the report');
+  // "Writing the report" shows while it is written; a quick report may already be done.
+  await app.press(key, /Writing the report|Report written to/);
   // The report runs the sampling extras: give it longer than a key press.
   const f = await app.waitText('Report written to', 30_000);
   const name = /Report written to (\S+)/.exec(f)![1]!;

@@ -270,7 +270,7 @@ describe('what the review and the written report say', () => {
     expect(f).toMatch(/\n\s*drag factor\s+[▐█]/);
     expect(f).not.toContain('f[0]');
     await app.press('w', 'Write the report as');
-    await app.press('m', 'Writing the report');
+    await app.press('m', /Writing the report|Report written to/);
     await app.waitText('Report written to', 30_000);
     const md = fs.readdirSync(app.dir).find((n) => n.endsWith('.md'))!;
     const text = fs.readFileSync(path.join(app.dir, md), 'utf8');

@@ -306,7 +306,7 @@ describe('review', () => {
     expect(flat).toMatch(/Posted limit \d+ km\/h/);
     expect(flat).toContain('This tool does not state fault.');
     await app.press('w', 'Write the report as');
-    await app.press('m', 'Writing the report');
+    await app.press('m', /Writing the report|Report written to/);
     f = await app.waitText('Report written to', 30_000);
     expect(fs.readdirSync(app.dir).some((n) => n.endsWith('.md'))).toBe(true);
   });

@@ -18,7 +18,7 @@ describe('the report message under the review', () => {
     await app.waitText('finished-slide');
     await app.press(ENTER, 'Analysis 1 · slide · skid-1');
     await app.press('w', 'Write the report as');
-    await app.press('m', 'Writing the report');
+    await app.press('m', /Writing the report|Report written to/);
     const f = await app.waitText('Report written to', 30_000);
     const lines = f.split('\n');
     const name = fs.readdirSync(app.dir).find((n) => n.includes('-report-') && n.endsWith('.md'))!;
