@@ -18,6 +18,7 @@ import { reviewLinesOf } from './review-lines.js';
 import type { ShownLine } from './review-step.js';
 import { isChoice } from './question-view.js';
 import type { Question } from '../interview/types.js';
+import type { Command } from './keys.js';
 import { reviewFigures, type ReviewContext, type ReviewFigures } from './review-extras.js';
 import { DEFAULT_REACTION_TIME, REACTION_TIMES } from '../engine/constants.js';
 
@@ -69,6 +70,10 @@ function shownDefault(
 }
 
 /** The whole program on screen: home, a case's questions, its review, and the overlays. */
+/** The footer's left-out keys, fixed arrays so the memoised footer sees the same props. */
+const NO_SUBMIT: readonly Command[] = ['submit'];
+const NOTHING_LEFT_OUT: readonly Command[] = [];
+
 export function App(props: AppProps) {
   const { exit } = useApp();
   const { width: cols, height } = useSize(props.columns, props.rows);
@@ -227,7 +232,7 @@ export function App(props: AppProps) {
       <Footer
         context={ctx}
         width={width}
-        omit={ctx === 'home' && model.home.rows?.length === 0 ? ['submit'] : []}
+        omit={ctx === 'home' && model.home.rows?.length === 0 ? NO_SUBMIT : NOTHING_LEFT_OUT}
         note={model.leaving ? (s?.open.readOnly ? 'Leaving…' : 'Saving and leaving…') : undefined}
         readOnly={!!s?.open.readOnly}
       />

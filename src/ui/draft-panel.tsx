@@ -13,7 +13,7 @@ export interface DraftView {
 }
 
 /** Side or lower panel: the formula chain so far and the running result. */
-export function DraftPanel({
+function DraftPanelView({
   view,
   width,
   maxLines,
@@ -79,3 +79,6 @@ export function DraftPanel({
     </Box>
   );
 }
+
+/** Drawn again only when its props change (not on every key typed elsewhere). */
+export const DraftPanel = React.memo(DraftPanelView);

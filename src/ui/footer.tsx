@@ -7,7 +7,7 @@ import { TONE } from './theme.js';
  * Key hints for the current context on one line, from the key table (so they match the help
  * overlay). Only what fits is shown, the help key always; every other key is in the help.
  */
-export function Footer({
+function FooterView({
   context,
   width,
   omit,
@@ -40,3 +40,6 @@ export function Footer({
     </Box>
   );
 }
+
+/** Drawn again only when its props change (not on every key typed elsewhere). */
+export const Footer = React.memo(FooterView);

@@ -33,7 +33,7 @@ export function localTime(iso: string): string {
 }
 
 /** Top line of a case screen: which case, where in it, how far, and the save status. */
-export function Header(p: HeaderProps) {
+function HeaderView(p: HeaderProps) {
   const status = p.saveError
     ? p.saveError
     : p.readOnly
@@ -63,3 +63,6 @@ export function Header(p: HeaderProps) {
     </Box>
   );
 }
+
+/** Drawn again only when its props change (not on every key typed elsewhere). */
+export const Header = React.memo(HeaderView);

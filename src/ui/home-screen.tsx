@@ -46,6 +46,36 @@ export interface HomeProps {
 }
 
 /** The start screen: the folder in use, the cases newest first, and what can be done. */
+/**
+ * One case on the list: its name, reference and save time, then its progress or result. Drawn
+ * again only when the row or its selection changes, so an arrow key re-renders two rows.
+ */
+const CaseRowView = React.memo(function CaseRowView({
+  row: r,
+  selected: at,
+}: {
+  row: CaseRow;
+  selected: boolean;
+}) {
+  return (
+    <Box flexDirection="column">
+      <Text bold={at} color={r.problem ? TONE.error : undefined} wrap="truncate">
+        {at ? '> ' : '  '}
+        {r.id}
+        {r.reference ? ` · ${r.reference}` : ''}
+        {/* On the first line, where there is room: a long "stopped at" no longer cuts it. */}
+        {r.updated && !r.problem ? (
+          <Text color={TONE.muted}> · saved {localTime(r.updated)}</Text>
+        ) : null}
+      </Text>
+      <Text color={r.problem ? TONE.error : r.result ? TONE.result : TONE.muted} wrap="truncate">
+        {'    '}
+        {rowStatus(r)}
+      </Text>
+    </Box>
+  );
+});
+
 export function HomeScreen(p: HomeProps) {
   const perRow = 2;
   const room = Math.max(1, Math.floor((p.height - 7) / perRow));
@@ -65,29 +95,9 @@ export function HomeScreen(p: HomeProps) {
         <Text>No cases here yet. Press n to start one, or d for the demo case.</Text>
       ) : null}
       {w.above ? <Text color={TONE.muted}> ↑ {w.above} more</Text> : null}
-      {w.shown.map((r, i) => {
-        const at = w.start + i === p.selected;
-        return (
-          <Box key={r.file} flexDirection="column">
-            <Text bold={at} color={r.problem ? TONE.error : undefined} wrap="truncate">
-              {at ? '> ' : '  '}
-              {r.id}
-              {r.reference ? ` · ${r.reference}` : ''}
-              {/* On the first line, where there is room: a long "stopped at" no longer cuts it. */}
-              {r.updated && !r.problem ? (
-                <Text color={TONE.muted}> · saved {localTime(r.updated)}</Text>
-              ) : null}
-            </Text>
-            <Text
-              color={r.problem ? TONE.error : r.result ? TONE.result : TONE.muted}
-              wrap="truncate"
-            >
-              {'    '}
-              {rowStatus(r)}
-            </Text>
-          </Box>
-        );
-      })}
+      {w.shown.map((r, i) => (
+        <CaseRowView key={r.file} row={r} selected={w.start + i === p.selected} />
+      ))}
       {w.below ? <Text color={TONE.muted}> ↓ {w.below} more</Text> : null}
       {sel?.problem ? (
         <Text color={TONE.warning}>

@@ -81,19 +81,37 @@ export function draftView(
   return view;
 }
 
+/**
+ * `f` remembered per state object. The reducer never changes a state it has returned (each
+ * action makes a new one), so a state seen before has the same current question, progress and
+ * default: every render and every key reads them without walking the questions again (a key
+ * typed into an answer changes the line being edited, not the interview state).
+ */
+function perState<T>(f: (state: InterviewState) => T): (state: InterviewState) => T {
+  const seen = new WeakMap<InterviewState, T>();
+  return (state) => {
+    if (seen.has(state)) return seen.get(state) as T;
+    const value = f(state);
+    seen.set(state, value);
+    return value;
+  };
+}
+
+const current = perState(currentQuestion);
+
 export const liveInterview: InterviewPort = {
   reduce,
-  current: currentQuestion,
-  progress,
+  current,
+  progress: perState(progress),
   states: questionStates,
-  defaultText(state: InterviewState) {
-    const q = currentQuestion(state);
+  defaultText: perState((state) => {
+    const q = current(state);
     return q && defaultTextOf(q, state.answers);
-  },
-  explain(state: InterviewState) {
-    const q = currentQuestion(state);
+  }),
+  explain: perState((state) => {
+    const q = current(state);
     return q && explainOf(q, state.answers);
-  },
+  }),
   build(state, base) {
     const meta = { id: base.id, ...(base.created ? { created: base.created } : {}) };
     return { ok: true, case: buildCase(state, meta) };
@@ -110,7 +128,7 @@ export const liveInterview: InterviewPort = {
   solve: solveAsFile,
   notes: lookNotes,
   fileAnswer(state, typed, read) {
-    const q = currentQuestion(state);
+    const q = current(state);
     return q?.lines ? fileAnswer(typed, unitsOf(state.answers), read) : undefined;
   },
 };

@@ -17,15 +17,7 @@ export function whyLines(help: Help, width: number, maxLines: number): string[] 
 }
 
 /** Why the question is asked and how to measure it; open by default in guided mode. */
-export function WhyPanel({
-  help,
-  width,
-  maxLines,
-}: {
-  help: Help;
-  width: number;
-  maxLines: number;
-}) {
+function WhyPanelView({ help, width, maxLines }: { help: Help; width: number; maxLines: number }) {
   return (
     <Box flexDirection="column" width={width}>
       {whyLines(help, width, maxLines).map((l, i) => (
@@ -36,3 +28,6 @@ export function WhyPanel({
     </Box>
   );
 }
+
+/** Drawn again only when its props change (not on every key typed elsewhere). */
+export const WhyPanel = React.memo(WhyPanelView);
