@@ -86,7 +86,7 @@ const inkWithoutDevtools = {
  * which starts ICU's break iterators (10 ms and more, 25 ms on a busy machine) before the first
  * frame. Each is replaced by scripts/segmenter-fast.mjs: ICU's segmenter made on first real use,
  * and text of characters that are always their own grapheme (our screens' `·`, `…`, `↑`) split
- * without it.
+ * without it. string-width's RGI emoji expression is built on first use too (rgiEmojiOnFirstUse).
  * The build fails if a package starts using its segmenter for anything but `segment`.
  */
 const segmentersOnFirstUse = {
@@ -113,16 +113,34 @@ const segmentersOnFirstUse = {
         const helper = JSON.stringify(
           fileURLToPath(new URL('./segmenter-fast.mjs', import.meta.url)),
         );
-        return {
-          contents:
-            `import { createSegmenter as __createSegmenter } from ${helper};\n` +
-            text.replace(/new Intl\.Segmenter\(/g, '__createSegmenter('),
-          loader: 'js',
-        };
+        let contents =
+          `import { createSegmenter as __createSegmenter } from ${helper};\n` +
+          text.replace(/new Intl\.Segmenter\(/g, '__createSegmenter(');
+        if (/string-width[\\/]index\.js$/.test(args.path))
+          contents = rgiEmojiOnFirstUse(contents, helper);
+        return { contents, loader: 'js' };
       },
     );
   },
 };
+
+/**
+ * string-width builds `/^\p{RGI_Emoji}$/v` when it is loaded: 20-30 ms before the first frame.
+ * It is replaced by scripts/segmenter-fast.mjs's test, which builds it only for a segment that
+ * holds an emoji character. The build fails if string-width declares it otherwise, or uses it
+ * for anything but `test()`.
+ */
+function rgiEmojiOnFirstUse(text, helper) {
+  const decl = 'const rgiEmojiRegex = /^\\p{RGI_Emoji}$/v;';
+  if (text.split(decl).length !== 2)
+    throw new Error(`string-width: expected one "${decl}", the RGI emoji test changed`);
+  if (/rgiEmojiRegex(?!\.test\()(?! = \/)/.test(text))
+    throw new Error('string-width: rgiEmojiRegex is used for more than test()');
+  return (
+    `import { createRgiEmojiTest as __createRgiEmojiTest } from ${helper};\n` +
+    text.replace(decl, 'const rgiEmojiRegex = __createRgiEmojiTest();')
+  );
+}
 
 /**
  * The program: `outdir/main.js`, CommonJS (`outdir/package.json`, `BUNDLE_PACKAGE_JSON`, says so;

@@ -39,3 +39,29 @@ export function createSegmenter(locales, options) {
     },
   };
 }
+
+/**
+ * A character every RGI emoji holds one of (Unicode Technical Standard #51): a pictographic
+ * character (single emoji, and the base of modifier, tag and ZWJ sequences), a regional
+ * indicator (flags), the keycap mark (keycaps) or a skin-tone modifier (shown alone). Digits,
+ * `#` and `*` have the Emoji property but are no RGI emoji without the keycap mark, so a case
+ * list's figures never build the RGI set. Cheap to build, unlike that set.
+ */
+const MAYBE_EMOJI = /[\p{Extended_Pictographic}\p{Regional_Indicator}\u20E3\p{Emoji_Modifier}]/u;
+
+/**
+ * The same `test(segment)` as string-width's `/^\p{RGI_Emoji}$/v`, put in its place by
+ * scripts/build-options.mjs. Building that expression (a set of several thousand sequences)
+ * takes 20-30 ms, at load; here it is built the first time a segment holds one of those
+ * characters, and a segment without one is no RGI emoji (test/build/segmenter-fast.test.ts).
+ */
+export function createRgiEmojiTest() {
+  let real;
+  return {
+    test(segment) {
+      if (!MAYBE_EMOJI.test(segment)) return false;
+      real ??= new RegExp('^\\p{RGI_Emoji}$', 'v');
+      return real.test(segment);
+    },
+  };
+}

@@ -13,13 +13,21 @@ import { describe, expect, it } from 'vitest';
 const run = promisify(execFile);
 const ROOT = path.resolve(import.meta.dirname, '../..');
 
-/** Runs `code` in a fresh node where each `new Intl.Segmenter` is counted. */
+/**
+ * Runs `code` in a fresh node where each `new Intl.Segmenter` is counted, and each RGI emoji
+ * expression built (esbuild writes string-width's `/^\p{RGI_Emoji}$/v` as `new RegExp`).
+ */
 async function countingSegmenters(code: string): Promise<string> {
   const prelude = `
     let made = 0;
     const Real = Intl.Segmenter;
     Intl.Segmenter = class extends Real { constructor(...a) { super(...a); made++; } };
-    globalThis.__made = () => made;`;
+    globalThis.__made = () => made;
+    let rgi = 0;
+    globalThis.RegExp = new Proxy(RegExp, {
+      construct(t, a, n) { if (String(a[0]).includes('RGI_Emoji')) rgi++; return Reflect.construct(t, a, n); },
+    });
+    globalThis.__rgi = () => rgi;`;
   const r = await run(process.execPath, ['--input-type=module', '-e', prelude + code], {
     cwd: ROOT,
   });
@@ -27,7 +35,7 @@ async function countingSegmenters(code: string): Promise<string> {
 }
 
 describe('the built interface', () => {
-  it('makes no Intl.Segmenter when it is loaded', async () => {
+  it('makes no Intl.Segmenter and no RGI emoji expression when it is loaded', async () => {
     // src/ui/run.tsx (Ink, React, the screens) bundled with the shipped build's options.
     const dir = trackedTempDir('skidcase-ui-bundle-');
     const { bundleOptions, BUNDLE_PACKAGE_JSON } = (await import(
@@ -48,8 +56,9 @@ describe('the built interface', () => {
       const { createRequire } = await import('node:module');
       const ui = createRequire(import.meta.url)(${JSON.stringify(path.join(dir, 'run.js'))});
       await globalThis[Symbol.for('skidcase.yoga-ready')];
-      console.log(JSON.stringify({ loaded: typeof ui.runInteractive, made: __made() }));`);
-    expect(JSON.parse(out)).toEqual({ loaded: 'function', made: 0 });
+      console.log(JSON.stringify({ loaded: typeof ui.runInteractive, made: __made(), rgi: __rgi() }));`);
+    // nor string-width's RGI emoji expression (20-30 ms to build): made on first use instead
+    expect(JSON.parse(out)).toEqual({ loaded: 'function', made: 0, rgi: 0 });
   });
 
   it('has one string-width: wrap-ansi measures with the same copy as Ink', () => {
