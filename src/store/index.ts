@@ -6,7 +6,7 @@ export { resolveSessionsDir } from './sessions-dir.js';
 export { caseFilePath, slugifyId, uniqueId } from './case-path.js';
 export { saveCase, saveCaseSync } from './save.js';
 export { openCase, checkBackup, type OpenResult } from './open.js';
-export { listCases, caseFiles, readCaseEntry } from './list.js';
+export { listCases, caseFiles, newestFirst, readCaseEntry } from './list.js';
 export { openListIndex, listIndexFile, stampOf } from './list-index.js';
 export { restoreBackup } from './restore.js';
 export { releaseAllLocks, releaseAllLocksSync } from './lock.js';

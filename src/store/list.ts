@@ -33,8 +33,20 @@ export interface CaseEntry {
  */
 export async function listCases(dir: string): Promise<CaseEntry[]> {
   const entries = await Promise.all((await caseFiles(dir)).map(readCaseEntry));
-  return entries.sort((a, b) => b.updated.localeCompare(a.updated) || a.id.localeCompare(b.id));
+  return entries.sort(newestFirst);
 }
+
+/** Code-unit order: the same on every machine, and no ICU collator to start (13 ms). */
+const textOrder = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
+
+/**
+ * The case list's order: newest `updated` first (ISO times, which sort as text), then by id.
+ * Shared by `listCases` and the screen's list.
+ */
+export const newestFirst = (
+  a: { updated?: string | undefined; id: string },
+  b: { updated?: string | undefined; id: string },
+): number => textOrder(b.updated ?? '', a.updated ?? '') || textOrder(a.id, b.id);
 
 /** The case files of the sessions folder (absolute paths), unread and unsorted. */
 export async function caseFiles(dir: string): Promise<string[]> {

@@ -10,6 +10,7 @@ import { loadCaseText } from '../case/load.js';
 import { z } from 'zod';
 import {
   caseFiles,
+  newestFirst,
   checkBackup,
   openCase,
   openListIndex,
@@ -87,9 +88,7 @@ async function listRows(dir: string, o: LiveOptions): Promise<CaseRow[]> {
   );
   // after the list is drawn: the index only speeds up the next list
   if (index) setImmediate(() => index.save());
-  return rows.sort(
-    (a, b) => (b.updated ?? '').localeCompare(a.updated ?? '') || a.id.localeCompare(b.id),
-  );
+  return rows.sort(newestFirst);
 }
 
 const withoutUndefined = <T extends object>(o: T): T =>
