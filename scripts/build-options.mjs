@@ -127,7 +127,7 @@ const segmentersOnFirstUse = {
 /**
  * string-width builds `/^\p{RGI_Emoji}$/v` when it is loaded: 20-30 ms before the first frame.
  * It is replaced by scripts/segmenter-fast.mjs's test, which builds it only for a segment that
- * holds an emoji character. The build fails if string-width declares it otherwise, or uses it
+ * may be an emoji (a pictographic character, regional indicator, keycap mark or skin tone). The build fails if string-width declares it otherwise, or uses it
  * for anything but `test()`.
  */
 function rgiEmojiOnFirstUse(text, helper) {

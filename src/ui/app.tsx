@@ -69,11 +69,11 @@ function shownDefault(
   return q.choices!.find((c) => c.value === text)?.label ?? text;
 }
 
-/** The whole program on screen: home, a case's questions, its review, and the overlays. */
 /** The footer's left-out keys, fixed arrays so the memoised footer sees the same props. */
 const NO_SUBMIT: readonly Command[] = ['submit'];
 const NOTHING_LEFT_OUT: readonly Command[] = [];
 
+/** The whole program on screen: home, a case's questions, its review, and the overlays. */
 export function App(props: AppProps) {
   const { exit } = useApp();
   const { width: cols, height } = useSize(props.columns, props.rows);

@@ -45,7 +45,6 @@ export interface HomeProps {
   color: boolean;
 }
 
-/** The start screen: the folder in use, the cases newest first, and what can be done. */
 /**
  * One case on the list: its name, reference and save time, then its progress or result. Drawn
  * again only when the row or its selection changes, so an arrow key re-renders two rows.
@@ -76,6 +75,7 @@ const CaseRowView = React.memo(function CaseRowView({
   );
 });
 
+/** The start screen: the folder in use, the cases newest first, and what can be done. */
 export function HomeScreen(p: HomeProps) {
   const perRow = 2;
   const room = Math.max(1, Math.floor((p.height - 7) / perRow));
